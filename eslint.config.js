@@ -1,0 +1,35 @@
+// Lint rules that hold the architecture: dependencies point one way
+// (shared <- workers <- server/src), and no import cycles.
+import tseslint from 'typescript-eslint';
+import importX from 'eslint-plugin-import-x';
+
+export default tseslint.config(
+  { ignores: ['dist/**', 'node_modules/**', '.data/**', 'test-artifacts/**'] },
+  ...tseslint.configs.recommended,
+  {
+    plugins: { 'import-x': importX },
+    settings: { 'import-x/resolver': { node: { extensions: ['.ts', '.tsx', '.js', '.mjs'] } } },
+    rules: {
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      'import-x/no-cycle': 'error',
+      'import-x/no-restricted-paths': [
+        'error',
+        {
+          zones: [
+            { target: './shared', from: ['./src', './server', './workers', './tests'], message: 'shared/ holds schemas only and imports nothing but zod.' },
+            { target: './workers', from: ['./src', './server'], message: 'The simulation knows nothing of React, HTTP or the database.' },
+            { target: './server', from: './src', message: 'The server never imports client code.' },
+            { target: './src', from: './server', message: 'The client talks to the server over HTTP only.' },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    files: ['workers/engine/**'],
+    rules: {
+      'no-restricted-globals': ['error', 'window', 'document', 'process', 'Buffer'],
+      'no-restricted-imports': ['error', { patterns: ['node:*', 'react', 'react-dom', 'express', 'typeorm', 'pg'] }],
+    },
+  },
+);

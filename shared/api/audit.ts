@@ -1,0 +1,21 @@
+// The audit trail: who created, changed, ran or deleted what.
+import { z } from 'zod';
+import { isoDateSchema, userRefSchema, uuidSchema } from './common';
+
+export const auditActionSchema = z.enum(['create', 'update', 'delete', 'run', 'restore', 'sign-in', 'member-add', 'member-update', 'member-remove']);
+export const auditEntitySchema = z.enum(['organisation', 'member', 'project', 'scenario', 'revision', 'run', 'user']);
+
+export const auditEntrySchema = z.object({
+  id: uuidSchema,
+  organisationId: uuidSchema.nullable(),
+  actor: userRefSchema.nullable(),
+  action: auditActionSchema,
+  entity: auditEntitySchema,
+  entityId: z.string(),
+  detail: z.record(z.string(), z.unknown()),
+  createdAt: isoDateSchema,
+});
+
+export type AuditEntry = z.infer<typeof auditEntrySchema>;
+export type AuditAction = z.infer<typeof auditActionSchema>;
+export type AuditEntity = z.infer<typeof auditEntitySchema>;

@@ -1,0 +1,25 @@
+// Identifiers, timestamps and route parameters shared by every resource.
+import { z } from 'zod';
+
+export const uuidSchema = z.uuid({ message: 'must be a valid id (UUID)' });
+export const isoDateSchema = z.iso.datetime({ offset: true });
+
+export const nameSchema = z
+  .string({ message: 'must be text' })
+  .trim()
+  .min(1, { message: 'is required' })
+  .max(120, { message: 'must be at most 120 characters' });
+
+export const descriptionSchema = z
+  .string({ message: 'must be text' })
+  .max(2000, { message: 'must be at most 2000 characters' });
+
+export const idParamsSchema = z.object({ id: uuidSchema });
+
+export const userRefSchema = z.object({
+  id: uuidSchema,
+  name: z.string(),
+  email: z.string(),
+});
+
+export type UserRef = z.infer<typeof userRefSchema>;

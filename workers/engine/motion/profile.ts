@@ -1,0 +1,68 @@
+// Rest-to-rest move times of a carrier on straight track, and where it is during the move (for the
+// space-time heatmap). Without jerk the profile is trapezoidal (triangular when the move is too short
+// to reach top speed); with jerk it is the symmetric seven-segment S-curve, whose phases are derived in
+// Biagiotti & Melchiorri, "Trajectory Planning for Automatic Machines and Robots", Springer 2008, §3.4.
+// Units: mm, s, mm/s, mm/s², mm/s³. Distances are magnitudes; a move of zero or less takes no time.
+
+export type MotionProfile = { vMax: number; aMax: number; jMax?: number };
+
+/**
+ * The speed the move peaks at. A move either reaches vMax or is all acceleration and deceleration,
+ * and for the S-curve the latter has two forms: aMax reached (constant-acceleration middle) or not.
+ */
+function peakSpeed(distance: number, p: MotionProfile): number {
+  const { vMax, aMax, jMax } = p;
+  if (jMax === undefined) {
+    return distance >= (vMax * vMax) / aMax ? vMax : Math.sqrt(aMax * distance);
+  }
+  if (distance >= vMax * accelerationTime(vMax, p)) return vMax;
+  const speedAtFullAcceleration = (aMax * aMax) / jMax;
+  if (distance >= (2 * aMax * speedAtFullAcceleration) / jMax) {
+    // distance = v (v/aMax + aMax/jMax), solved for v.
+    return (-speedAtFullAcceleration + Math.sqrt(speedAtFullAcceleration ** 2 + 4 * aMax * distance)) / 2;
+  }
+  // distance = 2 v sqrt(v / jMax), solved for v.
+  return Math.cbrt((distance * distance * jMax) / 4);
+}
+
+/** Time to accelerate from rest to `speed` (equal to the time to brake from it). */
+function accelerationTime(speed: number, p: MotionProfile): number {
+  const { aMax, jMax } = p;
+  if (jMax === undefined) return speed / aMax;
+  return speed >= (aMax * aMax) / jMax ? speed / aMax + aMax / jMax : 2 * Math.sqrt(speed / jMax);
+}
+
+export function moveTime(distanceMm: number, p: MotionProfile): number {
+  if (!(distanceMm > 0)) return 0;
+  const peak = peakSpeed(distanceMm, p);
+  const ramp = accelerationTime(peak, p);
+  // Both ramps cover peak * ramp together (each averages half the peak speed); the rest is cruise.
+  return 2 * ramp + Math.max(0, distanceMm - peak * ramp) / peak;
+}
+
+/** Distance covered `elapsed` seconds after leaving rest with the given peak speed. */
+function rampDistance(elapsed: number, peak: number, ramp: number, p: MotionProfile): number {
+  const { aMax, jMax } = p;
+  if (jMax === undefined) return (aMax * elapsed * elapsed) / 2;
+  const peakAcceleration = Math.min(aMax, Math.sqrt(peak * jMax));
+  const jerkTime = peakAcceleration / jMax;
+  if (elapsed <= jerkTime) return (jMax * elapsed ** 3) / 6;
+  const remaining = ramp - elapsed;
+  if (remaining >= jerkTime) {
+    const t = elapsed - jerkTime;
+    return (jMax * jerkTime ** 3) / 6 + ((jMax * jerkTime * jerkTime) / 2) * t + (peakAcceleration * t * t) / 2;
+  }
+  // The last jerk phase mirrors the first: measured back from the end of the ramp.
+  return (peak * ramp) / 2 - peak * remaining + (jMax * remaining ** 3) / 6;
+}
+
+export function positionAt(distanceMm: number, p: MotionProfile, t: number): number {
+  if (!(distanceMm > 0) || t <= 0) return 0;
+  const total = moveTime(distanceMm, p);
+  if (t >= total) return distanceMm;
+  const peak = peakSpeed(distanceMm, p);
+  const ramp = accelerationTime(peak, p);
+  if (t <= ramp) return rampDistance(t, peak, ramp, p);
+  if (t < total - ramp) return (peak * ramp) / 2 + peak * (t - ramp);
+  return distanceMm - rampDistance(total - t, peak, ramp, p);
+}

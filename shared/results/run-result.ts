@@ -1,0 +1,151 @@
+// The result of one simulation experiment (all replications of one scenario revision under one set
+// of run settings). The engine produces it, the client draws it, the server stores it. Arrays of
+// numbers rather than objects per bin keep a stored result small whatever the run length.
+import { z } from 'zod';
+import { runSettingsSchema } from '../scenario/run-settings';
+
+/** Mean across replications with its two-sided 95 % Student t interval. */
+export const intervalSchema = z.object({ mean: z.number(), ciLow: z.number(), ciHigh: z.number() });
+
+export const STATION_STATES = ['processing', 'starved', 'blocked', 'down', 'onBreak'] as const;
+
+export const stationResultSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  stepId: z.string(),
+  laneId: z.string(),
+  /** Shares of observed time; the five add up to 1. */
+  processing: z.number(),
+  starved: z.number(),
+  blocked: z.number(),
+  down: z.number(),
+  onBreak: z.number(),
+  /** Share of time this station was the momentary bottleneck (sole + shifting). */
+  bottleneckShare: z.number(),
+  soleBottleneckShare: z.number(),
+  shiftingBottleneckShare: z.number(),
+  /** Mean of the sampled cycle times (work content, without waiting or repairs). */
+  meanCycleSeconds: z.number(),
+  /** Completed operations per hour of observed time. */
+  operationsPerHour: z.number(),
+  failuresPerHour: z.number(),
+  /** Time-average number of carriers assigned to the station: at it or on their way. */
+  meanQueue: z.number(),
+});
+
+export const transferResultSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  kind: z.enum(['elevator', 'lateral', 'curve']),
+  /** Share of time carrying, holding a carrier it cannot deliver, or returning empty. */
+  utilisation: z.number(),
+  /** Share of time holding a carrier the destination lane has no room for. */
+  blocked: z.number(),
+  /** Time-average number of carriers waiting on the feeding lane whose next hop is this transfer. */
+  meanQueue: z.number(),
+  movesPerHour: z.number(),
+});
+
+export const laneResultSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  lengthMm: z.number(),
+  /** Carriers it holds when full (accumulated at length plus gap). */
+  capacity: z.number(),
+  meanCarriers: z.number(),
+});
+
+export const summaryQuantilesSchema = z.object({ mean: z.number(), p50: z.number(), p95: z.number() });
+
+export const histogramSchema = z.object({
+  /** Bin i covers [i × binWidthSeconds, (i + 1) × binWidthSeconds). */
+  binWidthSeconds: z.number(),
+  counts: z.array(z.number()),
+});
+
+export const timeSeriesSchema = z.object({
+  startSeconds: z.number(),
+  binSeconds: z.number(),
+  /** Mean over each time bin. */
+  values: z.array(z.number()),
+});
+
+export const laneHeatmapSchema = z.object({
+  laneId: z.string(),
+  positionBins: z.number().int(),
+  /** Time bin major: occupancy[t * positionBins + p] is the share of the bin's length covered by carriers. */
+  occupancy: z.array(z.number()),
+});
+
+export const stationTimelineSchema = z.object({
+  stationId: z.string(),
+  /** Time bin major: shares[t * STATION_STATES.length + s] is the share of bin t spent in state s. */
+  shares: z.array(z.number()),
+});
+
+export const heatmapsSchema = z.object({
+  startSeconds: z.number(),
+  binSeconds: z.number(),
+  timeBins: z.number().int(),
+  lanes: z.array(laneHeatmapSchema),
+  stationStates: z.array(z.enum(STATION_STATES)),
+  stations: z.array(stationTimelineSchema),
+});
+
+export const carrierResultSchema = z.object({
+  count: z.number().int(),
+  /** Time from one load completion to the next on the same carrier. */
+  loopTimeSeconds: summaryQuantilesSchema,
+  /** Shares of carrier time; the four add up to 1. */
+  moving: z.number(),
+  waiting: z.number(),
+  working: z.number(),
+  inTransfer: z.number(),
+});
+
+export const replicationResultSchema = z.object({
+  replication: z.number().int(),
+  throughputPerHour: z.number(),
+  taktSeconds: z.number(),
+  output: z.number(),
+  scrapped: z.number(),
+  leadTimeMeanSeconds: z.number(),
+  wipMean: z.number(),
+  events: z.number(),
+});
+
+export const runResultSchema = z.object({
+  engineVersion: z.string(),
+  seed: z.string(),
+  settings: runSettingsSchema,
+  scenarioName: z.string(),
+  conveyor: z.enum(['carriers', 'belt']),
+  observedHours: z.number(),
+  throughputPerHour: intervalSchema,
+  taktSeconds: intervalSchema,
+  annualOutput: intervalSchema,
+  targetTaktSeconds: z.number().nullable(),
+  /** Scheduled working hours per year the annual output is based on. */
+  hoursPerYear: z.number(),
+  bottleneckStationId: z.string().nullable(),
+  stations: z.array(stationResultSchema),
+  transfers: z.array(transferResultSchema),
+  lanes: z.array(laneResultSchema),
+  carriers: carrierResultSchema,
+  leadTimeSeconds: summaryQuantilesSchema.extend({ histogram: histogramSchema }),
+  wip: z.object({ mean: z.number(), series: timeSeriesSchema }),
+  parts: z.object({ loaded: z.number(), output: z.number(), scrapped: z.number(), reworked: z.number() }),
+  heatmaps: heatmapsSchema,
+  /** Events processed, all replications together. */
+  events: z.number(),
+  replications: z.array(replicationResultSchema),
+});
+
+export type Interval = z.infer<typeof intervalSchema>;
+export type StationState = (typeof STATION_STATES)[number];
+export type StationResult = z.infer<typeof stationResultSchema>;
+export type TransferResult = z.infer<typeof transferResultSchema>;
+export type LaneResult = z.infer<typeof laneResultSchema>;
+export type CarrierResult = z.infer<typeof carrierResultSchema>;
+export type ReplicationResult = z.infer<typeof replicationResultSchema>;
+export type RunResult = z.infer<typeof runResultSchema>;

@@ -1,0 +1,59 @@
+// The process a part goes through, in order: load, process and inspect steps, unload. Each step is
+// served by one or more stations at positions on lanes; a dispatch rule picks among them.
+import { z } from 'zod';
+import { distributionSchema } from './distribution';
+import { idSchema, labelSchema, nonNegative, share } from './units';
+
+export const DISPATCH_RULES = ['firstFree', 'shortestQueue', 'roundRobin'] as const;
+export const STEP_KINDS = ['load', 'process', 'inspect', 'unload'] as const;
+export const STATION_OPERATIONS = ['automatic', 'manual'] as const;
+
+export const failureSchema = z.object({
+  /** Operating (processing) time between the end of one repair and the next failure. */
+  timeBetweenFailuresSeconds: distributionSchema,
+  timeToRepairSeconds: distributionSchema,
+});
+
+export const stationSchema = z.object({
+  id: idSchema,
+  name: labelSchema,
+  laneId: idSchema,
+  /** Where the carrier's front stops for work, measured from the lane's start along its direction. */
+  positionMm: nonNegative('positionMm'),
+  cycleTimeSeconds: distributionSchema,
+  failures: failureSchema.optional(),
+  operation: z.enum(STATION_OPERATIONS, { error: `operation must be one of ${STATION_OPERATIONS.join(', ')}` }).default('automatic'),
+  /** A manual station whose operators take the calendar's breaks does no work during them. */
+  pausesForBreaks: z.boolean({ error: 'pausesForBreaks must be true or false' }).default(false),
+});
+
+const stepBase = {
+  id: idSchema,
+  name: labelSchema,
+  stations: z.array(stationSchema, { error: 'stations must be a list' }),
+  dispatch: z.enum(DISPATCH_RULES, { error: `dispatch must be one of ${DISPATCH_RULES.join(', ')}` }).default('firstFree'),
+};
+
+export const loadStepSchema = z.object({ ...stepBase, kind: z.literal('load') });
+export const processStepSchema = z.object({ ...stepBase, kind: z.literal('process') });
+export const unloadStepSchema = z.object({ ...stepBase, kind: z.literal('unload') });
+export const inspectStepSchema = z.object({
+  ...stepBase,
+  kind: z.literal('inspect'),
+  /** Share of inspected parts scrapped here; the carrier goes on empty to be loaded again. */
+  rejectShare: share('rejectShare').default(0),
+  /** Share of inspected parts sent back to reworkStepId, which is then done again with every step after it. */
+  reworkShare: share('reworkShare').default(0),
+  reworkStepId: idSchema.optional(),
+});
+
+export const stepSchema = z.discriminatedUnion('kind', [loadStepSchema, processStepSchema, inspectStepSchema, unloadStepSchema], {
+  error: `kind must be one of ${STEP_KINDS.join(', ')}`,
+});
+
+export type DispatchRule = (typeof DISPATCH_RULES)[number];
+export type StepKind = (typeof STEP_KINDS)[number];
+export type Failure = z.infer<typeof failureSchema>;
+export type Station = z.infer<typeof stationSchema>;
+export type Step = z.infer<typeof stepSchema>;
+export type InspectStep = z.infer<typeof inspectStepSchema>;

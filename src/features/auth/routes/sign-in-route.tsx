@@ -1,0 +1,31 @@
+// /sign-in: returns the user to the page they were sent away from.
+import { Link, Navigate, useLocation, useNavigate } from 'react-router-dom';
+import { useMe } from '../api/get-me';
+import { AuthPanel } from '../components/auth-panel';
+import { SignInForm } from '../components/sign-in-form';
+import { safeReturnTo, withSameReturn } from '../utils/return-to';
+
+export function SignInRoute() {
+  const location = useLocation();
+  const navigate = useNavigate();
+  const me = useMe();
+  const returnTo = safeReturnTo(location.search);
+  if (me.data) return <Navigate to={returnTo} replace />;
+
+  return (
+    <AuthPanel
+      title="Sign in to Lanewright"
+      intro="Plan and compare carrier-track assembly lines with your team."
+      footer={
+        <>
+          New here?{' '}
+          <Link className="font-semibold text-accent-strong underline underline-offset-4" to={withSameReturn('/sign-up', location.search)}>
+            Create an account
+          </Link>
+        </>
+      }
+    >
+      <SignInForm onSignedIn={() => navigate(returnTo, { replace: true })} />
+    </AuthPanel>
+  );
+}

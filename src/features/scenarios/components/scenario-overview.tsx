@@ -1,0 +1,42 @@
+// The read-only overview of a scenario document: headline figures, carriers,
+// track and process. The scenario editor will replace this view for editors.
+import type { Scenario } from '../../../../shared/scenario/scenario';
+import { Card, CardTitle } from '../../../components/ui/card';
+import { formatLengthMm } from '../../../lib/format';
+import { documentFacts } from '../utils/document-facts';
+import { DocumentFactsList } from './document-facts-list';
+import { ProcessOverview } from './process-overview';
+import { TrackOverview } from './track-overview';
+
+function CarrierSummary({ carriers }: { carriers: Scenario['carriers'] }) {
+  return (
+    <p className="text-sm text-ink-soft">
+      {carriers.count} carriers, each {formatLengthMm(carriers.lengthMm)} long with at least {formatLengthMm(carriers.minGapMm)} between them;
+      top speed loaded {formatLengthMm(carriers.loaded.vMaxMmPerS)}/s
+      {carriers.empty ? `, empty ${formatLengthMm(carriers.empty.vMaxMmPerS)}/s` : ''}.
+    </p>
+  );
+}
+
+export function ScenarioOverview({ document }: { document: Scenario }) {
+  return (
+    <div className="flex flex-col gap-6">
+      <DocumentFactsList facts={documentFacts(document)} />
+      <CarrierSummary carriers={document.carriers} />
+      <div className="grid gap-6 lg:grid-cols-2">
+        <Card aria-labelledby="track-title">
+          <CardTitle id="track-title" className="mb-4">
+            Track
+          </CardTitle>
+          <TrackOverview document={document} />
+        </Card>
+        <Card aria-labelledby="process-title">
+          <CardTitle id="process-title" className="mb-4">
+            Process
+          </CardTitle>
+          <ProcessOverview document={document} />
+        </Card>
+      </div>
+    </div>
+  );
+}

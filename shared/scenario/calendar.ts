@@ -15,11 +15,14 @@ const wholeBetween = (name: string, min: number, max: number) =>
     .refine(Number.isInteger, `${name} must be a whole number`)
     .refine((v) => v >= min && v <= max, `${name} must be from ${min} to ${max}`);
 
-export const breakSchema = z.object({
-  /** Minutes after the start of the shift. */
-  startMinute: finiteNumber('startMinute').refine((v) => v >= 0, 'startMinute must be zero or more'),
-  minutes: finiteNumber('minutes').refine((v) => v > 0, 'minutes must be above zero'),
-});
+export const breakSchema = z.object(
+  {
+    /** Minutes after the start of the shift. */
+    startMinute: finiteNumber('startMinute').refine((v) => v >= 0, 'startMinute must be zero or more'),
+    minutes: finiteNumber('minutes').refine((v) => v > 0, 'minutes must be above zero'),
+  },
+  { error: 'each break must be an object with startMinute and minutes' },
+);
 
 export const calendarSchema = z
   .object({
@@ -29,7 +32,7 @@ export const calendarSchema = z
     breaks: z.array(breakSchema, { error: 'breaks must be a list' }).default([]),
     daysPerWeek: wholeBetween('daysPerWeek', 1, CALENDAR_LIMITS.daysPerWeekMax),
     weeksPerYear: wholeBetween('weeksPerYear', 1, CALENDAR_LIMITS.weeksPerYearMax),
-  })
+  }, { error: 'calendar must be an object with shiftsPerDay, hoursPerShift, breaks, daysPerWeek and weeksPerYear' })
   .superRefine((c, ctx) => {
     if (c.shiftsPerDay * c.hoursPerShift > CALENDAR_LIMITS.hoursPerDay) {
       ctx.addIssue({

@@ -107,7 +107,10 @@ export const distributionSchema = z.discriminatedUnion(
     empiricalSchema,
   ],
   {
-    error: 'kind must be one of fixed, uniform, triangular, normal, lognormal, exponential, erlang, gamma, empirical',
+    error: (issue) =>
+      typeof issue.input !== 'object' || issue.input === null
+        ? 'a distribution must be an object with a kind and its parameters, e.g. { "kind": "fixed", "value": 9 }'
+        : 'kind must be one of fixed, uniform, triangular, normal, lognormal, exponential, erlang, gamma, empirical',
   },
 );
 

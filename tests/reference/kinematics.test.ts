@@ -9,6 +9,8 @@ import { moveTime, positionAt, type MotionProfile } from '../../workers/engine/m
 const V = 2500;
 const A = 20_000;
 const J = 400_000;
+/** Property checks draw from a fixed seed so every run tests the same cases. */
+const PROPERTY_SEED = 20_261_202;
 const trapezoid: MotionProfile = { vMax: V, aMax: A };
 const sCurve = { vMax: V, aMax: A, jMax: J };
 
@@ -126,6 +128,14 @@ describe('jerk-limited (seven-segment) profile', () => {
     expect(run.peakA).toBeLessThanOrEqual(p.aMax * (1 + 1e-6));
   });
 
+  it('an infinite jerk limit is the trapezoid', () => {
+    const unlimited = { ...trapezoid, jMax: Infinity };
+    for (const d of [50, 210, 1000]) {
+      expect(moveTime(d, unlimited)).toBe(moveTime(d, trapezoid));
+      expect(positionAt(d, unlimited, moveTime(d, trapezoid) / 3)).toBe(positionAt(d, trapezoid, moveTime(d, trapezoid) / 3));
+    }
+  });
+
   it('with a very large jerk the S-curve approaches the trapezoid', () => {
     const nearlyTrapezoid = { ...trapezoid, jMax: 1e12 };
     expect(Math.abs(moveTime(1000, nearlyTrapezoid) - moveTime(1000, trapezoid))).toBeLessThan(1e-6);
@@ -185,6 +195,43 @@ describe('position along a move', () => {
           expect(Math.abs(positionAt(d, withJerk, moveTime(d, withJerk) * (1 - 1e-12)) - d)).toBeLessThan(1e-6 * d);
         },
       ),
+      { numRuns: 1000, seed: PROPERTY_SEED },
+    );
+  });
+});
+
+describe('ordering of moves started together (what keeps a follower behind its leader)', () => {
+  const profile = fc.record({
+    vMax: fc.double({ min: 100, max: 5000, noNaN: true }),
+    aMax: fc.double({ min: 1000, max: 50_000, noNaN: true }),
+    jMax: fc.option(fc.double({ min: 10_000, max: 5_000_000, noNaN: true }), { nil: undefined }),
+  });
+  const distance = fc.double({ min: 1, max: 5000, noNaN: true });
+  const share = fc.double({ min: 0, max: 1, noNaN: true });
+
+  it('a shorter move is never ahead of a longer one with the same profile', () => {
+    fc.assert(
+      fc.property(profile, distance, share, share, (p, long, shortShare, when) => {
+        const short = long * shortShare;
+        const t = when * moveTime(long, p);
+        expect(positionAt(short, p, t)).toBeLessThanOrEqual(positionAt(long, p, t) * (1 + 1e-12) + 1e-9);
+      }),
+      { numRuns: 2000, seed: PROPERTY_SEED },
+    );
+  });
+
+  it('a profile slower in every limit is never ahead over the same distance', () => {
+    const factor = fc.double({ min: 0.05, max: 1, noNaN: true });
+    const jerkOfSlow = fc.option(fc.double({ min: 10_000, max: 5_000_000, noNaN: true }), { nil: undefined });
+    // t runs to the end of the fast move, where the slow one may still be under way.
+    fc.assert(
+      fc.property(profile, factor, factor, factor, jerkOfSlow, distance, share, (p, kv, ka, kj, j, d, when) => {
+        // A finite jerk is slower than none, so a slow profile may gain a limit but never lose one.
+        const slow = { vMax: p.vMax * kv, aMax: p.aMax * ka, jMax: p.jMax === undefined ? j : p.jMax * kj };
+        const t = when * moveTime(d, p);
+        expect(positionAt(d, slow, t)).toBeLessThanOrEqual(positionAt(d, p, t) * (1 + 1e-12) + 1e-9);
+      }),
+      { numRuns: 2000, seed: PROPERTY_SEED },
     );
   });
 });

@@ -4,14 +4,21 @@
 // Biagiotti & Melchiorri, "Trajectory Planning for Automatic Machines and Robots", Springer 2008, §3.4.
 // Units: mm, s, mm/s, mm/s², mm/s³. Distances are magnitudes; a move of zero or less takes no time.
 
+/** jMax absent (or Infinity) means acceleration may change instantly: the trapezoidal profile. */
 export type MotionProfile = { vMax: number; aMax: number; jMax?: number };
+
+/** The jerk limit, or undefined when there is none; an infinite jerk would otherwise give 0 × ∞. */
+function jerkLimit(p: MotionProfile): number | undefined {
+  return p.jMax !== undefined && p.jMax < Infinity ? p.jMax : undefined;
+}
 
 /**
  * The speed the move peaks at. A move either reaches vMax or is all acceleration and deceleration,
  * and for the S-curve the latter has two forms: aMax reached (constant-acceleration middle) or not.
  */
 function peakSpeed(distance: number, p: MotionProfile): number {
-  const { vMax, aMax, jMax } = p;
+  const { vMax, aMax } = p;
+  const jMax = jerkLimit(p);
   if (jMax === undefined) {
     return distance >= (vMax * vMax) / aMax ? vMax : Math.sqrt(aMax * distance);
   }
@@ -27,7 +34,8 @@ function peakSpeed(distance: number, p: MotionProfile): number {
 
 /** Time to accelerate from rest to `speed` (equal to the time to brake from it). */
 function accelerationTime(speed: number, p: MotionProfile): number {
-  const { aMax, jMax } = p;
+  const { aMax } = p;
+  const jMax = jerkLimit(p);
   if (jMax === undefined) return speed / aMax;
   return speed >= (aMax * aMax) / jMax ? speed / aMax + aMax / jMax : 2 * Math.sqrt(speed / jMax);
 }
@@ -42,7 +50,8 @@ export function moveTime(distanceMm: number, p: MotionProfile): number {
 
 /** Distance covered `elapsed` seconds after leaving rest with the given peak speed. */
 function rampDistance(elapsed: number, peak: number, ramp: number, p: MotionProfile): number {
-  const { aMax, jMax } = p;
+  const { aMax } = p;
+  const jMax = jerkLimit(p);
   if (jMax === undefined) return (aMax * elapsed * elapsed) / 2;
   const peakAcceleration = Math.min(aMax, Math.sqrt(peak * jMax));
   const jerkTime = peakAcceleration / jMax;

@@ -19,3 +19,18 @@ export const auditEntrySchema = z.object({
 export type AuditEntry = z.infer<typeof auditEntrySchema>;
 export type AuditAction = z.infer<typeof auditActionSchema>;
 export type AuditEntity = z.infer<typeof auditEntitySchema>;
+
+export const AUDIT_PAGE_MAX = 200;
+
+/** Newest first; pass the last entry's `createdAt` as `before` to read the next page. */
+export const listAuditQuerySchema = z.object({
+  limit: z.coerce
+    .number({ message: 'must be a number' })
+    .int({ message: 'must be a whole number' })
+    .min(1, { message: 'must be at least 1' })
+    .max(AUDIT_PAGE_MAX, { message: `must be at most ${AUDIT_PAGE_MAX}` })
+    .default(50),
+  before: isoDateSchema.optional(),
+});
+
+export type ListAuditQuery = z.infer<typeof listAuditQuerySchema>;

@@ -23,3 +23,7 @@ export const userRefSchema = z.object({
 });
 
 export type UserRef = z.infer<typeof userRefSchema>;
+
+/** The answer to sign-out and to every DELETE: the body is JSON like every other response. */
+export const okSchema = z.object({ ok: z.literal(true) });
+export type Ok = z.infer<typeof okSchema>;

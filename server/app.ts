@@ -1,0 +1,58 @@
+// Builds the Express application without listening, so tests drive it with supertest and `index.ts`
+// starts it. Order matters: headers and origin check, body parsing, session, routers, the JSON 404 for
+// unknown API routes, the client (optional), and one error handler last.
+import express from 'express';
+import type { DataSource } from 'typeorm';
+import type { AppContext } from './app-context';
+import { createAuth } from './auth/lucia';
+import { createAttemptLimiter } from './auth/rate-limit';
+import { loadSession } from './auth/session-middleware';
+import { errorHandler, sendError, unknownApiRoute } from './http/error-handler';
+import { HttpError } from './http/http-error';
+import { requireJsonBody } from './http/json-only';
+import { JSON_BODY_LIMIT_BYTES } from './http/limits';
+import { refuseCrossOriginMutations } from './http/origin-check';
+import { securityHeaders } from './http/security-headers';
+import { clientRouter } from './http/static-client';
+import { auditRouter } from './routes/audit';
+import { authRouter } from './routes/auth';
+import { membersRouter } from './routes/members';
+import { projectsRouter } from './routes/projects';
+import { revisionsRouter } from './routes/revisions';
+import { runsRouter } from './routes/runs';
+import { scenariosRouter } from './routes/scenarios';
+
+export interface CreateAppOptions {
+  dataSource: DataSource;
+  /** The built client (vite's output); served with index.html as the fallback for the client's routes. */
+  clientDir?: string;
+  /** The origin users reach the app at, e.g. https://lanewright.example.test. */
+  publicOrigin?: string;
+}
+
+export function createApp(opts: CreateAppOptions): express.Express {
+  const publicOrigin = opts.publicOrigin ? new URL(opts.publicOrigin).origin : undefined;
+  const ctx: AppContext = { ds: opts.dataSource, auth: createAuth(opts.dataSource), publicOrigin, signInLimiter: createAttemptLimiter() };
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('etag', false);
+  app.use(securityHeaders(publicOrigin?.startsWith('https:') ?? false));
+
+  const api = express.Router();
+  api.use(refuseCrossOriginMutations(publicOrigin));
+  api.use((_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
+  api.use(requireJsonBody);
+  api.use(express.json({ limit: JSON_BODY_LIMIT_BYTES, strict: true }));
+  api.use(loadSession(ctx.auth, publicOrigin));
+  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, membersRouter, auditRouter]) api.use(router(ctx));
+  api.use(unknownApiRoute);
+  app.use('/api', api);
+
+  if (opts.clientDir) app.use(clientRouter(opts.clientDir));
+  app.use((req, res) => sendError(res, new HttpError(404, 'not_found', `Nothing is served at ${req.path}.`)));
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,34 @@
+// Every entity class, listed once for the data source (no globs: tsx and vitest resolve no patterns).
+import { AuditEntryEntity } from './audit-entry.entity';
+import { MembershipEntity } from './membership.entity';
+import { OrganisationEntity } from './organisation.entity';
+import { ProjectEntity } from './project.entity';
+import { RunEntity } from './run.entity';
+import { ScenarioRevisionEntity } from './scenario-revision.entity';
+import { ScenarioEntity } from './scenario.entity';
+import { SessionEntity } from './session.entity';
+import { UserEntity } from './user.entity';
+
+export {
+  AuditEntryEntity,
+  MembershipEntity,
+  OrganisationEntity,
+  ProjectEntity,
+  RunEntity,
+  ScenarioRevisionEntity,
+  ScenarioEntity,
+  SessionEntity,
+  UserEntity,
+};
+
+export const entities = [
+  UserEntity,
+  OrganisationEntity,
+  MembershipEntity,
+  SessionEntity,
+  ProjectEntity,
+  ScenarioEntity,
+  ScenarioRevisionEntity,
+  RunEntity,
+  AuditEntryEntity,
+];

@@ -1,0 +1,77 @@
+// A stored simulation run, tied to the exact revision it was computed from. Headline numbers sit in plain
+// columns so lists sort and filter without reading the bulky `results` JSON, which list queries never select.
+import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, UpdateDateColumn } from 'typeorm';
+import type { RunSummary } from '../../../shared/api/runs';
+import type { RunResult } from '../../../shared/results/run-result';
+import type { RunSettings } from '../../../shared/scenario/run-settings';
+import { ScenarioRevisionEntity } from './scenario-revision.entity';
+import { ScenarioEntity } from './scenario.entity';
+import { UserEntity } from './user.entity';
+
+@Entity({ name: 'runs' })
+@Unique('UQ_runs_scenario_client_run', ['scenarioId', 'clientRunId'])
+@Index('IDX_runs_scenario_created', ['scenarioId', 'createdAt'])
+@Index('IDX_runs_revision', ['revisionId'])
+@Index('IDX_runs_created_by', ['createdById'])
+export class RunEntity {
+  @PrimaryGeneratedColumn('uuid')
+  id!: string;
+
+  @Column({ type: 'uuid', name: 'scenario_id' })
+  scenarioId!: string;
+
+  @ManyToOne(() => ScenarioEntity, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'scenario_id' })
+  scenario?: ScenarioEntity;
+
+  @Column({ type: 'uuid', name: 'revision_id' })
+  revisionId!: string;
+
+  @ManyToOne(() => ScenarioRevisionEntity, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'revision_id' })
+  revision?: ScenarioRevisionEntity;
+
+  @Column({ type: 'uuid', name: 'client_run_id' })
+  clientRunId!: string;
+
+  @Column({ type: 'text' })
+  name!: string;
+
+  @Column({ type: 'jsonb' })
+  settings!: RunSettings;
+
+  @Column({ type: 'text' })
+  seed!: string;
+
+  @Column({ type: 'text', name: 'engine_version' })
+  engineVersion!: string;
+
+  @Column({ type: 'double precision', name: 'throughput_per_hour_mean' })
+  throughputPerHourMean!: number;
+
+  @Column({ type: 'double precision', name: 'takt_seconds_mean' })
+  taktSecondsMean!: number;
+
+  @Column({ type: 'integer' })
+  carriers!: number;
+
+  /** The whole headline block (intervals, annual output, bottleneck): small, returned in lists. */
+  @Column({ type: 'jsonb' })
+  summary!: RunSummary;
+
+  @Column({ type: 'jsonb', select: false })
+  results!: RunResult;
+
+  @Column({ type: 'uuid', name: 'created_by_id', nullable: true })
+  createdById!: string | null;
+
+  @ManyToOne(() => UserEntity, { onDelete: 'SET NULL', nullable: true })
+  @JoinColumn({ name: 'created_by_id' })
+  createdBy?: UserEntity | null;
+
+  @CreateDateColumn({ type: 'timestamptz', name: 'created_at' })
+  createdAt!: Date;
+
+  @UpdateDateColumn({ type: 'timestamptz', name: 'updated_at' })
+  updatedAt!: Date;
+}

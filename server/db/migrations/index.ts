@@ -1,0 +1,5 @@
+// Migrations in the order they apply.
+import { InitialSchema1796189683213 } from './1796189683213-InitialSchema';
+import { RevisionImmutability1796189683214 } from './1796189683214-RevisionImmutability';
+
+export const migrations = [InitialSchema1796189683213, RevisionImmutability1796189683214];

@@ -1,0 +1,70 @@
+// The demo organisation: an invented valve-cartridge assembly plant with an owner, an engineer and a
+// viewer, one project and the two example layouts. Seeding is all-or-nothing and happens once: when the
+// demo organisation exists, nothing is touched, so users' edits to demo data survive restarts.
+import type { DataSource } from 'typeorm';
+import type { Role } from '../../../shared/api/roles';
+import { scenarioSchema } from '../../../shared/scenario/scenario';
+import sideBySideLoop from '../../../shared/examples/side-by-side-loop.json';
+import stackedLoop from '../../../shared/examples/stacked-loop.json';
+import { recordAudit } from '../../audit/record-audit';
+import { hashPassword } from '../../auth/password';
+import { createScenarioWithFirstRevision } from '../../scenarios/create-scenario';
+import { MembershipEntity, OrganisationEntity, ProjectEntity, UserEntity } from '../entities';
+
+export const DEMO_ORGANISATION_ID = '5eed0000-0000-4000-8000-000000000001';
+export const DEMO_PASSWORD = 'demo-password';
+export const DEMO_ACCOUNTS: ReadonlyArray<{ email: string; name: string; role: Role }> = [
+  { email: 'owner@demo.lanewright.test', name: 'Demo Owner', role: 'owner' },
+  { email: 'engineer@demo.lanewright.test', name: 'Demo Engineer', role: 'engineer' },
+  { email: 'viewer@demo.lanewright.test', name: 'Demo Viewer', role: 'viewer' },
+];
+
+const DEMO_SCENARIOS = [
+  { example: stackedLoop, name: 'Stacked loop', description: 'Work deck above, return deck below, an elevator at each end.' },
+  { example: sideBySideLoop, name: 'Side-by-side loop', description: 'Work and return lanes next to each other, joined at both ends.' },
+];
+
+function parseExample(name: string, example: unknown) {
+  const parsed = scenarioSchema.safeParse(example);
+  if (!parsed.success) {
+    const issues = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ');
+    throw new Error(`the demo scenario "${name}" does not match the scenario format: ${issues}`);
+  }
+  return parsed.data;
+}
+
+export async function seedDemo(ds: DataSource): Promise<void> {
+  if (process.env.LANEWRIGHT_DEMO === 'off') return;
+  if (await ds.getRepository(OrganisationEntity).existsBy({ id: DEMO_ORGANISATION_ID })) return;
+  const documents = DEMO_SCENARIOS.map((s) => ({ ...s, document: parseExample(s.name, s.example) }));
+  const passwordHash = await hashPassword(DEMO_PASSWORD);
+
+  await ds.transaction(async (manager) => {
+    // Another start may be seeding at the same moment; the lock makes the second one find the first's work.
+    await manager.query('SELECT pg_advisory_xact_lock(hashtext($1))', ['lanewright-demo-seed']);
+    if (await manager.getRepository(OrganisationEntity).existsBy({ id: DEMO_ORGANISATION_ID })) return;
+    const users = manager.getRepository(UserEntity);
+    const taken = await users.findBy(DEMO_ACCOUNTS.map((a) => ({ email: a.email })));
+    if (taken.length > 0) {
+      throw new Error(`cannot seed the demo: ${taken.map((u) => u.email).join(', ')} already belong(s) to other accounts; set LANEWRIGHT_DEMO=off`);
+    }
+    const organisation = await manager.getRepository(OrganisationEntity).save({ id: DEMO_ORGANISATION_ID, name: 'Demo valve-cartridge plant' });
+    const accounts = [];
+    for (const account of DEMO_ACCOUNTS) {
+      const user = await users.save({ email: account.email, name: account.name, passwordHash });
+      await manager.getRepository(MembershipEntity).insert({ organisationId: organisation.id, userId: user.id, role: account.role });
+      accounts.push(user);
+    }
+    const engineer = accounts[1];
+    const project = await manager.getRepository(ProjectEntity).save({
+      organisationId: organisation.id,
+      name: 'Cartridge line layout study',
+      description: 'Invented demo: which layout reaches the takt for the VC-20 valve cartridge with the fewest carriers.',
+      createdById: engineer.id,
+    });
+    for (const { name, description, document } of documents) {
+      await createScenarioWithFirstRevision(manager, { projectId: project.id, name, description, document, message: 'Demo layout', createdById: engineer.id });
+    }
+    await recordAudit(manager, { organisationId: organisation.id, actorId: null, action: 'create', entity: 'organisation', entityId: organisation.id, detail: { seeded: 'demo' } });
+  });
+}

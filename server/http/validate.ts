@@ -1,0 +1,36 @@
+// Parses a request's route parameters, query and body with the shared zod schemas before the handler runs,
+// and hands the handler typed values. A failure answers 400 with every problem and its field path.
+import type { NextFunction, Request, RequestHandler, Response } from 'express';
+import type { z } from 'zod';
+import { toFieldIssues } from '../../shared/api/errors';
+import { badRequest } from './http-error';
+
+type Schemas = { params?: z.ZodType; query?: z.ZodType; body?: z.ZodType };
+type Parsed<S extends Schemas> = { [K in keyof S]: S[K] extends z.ZodType ? z.output<S[K]> : never };
+
+const where = { params: 'in the address', query: 'in the query string', body: 'in the request body' } as const;
+
+export function parseInput<S extends z.ZodType>(schema: S, value: unknown, part: keyof typeof where): z.output<S> {
+  if (part === 'body' && value === undefined) {
+    throw badRequest('This request needs a JSON body sent with Content-Type: application/json.', [{ path: '', message: 'is required' }]);
+  }
+  const result = schema.safeParse(value ?? {});
+  if (result.success) return result.data;
+  const fields = toFieldIssues(result.error);
+  const summary = fields.map((f) => (f.path ? `${f.path} ${f.message}` : f.message)).join('; ');
+  throw badRequest(`Invalid input ${where[part]}: ${summary}`, fields);
+}
+
+export function validate<S extends Schemas>(
+  schemas: S,
+  handler: (input: Parsed<S>, req: Request, res: Response, next: NextFunction) => unknown,
+): RequestHandler {
+  return async (req, res, next) => {
+    const input: Record<string, unknown> = {};
+    for (const part of ['params', 'query', 'body'] as const) {
+      const schema = schemas[part];
+      if (schema) input[part] = parseInput(schema, req[part], part);
+    }
+    await handler(input as Parsed<S>, req, res, next);
+  };
+}

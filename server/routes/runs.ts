@@ -1,0 +1,125 @@
+// Stored runs. Saving is idempotent on the client's run id: a retried save returns the first run (200)
+// instead of creating a second (201). Renaming and deleting are for owners and the run's author.
+import express, { type RequestHandler } from 'express';
+import { QueryFailedError } from 'typeorm';
+import { createRunSchema, listRunsQuerySchema, updateRunSchema } from '../../shared/api/runs';
+import { canEdit } from '../../shared/api/roles';
+import { loadProject, loadRun, loadScenario } from '../access/loaders';
+import { requireRole } from '../access/require-role';
+import type { AppContext } from '../app-context';
+import { recordAudit } from '../audit/record-audit';
+import { RunEntity, ScenarioRevisionEntity } from '../db/entities';
+import { badRequest, conflict, forbidden } from '../http/http-error';
+import { currentUser, loaded } from '../http/request-context';
+import { validate } from '../http/validate';
+import { summariseRun } from '../runs/summarise-run';
+import { listRuns, runDetail, runListItem } from './run-queries';
+
+const requireRunAuthorOrOwner: RequestHandler = (req, _res, next) => {
+  const role = loaded(req, 'role');
+  const run = loaded(req, 'run');
+  if (role === 'owner' || (canEdit(role) && run.createdById === currentUser(req).id)) return next();
+  next(forbidden('Only the run’s author or an organisation owner may rename or delete this run.'));
+};
+
+const isUniqueViolation = (error: unknown) => error instanceof QueryFailedError && (error.driverError as { code?: string }).code === '23505';
+
+export function runsRouter(ctx: AppContext) {
+  const { ds } = ctx;
+  const router = express.Router();
+  const runs = () => ds.getRepository(RunEntity);
+
+  router.get(
+    '/projects/:id/runs',
+    loadProject(ctx),
+    validate({ query: listRunsQuerySchema }, async ({ query }, req, res) => {
+      res.json(await listRuns(ds, { ...query, projectId: loaded(req, 'project').id }));
+    }),
+  );
+
+  router.get(
+    '/scenarios/:id/runs',
+    loadScenario(ctx),
+    validate({ query: listRunsQuerySchema }, async ({ query }, req, res) => {
+      res.json(await listRuns(ds, { ...query, scenarioId: loaded(req, 'scenario').id }));
+    }),
+  );
+
+  router.post(
+    '/scenarios/:id/runs',
+    loadScenario(ctx),
+    requireRole('engineer'),
+    validate({ body: createRunSchema }, async ({ body }, req, res) => {
+      const scenario = loaded(req, 'scenario');
+      const user = currentUser(req);
+      const findExisting = () => runs().findOne({ where: { scenarioId: scenario.id, clientRunId: body.clientRunId }, select: { id: true, revisionId: true } });
+      const answerRetry = async (existing: { id: string; revisionId: string }) => {
+        if (existing.revisionId !== body.revisionId) {
+          throw conflict('This clientRunId was already used for a run of another revision; choose a new clientRunId.', [{ path: 'clientRunId', message: 'is already used by another run' }]);
+        }
+        res.status(200).json(await runListItem(ds, existing.id));
+      };
+      const existing = await findExisting();
+      if (existing) return answerRetry(existing);
+      const revision = await ds.getRepository(ScenarioRevisionEntity).findOne({ where: { id: body.revisionId, scenarioId: scenario.id }, select: { id: true, number: true } });
+      if (!revision) throw badRequest('The revision does not belong to this scenario.', [{ path: 'revisionId', message: 'is not a revision of this scenario' }]);
+      const { summary, seed, engineVersion } = summariseRun(body.settings, body.results);
+      try {
+        const runId = await ds.transaction(async (manager) => {
+          const run = await manager.getRepository(RunEntity).save({
+            scenarioId: scenario.id,
+            revisionId: revision.id,
+            clientRunId: body.clientRunId,
+            name: body.name ?? `${scenario.name}, revision ${revision.number}`,
+            settings: body.settings,
+            seed,
+            engineVersion,
+            throughputPerHourMean: summary.throughputPerHour.mean,
+            taktSecondsMean: summary.taktSeconds.mean,
+            carriers: summary.carriers,
+            summary,
+            results: body.results,
+            createdById: user.id,
+          });
+          await recordAudit(manager, { organisationId: scenario.project?.organisationId ?? null, actorId: user.id, action: 'run', entity: 'run', entityId: run.id, detail: { scenarioId: scenario.id, revisionNumber: revision.number } });
+          return run.id;
+        });
+        res.status(201).json(await runListItem(ds, runId));
+      } catch (error) {
+        // Two attempts raced past the first lookup; the loser answers like any retry.
+        const winner = isUniqueViolation(error) ? await findExisting() : null;
+        if (!winner) throw error;
+        await answerRetry(winner);
+      }
+    }),
+  );
+
+  router.get('/runs/:id', loadRun(ctx), async (req, res) => {
+    res.json(await runDetail(ds, loaded(req, 'run').id));
+  });
+
+  router.patch(
+    '/runs/:id',
+    loadRun(ctx),
+    requireRunAuthorOrOwner,
+    validate({ body: updateRunSchema }, async ({ body }, req, res) => {
+      const run = loaded(req, 'run');
+      await ds.transaction(async (manager) => {
+        await manager.getRepository(RunEntity).update({ id: run.id }, { name: body.name });
+        await recordAudit(manager, { organisationId: run.scenario?.project?.organisationId ?? null, actorId: currentUser(req).id, action: 'update', entity: 'run', entityId: run.id, detail: { name: body.name } });
+      });
+      res.json(await runListItem(ds, run.id));
+    }),
+  );
+
+  router.delete('/runs/:id', loadRun(ctx), requireRunAuthorOrOwner, async (req, res) => {
+    const run = loaded(req, 'run');
+    await ds.transaction(async (manager) => {
+      await manager.getRepository(RunEntity).delete({ id: run.id });
+      await recordAudit(manager, { organisationId: run.scenario?.project?.organisationId ?? null, actorId: currentUser(req).id, action: 'delete', entity: 'run', entityId: run.id, detail: { name: run.name } });
+    });
+    res.json({ ok: true });
+  });
+
+  return router;
+}

@@ -1,0 +1,132 @@
+// Who may call what: every API route, called by an anonymous visitor, a member of another organisation,
+// a viewer, an engineer and an owner, each with the status the role rules give. Ids of another
+// organisation answer 404, never 403, so they reveal nothing.
+import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { apiRoutes } from '../../shared/api/routes';
+import { useTestDatabase } from '../support/db';
+import { appFor } from './fixtures/app';
+import { stackedLoop } from './fixtures/documents';
+import { ACTORS, createPeople, freshContent, resetMemberships, runBody, type Actor, type Content, type People } from './fixtures/world';
+
+const db = useTestDatabase({ truncate: false });
+
+type Method = 'get' | 'post' | 'patch' | 'delete';
+type Statuses = Record<Actor, number>;
+
+const read: Statuses = { anonymous: 401, outsider: 404, viewer: 200, engineer: 200, owner: 200 };
+const edit: Statuses = { anonymous: 401, outsider: 404, viewer: 403, engineer: 200, owner: 200 };
+const create: Statuses = { anonymous: 401, outsider: 404, viewer: 403, engineer: 201, owner: 201 };
+const manage: Statuses = { anonymous: 401, outsider: 404, viewer: 403, engineer: 403, owner: 200 };
+const signedIn: Statuses = { anonymous: 401, outsider: 200, viewer: 200, engineer: 200, owner: 200 };
+
+interface RouteCase {
+  route: keyof typeof apiRoutes;
+  method: Method;
+  path: (p: People, c: Content) => string;
+  body?: (p: People, c: Content) => object;
+  expected: Statuses;
+}
+
+const cases: RouteCase[] = [
+  { route: 'me', method: 'get', path: () => apiRoutes.me, expected: signedIn },
+  { route: 'projects', method: 'get', path: () => apiRoutes.projects, expected: signedIn },
+  { route: 'projects', method: 'post', path: () => apiRoutes.projects, body: (p) => ({ name: 'New line', organisationId: p.organisationId }), expected: create },
+  { route: 'project', method: 'get', path: (_, c) => apiRoutes.project(c.projectId), expected: read },
+  { route: 'project', method: 'patch', path: (_, c) => apiRoutes.project(c.projectId), body: () => ({ name: 'Renamed' }), expected: edit },
+  { route: 'project', method: 'delete', path: (_, c) => apiRoutes.project(c.projectId), expected: edit },
+  { route: 'projectScenarios', method: 'get', path: (_, c) => apiRoutes.projectScenarios(c.projectId), expected: read },
+  { route: 'projectScenarios', method: 'post', path: (_, c) => apiRoutes.projectScenarios(c.projectId), body: () => ({ name: 'Copy', document: stackedLoop() }), expected: create },
+  { route: 'projectRuns', method: 'get', path: (_, c) => apiRoutes.projectRuns(c.projectId), expected: read },
+  { route: 'scenario', method: 'get', path: (_, c) => apiRoutes.scenario(c.scenarioId), expected: read },
+  { route: 'scenario', method: 'patch', path: (_, c) => apiRoutes.scenario(c.scenarioId), body: () => ({ description: 'Changed' }), expected: edit },
+  { route: 'scenario', method: 'delete', path: (_, c) => apiRoutes.scenario(c.scenarioId), expected: edit },
+  { route: 'scenarioRevisions', method: 'get', path: (_, c) => apiRoutes.scenarioRevisions(c.scenarioId), expected: read },
+  { route: 'scenarioRevisions', method: 'post', path: (_, c) => apiRoutes.scenarioRevisions(c.scenarioId), body: () => ({ document: stackedLoop(), message: 'Faster lift' }), expected: create },
+  { route: 'scenarioRevision', method: 'get', path: (_, c) => apiRoutes.scenarioRevision(c.scenarioId, 1), expected: read },
+  { route: 'scenarioRuns', method: 'get', path: (_, c) => apiRoutes.scenarioRuns(c.scenarioId), expected: read },
+  { route: 'scenarioRuns', method: 'post', path: (_, c) => apiRoutes.scenarioRuns(c.scenarioId), body: (_, c) => runBody(c.revisionId), expected: create },
+  { route: 'run', method: 'get', path: (_, c) => apiRoutes.run(c.runId), expected: read },
+  { route: 'run', method: 'patch', path: (_, c) => apiRoutes.run(c.runId), body: () => ({ name: 'Renamed run' }), expected: edit },
+  { route: 'run', method: 'delete', path: (_, c) => apiRoutes.run(c.runId), expected: edit },
+  { route: 'members', method: 'get', path: (p) => apiRoutes.members(p.organisationId), expected: read },
+  { route: 'members', method: 'post', path: (p) => apiRoutes.members(p.organisationId), body: (p) => ({ email: p.outsider.email, role: 'viewer' }), expected: { ...manage, owner: 201 } },
+  { route: 'member', method: 'patch', path: (p) => apiRoutes.member(p.organisationId, p.viewer.id), body: () => ({ role: 'engineer' }), expected: manage },
+  { route: 'member', method: 'delete', path: (p) => apiRoutes.member(p.organisationId, p.viewer.id), expected: manage },
+  { route: 'audit', method: 'get', path: (p) => apiRoutes.audit(p.organisationId), expected: manage },
+];
+
+let people: People;
+let content: Content;
+
+beforeAll(async () => {
+  people = await createPeople(appFor(db()));
+});
+
+beforeEach(async () => {
+  await resetMemberships(db(), people);
+  content = await freshContent(people);
+});
+
+describe('role matrix', () => {
+  it('covers every route except sign-up, sign-in and sign-out (tested in auth.test.ts)', () => {
+    const covered = new Set(cases.map((c) => c.route));
+    const expected = Object.keys(apiRoutes).filter((r) => !['signUp', 'signIn', 'signOut'].includes(r));
+    expect([...covered].sort()).toEqual(expected.sort());
+  });
+
+  const rows = cases.flatMap((c) => ACTORS.map((actor) => ({ ...c, actor, status: c.expected[actor] })));
+  it.each(rows)('$method $route as $actor answers $status', async ({ method, path, body, actor, status }) => {
+    const agent = people.as(actor);
+    const url = path(people, content);
+    const call = agent[method](url);
+    const res = body ? await call.send(body(people, content)) : await call;
+    expect(res.status, `${method.toUpperCase()} ${url}: ${JSON.stringify(res.body).slice(0, 300)}`).toBe(status);
+    expect(res.headers['content-type']).toMatch(/application\/json/);
+    if (status >= 400) expect(res.body.error.code).toBe({ 401: 'unauthenticated', 403: 'forbidden', 404: 'not_found' }[status]);
+  });
+});
+
+describe('what the role rules imply beyond the table', () => {
+  it('lists never show another organisation’s projects', async () => {
+    const res = await people.outsider.agent.get(apiRoutes.projects);
+    expect(res.status).toBe(200);
+    expect(res.body.map((p: { id: string }) => p.id)).not.toContain(content.projectId);
+    const own = await people.viewer.agent.get(apiRoutes.projects);
+    expect(own.body.map((p: { id: string }) => p.id)).toContain(content.projectId);
+  });
+
+  it('an engineer who did not make a run may not rename or delete it', async () => {
+    await resetMemberships(db(), people);
+    const other = await people.owner.agent.post(apiRoutes.scenarioRuns(content.scenarioId)).send(runBody(content.revisionId));
+    expect(other.status).toBe(201);
+    expect((await people.engineer.agent.patch(apiRoutes.run(other.body.id)).send({ name: 'Mine now' })).status).toBe(403);
+    expect((await people.engineer.agent.delete(apiRoutes.run(other.body.id))).status).toBe(403);
+  });
+
+  it('the last owner can be neither demoted nor removed', async () => {
+    const demote = await people.owner.agent.patch(apiRoutes.member(people.organisationId, people.owner.id)).send({ role: 'engineer' });
+    expect(demote.status).toBe(409);
+    expect(demote.body.error.code).toBe('conflict');
+    const remove = await people.owner.agent.delete(apiRoutes.member(people.organisationId, people.owner.id));
+    expect(remove.status).toBe(409);
+    await people.owner.agent.patch(apiRoutes.member(people.organisationId, people.engineer.id)).send({ role: 'owner' });
+    const nowAllowed = await people.owner.agent.patch(apiRoutes.member(people.organisationId, people.owner.id)).send({ role: 'engineer' });
+    expect(nowAllowed.status).toBe(200);
+  });
+
+  it('creating a project without an organisation picks the caller’s first one where they may edit', async () => {
+    const res = await people.engineer.agent.post(apiRoutes.projects).send({ name: 'Default organisation' });
+    expect(res.status).toBe(201);
+    expect(res.body.organisationId).toBe(people.engineer.organisationId);
+  });
+
+  it('writes audit rows for changes, readable by owners', async () => {
+    await people.engineer.agent.patch(apiRoutes.project(content.projectId)).send({ name: 'Audited' });
+    const res = await people.owner.agent.get(apiRoutes.audit(people.organisationId)).query({ limit: 5 });
+    expect(res.status).toBe(200);
+    expect(res.body).toHaveLength(5);
+    expect(res.body[0]).toMatchObject({ action: 'update', entity: 'project', entityId: content.projectId, actor: { id: people.engineer.id }, detail: { name: 'Audited' } });
+    const actions = (await people.owner.agent.get(apiRoutes.audit(people.organisationId)).query({ limit: 200 })).body.map((e: { action: string; entity: string }) => `${e.action} ${e.entity}`);
+    expect(actions).toEqual(expect.arrayContaining(['create project', 'create scenario', 'run run', 'member-add member']));
+  });
+});

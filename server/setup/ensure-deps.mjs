@@ -47,7 +47,7 @@ if (!existsSync(lockfile)) fail(`package-lock.json is missing in ${root}; restor
 const lockHash = createHash('sha256').update(readFileSync(lockfile)).digest('hex');
 const reason = staleReason(lockHash);
 if (reason) {
-  say(`${reason}: running npm ci (about 15 s)`);
+  say(`${reason}: running npm ci (about half a minute)`);
   const npm = process.platform === 'win32' ? 'npm.cmd' : 'npm';
   const result = spawnSync(npm, ['ci', '--no-audit', '--no-fund'], { cwd: root, stdio: 'inherit' });
   if (result.error) fail(`could not run npm: ${result.error.message}`);
@@ -56,4 +56,4 @@ if (reason) {
 } else {
   say('dependencies match package-lock.json');
 }
-writeFileSync(hashFile, `${lockHash}\n`);
+if (!existsSync(hashFile) || readFileSync(hashFile, 'utf8').trim() !== lockHash) writeFileSync(hashFile, `${lockHash}\n`);

@@ -2,7 +2,7 @@
 // racing `npm test` to create the cluster). mkdir is atomic; the owner's pid inside lets a lock left by a
 // killed process be taken over.
 import { mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { join } from 'node:path';
+import { dirname, join } from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { say } from './log';
 
@@ -27,6 +27,7 @@ function ownerAlive(lockDir: string): { alive: boolean; pid?: number } {
 export async function acquireLock(lockDir: string, purpose: string): Promise<() => void> {
   let announced = false;
   let pidlessSince: number | undefined;
+  mkdirSync(dirname(lockDir), { recursive: true });
   for (;;) {
     try {
       mkdirSync(lockDir);

@@ -8,9 +8,12 @@ export class SetupError extends Error {
   override name = 'SetupError';
 }
 
-/** Prints an error for a person: SetupError as its message only, anything else with its stack. */
+// Errors that already say what is wrong in words: this one, and the server's ConfigError.
+const EXPLAINED = new Set(['SetupError', 'ConfigError']);
+
+/** Prints an error for a person: an explained error as its message only, anything else with its stack. */
 export function reportFailure(error: unknown): void {
-  if (error instanceof SetupError) console.error(`[lanewright] ${error.message}`);
+  if (error instanceof Error && EXPLAINED.has(error.name)) console.error(`[lanewright] ${error.message}`);
   else console.error(error);
 }
 

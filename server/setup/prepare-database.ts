@@ -2,6 +2,7 @@
 // or DATABASE_URL), database `lanewright`, migrations, and the demo organisation unless LANEWRIGHT_DEMO=off.
 import 'reflect-metadata';
 import type { DataSource } from 'typeorm';
+import { loadConfig } from '../config';
 import { createDataSource } from '../db/data-source';
 import { runMigrations } from '../db/migrate';
 import { seedDemo } from '../db/seed/demo';
@@ -12,7 +13,7 @@ import { onCleanup } from './shutdown';
 export const APP_DATABASE = 'lanewright';
 
 export function demoEnabled(): boolean {
-  return process.env.LANEWRIGHT_DEMO !== 'off';
+  return loadConfig().LANEWRIGHT_DEMO !== 'off';
 }
 
 function connectionHelp(url: string, error: unknown): SetupError {

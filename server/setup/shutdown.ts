@@ -1,5 +1,5 @@
 // Clean-up on Ctrl-C, SIGTERM or a failed start: the steps run newest first (HTTP server, then the data
-// source, then PostgreSQL if this process started it). A second Ctrl-C exits at once.
+// source, then PostgreSQL if this process started it). A second Ctrl-C (after 1.5 s) exits at once.
 import { reportFailure, say } from './log';
 
 const steps: Array<() => Promise<void>> = [];
@@ -25,13 +25,15 @@ export function cleanUp(): Promise<void> {
 
 /** Makes SIGINT and SIGTERM clean up and exit; call once at the start of a long-running script. */
 export function exitOnSignals(): void {
-  let signalled = false;
+  let signalledAt: number | undefined;
   const handler = (signal: NodeJS.Signals) => {
-    if (signalled) {
+    if (signalledAt !== undefined) {
+      // One Ctrl-C can arrive twice: from the terminal and relayed by tsx's parent process.
+      if (Date.now() - signalledAt < 1_500) return;
       say(`${signal} again: exiting without finishing clean-up`);
       process.exit(130);
     }
-    signalled = true;
+    signalledAt = Date.now();
     say(`${signal}: shutting down`);
     void cleanUp().then(() => process.exit(0));
   };

@@ -1,6 +1,8 @@
-// `npm start`: PostgreSQL, database, migrations, demo, client build, then the app on 127.0.0.1:PORT.
+// `npm start`: PostgreSQL, database, migrations, demo, client build, then the app on HOST:PORT
+// (127.0.0.1:3000 unless set).
+import { loadConfig } from '../config';
 import { startServer } from '../index';
-import { demoSignInText, HTTP_HOST, httpPort, portInUseHelp } from './app-settings';
+import { demoSignInText, portInUseHelp } from './app-settings';
 import { buildClient } from './client-build';
 import { say } from './log';
 import { clientOutDir } from './paths';
@@ -9,10 +11,11 @@ import { exitOnSignals, failAndExit, onCleanup } from './shutdown';
 
 async function main(): Promise<void> {
   exitOnSignals();
-  const port = httpPort();
+  // The server's own settings check (PORT, HOST, LANEWRIGHT_DEMO …) stops a bad environment before any work.
+  const { PORT: port, HOST: host } = loadConfig();
   const dataSource = await prepareDatabase({ seed: true });
   await buildClient();
-  const server = await startServer({ dataSource, port, host: HTTP_HOST, clientDir: clientOutDir }).catch((error: unknown) => {
+  const server = await startServer({ dataSource, port, host, clientDir: clientOutDir }).catch((error: unknown) => {
     throw portInUseHelp(error, port, `stop the other program, or choose another port: PORT=${port + 1} npm start`);
   });
   onCleanup(() => server.close());

@@ -1,0 +1,114 @@
+// Browser tests: the real app (migrated, demo seeded, serving the built client from dist/client) on a free
+// loopback port, driven by Debian's Chromium through playwright-core; screenshots go to
+// test-artifacts/screenshots/.
+import 'reflect-metadata';
+import { existsSync } from 'node:fs';
+import { mkdir, mkdtemp, rm } from 'node:fs/promises';
+import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import type { DataSource } from 'typeorm';
+import { createDataSource } from '../../server/db/data-source';
+import { runMigrations } from '../../server/db/migrate';
+import { seedDemo } from '../../server/db/seed/demo';
+import { startServer } from '../../server/index';
+import { clientOutDir, projectRoot } from '../../server/setup/paths';
+import { CHROMIUM_PATH } from './chromium-path';
+import { requireDatabaseUrl } from './test-database';
+
+const HOST = '127.0.0.1';
+const SCREENSHOT_DIR = join(projectRoot, 'test-artifacts', 'screenshots');
+const CHROMIUM_ARGS = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+export interface TestApp {
+  url: string;
+  dataSource: DataSource;
+  close(): Promise<void>;
+}
+
+export interface TestBrowser {
+  context: BrowserContext;
+  /** The tab the browser opened with. */
+  page: Page;
+  /** Uncaught errors thrown by pages' scripts, for tests to assert there were none. */
+  pageErrors: Error[];
+  close(): Promise<void>;
+}
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.once('error', reject);
+    probe.listen(0, HOST, () => {
+      const address = probe.address();
+      probe.close(() => (typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port'))));
+    });
+  });
+}
+
+export async function startTestApp(): Promise<TestApp> {
+  if (!existsSync(join(clientOutDir, 'index.html'))) {
+    throw new Error(`${clientOutDir} holds no client build: run the tests with \`npm test\` (it builds it) or \`npm run build\` first`);
+  }
+  const dataSource = createDataSource(requireDatabaseUrl());
+  await dataSource.initialize();
+  try {
+    await runMigrations(dataSource);
+    await seedDemo(dataSource);
+    const server = await startServer({ dataSource, port: await freePort(), host: HOST, clientDir: clientOutDir });
+    return {
+      url: server.url,
+      dataSource,
+      close: async () => {
+        await server.close();
+        await dataSource.destroy();
+      },
+    };
+  } catch (error) {
+    await dataSource.destroy();
+    throw error;
+  }
+}
+
+export async function launchBrowser(): Promise<TestBrowser> {
+  if (!existsSync(CHROMIUM_PATH)) {
+    throw new Error(`Chromium is not installed at ${CHROMIUM_PATH}: apt-get install -y chromium (npm test does this when run as root)`);
+  }
+  const profileDir = await mkdtemp(join(tmpdir(), 'lanewright-chromium-'));
+  const context = await chromium.launchPersistentContext(profileDir, {
+    executablePath: CHROMIUM_PATH,
+    headless: true,
+    args: CHROMIUM_ARGS,
+  });
+  const pageErrors: Error[] = [];
+  context.on('page', (page) => page.on('pageerror', (error) => pageErrors.push(error)));
+  const page = context.pages()[0] ?? (await context.newPage());
+  page.on('pageerror', (error) => pageErrors.push(error));
+  return {
+    context,
+    page,
+    pageErrors,
+    close: async () => {
+      await context.close();
+      await rm(profileDir, { recursive: true, force: true });
+    },
+  };
+}
+
+/** Saves a full-page PNG as test-artifacts/screenshots/<name>.png and returns its path. */
+export async function screenshot(page: Page, name: string): Promise<string> {
+  const safeName = name.replace(/[^a-zA-Z0-9._-]+/g, '-').replace(/^-+|-+$/g, '') || 'screenshot';
+  await mkdir(SCREENSHOT_DIR, { recursive: true });
+  const path = join(SCREENSHOT_DIR, `${safeName}.png`);
+  await page.screenshot({ path, fullPage: true });
+  return path;
+}

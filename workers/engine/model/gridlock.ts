@@ -1,0 +1,47 @@
+// Describes a line that can no longer move: every carrier, where it stands and what it waits for,
+// in words a planner can act on (which lane start, transfer or carrier holds it up).
+import type { GridlockEntry } from '../kernel/stop';
+import { PH_EXIT, PH_STATION, PH_TRANSFER, TR_HOLDING, type LineState } from './state';
+
+function laneId(m: LineState, lane: number): string {
+  return m.line.scenario.lanes[lane].id;
+}
+
+function connName(m: LineState, conn: number): string {
+  const t = m.line.connTransfer[conn];
+  if (t >= 0) return `transfer "${m.line.scenario.transfers[t].id}"`;
+  return `link to lane "${laneId(m, m.line.connTo[conn])}"`;
+}
+
+function where(m: LineState, c: number): string {
+  if (m.cPhase[c] === PH_TRANSFER) {
+    for (let k = 0; k < m.line.connCount; k++) if (m.tCarrier[k] === c) return connName(m, k);
+    return 'a transfer';
+  }
+  const atStation = m.cAtStation[c] >= 0 ? ` (station "${m.line.stationIds[m.cAtStation[c]]}")` : '';
+  return `lane "${laneId(m, m.cLane[c])}" at ${m.cPos[c].toFixed(0)} mm${atStation}`;
+}
+
+function waitingFor(m: LineState, c: number): string {
+  const target = m.cTarget[c] >= 0 ? `station "${m.line.stationIds[m.cTarget[c]]}"` : 'nothing';
+  if (m.cPhase[c] === PH_TRANSFER) {
+    for (let k = 0; k < m.line.connCount; k++) {
+      if (m.tCarrier[k] === c && m.tState[k] === TR_HOLDING) return `room at the start of lane "${laneId(m, m.line.connTo[k])}" (heading for ${target})`;
+    }
+    return `its transfer (heading for ${target})`;
+  }
+  if (m.cPhase[c] === PH_STATION) return `work at ${target}`;
+  if (m.cPhase[c] === PH_EXIT) {
+    const conn = m.cConn[c];
+    if (m.line.connKind[conn] === 0) return `room at the start of lane "${laneId(m, m.line.connTo[conn])}" (heading for ${target})`;
+    return `${connName(m, conn)} to become free (heading for ${target})`;
+  }
+  const ahead = m.cAhead[c];
+  return ahead >= 0 ? `carrier ${ahead} ahead of it (heading for ${target})` : `its way to ${target}`;
+}
+
+export function gridlockReport(m: LineState): GridlockEntry[] {
+  const out: GridlockEntry[] = [];
+  for (let c = 0; c < m.line.carrierCount; c++) out.push({ carrier: c, at: where(m, c), waitingFor: waitingFor(m, c) });
+  return out;
+}

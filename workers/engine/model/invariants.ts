@@ -1,0 +1,40 @@
+// Self-checks of the line model, switched on in tests: carriers never overlap or leave their lane,
+// no carrier is lost or duplicated, and WIP equals the carriers holding a part.
+import { positionAt } from './lanes';
+import { PH_TRANSFER, type LineState } from './state';
+
+const EPS_MM = 1e-6;
+
+export function checkInvariants(m: LineState): void {
+  const line = m.line;
+  let onLanes = 0;
+  for (let lane = 0; lane < line.laneCount; lane++) {
+    let previous = -1;
+    let count = 0;
+    for (let c = m.laneFront[lane]; c >= 0; c = m.cBehind[c]) {
+      count++;
+      if (m.cLane[c] !== lane) throw new Error(`invariant: carrier ${c} is listed on lane ${lane} but records lane ${m.cLane[c]}`);
+      const head = positionAt(m, c, m.now);
+      if (head < line.carrierLengthMm - EPS_MM || head > line.laneLengthMm[lane] + EPS_MM) {
+        throw new Error(`invariant: carrier ${c} front at ${head} mm is off lane ${lane} (length ${line.laneLengthMm[lane]} mm) at t=${m.now}`);
+      }
+      if (previous >= 0) {
+        const clearance = positionAt(m, previous, m.now) - head;
+        if (clearance < line.pitchMm - EPS_MM) {
+          throw new Error(`invariant: carriers ${previous} and ${c} on lane ${lane} are ${clearance} mm apart, less than ${line.pitchMm} mm, at t=${m.now}`);
+        }
+      }
+      previous = c;
+    }
+    if (count !== m.laneCarriers[lane]) throw new Error(`invariant: lane ${lane} counts ${m.laneCarriers[lane]} carriers but lists ${count}`);
+    onLanes += count;
+  }
+  let inTransfers = 0;
+  for (let c = 0; c < line.carrierCount; c++) if (m.cPhase[c] === PH_TRANSFER) inTransfers++;
+  if (onLanes + inTransfers !== line.carrierCount) {
+    throw new Error(`invariant: ${onLanes} carriers on lanes and ${inTransfers} in transfers, but the line has ${line.carrierCount}`);
+  }
+  let loaded = 0;
+  for (let c = 0; c < line.carrierCount; c++) loaded += m.cLoaded[c];
+  if (loaded !== m.wip) throw new Error(`invariant: ${loaded} carriers hold a part but WIP is ${m.wip}`);
+}

@@ -1,0 +1,54 @@
+// How long a move along a lane takes and where the carrier is during it. Independent carriers move
+// rest to rest with their motion profile (loaded or empty); a carrier that follows a moving carrier
+// uses the slower of the two profiles in every parameter, so it can never catch up with the one ahead
+// (both start from rest, the follower no earlier, and its target is behind the leader's). Belt
+// pallets move at the constant belt speed.
+import type { Scenario } from '../../../shared/scenario/scenario';
+import { moveTime, positionAt, type MotionProfile } from '../motion/profile';
+
+export const PROFILE_LOADED = 0;
+export const PROFILE_EMPTY = 1;
+/** Component-wise minimum of loaded and empty, for a follower whose leader has the other profile. */
+export const PROFILE_SLOWER = 2;
+
+export type Motion = {
+  moveSeconds(distanceMm: number, profile: number): number;
+  travelledMm(distanceMm: number, profile: number, elapsedSeconds: number): number;
+  /** Top speed of a loaded carrier, for route estimates. */
+  cruiseMmPerS: number;
+};
+
+function toProfile(p: { vMaxMmPerS: number; aMaxMmPerS2: number; jMaxMmPerS3?: number }): MotionProfile {
+  return p.jMaxMmPerS3 === undefined ? { vMax: p.vMaxMmPerS, aMax: p.aMaxMmPerS2 } : { vMax: p.vMaxMmPerS, aMax: p.aMaxMmPerS2, jMax: p.jMaxMmPerS3 };
+}
+
+function slower(a: MotionProfile, b: MotionProfile): MotionProfile {
+  const out: MotionProfile = { vMax: Math.min(a.vMax, b.vMax), aMax: Math.min(a.aMax, b.aMax) };
+  // A profile without jerk limit changes acceleration instantly: the finite jerk is the slower one.
+  if (a.jMax !== undefined || b.jMax !== undefined) out.jMax = Math.min(a.jMax ?? Infinity, b.jMax ?? Infinity);
+  return out;
+}
+
+export function createMotion(s: Scenario): Motion {
+  if (s.conveyor.kind === 'belt') {
+    const speed = s.conveyor.speedMmPerS;
+    return {
+      moveSeconds: (d) => (d > 0 ? d / speed : 0),
+      travelledMm: (d, _p, t) => (t <= 0 ? 0 : Math.min(d, t * speed)),
+      cruiseMmPerS: speed,
+    };
+  }
+  const loaded = toProfile(s.carriers.loaded);
+  const empty = s.carriers.empty ? toProfile(s.carriers.empty) : loaded;
+  const profiles = [loaded, empty, slower(loaded, empty)];
+  return {
+    moveSeconds: (d, p) => moveTime(d, profiles[p]),
+    travelledMm: (d, p, t) => positionAt(d, profiles[p], t),
+    cruiseMmPerS: loaded.vMax,
+  };
+}
+
+/** The profile a carrier may use when it starts moving behind a carrier that is itself moving. */
+export function followerProfile(own: number, leader: number): number {
+  return own === leader ? own : PROFILE_SLOWER;
+}

@@ -1,0 +1,170 @@
+// The mutable state of one replication, kept in flat typed arrays indexed by carrier, station, lane
+// and connection number so the hot path touches no objects. Modules of the line model (lanes,
+// stations, transfers) read and write it; the observer is told of every state change.
+import type { Sampler } from '../random/sampler';
+import type { EventQueue } from '../kernel/event-queue';
+import type { Observer } from '../observe/observer';
+import type { CompiledLine } from './compile';
+
+/** Carrier phases. */
+export const PH_MOVING = 0;
+/** Stopped, wants to move on: waiting for track ahead. */
+export const PH_QUEUED = 1;
+/** At the station it was sent to, being served (or waiting for the station to come back up). */
+export const PH_STATION = 2;
+/** At a lane end, waiting for its link or transfer. */
+export const PH_EXIT = 3;
+export const PH_TRANSFER = 4;
+
+/** Station states, in the order of STATION_STATES in the run result. */
+export const ST_PROCESSING = 0;
+export const ST_STARVED = 1;
+export const ST_BLOCKED = 2;
+export const ST_DOWN = 3;
+export const ST_BREAK = 4;
+
+/** Transfer states. */
+export const TR_IDLE = 0;
+export const TR_CARRYING = 1;
+export const TR_HOLDING = 2;
+export const TR_RETURNING = 3;
+
+/** Event kinds. */
+export const EV_ARRIVE = 1;
+export const EV_SEGMENT_END = 2;
+export const EV_REPAIR_END = 3;
+export const EV_CARRIED = 4;
+export const EV_RETURNED = 5;
+export const EV_LANE_WAKE = 6;
+/** Events above this never change the line by themselves (clock-driven bookkeeping). */
+export const EV_LAST_ACTIVE = 6;
+export const EV_BREAK = 7;
+export const EV_SAMPLE = 8;
+export const EV_WARMUP_END = 9;
+export const EV_END = 10;
+
+export type StationSamplers = { cycle: Sampler; failure: Sampler | null; repair: Sampler | null; inspect: Sampler | null };
+
+export type LineState = {
+  line: CompiledLine;
+  queue: EventQueue;
+  observer: Observer;
+  now: number;
+  /** Pending events that can change the line (EV_ARRIVE … EV_LANE_WAKE), for gridlock detection. */
+  activePending: number;
+  breakActive: boolean;
+  // Carriers.
+  cLane: Int32Array;
+  cPos: Float64Array;
+  cDest: Float64Array;
+  cMoveStart: Float64Array;
+  cMoveEnd: Float64Array;
+  cProfile: Int8Array;
+  cPhase: Int8Array;
+  cAhead: Int32Array;
+  cBehind: Int32Array;
+  cStep: Int32Array;
+  cTarget: Int32Array;
+  cLoaded: Uint8Array;
+  cAtStation: Int32Array;
+  cLoadTime: Float64Array;
+  cLastLoad: Float64Array;
+  cConn: Int32Array;
+  cQueueConn: Int32Array;
+  cWoken: Uint8Array;
+  wakeRing: Int32Array;
+  wakeHead: number;
+  wakeCount: number;
+  // Lanes.
+  laneFront: Int32Array;
+  laneRear: Int32Array;
+  laneCarriers: Int32Array;
+  laneWakePending: Uint8Array;
+  laneDirty: Uint8Array;
+  /** Lanes to re-examine after the current event. */
+  laneRing: number[];
+  /** Connections waiting to put a carrier on the lane, in request order. */
+  laneRequests: number[][];
+  // Connections (links and transfers).
+  tState: Int8Array;
+  tCarrier: Int32Array;
+  tWaiting: Int32Array;
+  // Stations.
+  sState: Int8Array;
+  sCarrier: Int32Array;
+  sDone: Uint8Array;
+  sDown: Uint8Array;
+  sSegmentActive: Uint8Array;
+  sSegmentStart: Float64Array;
+  sWorkLeft: Float64Array;
+  sToFailure: Float64Array;
+  sGen: Int32Array;
+  sAssigned: Int32Array;
+  samplers: StationSamplers[];
+  stepRoundRobin: Int32Array;
+  wip: number;
+};
+
+export function createState(line: CompiledLine, queue: EventQueue, observer: Observer, samplers: StationSamplers[]): LineState {
+  const n = line.carrierCount;
+  const s = line.stationCount;
+  const c = line.connCount;
+  return {
+    line,
+    queue,
+    observer,
+    now: 0,
+    activePending: 0,
+    breakActive: false,
+    cLane: new Int32Array(n).fill(-1),
+    cPos: new Float64Array(n),
+    cDest: new Float64Array(n),
+    cMoveStart: new Float64Array(n),
+    cMoveEnd: new Float64Array(n),
+    cProfile: new Int8Array(n),
+    cPhase: new Int8Array(n).fill(-1),
+    cAhead: new Int32Array(n).fill(-1),
+    cBehind: new Int32Array(n).fill(-1),
+    cStep: new Int32Array(n),
+    cTarget: new Int32Array(n).fill(-1),
+    cLoaded: new Uint8Array(n),
+    cAtStation: new Int32Array(n).fill(-1),
+    cLoadTime: new Float64Array(n),
+    cLastLoad: new Float64Array(n).fill(-1),
+    cConn: new Int32Array(n).fill(-1),
+    cQueueConn: new Int32Array(n).fill(-1),
+    cWoken: new Uint8Array(n),
+    wakeRing: new Int32Array(n),
+    wakeHead: 0,
+    wakeCount: 0,
+    laneFront: new Int32Array(line.laneCount).fill(-1),
+    laneRear: new Int32Array(line.laneCount).fill(-1),
+    laneCarriers: new Int32Array(line.laneCount),
+    laneWakePending: new Uint8Array(line.laneCount),
+    laneDirty: new Uint8Array(line.laneCount),
+    laneRing: [],
+    laneRequests: Array.from({ length: line.laneCount }, () => []),
+    tState: new Int8Array(c),
+    tCarrier: new Int32Array(c).fill(-1),
+    tWaiting: new Int32Array(c).fill(-1),
+    sState: new Int8Array(s).fill(ST_STARVED),
+    sCarrier: new Int32Array(s).fill(-1),
+    sDone: new Uint8Array(s),
+    sDown: new Uint8Array(s),
+    sSegmentActive: new Uint8Array(s),
+    sSegmentStart: new Float64Array(s),
+    sWorkLeft: new Float64Array(s),
+    sToFailure: new Float64Array(s).fill(Infinity),
+    sGen: new Int32Array(s),
+    sAssigned: new Int32Array(s),
+    samplers,
+    stepRoundRobin: new Int32Array(line.stepCount),
+    wip: 0,
+  };
+}
+
+/** Schedules an event that can change the line (counted for gridlock detection). */
+export function scheduleActive(m: LineState, delay: number, kind: number, a: number, b = 0): void {
+  m.activePending++;
+  m.queue.push(m.now + delay, 1, kind, a, b);
+}

@@ -1,0 +1,153 @@
+// Stations: work on the carrier standing at them, fail and get repaired, pause for breaks. Work is
+// done in segments that end at completion or at the next failure, whichever comes first; time to
+// failure counts operating (processing) time only, so a starved or blocked station does not fail.
+// A failure or a break pauses the work, which resumes where it stopped. Repairs run in elapsed time.
+import { STEP_INSPECT, STEP_LOAD, STEP_UNLOAD } from './compile';
+import { chooseStation, unassign } from './dispatch';
+import { setPhase, wake } from './lanes';
+import {
+  EV_REPAIR_END,
+  EV_SEGMENT_END,
+  PH_QUEUED,
+  PH_STATION,
+  scheduleActive,
+  ST_BLOCKED,
+  ST_BREAK,
+  ST_DOWN,
+  ST_PROCESSING,
+  ST_STARVED,
+  type LineState,
+} from './state';
+
+const EPS_S = 1e-9;
+
+function onBreak(m: LineState, s: number): boolean {
+  return m.breakActive && m.line.stationPausesForBreaks[s] === 1;
+}
+
+export function updateStationState(m: LineState, s: number): void {
+  let state: number;
+  if (m.sDown[s]) state = ST_DOWN;
+  else if (onBreak(m, s)) state = ST_BREAK;
+  else if (m.sCarrier[s] < 0) state = ST_STARVED;
+  else state = m.sDone[s] ? ST_BLOCKED : ST_PROCESSING;
+  if (state === m.sState[s]) return;
+  m.sState[s] = state;
+  m.observer.stationState(s, state, m.now);
+}
+
+function resume(m: LineState, s: number): void {
+  if (m.sCarrier[s] < 0 || m.sDone[s] || m.sDown[s] || m.sSegmentActive[s] || onBreak(m, s)) return;
+  const segment = Math.min(m.sWorkLeft[s], m.sToFailure[s]);
+  m.sSegmentActive[s] = 1;
+  m.sSegmentStart[s] = m.now;
+  m.sGen[s]++;
+  scheduleActive(m, segment, EV_SEGMENT_END, s, m.sGen[s]);
+}
+
+function pause(m: LineState, s: number): void {
+  if (!m.sSegmentActive[s]) return;
+  const elapsed = m.now - m.sSegmentStart[s];
+  m.sWorkLeft[s] -= elapsed;
+  m.sToFailure[s] -= elapsed;
+  m.sSegmentActive[s] = 0;
+  m.sGen[s]++;
+}
+
+export function arriveAtStation(m: LineState, c: number, s: number): void {
+  const work = m.samplers[s].cycle() + m.line.locateSeconds;
+  m.observer.cycleSampled(s, work);
+  m.cAtStation[c] = s;
+  m.sCarrier[s] = c;
+  m.sDone[s] = 0;
+  m.sWorkLeft[s] = work;
+  setPhase(m, c, PH_STATION);
+  resume(m, s);
+  updateStationState(m, s);
+}
+
+/** The carrier has started to move away: the station waits for its next carrier. */
+export function releaseStation(m: LineState, c: number): void {
+  const s = m.cAtStation[c];
+  m.cAtStation[c] = -1;
+  m.sCarrier[s] = -1;
+  m.sDone[s] = 0;
+  updateStationState(m, s);
+}
+
+function fail(m: LineState, s: number): void {
+  m.sDown[s] = 1;
+  m.observer.failure(s, m.now);
+  scheduleActive(m, m.samplers[s].repair?.() ?? 0, EV_REPAIR_END, s);
+}
+
+export function onSegmentEnd(m: LineState, s: number, generation: number): void {
+  if (generation !== m.sGen[s] || !m.sSegmentActive[s]) return;
+  pause(m, s);
+  if (m.sWorkLeft[s] <= EPS_S) finishWork(m, s);
+  if (m.sToFailure[s] <= EPS_S) fail(m, s);
+  else resume(m, s);
+  updateStationState(m, s);
+}
+
+export function onRepairEnd(m: LineState, s: number): void {
+  m.sDown[s] = 0;
+  m.sToFailure[s] = m.samplers[s].failure?.() ?? Infinity;
+  resume(m, s);
+  updateStationState(m, s);
+}
+
+export function setBreak(m: LineState, active: boolean): void {
+  m.breakActive = active;
+  for (let s = 0; s < m.line.stationCount; s++) {
+    if (!m.line.stationPausesForBreaks[s]) continue;
+    if (active) pause(m, s);
+    else resume(m, s);
+    updateStationState(m, s);
+  }
+}
+
+/** What the finished step does to the part, and which step and station the carrier needs next. */
+function finishWork(m: LineState, s: number): void {
+  const c = m.sCarrier[s];
+  const step = m.line.stationStep[s];
+  const kind = m.line.stepKind[step];
+  m.sDone[s] = 1;
+  m.observer.operationDone(s, m.now);
+  unassign(m, s);
+  let next = step + 1;
+  if (kind === STEP_LOAD) {
+    m.cLoaded[c] = 1;
+    m.cLoadTime[c] = m.now;
+    m.observer.loaded(m.now, m.cLastLoad[c] >= 0 ? m.now - m.cLastLoad[c] : -1);
+    m.cLastLoad[c] = m.now;
+    m.observer.wip(++m.wip, m.now);
+  } else if (kind === STEP_UNLOAD) {
+    m.cLoaded[c] = 0;
+    m.observer.output(m.now, m.now - m.cLoadTime[c]);
+    m.observer.wip(--m.wip, m.now);
+    next = 0;
+  } else if (kind === STEP_INSPECT) {
+    const u = m.samplers[s].inspect?.() ?? 1;
+    const reject = m.line.stepRejectShare[step];
+    if (u < reject) {
+      m.cLoaded[c] = 0;
+      m.observer.scrapped(m.now);
+      m.observer.wip(--m.wip, m.now);
+      next = 0;
+    } else if (u < reject + m.line.stepReworkShare[step]) {
+      m.observer.reworked(m.now);
+      next = m.line.stepReworkTarget[step];
+    }
+  }
+  m.cStep[c] = next;
+  m.cTarget[c] = chooseStation(m, next);
+  setPhase(m, c, PH_QUEUED);
+  wake(m, c);
+}
+
+/** Initial failure clocks; stations without failures never fail. */
+export function startFailureClocks(m: LineState): void {
+  for (let s = 0; s < m.line.stationCount; s++) m.sToFailure[s] = m.samplers[s].failure?.() ?? Infinity;
+}
+

@@ -1,0 +1,147 @@
+// Shifting-bottleneck detection by the active-period method (Roser, Nakano & Tanaka, "A Practical
+// Bottleneck Detection Method", Winter Simulation Conference 2001, and "Shifting Bottleneck
+// Detection", WSC 2002). A station is active while it is not waiting for another part of the line:
+// processing, down, or paused for a break; starved and blocked are inactive. At every instant the
+// momentary bottleneck is the station whose current active period is the longest. Where the
+// periods of two consecutive bottlenecks overlap, the bottleneck is shifting, and that overlap counts
+// for both; the rest of a bottleneck's time is sole.
+//
+// The timeline is resolved online up to the earliest start of a still-running active period (before
+// it, every period is complete), so memory holds only the periods since then. Should that list pass
+// MAX_PENDING (one station active for very long while others cycle), running periods are treated as
+// ending now; this bounds memory at a small cost in accuracy.
+import type { ObservationWindow } from './window';
+
+const MAX_PENDING = 2_000;
+
+type Segment = { station: number; periodStart: number; periodEnd: number; from: number; to: number };
+
+export class BottleneckTracker {
+  private readonly activeSince: Float64Array;
+  private pStation: number[] = [];
+  private pStart: number[] = [];
+  private pEnd: number[] = [];
+  private settled: number;
+  private held: Segment | null = null;
+  /** Start and end of the overlap between the held segment's period and its predecessor's. */
+  private heldOverlapFrom = 0;
+  private heldOverlapTo = 0;
+  readonly sole: Float64Array;
+  readonly shifting: Float64Array;
+
+  constructor(
+    private readonly window: ObservationWindow,
+    stationCount: number,
+  ) {
+    this.activeSince = new Float64Array(stationCount).fill(-1);
+    this.sole = new Float64Array(stationCount);
+    this.shifting = new Float64Array(stationCount);
+    this.settled = 0;
+  }
+
+  setActive(station: number, active: boolean, t: number): void {
+    const since = this.activeSince[station];
+    if (active === since >= 0) return;
+    if (active) {
+      this.activeSince[station] = t;
+      return;
+    }
+    this.activeSince[station] = -1;
+    if (t > since) {
+      this.pStation.push(station);
+      this.pStart.push(since);
+      this.pEnd.push(t);
+    }
+    if (this.pStation.length > MAX_PENDING) this.resolve(t, true);
+    else if (this.pStation.length > 64) this.resolve(t, false);
+  }
+
+  /** Resolves the timeline up to t (forced: running periods end at t). */
+  resolve(t: number, force: boolean): void {
+    let boundary = t;
+    if (force) {
+      for (let s = 0; s < this.activeSince.length; s++) {
+        const since = this.activeSince[s];
+        if (since >= 0 && t > since) {
+          this.pStation.push(s);
+          this.pStart.push(since);
+          this.pEnd.push(t);
+          this.activeSince[s] = t;
+        }
+      }
+    } else {
+      for (let s = 0; s < this.activeSince.length; s++) if (this.activeSince[s] >= 0 && this.activeSince[s] < boundary) boundary = this.activeSince[s];
+    }
+    if (boundary <= this.settled) return;
+    this.sweep(boundary);
+    this.settled = boundary;
+    const keep: number[] = [];
+    for (let i = 0; i < this.pStation.length; i++) if (this.pEnd[i] > boundary) keep.push(i);
+    this.pStation = keep.map((i) => this.pStation[i]);
+    this.pStart = keep.map((i) => this.pStart[i]);
+    this.pEnd = keep.map((i) => this.pEnd[i]);
+  }
+
+  /** Closes every running period at the end of the run and attributes the last segment. */
+  finish(t: number): void {
+    this.resolve(t, true);
+    if (this.held) this.attribute(this.held, Infinity, -Infinity);
+    this.held = null;
+  }
+
+  private sweep(boundary: number): void {
+    const cuts = new Set<number>([this.settled, boundary]);
+    for (let i = 0; i < this.pStation.length; i++) {
+      if (this.pStart[i] > this.settled && this.pStart[i] < boundary) cuts.add(this.pStart[i]);
+      if (this.pEnd[i] > this.settled && this.pEnd[i] < boundary) cuts.add(this.pEnd[i]);
+    }
+    const points = [...cuts].sort((a, b) => a - b);
+    for (let k = 0; k + 1 < points.length; k++) {
+      const a = points[k];
+      const b = points[k + 1];
+      let best = -1;
+      for (let i = 0; i < this.pStation.length; i++) {
+        if (this.pStart[i] > a || this.pEnd[i] < b) continue;
+        if (best < 0) best = i;
+        else {
+          const len = this.pEnd[i] - this.pStart[i];
+          const bestLen = this.pEnd[best] - this.pStart[best];
+          if (len > bestLen || (len === bestLen && this.pStation[i] < this.pStation[best])) best = i;
+        }
+      }
+      if (best >= 0) this.extend(this.pStation[best], this.pStart[best], this.pEnd[best], a, b);
+    }
+  }
+
+  private extend(station: number, periodStart: number, periodEnd: number, from: number, to: number): void {
+    const h = this.held;
+    if (h && h.station === station && h.periodStart === periodStart) {
+      h.to = to;
+      return;
+    }
+    let overlapFrom = Infinity;
+    let overlapTo = -Infinity;
+    if (h) {
+      overlapFrom = Math.max(h.periodStart, periodStart, h.from);
+      overlapTo = Math.min(h.periodEnd, periodEnd);
+      if (overlapTo > overlapFrom) {
+        const both = this.window.overlap(overlapFrom, overlapTo);
+        this.shifting[h.station] += both;
+        if (station !== h.station) this.shifting[station] += both;
+      }
+      this.attribute(h, overlapFrom, overlapTo);
+    }
+    this.held = { station, periodStart, periodEnd, from, to };
+    this.heldOverlapFrom = overlapFrom;
+    this.heldOverlapTo = overlapTo;
+  }
+
+  /** Sole time of a finished segment: its time minus what lies in the overlaps on either side. */
+  private attribute(h: Segment, nextFrom: number, nextTo: number): void {
+    const inSegment = (a: number, b: number) => this.window.overlap(Math.max(a, h.from), Math.min(b, h.to));
+    const before = inSegment(this.heldOverlapFrom, this.heldOverlapTo);
+    const after = inSegment(nextFrom, nextTo);
+    const both = inSegment(Math.max(this.heldOverlapFrom, nextFrom), Math.min(this.heldOverlapTo, nextTo));
+    this.sole[h.station] += Math.max(0, this.window.overlap(h.from, h.to) - before - after + both);
+  }
+}

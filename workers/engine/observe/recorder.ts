@@ -1,0 +1,199 @@
+// Collects the statistics of one replication from the model's reports: time shares per station,
+// carrier and transfer, counts, lead and loop times, WIP, and the binned series behind the heatmaps.
+// Memory is fixed at construction (entities × bins); nothing grows with the run length.
+import { StreamingHistogram } from '../stats/histogram';
+import type { CompiledLine } from '../model/compile';
+import { PH_EXIT, PH_MOVING, PH_QUEUED, PH_STATION, ST_BLOCKED, ST_STARVED, TR_IDLE, TR_HOLDING } from '../model/state';
+import { BottleneckTracker } from './bottleneck';
+import type { Observer } from './observer';
+import { Levels, ObservationWindow } from './window';
+
+export const STATE_COUNT = 5;
+export const CARRIER_SHARES = 4;
+export const TRANSFER_STATES = 4;
+
+/** Carrier phase to the shares reported: moving, waiting, working, in transfer. */
+function carrierShare(phase: number): number {
+  if (phase === PH_MOVING) return 0;
+  if (phase === PH_QUEUED || phase === PH_EXIT) return 1;
+  return phase === PH_STATION ? 2 : 3;
+}
+
+export class Recorder implements Observer {
+  readonly window: ObservationWindow;
+  readonly stationTime: Float64Array;
+  readonly stationTimeline: Float64Array;
+  readonly cycleSum: Float64Array;
+  readonly cycleCount: Float64Array;
+  readonly operations: Float64Array;
+  readonly failures: Float64Array;
+  readonly stationAssignedLevels: Levels;
+  readonly carrierTime = new Float64Array(CARRIER_SHARES);
+  readonly transferTime: Float64Array;
+  readonly transferMoves: Float64Array;
+  readonly transferQueueLevels: Levels;
+  readonly laneLevels: Levels;
+  readonly wipLevel: Levels;
+  readonly wipSeries: Float64Array;
+  readonly laneHeat: Float64Array[];
+  readonly leadTimes = new StreamingHistogram(1, 128);
+  readonly loopTimes = new StreamingHistogram(1, 128);
+  readonly bottleneck: BottleneckTracker;
+  readonly samplesPerBin: number;
+  loadedCount = 0;
+  outputCount = 0;
+  scrappedCount = 0;
+  reworkedCount = 0;
+  private readonly sState: Int8Array;
+  private readonly sSince: Float64Array;
+  private readonly cShare: Int8Array;
+  private readonly cSince: Float64Array;
+  private readonly tState: Int8Array;
+  private readonly tSince: Float64Array;
+
+  constructor(
+    private readonly line: CompiledLine,
+    warmupSeconds: number,
+    endSeconds: number,
+    timeBins: number,
+    readonly positionBins: number,
+    samplesPerBin = 8,
+  ) {
+    const w = new ObservationWindow(warmupSeconds, endSeconds, timeBins);
+    this.window = w;
+    this.samplesPerBin = samplesPerBin;
+    const s = line.stationCount;
+    this.stationTime = new Float64Array(s * STATE_COUNT);
+    this.stationTimeline = new Float64Array(s * timeBins * STATE_COUNT);
+    this.cycleSum = new Float64Array(s);
+    this.cycleCount = new Float64Array(s);
+    this.operations = new Float64Array(s);
+    this.failures = new Float64Array(s);
+    this.stationAssignedLevels = new Levels(w, s);
+    this.sState = new Int8Array(s).fill(ST_STARVED);
+    this.sSince = new Float64Array(s);
+    this.cShare = new Int8Array(line.carrierCount).fill(-1);
+    this.cSince = new Float64Array(line.carrierCount);
+    this.transferTime = new Float64Array(line.connCount * TRANSFER_STATES);
+    this.transferMoves = new Float64Array(line.connCount);
+    this.transferQueueLevels = new Levels(w, line.connCount);
+    this.tState = new Int8Array(line.connCount).fill(TR_IDLE);
+    this.tSince = new Float64Array(line.connCount);
+    this.laneLevels = new Levels(w, line.laneCount);
+    this.wipLevel = new Levels(w, 1);
+    this.wipSeries = new Float64Array(timeBins);
+    this.laneHeat = Array.from({ length: line.laneCount }, () => new Float64Array(timeBins * positionBins));
+    this.bottleneck = new BottleneckTracker(w, s);
+  }
+
+  stationState(station: number, state: number, t: number): void {
+    const old = this.sState[station];
+    const since = this.sSince[station];
+    this.stationTime[station * STATE_COUNT + old] += this.window.overlap(since, t);
+    this.window.spread(this.stationTimeline, station * this.window.bins * STATE_COUNT + old, STATE_COUNT, since, t, 1);
+    this.sState[station] = state;
+    this.sSince[station] = t;
+    this.bottleneck.setActive(station, state !== ST_STARVED && state !== ST_BLOCKED, t);
+  }
+
+  carrierPhase(carrier: number, phase: number, t: number): void {
+    const old = this.cShare[carrier];
+    if (old >= 0) this.carrierTime[old] += this.window.overlap(this.cSince[carrier], t);
+    this.cShare[carrier] = carrierShare(phase);
+    this.cSince[carrier] = t;
+  }
+
+  transferState(conn: number, state: number, t: number): void {
+    this.transferTime[conn * TRANSFER_STATES + this.tState[conn]] += this.window.overlap(this.tSince[conn], t);
+    this.tState[conn] = state;
+    this.tSince[conn] = t;
+  }
+
+  transferQueue(conn: number, delta: number, t: number): void {
+    this.transferQueueLevels.add(conn, delta, t);
+  }
+
+  stationAssigned(station: number, assigned: number, t: number): void {
+    this.stationAssignedLevels.set(station, assigned, t);
+  }
+
+  laneCarriers(lane: number, count: number, t: number): void {
+    this.laneLevels.set(lane, count, t);
+  }
+
+  wip(count: number, t: number): void {
+    const old = this.wipLevel.current(0);
+    this.window.spread(this.wipSeries, 0, 1, this.wipLevel.lastChange(0), t, old);
+    this.wipLevel.set(0, count, t);
+  }
+
+  cycleSampled(station: number, seconds: number): void {
+    this.cycleSum[station] += seconds;
+    this.cycleCount[station]++;
+  }
+
+  operationDone(station: number, t: number): void {
+    if (this.window.contains(t)) this.operations[station]++;
+  }
+
+  failure(station: number, t: number): void {
+    if (this.window.contains(t)) this.failures[station]++;
+  }
+
+  transferMove(conn: number, t: number): void {
+    if (this.window.contains(t)) this.transferMoves[conn]++;
+  }
+
+  loaded(t: number, loopSeconds: number): void {
+    if (!this.window.contains(t)) return;
+    this.loadedCount++;
+    if (loopSeconds >= 0) this.loopTimes.add(loopSeconds);
+  }
+
+  output(t: number, leadSeconds: number): void {
+    if (!this.window.contains(t)) return;
+    this.outputCount++;
+    this.leadTimes.add(leadSeconds);
+  }
+
+  scrapped(t: number): void {
+    if (this.window.contains(t)) this.scrappedCount++;
+  }
+
+  reworked(t: number): void {
+    if (this.window.contains(t)) this.reworkedCount++;
+  }
+
+  /** One snapshot sample of a carrier covering [tailMm, headMm] of a lane, for the space-time heatmap. */
+  sampleCarrier(lane: number, tailMm: number, headMm: number, t: number): void {
+    const bins = this.positionBins;
+    const binMm = this.line.laneLengthMm[lane] / bins;
+    const row = this.window.binOf(t) * bins;
+    const heat = this.laneHeat[lane];
+    const weight = 1 / (this.samplesPerBin * binMm);
+    const first = Math.max(0, Math.floor(tailMm / binMm));
+    const last = Math.min(bins - 1, Math.floor(headMm / binMm));
+    for (let p = first; p <= last; p++) {
+      const covered = Math.min(headMm, (p + 1) * binMm) - Math.max(tailMm, p * binMm);
+      if (covered > 0) heat[row + p] += covered * weight;
+    }
+  }
+
+  /** Closes every open interval at the end of the window. */
+  finish(): void {
+    const end = this.window.end;
+    for (let s = 0; s < this.sState.length; s++) this.stationState(s, this.sState[s], end);
+    for (let c = 0; c < this.cShare.length; c++) {
+      if (this.cShare[c] >= 0) this.carrierTime[this.cShare[c]] += this.window.overlap(this.cSince[c], end);
+      this.cSince[c] = end;
+    }
+    for (let k = 0; k < this.tState.length; k++) this.transferState(k, this.tState[k], end);
+    this.wip(this.wipLevel.current(0), end);
+    this.bottleneck.finish(end);
+  }
+
+  /** Share of time a transfer was holding a carrier it could not deliver. */
+  transferBlockedShare(conn: number): number {
+    return this.transferTime[conn * TRANSFER_STATES + TR_HOLDING] / this.window.length;
+  }
+}

@@ -28,9 +28,11 @@ function standardNormalCdf(x: number): number {
 /** Beyond ten standard deviations the truncation moves the moments by less than 1e-20 of sd. */
 const TRUNCATION_NEGLIGIBLE = -10;
 
-/** Moments of a normal truncated below at min (Johnson, Kotz & Balakrishnan, Continuous Univariate
- * Distributions vol. 1, 2nd ed. 1994, §10.1): with a = (min - mean)/sd and h = pdf(a)/(1 - cdf(a)),
- * mean + sd*h and sd^2 * (1 + a*h - h^2). */
+/**
+ * Moments of a normal truncated below at min (Johnson, Kotz & Balakrishnan, Continuous Univariate
+ * Distributions vol. 1, 2nd ed. 1994, ch. 13 on truncated normals; chapter recalled from memory):
+ * with a = (min - mean)/sd and h = pdf(a)/(1 - cdf(a)), mean + sd*h and sd^2 * (1 + a*h - h^2).
+ */
 function truncatedNormalMoments(mean: number, sd: number, min: number): [number, number] {
   const a = (min - mean) / sd;
   if (a < TRUNCATION_NEGLIGIBLE) return [mean, sd * sd];

@@ -77,7 +77,7 @@ describe('truncated normal moments', () => {
     expect(distributionVariance(d)).toBeCloseTo(m2, 8);
   });
 
-  it('a cut at the mean gives mean + sd·√(2/π) and sd²·(1 − 2/π) (half-normal; Johnson, Kotz & Balakrishnan 1994, §10.1)', () => {
+  it('a cut at the mean gives mean + sd·√(2/π) and sd²·(1 − 2/π) (the half-normal; Johnson, Kotz & Balakrishnan 1994, ch. 13, recalled from memory)', () => {
     const d = { kind: 'normal', mean: 12, sd: 3, min: 12 } as const;
     expect(distributionMean(d)).toBeCloseTo(12 + 3 * Math.sqrt(2 / Math.PI), 12);
     expect(distributionVariance(d)).toBeCloseTo(9 * (1 - 2 / Math.PI), 12);

@@ -1,7 +1,8 @@
 // Rest-to-rest move times of a carrier on straight track, and where it is during the move (for the
 // space-time heatmap). Without jerk the profile is trapezoidal (triangular when the move is too short
 // to reach top speed); with jerk it is the symmetric seven-segment S-curve, whose phases are derived in
-// Biagiotti & Melchiorri, "Trajectory Planning for Automatic Machines and Robots", Springer 2008, §3.4.
+// Biagiotti & Melchiorri, "Trajectory Planning for Automatic Machines and Robots", Springer 2008, §3.4
+// (the double-S trajectory; section number recalled from memory).
 // Units: mm, s, mm/s, mm/s², mm/s³. Distances are magnitudes; a move of zero or less takes no time.
 
 /** jMax absent (or Infinity) means acceleration may change instantly: the trapezoidal profile. */

@@ -31,25 +31,21 @@ const CF_TINY = 1e-300;
 /** Continued fraction for I_x(a, b) by the modified Lentz method (Press et al., Numerical Recipes,
  * 3rd ed. 2007, §6.4). Converges quickly for x < (a + 1) / (a + b + 2). */
 function betaContinuedFraction(x: number, a: number, b: number): number {
+  const guard = (v: number) => (Math.abs(v) < CF_TINY ? CF_TINY : v);
+  // The fraction is 1/(1 + d1/(1 + d2/(1 + …))); d1 = −(a+b)x/(a+1), then even and odd terms alternate.
   let c = 1;
-  let d = 1 - ((a + b) * x) / (a + 1);
-  if (Math.abs(d) < CF_TINY) d = CF_TINY;
-  d = 1 / d;
+  let d = 1 / guard(1 - ((a + b) * x) / (a + 1));
   let h = d;
-  for (let m = 1; m <= CF_MAX_ITERATIONS; m++) {
-    const m2 = 2 * m;
-    for (const numerator of [
-      (m * (b - m) * x) / ((a + m2 - 1) * (a + m2)),
-      (-(a + m) * (a + b + m) * x) / ((a + m2) * (a + m2 + 1)),
-    ]) {
-      d = 1 + numerator * d;
-      if (Math.abs(d) < CF_TINY) d = CF_TINY;
-      c = 1 + numerator / c;
-      if (Math.abs(c) < CF_TINY) c = CF_TINY;
-      d = 1 / d;
-      h *= d * c;
-    }
-    if (Math.abs(d * c - 1) < CF_EPSILON) break;
+  for (let k = 2; k <= 2 * CF_MAX_ITERATIONS + 1; k++) {
+    const m = Math.floor(k / 2);
+    const numerator =
+      k % 2 === 0
+        ? (m * (b - m) * x) / ((a + 2 * m - 1) * (a + 2 * m))
+        : (-(a + m) * (a + b + m) * x) / ((a + 2 * m) * (a + 2 * m + 1));
+    d = 1 / guard(1 + numerator * d);
+    c = guard(1 + numerator / c);
+    h *= c * d;
+    if (k % 2 === 1 && Math.abs(c * d - 1) < CF_EPSILON) break;
   }
   return h;
 }

@@ -4,7 +4,7 @@
 import { lnGamma, regularizedBeta } from './special-functions';
 
 /** P(T > t) for t >= 0 with df degrees of freedom, through the incomplete beta function
- * (Abramowitz & Stegun, Handbook of Mathematical Functions, 1964, 26.7.1 and 26.5.27). */
+ * (Abramowitz & Stegun, Handbook of Mathematical Functions, 1964, §26.7). */
 function upperTail(t: number, df: number): number {
   return 0.5 * regularizedBeta(df / (df + t * t), df / 2, 0.5);
 }

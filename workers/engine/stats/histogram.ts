@@ -12,6 +12,7 @@ export type HistogramSnapshot = {
 
 export class StreamingHistogram {
   private readonly counts: Float64Array;
+  private readonly initialBinWidth: number;
   private binWidth: number;
   private count = 0;
   private sum = 0;
@@ -22,10 +23,7 @@ export class StreamingHistogram {
    * @param initialBinWidth the finest resolution wanted; choose it near the expected values / binCount.
    * @param binCount an even number of bins (default 256).
    */
-  constructor(
-    private readonly initialBinWidth: number,
-    binCount = 256,
-  ) {
+  constructor(initialBinWidth: number, binCount = 256) {
     if (!(initialBinWidth > 0) || !Number.isFinite(initialBinWidth)) {
       throw new RangeError(`StreamingHistogram: initialBinWidth must be a positive finite number, got ${initialBinWidth}`);
     }
@@ -33,6 +31,7 @@ export class StreamingHistogram {
       throw new RangeError(`StreamingHistogram: binCount must be an even whole number of at least 2, got ${binCount}`);
     }
     this.counts = new Float64Array(binCount);
+    this.initialBinWidth = initialBinWidth;
     this.binWidth = initialBinWidth;
   }
 

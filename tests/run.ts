@@ -1,4 +1,4 @@
-// `npm test`: PostgreSQL and a fresh `lanewright_test` database, Chromium, the client build the browser
+// `npm test`: PostgreSQL and fresh test databases, Chromium, the client build the browser
 // tests serve, then `vitest run` over every project (extra arguments pass through). The run always ends
 // with the plain line `N passed, N failed` from tests/support/plain-summary-reporter.ts, printed here after
 // clean-up so that it stays the last line.
@@ -13,7 +13,7 @@ import { createDatabase, dropDatabase, ensureLocalPostgres, type LocalPostgres }
 import { redactUrl, reportFailure, say } from '../server/setup/log';
 import { projectRoot } from '../server/setup/paths';
 import { CHROMIUM_PATH } from './support/chromium-path';
-import { TEST_DATABASE } from './support/test-database';
+import { BROWSER_TEST_DATABASE, TEST_DATABASE } from './support/test-database';
 
 const REPORTER = './tests/support/plain-summary-reporter.ts';
 
@@ -67,9 +67,12 @@ async function main(): Promise<number> {
   try {
     server = await ensureLocalPostgres();
     const databaseUrl = server.url(TEST_DATABASE);
-    await dropDatabase(databaseUrl);
-    await createDatabase(databaseUrl);
-    say(`fresh database ${redactUrl(databaseUrl)}`);
+    const browserDatabaseUrl = server.url(BROWSER_TEST_DATABASE);
+    for (const url of [databaseUrl, browserDatabaseUrl]) {
+      await dropDatabase(url);
+      await createDatabase(url);
+    }
+    say(`fresh databases ${TEST_DATABASE} and ${BROWSER_TEST_DATABASE} on ${redactUrl(server.url(''))}`);
 
     try {
       ensureChromium();
@@ -86,7 +89,13 @@ async function main(): Promise<number> {
       }
     }
 
-    const env: NodeJS.ProcessEnv = { ...process.env, DATABASE_URL: databaseUrl, NO_COLOR: '1', LANEWRIGHT_SUMMARY_FILE: summaryFile };
+    const env: NodeJS.ProcessEnv = {
+      ...process.env,
+      DATABASE_URL: databaseUrl,
+      LANEWRIGHT_BROWSER_DATABASE_URL: browserDatabaseUrl,
+      NO_COLOR: '1',
+      LANEWRIGHT_SUMMARY_FILE: summaryFile,
+    };
     delete env.FORCE_COLOR;
     if (interrupted) throw new Error('interrupted before the tests started');
     exitCode = await runVitest(process.argv.slice(2), env);

@@ -1,5 +1,5 @@
-// Browser tests: the real app (migrated, demo seeded, serving the built client from dist/client) on a free
-// loopback port, driven by Debian's Chromium through playwright-core; screenshots go to
+// Browser tests: the real app (on the browser tests' own database, migrated, demo seeded, serving the built
+// client from dist/client) on a free loopback port, driven by Debian's Chromium through playwright-core; screenshots go to
 // test-artifacts/screenshots/.
 import 'reflect-metadata';
 import { existsSync } from 'node:fs';
@@ -15,7 +15,7 @@ import { seedDemo } from '../../server/db/seed/demo';
 import { startServer } from '../../server/index';
 import { clientOutDir, projectRoot } from '../../server/setup/paths';
 import { CHROMIUM_PATH } from './chromium-path';
-import { requireDatabaseUrl } from './test-database';
+import { browserDatabaseUrl } from './test-database';
 
 const HOST = '127.0.0.1';
 const SCREENSHOT_DIR = join(projectRoot, 'test-artifacts', 'screenshots');
@@ -59,7 +59,7 @@ export async function startTestApp(): Promise<TestApp> {
   if (!existsSync(join(clientOutDir, 'index.html'))) {
     throw new Error(`${clientOutDir} holds no client build: run the tests with \`npm test\` (it builds it) or \`npm run build\` first`);
   }
-  const dataSource = createDataSource(requireDatabaseUrl());
+  const dataSource = createDataSource(browserDatabaseUrl());
   await dataSource.initialize();
   try {
     await runMigrations(dataSource);

@@ -1,6 +1,8 @@
-// The database every test run uses, on the local cluster or beside the database DATABASE_URL names (never
-// that database itself: tests truncate tables).
+// The databases a test run uses, on the local cluster or beside the database DATABASE_URL names (never
+// that database itself: tests truncate tables). vitest runs its projects side by side, so the browser tests
+// get a database of their own: API tests emptying tables must not pull the demo users from under them.
 export const TEST_DATABASE = 'lanewright_test';
+export const BROWSER_TEST_DATABASE = 'lanewright_test_browser';
 
 export function requireDatabaseUrl(): string {
   const url = process.env.DATABASE_URL;
@@ -11,4 +13,9 @@ export function requireDatabaseUrl(): string {
     );
   }
   return url;
+}
+
+/** The browser tests' database: set by `npm test`; the shared test database when vitest is run by hand. */
+export function browserDatabaseUrl(): string {
+  return process.env.LANEWRIGHT_BROWSER_DATABASE_URL || requireDatabaseUrl();
 }

@@ -22,6 +22,8 @@ export type LegendSpec =
       interpolate: (t: number) => string;
       domain: readonly [number, number];
       tickFormat: (value: number) => string;
+      /** Marks explained beside the ramp, such as a shaded warm-up. */
+      extras?: readonly LegendItem[];
     };
 
 const FONT = 12;
@@ -29,6 +31,7 @@ const ROW = 20;
 const SWATCH = 14;
 const RAMP_WIDTH = 240;
 const RAMP_HEIGHT = 50;
+const RAMP_EXTRAS_X = RAMP_WIDTH + 40;
 
 interface PlacedItem extends LegendItem {
   x: number;
@@ -54,7 +57,11 @@ export function layoutSwatches(items: readonly LegendItem[], maxWidth: number): 
 
 export function legendHeight(spec: LegendSpec | undefined, maxWidth: number): number {
   if (!spec) return 0;
-  return spec.kind === 'ramp' ? RAMP_HEIGHT : layoutSwatches(spec.items, maxWidth).height;
+  if (spec.kind === 'swatches') return layoutSwatches(spec.items, maxWidth).height;
+  if (!spec.extras?.length) return RAMP_HEIGHT;
+  const beside = maxWidth - RAMP_EXTRAS_X > 160;
+  const extras = layoutSwatches(spec.extras, beside ? maxWidth - RAMP_EXTRAS_X : maxWidth).height;
+  return beside ? Math.max(RAMP_HEIGHT, 18 + extras) : RAMP_HEIGHT + 6 + extras;
 }
 
 function Swatch({ swatch }: { swatch: LegendSwatch }) {
@@ -85,20 +92,13 @@ function Swatch({ swatch }: { swatch: LegendSwatch }) {
 export function Legend({ spec, x, y, maxWidth }: { spec: LegendSpec; x: number; y: number; maxWidth: number }) {
   const gradientId = `legend-ramp-${useId().replace(/[^a-zA-Z0-9_-]/g, '')}`;
   if (spec.kind === 'swatches') {
-    const { placed } = layoutSwatches(spec.items, maxWidth);
     return (
       <g transform={`translate(${x},${y})`} data-chart-part="legend">
-        {placed.map((item) => (
-          <g key={item.label} transform={`translate(${item.x},${item.y})`} data-legend-item={item.label}>
-            <Swatch swatch={item.swatch} />
-            <text x={SWATCH + 6 + (item.swatch.kind === 'line' ? 4 : 0)} y={SWATCH / 2} dy="0.35em" fontSize={FONT} fill={ink.DEFAULT}>
-              {item.label}
-            </text>
-          </g>
-        ))}
+        <SwatchItems items={spec.items} maxWidth={maxWidth} />
       </g>
     );
   }
+  const extrasBeside = maxWidth - RAMP_EXTRAS_X > 160;
   const [lo, hi] = spec.domain;
   const stops = Array.from({ length: 11 }, (_, i) => i / 10);
   const ticks = [0, 0.25, 0.5, 0.75, 1];
@@ -123,6 +123,22 @@ export function Legend({ spec, x, y, maxWidth }: { spec: LegendSpec; x: number; 
           </text>
         </g>
       ))}
+      {spec.extras && spec.extras.length > 0 && (
+        <g transform={extrasBeside ? `translate(${RAMP_EXTRAS_X},17)` : `translate(0,${RAMP_HEIGHT + 6})`}>
+          <SwatchItems items={spec.extras} maxWidth={extrasBeside ? maxWidth - RAMP_EXTRAS_X : maxWidth} />
+        </g>
+      )}
     </g>
   );
+}
+
+function SwatchItems({ items, maxWidth }: { items: readonly LegendItem[]; maxWidth: number }) {
+  return layoutSwatches(items, maxWidth).placed.map((item) => (
+    <g key={item.label} transform={`translate(${item.x},${item.y})`} data-legend-item={item.label}>
+      <Swatch swatch={item.swatch} />
+      <text x={SWATCH + 6 + (item.swatch.kind === 'line' ? 4 : 0)} y={SWATCH / 2} dy="0.35em" fontSize={FONT} fill={ink.DEFAULT}>
+        {item.label}
+      </text>
+    </g>
+  ));
 }

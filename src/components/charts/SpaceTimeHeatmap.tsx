@@ -83,6 +83,7 @@ export function SpaceTimeHeatmap(props: SpaceTimeHeatmapProps) {
         interpolate: occupancyColour,
         domain: [0, 1],
         tickFormat: (v) => formatShare(v).replace('.0%', '%'),
+        extras: warmupEnd === null ? [] : [{ label: `warm-up, ${formatNumber(warmupEnd - startMinutes)} min (not in statistics)`, swatch: { kind: 'box', fill: `url(#${warmupId})`, stroke: ink.DEFAULT } }],
       }}
       margin={MARGIN}
       plotHeight={plotHeight}
@@ -108,7 +109,12 @@ export function SpaceTimeHeatmap(props: SpaceTimeHeatmapProps) {
               data-columns={grid.columns}
               data-rows={grid.positions}
             />
-            {warmupEnd !== null && <rect width={x(warmupEnd)} height={laneHeight} fill={`url(#${warmupId})`} data-chart-part="warmup" />}
+            {warmupEnd !== null && (
+              <g pointerEvents="none" data-chart-part="warmup">
+                <rect width={x(warmupEnd)} height={laneHeight} fill={`url(#${warmupId})`} />
+                <line x1={x(warmupEnd)} x2={x(warmupEnd)} y2={laneHeight} stroke={ink.DEFAULT} strokeDasharray="4 3" />
+              </g>
+            )}
             <rect width={plotWidth} height={laneHeight} fill="none" stroke={ink.faint} />
             <AxisLeft ticks={linearTicks(y, laneHeight / 35)} height={laneHeight} label={i === 0 ? 'Position (mm)' : ''} labelOffset={56} />
             <rect
@@ -122,14 +128,6 @@ export function SpaceTimeHeatmap(props: SpaceTimeHeatmapProps) {
           </g>
         );
       })}
-      {warmupEnd !== null && (
-        <g transform={`translate(${x(warmupEnd)},0)`} pointerEvents="none">
-          <line y1={-4} y2={plotHeight} stroke={ink.DEFAULT} strokeDasharray="4 3" />
-          <text x={-4} y={plotHeight + 4} dy="-0.4em" textAnchor="end" fontSize={11} fill={ink.DEFAULT} paintOrder="stroke" stroke="white" strokeWidth={3}>
-            warm-up (not in statistics)
-          </text>
-        </g>
-      )}
       <AxisBottom ticks={linearTicks(x, plotWidth / 80)} width={plotWidth} plotHeight={plotHeight} label="Simulated time (min)" />
     </ChartFrame>
   );

@@ -6,6 +6,7 @@ import { AxisBottom, bandTicks, linearTicks, TICK_FONT } from './Axes';
 import { ChartFrame, ChartMessage, plotWidthOf, type Margin } from './ChartFrame';
 import type { ChartTable } from './chart-table';
 import { estimateTextWidth, formatOne, formatShare } from './format';
+import type { LegendItem } from './Legend';
 import { ink, stateColour, stateLabel, type StationState } from './palette';
 import { dominantState, groupSumProblem, statesProblem, type StationRef } from './station-states';
 import { localPoint, useChartShell } from './useChartShell';
@@ -85,6 +86,7 @@ export function StationStateTimeline(props: StationStateTimelineProps) {
   const x = scaleLinear().domain([startMinutes, endMinutes]).range([0, plotWidth]);
   const y = scaleBand<string>().domain(stations.map((_, i) => String(i))).range([0, stations.length * rowHeight]).paddingInner(0.18);
   const plotHeight = stations.length * rowHeight;
+  const showWarmup = warmupMinutes !== undefined && warmupMinutes > startMinutes && warmupMinutes < endMinutes;
   const binX = (bin: number) => x(startMinutes + bin * binMinutes);
 
   const showBin = (event: MouseEvent<SVGRectElement>, station: number) => {
@@ -103,7 +105,13 @@ export function StationStateTimeline(props: StationStateTimelineProps) {
       title={title}
       subtitle={`Colour: the state that held most of each ${formatOne(binMinutes)} min; hover for all shares`}
       summary={timelineSummary(stations, states, shares, bins)}
-      legend={{ kind: 'swatches', items: states.map((state) => ({ label: stateLabel[state], swatch: { kind: 'box', fill: stateColour[state] } })) }}
+      legend={{
+        kind: 'swatches',
+        items: [
+          ...states.map((state): LegendItem => ({ label: stateLabel[state], swatch: { kind: 'box', fill: stateColour[state] } })),
+          ...(showWarmup ? [{ label: 'end of warm-up', swatch: { kind: 'line', colour: ink.DEFAULT, dash: '4 3', strokeWidth: 1.5 } } as LegendItem] : []),
+        ],
+      }}
       margin={margin}
       plotHeight={plotHeight}
       table={stateTotalsTable(stations, states, shares, bins)}
@@ -123,14 +131,7 @@ export function StationStateTimeline(props: StationStateTimelineProps) {
           />
         ))}
       </g>
-      {warmupMinutes !== undefined && warmupMinutes > startMinutes && warmupMinutes < endMinutes && (
-        <g transform={`translate(${x(warmupMinutes)},0)`} pointerEvents="none">
-          <line y1={-2} y2={plotHeight + 2} stroke={ink.DEFAULT} strokeWidth={1.5} strokeDasharray="4 3" />
-          <text x={4} y={plotHeight + 16} fontSize={11} fill={ink.DEFAULT}>
-            end of warm-up
-          </text>
-        </g>
-      )}
+      {showWarmup && <line x1={x(warmupMinutes)} x2={x(warmupMinutes)} y1={-3} y2={plotHeight + 3} stroke={ink.DEFAULT} strokeWidth={1.5} strokeDasharray="4 3" pointerEvents="none" data-chart-part="warmup" />}
       {stations.map((station, i) => (
         <rect
           key={station.id}
@@ -151,7 +152,7 @@ export function StationStateTimeline(props: StationStateTimelineProps) {
           </text>
         ))}
       </g>
-      <AxisBottom ticks={linearTicks(x, plotWidth / 80)} width={plotWidth} plotHeight={plotHeight} label="Simulated time (min)" labelOffset={warmupMinutes !== undefined ? 40 : 34} />
+      <AxisBottom ticks={linearTicks(x, plotWidth / 80)} width={plotWidth} plotHeight={plotHeight} label="Simulated time (min)" labelOffset={34} />
     </ChartFrame>
   );
 }

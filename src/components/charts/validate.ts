@@ -35,3 +35,12 @@ export const SHARE_TOLERANCE = 1e-6;
 export function checkShares(values: readonly number[], path: string): Problem {
   return checkNumbers(values, path, { min: -SHARE_TOLERANCE, max: 1 + SHARE_TOLERANCE });
 }
+
+/** Named shares, so a message points at `stations[2].shares.blocked` rather than an index. */
+export function checkNamedShares(entries: ReadonlyArray<readonly [name: string, value: number]>, path: string): Problem {
+  for (const [name, value] of entries) {
+    if (typeof value !== 'number' || !Number.isFinite(value)) return `${path}.${name} must be a finite number, got ${value}`;
+    if (value < -SHARE_TOLERANCE || value > 1 + SHARE_TOLERANCE) return `${path}.${name} is ${value}; a share lies between 0 and 1`;
+  }
+  return null;
+}

@@ -2,16 +2,13 @@
 // RequireAuth then sends them to sign-in with the address they were on.
 import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
-import { authKeys } from '../features/auth/api/keys';
+import { forgetSession } from '../features/auth/api/forget-session';
 import { SessionProvider } from '../features/auth/components/session-provider';
 import { createQueryClient } from '../lib/query-client';
 
 export function createAppQueryClient(): QueryClient {
   return createQueryClient({
-    onUnauthenticated: (client) => {
-      client.removeQueries({ predicate: (query) => query.queryKey[0] !== authKeys.all[0] });
-      client.setQueryData(authKeys.me(), null);
-    },
+    onUnauthenticated: forgetSession,
   });
 }
 

@@ -1,18 +1,20 @@
 // Every page of the client and the guard in front of the signed-in ones. The
 // route objects are exported so tests can mount them in a memory router.
+// Pages that carry the scenario format (and later the editor, the worker and
+// the charts) load on demand, so signing in does not wait for them.
 import type { RouteObject } from 'react-router-dom';
 import { RequireAuth } from '../features/auth/components/require-auth';
 import { SignInRoute } from '../features/auth/routes/sign-in-route';
 import { SignUpRoute } from '../features/auth/routes/sign-up-route';
 import { ProjectsRoute } from '../features/projects/routes/projects-route';
-import { ScenarioRoute } from '../features/scenarios/routes/scenario-route';
 import { AppFrame } from './layout/app-frame';
 import { NotFoundRoute } from './routes/not-found-route';
-import { ProjectRoute } from './routes/project-route';
+import { PageSpinner } from '../components/ui/spinner';
 
 export const appRoutes: RouteObject[] = [
   {
     element: <AppFrame />,
+    hydrateFallbackElement: <PageSpinner label="Loading Lanewright…" />,
     children: [
       { path: '/sign-in', element: <SignInRoute /> },
       { path: '/sign-up', element: <SignUpRoute /> },
@@ -20,8 +22,14 @@ export const appRoutes: RouteObject[] = [
         element: <RequireAuth />,
         children: [
           { path: '/', element: <ProjectsRoute /> },
-          { path: '/projects/:projectId', element: <ProjectRoute /> },
-          { path: '/scenarios/:scenarioId', element: <ScenarioRoute /> },
+          {
+            path: '/projects/:projectId',
+            lazy: async () => ({ Component: (await import('./routes/project-route')).ProjectRoute }),
+          },
+          {
+            path: '/scenarios/:scenarioId',
+            lazy: async () => ({ Component: (await import('../features/scenarios/routes/scenario-route')).ScenarioRoute }),
+          },
         ],
       },
       { path: '*', element: <NotFoundRoute /> },

@@ -42,7 +42,7 @@ export function ProjectRoute() {
           </Link>
         }
         description={project.data.description || undefined}
-        actions={startButton}
+        actions={scenarios.data && scenarios.data.length > 0 ? startButton : undefined}
       />
       {creating && (
         <Card aria-labelledby="new-scenario-title" className="max-w-2xl">

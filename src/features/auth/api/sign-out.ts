@@ -1,6 +1,5 @@
-// Signing out ends the session on the server. The caller leaves the signed-in
-// pages and then clears the cache (see UserMenu), in that order, so no guarded
-// page refetches in between and bounces back with a "return to" address.
+// Signing out ends the session on the server. The caller then goes to the
+// sign-in page with SIGNED_OUT_STATE, where the cached data is forgotten.
 import { useMutation } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiRoutes } from '../../../../shared/api/routes';

@@ -1,24 +1,20 @@
 // The signed-in part of the header: organisation, person, role and sign-out.
-import { useQueryClient } from '@tanstack/react-query';
 import { useNavigate } from 'react-router-dom';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { useSignOut } from '../api/sign-out';
 import type { Session } from '../hooks/session-context';
+import { SIGNED_OUT_STATE } from '../utils/return-to';
 import { OrganisationPicker } from './organisation-picker';
 
 export function UserMenu({ session }: { session: Session }) {
   const signOut = useSignOut();
   const navigate = useNavigate();
-  const queryClient = useQueryClient();
   const role = session.activeMembership?.role;
 
   const onSignOut = () =>
     signOut.mutate(undefined, {
-      onSuccess: () => {
-        navigate('/sign-in', { replace: true });
-        queryClient.clear();
-      },
+      onSuccess: () => navigate('/sign-in', { replace: true, state: SIGNED_OUT_STATE }),
     });
 
   return (

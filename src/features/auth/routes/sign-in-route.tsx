@@ -1,16 +1,26 @@
 // /sign-in: returns the user to the page they were sent away from.
+import { useQueryClient } from '@tanstack/react-query';
+import { useEffect } from 'react';
 import { Link, Navigate, useLocation, useNavigate } from 'react-router-dom';
+import { forgetSession } from '../api/forget-session';
 import { useMe } from '../api/get-me';
 import { AuthPanel } from '../components/auth-panel';
 import { SignInForm } from '../components/sign-in-form';
-import { safeReturnTo, withSameReturn } from '../utils/return-to';
+import { isSignedOutState, safeReturnTo, withSameReturn } from '../utils/return-to';
 
 export function SignInRoute() {
   const location = useLocation();
   const navigate = useNavigate();
   const me = useMe();
+  const queryClient = useQueryClient();
   const returnTo = safeReturnTo(location.search);
-  if (me.data) return <Navigate to={returnTo} replace />;
+  const justSignedOut = isSignedOutState(location.state);
+
+  useEffect(() => {
+    if (justSignedOut) forgetSession(queryClient);
+  }, [justSignedOut, queryClient]);
+
+  if (me.data && !justSignedOut) return <Navigate to={returnTo} replace />;
 
   return (
     <AuthPanel

@@ -18,3 +18,14 @@ export function withSameReturn(path: string, search: string): string {
   const value = new URLSearchParams(search).get(RETURN_PARAM);
   return value ? `${path}?${new URLSearchParams({ [RETURN_PARAM]: value })}` : path;
 }
+
+/**
+ * Navigation state marking a deliberate sign-out. The sign-in page then forgets
+ * the session itself: forgetting it earlier, while a guarded page is still on
+ * screen, would make the guard send the user back with a "return to" address.
+ */
+export const SIGNED_OUT_STATE = { signedOut: true } as const;
+
+export function isSignedOutState(state: unknown): boolean {
+  return typeof state === 'object' && state !== null && (state as { signedOut?: unknown }).signedOut === true;
+}

@@ -36,7 +36,7 @@ export function ProjectsRoute() {
       <PageHeader
         title="Projects"
         description={`Line-design jobs of ${activeMembership.organisationName}. Each project holds the scenarios you compare.`}
-        actions={startButton}
+        actions={projects.data && projects.data.length > 0 ? startButton : undefined}
       />
       {creating && organisationId && (
         <Card aria-labelledby="new-project-title" className="max-w-2xl">

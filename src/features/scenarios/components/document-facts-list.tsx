@@ -15,7 +15,7 @@ export function DocumentFactsList({ facts }: { facts: DocumentFacts }) {
   return (
     <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4 lg:grid-cols-7">
       {items.map(([label, value]) => (
-        <div key={label} className="flex flex-col gap-1 rounded-md bg-paper px-3 py-2">
+        <div key={label} className="flex flex-col gap-1 rounded-md border border-paper-sunk bg-paper-raised px-3 py-2">
           <dt className="text-xs font-medium tracking-wide text-ink-soft uppercase">{label}</dt>
           <dd className="text-xl font-semibold text-ink tabular-nums">{value}</dd>
         </div>

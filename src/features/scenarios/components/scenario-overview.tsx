@@ -23,7 +23,7 @@ export function ScenarioOverview({ document }: { document: Scenario }) {
     <div className="flex flex-col gap-6">
       <DocumentFactsList facts={documentFacts(document)} />
       <CarrierSummary carriers={document.carriers} />
-      <div className="grid gap-6 lg:grid-cols-2">
+      <div className="grid items-start gap-6 lg:grid-cols-2">
         <Card aria-labelledby="track-title">
           <CardTitle id="track-title" className="mb-4">
             Track

@@ -1,0 +1,112 @@
+import { screen, within } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { apiRoutes } from '../../shared/api/routes';
+import type { CreateScenarioInput } from '../../shared/api/scenarios';
+import stackedLoop from '../../shared/examples/stacked-loop.json';
+import { apiError, mockApi } from './support/fetch-mock';
+import { me, project, revision, scenarioDetail, scenarioSummary } from './support/fixtures';
+import { renderApp } from './support/render-app';
+
+const projectRoutes = (role: 'engineer' | 'viewer', scenarios = [scenarioSummary()]) => ({
+  [`GET ${apiRoutes.me}`]: { status: 200, body: me(role) },
+  [`GET ${apiRoutes.project(project().id)}`]: { status: 200, body: project({ scenarioCount: scenarios.length }) },
+  [`GET ${apiRoutes.projectScenarios(project().id)}`]: { status: 200, body: scenarios },
+});
+
+describe('project page', () => {
+  it('lists the scenarios with their latest revision', async () => {
+    mockApi(projectRoutes('viewer'));
+    renderApp(`/projects/${project().id}`);
+
+    const link = await screen.findByRole('link', { name: /Stacked, 20 carriers/ });
+    expect(link.getAttribute('href')).toBe(`/scenarios/${scenarioSummary().id}`);
+    expect(link.textContent).toContain('Revision 2');
+    expect(screen.queryByRole('button', { name: 'New scenario' })).toBeNull();
+  });
+
+  it('points an engineer of an empty project to the examples and creates a scenario from one', async () => {
+    const created = scenarioSummary({ id: scenarioSummary().id, name: 'Stacked first try' });
+    const api = mockApi({
+      ...projectRoutes('engineer', []),
+      [`POST ${apiRoutes.projectScenarios(project().id)}`]: { status: 201, body: created },
+      [`GET ${apiRoutes.scenario(created.id)}`]: { status: 200, body: scenarioDetail({ name: 'Stacked first try' }) },
+      [`GET ${apiRoutes.scenarioRevisions(created.id)}`]: { status: 200, body: [revision(1)] },
+    });
+    const { user, location } = renderApp(`/projects/${project().id}`);
+
+    const empty = (await screen.findByRole('heading', { name: 'No scenarios yet' })).parentElement as HTMLElement;
+    expect(empty.textContent).toContain('Start from an example layout');
+    await user.click(within(empty).getByRole('button', { name: 'New scenario' }));
+    await user.selectOptions(screen.getByLabelText('Start from'), stackedLoop.name);
+    expect(screen.getByLabelText<HTMLInputElement>('Scenario name').value).toBe(stackedLoop.name);
+    await user.clear(screen.getByLabelText('Scenario name'));
+    await user.type(screen.getByLabelText('Scenario name'), 'Stacked first try');
+    await user.click(screen.getByRole('button', { name: 'Create scenario' }));
+
+    expect(await screen.findByRole('heading', { level: 1, name: 'Stacked first try' })).toBeTruthy();
+    expect(location()).toBe(`/scenarios/${created.id}`);
+    const sent = api.callsTo('POST', apiRoutes.projectScenarios(project().id))[0].body as CreateScenarioInput;
+    expect(sent.name).toBe('Stacked first try');
+    expect(sent.document.name).toBe('Stacked first try');
+    expect(sent.document.lanes.map((lane) => lane.id)).toEqual(stackedLoop.lanes.map((lane) => lane.id));
+  });
+
+  it('lists server issues inside the document in the banner and keeps the form filled', async () => {
+    mockApi({
+      ...projectRoutes('engineer', []),
+      [`POST ${apiRoutes.projectScenarios(project().id)}`]: {
+        status: 400,
+        body: apiError('bad_request', 'The scenario document is not valid.', [{ path: 'document.carriers.count', message: 'count must be from 1 to 2000' }]),
+      },
+    });
+    const { user } = renderApp(`/projects/${project().id}`);
+
+    await user.click(await screen.findByRole('button', { name: 'New scenario' }));
+    await user.selectOptions(screen.getByLabelText('Start from'), stackedLoop.name);
+    await user.click(screen.getByRole('button', { name: 'Create scenario' }));
+
+    const banner = await screen.findByRole('alert');
+    expect(banner.textContent).toContain('The scenario document is not valid.');
+    expect(banner.textContent).toContain('document.carriers.count: count must be from 1 to 2000');
+    expect(screen.getByLabelText<HTMLInputElement>('Scenario name').value).toBe(stackedLoop.name);
+  });
+});
+
+describe('scenario page', () => {
+  it('shows the latest revision, a read-only overview of the layout and the revision history', async () => {
+    mockApi({
+      [`GET ${apiRoutes.me}`]: { status: 200, body: me('viewer') },
+      [`GET ${apiRoutes.scenario(scenarioSummary().id)}`]: { status: 200, body: scenarioDetail() },
+      [`GET ${apiRoutes.project(project().id)}`]: { status: 200, body: project() },
+      [`GET ${apiRoutes.scenarioRevisions(scenarioSummary().id)}`]: { status: 200, body: [revision(1), revision(2)] },
+    });
+    renderApp(`/scenarios/${scenarioSummary().id}`);
+
+    expect(await screen.findByRole('heading', { level: 1, name: 'Stacked, 20 carriers' })).toBeTruthy();
+    const stationCount = stackedLoop.steps.reduce((sum, step) => sum + step.stations.length, 0);
+    const figure = (label: string) => screen.getByText(label, { selector: 'dt' }).nextElementSibling?.textContent;
+    expect(figure('Decks')).toBe(String(stackedLoop.decks.length));
+    expect(figure('Lanes')).toBe(String(stackedLoop.lanes.length));
+    expect(figure('Process steps')).toBe(String(stackedLoop.steps.length));
+    expect(figure('Stations')).toBe(String(stationCount));
+    expect(figure('Carriers')).toBe(String(stackedLoop.carriers.count));
+    // Each lane of the example is eight 1000 mm modules.
+    expect(figure('Track length')).toBe('16 m');
+    expect(await screen.findByRole('link', { name: 'Cartridge line 2' })).toBeTruthy();
+
+    const history = await screen.findByRole('table', { name: 'Revision history' });
+    const rows = within(history).getAllByRole('row').slice(1);
+    expect(rows.map((row) => row.textContent)).toEqual([expect.stringMatching(/^#2latestChange 2Ada Fieldhouse/), expect.stringMatching(/^#1Started from/)]);
+    expect(screen.getByText(/can read this layout/)).toBeTruthy();
+  });
+
+  it('says plainly when the scenario does not exist', async () => {
+    mockApi({
+      [`GET ${apiRoutes.me}`]: { status: 200, body: me() },
+      [`GET ${apiRoutes.scenarioRevisions(scenarioSummary().id)}`]: { status: 404, body: apiError('not_found', 'No such scenario.') },
+    });
+    renderApp(`/scenarios/${scenarioSummary().id}`);
+
+    expect(await screen.findByRole('heading', { name: 'This scenario was not found' })).toBeTruthy();
+  });
+});

@@ -1,0 +1,52 @@
+import { screen, waitFor } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { apiRoutes } from '../../shared/api/routes';
+import { apiError, mockApi } from './support/fetch-mock';
+import { me, project } from './support/fixtures';
+import { renderApp } from './support/render-app';
+
+describe('app shell', () => {
+  it('shows organisation, user and role, and the safety note', async () => {
+    mockApi({
+      [`GET ${apiRoutes.me}`]: { status: 200, body: me('owner') },
+      [`GET ${apiRoutes.projects}`]: { status: 200, body: [] },
+    });
+    renderApp('/');
+
+    const header = await screen.findByRole('banner');
+    await waitFor(() => expect(header.textContent).toContain('Ada Fieldhouse'));
+    expect(header.textContent).toContain('Northgate Fixtures');
+    expect(screen.getByLabelText('Role: owner')).toBeTruthy();
+    expect(screen.getByRole('contentinfo').textContent).toMatch(/does not assess safety/);
+    expect(screen.getByRole('link', { name: 'Skip to main content' }).getAttribute('href')).toBe('#main');
+  });
+
+  it('signs out with a POST, forgets cached data and lands on sign-in without a return address', async () => {
+    let signedIn = true;
+    const api = mockApi({
+      [`GET ${apiRoutes.me}`]: () => (signedIn ? { status: 200, body: me() } : { status: 401, body: apiError('unauthenticated', 'Sign in to continue.') }),
+      [`GET ${apiRoutes.projects}`]: { status: 200, body: [project()] },
+      [`POST ${apiRoutes.signOut}`]: () => {
+        signedIn = false;
+        return { status: 204 };
+      },
+    });
+    const { user, location, queryClient } = renderApp('/');
+
+    await screen.findByRole('link', { name: /Cartridge line 2/ });
+    await user.click(screen.getByRole('button', { name: 'Sign out' }));
+
+    expect(await screen.findByRole('heading', { level: 1, name: 'Sign in to Lanewright' })).toBeTruthy();
+    expect(location()).toBe('/sign-in');
+    expect(api.callsTo('POST', apiRoutes.signOut)).toHaveLength(1);
+    expect(screen.queryByText('Ada Fieldhouse')).toBeNull();
+    expect(queryClient.getQueryCache().findAll({ queryKey: ['projects'] })).toHaveLength(0);
+  });
+
+  it('answers an unknown address with a not-found page', async () => {
+    mockApi({ [`GET ${apiRoutes.me}`]: { status: 200, body: me() } });
+    renderApp('/no/such/page');
+
+    expect(await screen.findByRole('heading', { name: 'This page was not found' })).toBeTruthy();
+  });
+});

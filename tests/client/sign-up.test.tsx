@@ -1,0 +1,46 @@
+import { screen, waitFor } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { apiRoutes } from '../../shared/api/routes';
+import { descriptionOf } from './support/field-error';
+import { apiError, mockApi } from './support/fetch-mock';
+import { renderApp } from './support/render-app';
+
+describe('sign-up form', () => {
+  it('puts a server field error beside the field it names and keeps every typed value', async () => {
+    mockApi({
+      [`GET ${apiRoutes.me}`]: { status: 401, body: apiError('unauthenticated', 'Sign in to continue.') },
+      [`POST ${apiRoutes.signUp}`]: {
+        status: 409,
+        body: apiError('conflict', 'An account with this e-mail already exists.', [{ path: 'email', message: 'is already registered' }]),
+      },
+    });
+    const { user } = renderApp('/sign-up');
+
+    await user.type(await screen.findByLabelText('Your name'), 'Ada Fieldhouse');
+    await user.type(screen.getByLabelText('Organisation'), 'Northgate Fixtures');
+    await user.type(screen.getByLabelText('E-mail'), 'ada@example.test');
+    await user.type(screen.getByLabelText('Password'), 'long-enough-secret');
+    await user.click(screen.getByRole('button', { name: 'Create account' }));
+
+    const email = screen.getByLabelText('E-mail');
+    await waitFor(() => expect(descriptionOf(email)).toContain('E-mail is already registered'));
+    expect(descriptionOf(screen.getByLabelText('Password'))).not.toContain('registered');
+    expect(descriptionOf(screen.getByLabelText('Your name'))).not.toContain('registered');
+    expect(screen.getByLabelText<HTMLInputElement>('Your name').value).toBe('Ada Fieldhouse');
+    expect(screen.getByLabelText<HTMLInputElement>('Organisation').value).toBe('Northgate Fixtures');
+    expect(screen.getByLabelText<HTMLInputElement>('E-mail').value).toBe('ada@example.test');
+    expect(screen.getByLabelText<HTMLInputElement>('Password').value).toBe('long-enough-secret');
+  });
+
+  it('quotes the shared password rule before anything is sent', async () => {
+    const api = mockApi({ [`GET ${apiRoutes.me}`]: { status: 401, body: apiError('unauthenticated', 'Sign in to continue.') } });
+    const { user } = renderApp('/sign-up');
+
+    await user.type(await screen.findByLabelText('Password'), 'short');
+    await user.click(screen.getByRole('button', { name: 'Create account' }));
+
+    await waitFor(() => expect(descriptionOf(screen.getByLabelText('Password'))).toContain('Password must be at least 10 characters'));
+    expect(descriptionOf(screen.getByLabelText('Your name'))).toContain('Your name is required');
+    expect(api.callsTo('POST', apiRoutes.signUp)).toHaveLength(0);
+  });
+});

@@ -63,3 +63,13 @@ export async function dropDatabase(url: string): Promise<void> {
   const name = databaseName(url);
   await withMaintenanceClient(url, (client) => client.query(`DROP DATABASE IF EXISTS ${quoteIdentifier(name)} WITH (FORCE)`));
 }
+
+/** Client connections to the server other than this query's own (any database). */
+export async function otherConnections(url: string): Promise<number> {
+  return withMaintenanceClient(url, async (client) => {
+    const result = await client.query(
+      "SELECT count(*)::int AS n FROM pg_stat_activity WHERE backend_type = 'client backend' AND pid <> pg_backend_pid()",
+    );
+    return result.rows[0].n as number;
+  });
+}

@@ -5,7 +5,7 @@ import { appendFileSync, existsSync, readFileSync, writeFileSync } from 'node:fs
 import { createConnection } from 'node:net';
 import { join } from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
-import { withDatabase } from './databases';
+import { otherConnections, withDatabase } from './databases';
 import { acquireLock } from './file-lock';
 import { redactUrl, say, SetupError } from './log';
 import { projectRoot } from './paths';
@@ -22,7 +22,10 @@ const SUPERUSER = 'postgres';
 export interface LocalPostgres {
   /** Connection URL for a database of this server (the database itself is not created). */
   url(db: string): string;
-  /** Stops the cluster if this process started it; a reused cluster or an external server is left alone. */
+  /**
+   * Stops the cluster if this process started it and no other process is connected to it; a reused cluster
+   * or an external server is left alone.
+   */
   stop(): Promise<void>;
   startedHere: boolean;
   /** True when DATABASE_URL points to a server of the user's own. */
@@ -164,6 +167,9 @@ export async function ensureLocalPostgres(): Promise<LocalPostgres> {
       stop: async () => {
         if (!startedHere || stopped) return;
         stopped = true;
+        // Another process in this clone (say `npm start` during a test run) may have reused the cluster.
+        const others = await otherConnections(`postgres://${SUPERUSER}@${HOST}:${port}/postgres`).catch(() => 0);
+        if (others > 0) return say(`leaving PostgreSQL running: ${others} other connection(s) still use it`);
         stopCluster(bins, paths);
       },
       startedHere,

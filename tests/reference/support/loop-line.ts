@@ -1,0 +1,90 @@
+// Builds small closed-loop scenarios for the reference checks: two lanes on one deck joined end to
+// start by direct links (work lane, then return lane, then back), stations in process order, and
+// carriers with a trapezoidal profile. Each check chooses sizes that make the physical effects it is
+// not about negligible, and says so beside the check.
+import type { Distribution } from '../../../shared/scenario/distribution';
+import type { ScenarioInput } from '../../../shared/scenario/scenario';
+
+export type LoopStation = {
+  id: string;
+  /** 0: work lane, 1: return lane. */
+  lane: 0 | 1;
+  positionMm: number;
+  cycle: Distribution;
+  failures?: { timeBetweenFailuresSeconds: Distribution; timeToRepairSeconds: Distribution };
+};
+
+export type LoopLine = {
+  laneLengthsMm: [number, number];
+  /** In process order: the first is the load step, the last the unload step, the rest process steps. */
+  stations: LoopStation[];
+  carriers: { count: number; lengthMm: number; minGapMm: number; vMaxMmPerS: number; aMaxMmPerS2: number; empty?: { vMaxMmPerS: number; aMaxMmPerS2: number } };
+};
+
+/** Standard modules of 1000, 100, 10 and 1 mm, so a lane can take any whole length in millimetres. */
+const MODULES = [1000, 100, 10, 1];
+
+function modulesFor(lengthMm: number): { lengthMm: number; count: number }[] {
+  if (!Number.isInteger(lengthMm) || lengthMm <= 0) throw new RangeError(`lane length ${lengthMm} mm must be a positive whole number`);
+  const out: { lengthMm: number; count: number }[] = [];
+  let rest = lengthMm;
+  for (const m of MODULES) {
+    const count = Math.floor(rest / m);
+    if (count > 0) out.push({ lengthMm: m, count });
+    rest -= count * m;
+  }
+  return out;
+}
+
+export const LANE_IDS = ['work', 'return'] as const;
+
+export function loopScenario(spec: LoopLine, name = 'Reference loop'): ScenarioInput {
+  const last = spec.stations.length - 1;
+  const stepKind = (i: number) => (i === 0 ? 'load' : i === last ? 'unload' : 'process');
+  return {
+    schemaVersion: 1,
+    name,
+    track: { moduleLengthsMm: MODULES, widthMm: 200 },
+    decks: [{ id: 'deck', name: 'Deck', elevationMm: 900 }],
+    lanes: spec.laneLengthsMm.map((length, i) => ({
+      id: LANE_IDS[i],
+      name: LANE_IDS[i],
+      deckId: 'deck',
+      modules: modulesFor(length),
+      start: { xMm: i === 0 ? 0 : length, yMm: i * 500 },
+      heading: i === 0 ? 'east' : 'west',
+    })),
+    links: [
+      { fromLaneId: 'work', toLaneId: 'return' },
+      { fromLaneId: 'return', toLaneId: 'work' },
+    ],
+    transfers: [],
+    carriers: {
+      count: spec.carriers.count,
+      lengthMm: spec.carriers.lengthMm,
+      minGapMm: spec.carriers.minGapMm,
+      loaded: { vMaxMmPerS: spec.carriers.vMaxMmPerS, aMaxMmPerS2: spec.carriers.aMaxMmPerS2 },
+      ...(spec.carriers.empty ? { empty: spec.carriers.empty } : {}),
+    },
+    steps: spec.stations.map((st, i) => ({
+      id: `step-${st.id}`,
+      name: `Step ${st.id}`,
+      kind: stepKind(i),
+      dispatch: 'firstFree',
+      stations: [
+        {
+          id: st.id,
+          name: `Station ${st.id}`,
+          laneId: LANE_IDS[st.lane],
+          positionMm: st.positionMm,
+          cycleTimeSeconds: st.cycle,
+          ...(st.failures ? { failures: st.failures } : {}),
+        },
+      ],
+    })),
+    // Round-the-clock calendar without breaks: no station here pauses, so the calendar only scales
+    // annual output, which these checks do not use.
+    calendar: { shiftsPerDay: 3, hoursPerShift: 8, breaks: [], daysPerWeek: 7, weeksPerYear: 52 },
+    conveyor: { kind: 'carriers' },
+  } as ScenarioInput;
+}

@@ -69,15 +69,14 @@ export function svgToString(svg: SVGSVGElement, options: SvgToStringOptions = {}
 
   copy.setAttribute('xmlns', SVG_NS);
   copy.setAttribute('xmlns:xlink', 'http://www.w3.org/1999/xlink');
-  const box = svg.viewBox.baseVal;
-  const width = svg.getAttribute('width') ?? String(box?.width ?? 0);
-  const height = svg.getAttribute('height') ?? String(box?.height ?? 0);
-  copy.setAttribute('width', width);
-  copy.setAttribute('height', height);
-  copy.style.removeProperty('max-width');
+  // A stand-alone file needs a size of its own; the page may have sized the chart through CSS only.
+  const box = svg.getBoundingClientRect();
+  if (!copy.getAttribute('width') && box.width > 0) copy.setAttribute('width', String(box.width));
+  if (!copy.getAttribute('height') && box.height > 0) copy.setAttribute('height', String(box.height));
 
+  const childTitle = () => Array.from(copy.children).find((child) => child.tagName.toLowerCase() === 'title');
   const label = svg.getAttribute('aria-label');
-  if (label && !copy.querySelector(':scope > title')) {
+  if (label && !childTitle()) {
     const title = document.createElementNS(SVG_NS, 'title');
     title.textContent = label;
     copy.prepend(title);
@@ -87,7 +86,7 @@ export function svgToString(svg: SVGSVGElement, options: SvgToStringOptions = {}
     rect.setAttribute('width', '100%');
     rect.setAttribute('height', '100%');
     rect.setAttribute('fill', options.background);
-    copy.insertBefore(rect, copy.querySelector(':scope > title')?.nextSibling ?? copy.firstChild);
+    copy.insertBefore(rect, childTitle()?.nextSibling ?? copy.firstChild);
   }
   if (options.fontCss) {
     const style = document.createElementNS(SVG_NS, 'style');

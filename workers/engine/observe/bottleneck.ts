@@ -18,10 +18,13 @@ type Segment = { station: number; periodStart: number; periodEnd: number; from: 
 
 export class BottleneckTracker {
   private readonly activeSince: Float64Array;
+  /** When a station still in an active period went inactive (-1: it has not). */
+  private readonly idleSince: Float64Array;
   private pStation: number[] = [];
   private pStart: number[] = [];
   private pEnd: number[] = [];
   private settled: number;
+  private cuts = new Float64Array(64);
   private held: Segment | null = null;
   /** Start and end of the overlap between the held segment's period and its predecessor's. */
   private heldOverlapFrom = 0;
@@ -29,31 +32,65 @@ export class BottleneckTracker {
   readonly sole: Float64Array;
   readonly shifting: Float64Array;
 
+  /**
+   * @param bridgeSeconds inactive gaps up to this long do not end an active period: the time a
+   * carrier queued right behind needs to move in. Without it, the in-feed gap of every cycle would
+   * hand the bottleneck to whichever station happens to be working at that moment.
+   */
   constructor(
     private readonly window: ObservationWindow,
     stationCount: number,
+    private readonly bridgeSeconds = 0,
   ) {
     this.activeSince = new Float64Array(stationCount).fill(-1);
+    this.idleSince = new Float64Array(stationCount).fill(-1);
     this.sole = new Float64Array(stationCount);
     this.shifting = new Float64Array(stationCount);
     this.settled = 0;
   }
 
   setActive(station: number, active: boolean, t: number): void {
-    const since = this.activeSince[station];
-    if (active === since >= 0) return;
-    if (active) {
-      this.activeSince[station] = t;
+    this.closeStale(t);
+    const isActive = this.activeSince[station] >= 0 && this.idleSince[station] < 0;
+    if (active === isActive) return;
+    if (!active) {
+      this.idleSince[station] = t;
       return;
     }
-    this.activeSince[station] = -1;
-    if (t > since) {
-      this.pStation.push(station);
-      this.pStart.push(since);
-      this.pEnd.push(t);
+    if (this.idleSince[station] >= 0) {
+      if (t - this.idleSince[station] <= this.bridgeSeconds) {
+        this.idleSince[station] = -1;
+        return;
+      }
+      this.close(station);
     }
+    this.activeSince[station] = t;
+  }
+
+  /** Ends the period of a station that went inactive; the period ran to when it did. */
+  private close(station: number): void {
+    const start = this.activeSince[station];
+    const end = this.idleSince[station];
+    this.activeSince[station] = -1;
+    this.idleSince[station] = -1;
+    if (end > start) {
+      this.pStation.push(station);
+      this.pStart.push(start);
+      this.pEnd.push(end);
+    }
+  }
+
+  private closeStale(t: number): void {
+    let closed = false;
+    for (let s = 0; s < this.idleSince.length; s++) {
+      if (this.idleSince[s] >= 0 && t - this.idleSince[s] > this.bridgeSeconds) {
+        this.close(s);
+        closed = true;
+      }
+    }
+    if (!closed) return;
     if (this.pStation.length > MAX_PENDING) this.resolve(t, true);
-    else if (this.pStation.length > 64) this.resolve(t, false);
+    else if (this.pStation.length > 16) this.resolve(t, false);
   }
 
   /** Resolves the timeline up to t (forced: running periods end at t). */
@@ -61,6 +98,10 @@ export class BottleneckTracker {
     let boundary = t;
     if (force) {
       for (let s = 0; s < this.activeSince.length; s++) {
+        if (this.idleSince[s] >= 0) {
+          this.close(s);
+          continue;
+        }
         const since = this.activeSince[s];
         if (since >= 0 && t > since) {
           this.pStation.push(s);
@@ -75,11 +116,17 @@ export class BottleneckTracker {
     if (boundary <= this.settled) return;
     this.sweep(boundary);
     this.settled = boundary;
-    const keep: number[] = [];
-    for (let i = 0; i < this.pStation.length; i++) if (this.pEnd[i] > boundary) keep.push(i);
-    this.pStation = keep.map((i) => this.pStation[i]);
-    this.pStart = keep.map((i) => this.pStart[i]);
-    this.pEnd = keep.map((i) => this.pEnd[i]);
+    let kept = 0;
+    for (let i = 0; i < this.pStation.length; i++) {
+      if (this.pEnd[i] <= boundary) continue;
+      this.pStation[kept] = this.pStation[i];
+      this.pStart[kept] = this.pStart[i];
+      this.pEnd[kept] = this.pEnd[i];
+      kept++;
+    }
+    this.pStation.length = kept;
+    this.pStart.length = kept;
+    this.pEnd.length = kept;
   }
 
   /** Closes every running period at the end of the run and attributes the last segment. */
@@ -90,23 +137,29 @@ export class BottleneckTracker {
   }
 
   private sweep(boundary: number): void {
-    const cuts = new Set<number>([this.settled, boundary]);
-    for (let i = 0; i < this.pStation.length; i++) {
-      if (this.pStart[i] > this.settled && this.pStart[i] < boundary) cuts.add(this.pStart[i]);
-      if (this.pEnd[i] > this.settled && this.pEnd[i] < boundary) cuts.add(this.pEnd[i]);
+    const n = this.pStation.length;
+    if (this.cuts.length < 2 * n + 2) this.cuts = new Float64Array(4 * n + 4);
+    const cuts = this.cuts;
+    let count = 0;
+    cuts[count++] = this.settled;
+    cuts[count++] = boundary;
+    for (let i = 0; i < n; i++) {
+      if (this.pStart[i] > this.settled && this.pStart[i] < boundary) cuts[count++] = this.pStart[i];
+      if (this.pEnd[i] > this.settled && this.pEnd[i] < boundary) cuts[count++] = this.pEnd[i];
     }
-    const points = [...cuts].sort((a, b) => a - b);
-    for (let k = 0; k + 1 < points.length; k++) {
+    const points = cuts.subarray(0, count).sort();
+    for (let k = 0; k + 1 < count; k++) {
       const a = points[k];
       const b = points[k + 1];
+      if (b <= a) continue;
       let best = -1;
-      for (let i = 0; i < this.pStation.length; i++) {
+      let bestLen = -1;
+      for (let i = 0; i < n; i++) {
         if (this.pStart[i] > a || this.pEnd[i] < b) continue;
-        if (best < 0) best = i;
-        else {
-          const len = this.pEnd[i] - this.pStart[i];
-          const bestLen = this.pEnd[best] - this.pStart[best];
-          if (len > bestLen || (len === bestLen && this.pStation[i] < this.pStation[best])) best = i;
+        const len = this.pEnd[i] - this.pStart[i];
+        if (len > bestLen || (len === bestLen && this.pStation[i] < this.pStation[best])) {
+          best = i;
+          bestLen = len;
         }
       }
       if (best >= 0) this.extend(this.pStation[best], this.pStart[best], this.pEnd[best], a, b);
@@ -138,10 +191,13 @@ export class BottleneckTracker {
 
   /** Sole time of a finished segment: its time minus what lies in the overlaps on either side. */
   private attribute(h: Segment, nextFrom: number, nextTo: number): void {
-    const inSegment = (a: number, b: number) => this.window.overlap(Math.max(a, h.from), Math.min(b, h.to));
-    const before = inSegment(this.heldOverlapFrom, this.heldOverlapTo);
-    const after = inSegment(nextFrom, nextTo);
-    const both = inSegment(Math.max(this.heldOverlapFrom, nextFrom), Math.min(this.heldOverlapTo, nextTo));
+    const before = this.inSegment(h, this.heldOverlapFrom, this.heldOverlapTo);
+    const after = this.inSegment(h, nextFrom, nextTo);
+    const both = this.inSegment(h, Math.max(this.heldOverlapFrom, nextFrom), Math.min(this.heldOverlapTo, nextTo));
     this.sole[h.station] += Math.max(0, this.window.overlap(h.from, h.to) - before - after + both);
+  }
+
+  private inSegment(h: Segment, a: number, b: number): number {
+    return this.window.overlap(Math.max(a, h.from), Math.min(b, h.to));
   }
 }

@@ -3,6 +3,7 @@
 // Memory is fixed at construction (entities × bins); nothing grows with the run length.
 import { StreamingHistogram } from '../stats/histogram';
 import type { CompiledLine } from '../model/compile';
+import { PROFILE_EMPTY, PROFILE_LOADED } from '../model/motion';
 import { PH_EXIT, PH_MOVING, PH_QUEUED, PH_STATION, ST_BLOCKED, ST_STARVED, TR_IDLE, TR_HOLDING } from '../model/state';
 import { BottleneckTracker } from './bottleneck';
 import type { Observer } from './observer';
@@ -83,7 +84,8 @@ export class Recorder implements Observer {
     this.wipLevel = new Levels(w, 1);
     this.wipSeries = new Float64Array(timeBins);
     this.laneHeat = Array.from({ length: line.laneCount }, () => new Float64Array(timeBins * positionBins));
-    this.bottleneck = new BottleneckTracker(w, s);
+    const inFeed = Math.max(line.motion.moveSeconds(line.pitchMm, PROFILE_LOADED), line.motion.moveSeconds(line.pitchMm, PROFILE_EMPTY));
+    this.bottleneck = new BottleneckTracker(w, s, 1.5 * inFeed);
   }
 
   stationState(station: number, state: number, t: number): void {

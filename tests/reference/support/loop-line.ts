@@ -1,5 +1,5 @@
-// Builds small closed-loop scenarios for the reference checks: two lanes on one deck joined end to
-// start by direct links (work lane, then return lane, then back), stations in process order, and
+// Builds small closed-loop scenarios for the reference checks: two lanes joined end to start (work
+// lane, then return lane, then back) by direct links or by transfers, stations in process order, and
 // carriers with a trapezoidal profile. Each check chooses sizes that make the physical effects it is
 // not about negligible, and says so beside the check.
 import type { Distribution } from '../../../shared/scenario/distribution';
@@ -14,8 +14,16 @@ export type LoopStation = {
   failures?: { timeBetweenFailuresSeconds: Distribution; timeToRepairSeconds: Distribution };
 };
 
+/** How one lane end joins the other lane's start; a direct link when absent. */
+export type LoopJoin =
+  | { kind: 'elevator'; handlingSeconds: number; liftSpeedMmPerS: number }
+  | { kind: 'lateral'; handlingSeconds: number; shiftDistanceMm: number; shiftSpeedMmPerS: number }
+  | { kind: 'curve'; lengthMm: number; speedLimitMmPerS: number };
+
 export type LoopLine = {
   laneLengthsMm: [number, number];
+  /** Work-lane end to return-lane start, and return-lane end to work-lane start. Elevators need both. */
+  joins?: [LoopJoin, LoopJoin];
   /** In process order: the first is the load step, the last the unload step, the rest process steps. */
   stations: LoopStation[];
   carriers: { count: number; lengthMm: number; minGapMm: number; vMaxMmPerS: number; aMaxMmPerS2: number; empty?: { vMaxMmPerS: number; aMaxMmPerS2: number } };
@@ -38,27 +46,39 @@ function modulesFor(lengthMm: number): { lengthMm: number; count: number }[] {
 
 export const LANE_IDS = ['work', 'return'] as const;
 
+/** With elevators the return lane runs on a deck 400 mm below the work deck. */
+export const DECK_DROP_MM = 400;
+
+function joinsOf(spec: LoopLine) {
+  if (!spec.joins) return { links: [{ fromLaneId: 'work', toLaneId: 'return' }, { fromLaneId: 'return', toLaneId: 'work' }], transfers: [] };
+  const ends = [['work', 'return'], ['return', 'work']] as const;
+  return {
+    links: [],
+    transfers: spec.joins.map((j, i) => ({ id: `join-${i}`, name: `Join ${i}`, fromLaneId: ends[i][0], toLaneId: ends[i][1], ...j })),
+  };
+}
+
 export function loopScenario(spec: LoopLine, name = 'Reference loop'): ScenarioInput {
   const last = spec.stations.length - 1;
+  const twoDecks = spec.joins?.[0].kind === 'elevator';
   const stepKind = (i: number) => (i === 0 ? 'load' : i === last ? 'unload' : 'process');
   return {
     schemaVersion: 1,
     name,
     track: { moduleLengthsMm: MODULES, widthMm: 200 },
-    decks: [{ id: 'deck', name: 'Deck', elevationMm: 900 }],
+    decks: [
+      { id: 'deck', name: 'Deck', elevationMm: 900 },
+      { id: 'lower', name: 'Lower deck', elevationMm: 900 - DECK_DROP_MM },
+    ],
     lanes: spec.laneLengthsMm.map((length, i) => ({
       id: LANE_IDS[i],
       name: LANE_IDS[i],
-      deckId: 'deck',
+      deckId: twoDecks && i === 1 ? 'lower' : 'deck',
       modules: modulesFor(length),
       start: { xMm: i === 0 ? 0 : length, yMm: i * 500 },
       heading: i === 0 ? 'east' : 'west',
     })),
-    links: [
-      { fromLaneId: 'work', toLaneId: 'return' },
-      { fromLaneId: 'return', toLaneId: 'work' },
-    ],
-    transfers: [],
+    ...joinsOf(spec),
     carriers: {
       count: spec.carriers.count,
       lengthMm: spec.carriers.lengthMm,

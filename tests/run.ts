@@ -113,7 +113,10 @@ async function main(): Promise<number> {
   // A failing exit with nothing counted (no test file matched, a config error) still counts as one failure.
   const unexplained = exitCode !== 0 && setupFailures === 0 && !failed ? 1 : 0;
   const failures = (failed ?? 0) + setupFailures + unexplained;
-  if (unexplained) say(`vitest exited with code ${exitCode} although no test failed; counted as one failure`);
+  if (unexplained) {
+    const why = interrupted ? 'the run was interrupted' : `vitest exited with code ${exitCode} although no test failed`;
+    say(`${why}; counted as one failure`);
+  }
   if (setupFailures > 0) say(`${setupFailures} set-up step(s) failed (counted as failures below)`);
   console.log(`${passed ?? 0} passed, ${failures} failed${skipped ? `, ${skipped} skipped` : ''}`);
   return failures > 0 ? Math.max(exitCode, 1) : exitCode;

@@ -3,36 +3,44 @@
 // Pages that carry the scenario format (and later the editor, the worker and
 // the charts) load on demand, so signing in does not wait for them.
 import type { RouteObject } from 'react-router-dom';
+import { PageSpinner } from '../components/ui/spinner';
 import { RequireAuth } from '../features/auth/components/require-auth';
 import { SignInRoute } from '../features/auth/routes/sign-in-route';
 import { SignUpRoute } from '../features/auth/routes/sign-up-route';
 import { ProjectsRoute } from '../features/projects/routes/projects-route';
 import { AppFrame } from './layout/app-frame';
 import { NotFoundRoute } from './routes/not-found-route';
-import { PageSpinner } from '../components/ui/spinner';
+import { RouteError } from './routes/route-error';
+
+/** Pages anyone may open. */
+const publicPages: RouteObject[] = [
+  { path: '/sign-in', element: <SignInRoute /> },
+  { path: '/sign-up', element: <SignUpRoute /> },
+];
+
+/** Pages behind sign-in; RequireAuth sends visitors to sign-in and back. */
+const signedInPages: RouteObject[] = [
+  { path: '/', element: <ProjectsRoute /> },
+  {
+    path: '/projects/:projectId',
+    lazy: async () => ({ Component: (await import('./routes/project-route')).ProjectRoute }),
+  },
+  {
+    path: '/scenarios/:scenarioId',
+    lazy: async () => ({ Component: (await import('../features/scenarios/routes/scenario-route')).ScenarioRoute }),
+  },
+];
 
 export const appRoutes: RouteObject[] = [
   {
     element: <AppFrame />,
     hydrateFallbackElement: <PageSpinner label="Loading Lanewright…" />,
     children: [
-      { path: '/sign-in', element: <SignInRoute /> },
-      { path: '/sign-up', element: <SignUpRoute /> },
       {
-        element: <RequireAuth />,
-        children: [
-          { path: '/', element: <ProjectsRoute /> },
-          {
-            path: '/projects/:projectId',
-            lazy: async () => ({ Component: (await import('./routes/project-route')).ProjectRoute }),
-          },
-          {
-            path: '/scenarios/:scenarioId',
-            lazy: async () => ({ Component: (await import('../features/scenarios/routes/scenario-route')).ScenarioRoute }),
-          },
-        ],
+        // A page that throws is replaced inside the frame, keeping header and safety note.
+        errorElement: <RouteError />,
+        children: [...publicPages, { element: <RequireAuth />, children: signedInPages }, { path: '*', element: <NotFoundRoute /> }],
       },
-      { path: '*', element: <NotFoundRoute /> },
     ],
   },
 ];

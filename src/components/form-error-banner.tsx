@@ -1,6 +1,6 @@
 // The banner above a form for a failed submit that no single field explains.
 import { ErrorBanner } from './ui/error-banner';
-import type { SubmitFailure } from '../lib/use-submit-error';
+import type { SubmitFailure } from '../lib/use-api-form-submit';
 
 export function FormErrorBanner({ failure, title }: { failure: SubmitFailure | null; title: string }) {
   if (!failure) return null;

@@ -26,10 +26,12 @@ export function applyServerFieldErrors<T extends FieldValues>(
 
 /**
  * The shared schemas word their messages as the end of a sentence about the
- * field ("must be at least 10 characters"), so the label is put in front;
- * messages that already start with a capital are whole sentences.
+ * field ("must be at least 10 characters"), so the label is put in front,
+ * without a trailing note such as "(optional)"; messages that already start
+ * with a capital are whole sentences.
  */
 export function sentenceFor(label: string, message: string): string {
   const first = message.charAt(0);
-  return first && first === first.toLowerCase() && first !== first.toUpperCase() ? `${label} ${message}` : message;
+  const isFragment = first !== '' && first === first.toLowerCase() && first !== first.toUpperCase();
+  return isFragment ? `${label.replace(/\s*\([^)]*\)$/, '')} ${message}` : message;
 }

@@ -5,7 +5,7 @@ import { Link, useNavigate, useParams } from 'react-router-dom';
 import { LoadError } from '../../components/load-error';
 import { NotFoundMessage } from '../../components/not-found-message';
 import { Button } from '../../components/ui/button';
-import { Card, CardTitle } from '../../components/ui/card';
+import { TitledCard } from '../../components/ui/card';
 import { EmptyState } from '../../components/ui/empty-state';
 import { PageHeader } from '../../components/ui/page-header';
 import { PageSpinner } from '../../components/ui/spinner';
@@ -45,17 +45,14 @@ export function ProjectRoute() {
         actions={scenarios.data && scenarios.data.length > 0 ? startButton : undefined}
       />
       {creating && (
-        <Card aria-labelledby="new-scenario-title" className="max-w-2xl">
-          <CardTitle id="new-scenario-title" className="mb-4">
-            New scenario
-          </CardTitle>
+        <TitledCard title="New scenario" className="max-w-2xl">
           <CreateScenarioForm
             projectId={projectId}
             existing={scenarios.data ?? []}
             onCancel={() => setCreating(false)}
             onCreated={(scenario) => navigate(`/scenarios/${scenario.id}`)}
           />
-        </Card>
+        </TitledCard>
       )}
       <section aria-labelledby="scenarios-title" className="flex flex-col gap-4">
         <h2 id="scenarios-title" className="text-xl font-semibold">

@@ -1,6 +1,7 @@
 // Labelled form fields. The label is tied to the control, the hint and the
 // error are tied through aria-describedby, and the error is announced politely.
 import { useId, type ComponentProps, type ReactNode } from 'react';
+import { sentenceFor } from '../../lib/form-errors';
 
 const controlBase =
   'block w-full rounded-md border bg-paper-raised px-3 py-2 text-base text-ink placeholder:text-ink-faint ' +
@@ -30,7 +31,7 @@ function FieldFrame({ id, label, hint, error, children }: FieldFrameProps) {
       )}
       {children(describedBy, Boolean(error))}
       <p id={errorId} aria-live="polite" className="min-h-5 text-sm font-medium text-danger">
-        {error}
+        {error && sentenceFor(label, error)}
       </p>
     </div>
   );

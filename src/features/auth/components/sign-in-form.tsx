@@ -5,8 +5,7 @@ import { signInSchema } from '../../../../shared/api/auth';
 import { FormErrorBanner } from '../../../components/form-error-banner';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
-import { sentenceFor } from '../../../lib/form-errors';
-import { useSubmitError } from '../../../lib/use-submit-error';
+import { useApiFormSubmit } from '../../../lib/use-api-form-submit';
 import { useSignIn } from '../api/sign-in';
 
 const FIELDS = ['email', 'password'] as const;
@@ -15,35 +14,16 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   const form = useForm({ resolver: zodResolver(signInSchema), defaultValues: { email: '', password: '' } });
   const { errors } = form.formState;
   const signIn = useSignIn();
-  const submitError = useSubmitError(FIELDS, form.setError);
-
-  const onSubmit = form.handleSubmit(async (values) => {
-    submitError.clear();
-    try {
-      await signIn.mutateAsync(values);
-      onSignedIn();
-    } catch (error) {
-      submitError.capture(error);
-    }
+  const { onSubmit, failure } = useApiFormSubmit(form, FIELDS, async (values) => {
+    await signIn.mutateAsync(values);
+    onSignedIn();
   });
 
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-2" aria-label="Sign in">
-      <FormErrorBanner title="Sign-in failed" failure={submitError.failure} />
-      <TextField
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        error={errors.email?.message && sentenceFor('E-mail', errors.email.message)}
-        {...form.register('email')}
-      />
-      <TextField
-        label="Password"
-        type="password"
-        autoComplete="current-password"
-        error={errors.password?.message && sentenceFor('Password', errors.password.message)}
-        {...form.register('password')}
-      />
+      <FormErrorBanner title="Sign-in failed" failure={failure} />
+      <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register('email')} />
+      <TextField label="Password" type="password" autoComplete="current-password" error={errors.password?.message} {...form.register('password')} />
       <Button type="submit" pending={signIn.isPending} pendingLabel="Signing in…" className="mt-2 self-stretch sm:self-start">
         Sign in
       </Button>

@@ -5,8 +5,7 @@ import { PASSWORD_MIN_LENGTH, signUpSchema } from '../../../../shared/api/auth';
 import { FormErrorBanner } from '../../../components/form-error-banner';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
-import { sentenceFor } from '../../../lib/form-errors';
-import { useSubmitError } from '../../../lib/use-submit-error';
+import { useApiFormSubmit } from '../../../lib/use-api-form-submit';
 import { useSignUp } from '../api/sign-up';
 
 const FIELDS = ['name', 'organisationName', 'email', 'password'] as const;
@@ -18,36 +17,29 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
   });
   const { errors } = form.formState;
   const signUp = useSignUp();
-  const submitError = useSubmitError(FIELDS, form.setError);
-
-  const onSubmit = form.handleSubmit(async (values) => {
-    submitError.clear();
-    try {
-      await signUp.mutateAsync(values);
-      onSignedUp();
-    } catch (error) {
-      submitError.capture(error);
-    }
+  const { onSubmit, failure } = useApiFormSubmit(form, FIELDS, async (values) => {
+    await signUp.mutateAsync(values);
+    onSignedUp();
   });
 
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-2" aria-label="Create an account">
-      <FormErrorBanner title="The account was not created" failure={submitError.failure} />
-      <TextField label="Your name" autoComplete="name" error={errors.name?.message && sentenceFor('Your name', errors.name.message)} {...form.register('name')} />
+      <FormErrorBanner title="The account was not created" failure={failure} />
+      <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register('name')} />
       <TextField
         label="Organisation"
         hint="The company or team whose lines you plan. You become its owner and can invite colleagues."
         autoComplete="organization"
-        error={errors.organisationName?.message && sentenceFor('Organisation', errors.organisationName.message)}
+        error={errors.organisationName?.message}
         {...form.register('organisationName')}
       />
-      <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message && sentenceFor('E-mail', errors.email.message)} {...form.register('email')} />
+      <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register('email')} />
       <TextField
         label="Password"
         type="password"
         autoComplete="new-password"
         hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
-        error={errors.password?.message && sentenceFor('Password', errors.password.message)}
+        error={errors.password?.message}
         {...form.register('password')}
       />
       <Button type="submit" pending={signUp.isPending} pendingLabel="Creating your account…" className="mt-2 self-stretch sm:self-start">

@@ -6,8 +6,7 @@ import { createProjectSchema } from '../../../../shared/api/projects';
 import { FormErrorBanner } from '../../../components/form-error-banner';
 import { Button } from '../../../components/ui/button';
 import { TextAreaField, TextField } from '../../../components/ui/field';
-import { sentenceFor } from '../../../lib/form-errors';
-import { useSubmitError } from '../../../lib/use-submit-error';
+import { useApiFormSubmit } from '../../../lib/use-api-form-submit';
 import { useCreateProject } from '../api/create-project';
 
 const FIELDS = ['name', 'description'] as const;
@@ -25,22 +24,13 @@ export function CreateProjectForm({ organisationId, onCreated, onCancel }: Creat
   });
   const { errors } = form.formState;
   const createProject = useCreateProject();
-  const submitError = useSubmitError(FIELDS, form.setError);
-
-  const onSubmit = form.handleSubmit(async (values) => {
-    submitError.clear();
-    try {
-      onCreated(await createProject.mutateAsync(values));
-    } catch (error) {
-      submitError.capture(error);
-    }
-  });
+  const { onSubmit, failure } = useApiFormSubmit(form, FIELDS, async (values) => onCreated(await createProject.mutateAsync(values)));
 
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-2" aria-label="New project">
-      <FormErrorBanner title="The project was not created" failure={submitError.failure} />
-      <TextField label="Project name" hint="For example the line or the customer job it belongs to." error={errors.name?.message && sentenceFor('Project name', errors.name.message)} {...form.register('name')} />
-      <TextAreaField label="Description (optional)" error={errors.description?.message && sentenceFor('Description', errors.description.message)} {...form.register('description')} />
+      <FormErrorBanner title="The project was not created" failure={failure} />
+      <TextField label="Project name" hint="For example the line or the customer job it belongs to." error={errors.name?.message} {...form.register('name')} />
+      <TextAreaField label="Description (optional)" error={errors.description?.message} {...form.register('description')} />
       <div className="mt-2 flex flex-wrap gap-3">
         <Button type="submit" pending={createProject.isPending} pendingLabel="Creating…">
           Create project

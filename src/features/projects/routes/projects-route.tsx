@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { LoadError } from '../../../components/load-error';
 import { Button } from '../../../components/ui/button';
-import { Card, CardTitle } from '../../../components/ui/card';
+import { TitledCard } from '../../../components/ui/card';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { PageHeader } from '../../../components/ui/page-header';
 import { PageSpinner } from '../../../components/ui/spinner';
@@ -39,12 +39,9 @@ export function ProjectsRoute() {
         actions={projects.data && projects.data.length > 0 ? startButton : undefined}
       />
       {creating && organisationId && (
-        <Card aria-labelledby="new-project-title" className="max-w-2xl">
-          <CardTitle id="new-project-title" className="mb-4">
-            New project
-          </CardTitle>
+        <TitledCard title="New project" className="max-w-2xl">
           <CreateProjectForm organisationId={organisationId} onCancel={() => setCreating(false)} onCreated={(p) => navigate(`/projects/${p.id}`)} />
-        </Card>
+        </TitledCard>
       )}
       {projects.isPending && <PageSpinner label="Loading projects…" />}
       {projects.isError && <LoadError what="the projects" error={projects.error} onRetry={() => void projects.refetch()} />}

@@ -8,8 +8,7 @@ import { createScenarioSchema, type ScenarioSummary } from '../../../../shared/a
 import { FormErrorBanner } from '../../../components/form-error-banner';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
-import { sentenceFor } from '../../../lib/form-errors';
-import { useSubmitError } from '../../../lib/use-submit-error';
+import { useApiFormSubmit } from '../../../lib/use-api-form-submit';
 import { useCreateScenario } from '../api/create-scenario';
 import { scenarioQueryOptions } from '../api/get-scenario';
 import { exampleScenarios } from '../utils/examples';
@@ -39,7 +38,6 @@ export function CreateScenarioForm({ projectId, existing, onCreated, onCancel }:
   const { errors } = form.formState;
   const createScenario = useCreateScenario(projectId);
   const queryClient = useQueryClient();
-  const submitError = useSubmitError(FIELDS, form.setError);
 
   const documentFor = async (source: string) => {
     if (source.startsWith(COPY)) return (await queryClient.fetchQuery(scenarioQueryOptions(source.slice(COPY.length)))).document;
@@ -56,22 +54,17 @@ export function CreateScenarioForm({ projectId, existing, onCreated, onCancel }:
     if (suggestion && !form.getFieldState('name').isDirty) form.setValue('name', suggestion);
   };
 
-  const onSubmit = form.handleSubmit(async ({ source, name, description }) => {
-    submitError.clear();
-    try {
-      const document = await documentFor(source);
-      onCreated(await createScenario.mutateAsync({ name, description, document: { ...document, name, description: description ?? document.description } }));
-    } catch (error) {
-      submitError.capture(error);
-    }
+  const { onSubmit, failure } = useApiFormSubmit(form, FIELDS, async ({ source, name, description }) => {
+    const document = await documentFor(source);
+    onCreated(await createScenario.mutateAsync({ name, description, document: { ...document, name, description: description ?? document.description } }));
   });
 
   const sourceField = form.register('source', { onChange: (event) => onSourceChange(String(event.target.value)) });
 
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-2" aria-label="New scenario">
-      <FormErrorBanner title="The scenario was not created" failure={submitError.failure} />
-      <SelectField label="Start from" hint="Every scenario begins as a complete layout you can then change." error={errors.source?.message && sentenceFor('Start from', errors.source.message)} {...sourceField}>
+      <FormErrorBanner title="The scenario was not created" failure={failure} />
+      <SelectField label="Start from" hint="Every scenario begins as a complete layout you can then change." error={errors.source?.message} {...sourceField}>
         <option value="">Choose a starting layout…</option>
         {exampleScenarios.length > 0 && (
           <optgroup label="Example layouts">
@@ -92,8 +85,8 @@ export function CreateScenarioForm({ projectId, existing, onCreated, onCancel }:
           </optgroup>
         )}
       </SelectField>
-      <TextField label="Scenario name" error={errors.name?.message && sentenceFor('Scenario name', errors.name.message)} {...form.register('name')} />
-      <TextAreaField label="Description (optional)" error={errors.description?.message && sentenceFor('Description', errors.description.message)} {...form.register('description')} />
+      <TextField label="Scenario name" error={errors.name?.message} {...form.register('name')} />
+      <TextAreaField label="Description (optional)" error={errors.description?.message} {...form.register('description')} />
       <div className="mt-2 flex flex-wrap gap-3">
         <Button type="submit" pending={createScenario.isPending || form.formState.isSubmitting} pendingLabel="Creating…">
           Create scenario

@@ -1,7 +1,7 @@
 // The read-only overview of a scenario document: headline figures, carriers,
 // track and process. The scenario editor will replace this view for editors.
 import type { Scenario } from '../../../../shared/scenario/scenario';
-import { Card, CardTitle } from '../../../components/ui/card';
+import { TitledCard } from '../../../components/ui/card';
 import { formatLengthMm } from '../../../lib/format';
 import { documentFacts } from '../utils/document-facts';
 import { DocumentFactsList } from './document-facts-list';
@@ -24,18 +24,12 @@ export function ScenarioOverview({ document }: { document: Scenario }) {
       <DocumentFactsList facts={documentFacts(document)} />
       <CarrierSummary carriers={document.carriers} />
       <div className="grid items-start gap-6 lg:grid-cols-2">
-        <Card aria-labelledby="track-title">
-          <CardTitle id="track-title" className="mb-4">
-            Track
-          </CardTitle>
+        <TitledCard title="Track">
           <TrackOverview document={document} />
-        </Card>
-        <Card aria-labelledby="process-title">
-          <CardTitle id="process-title" className="mb-4">
-            Process
-          </CardTitle>
+        </TitledCard>
+        <TitledCard title="Process">
           <ProcessOverview document={document} />
-        </Card>
+        </TitledCard>
       </div>
     </div>
   );

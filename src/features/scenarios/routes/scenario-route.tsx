@@ -1,7 +1,8 @@
 // /scenarios/:scenarioId : one scenario, its latest revision, its layout and its history.
-import { Link, useParams } from 'react-router-dom';
+import { useParams } from 'react-router-dom';
 import { LoadError } from '../../../components/load-error';
-import { Card, CardTitle } from '../../../components/ui/card';
+import { Breadcrumbs } from '../../../components/ui/breadcrumbs';
+import { TitledCard } from '../../../components/ui/card';
 import { PageHeader } from '../../../components/ui/page-header';
 import { PageSpinner } from '../../../components/ui/spinner';
 import { isApiRequestError } from '../../../lib/api-client';
@@ -35,21 +36,13 @@ export function ScenarioRoute() {
       <PageHeader
         title={data.name}
         trail={
-          <ol className="flex flex-wrap gap-x-2">
-            <li>
-              <Link className="underline underline-offset-4 hover:text-ink" to="/">
-                Projects
-              </Link>{' '}
-              /
-            </li>
-            <li>
-              <Link className="underline underline-offset-4 hover:text-ink" to={`/projects/${data.projectId}`}>
-                {project.data?.name ?? 'Project'}
-              </Link>{' '}
-              /
-            </li>
-            <li aria-current="page">{data.name}</li>
-          </ol>
+          <Breadcrumbs
+            items={[
+              { label: 'Projects', to: '/' },
+              { label: project.data?.name ?? 'Project', to: `/projects/${data.projectId}` },
+              { label: data.name },
+            ]}
+          />
         }
         description={
           <>
@@ -68,14 +61,11 @@ export function ScenarioRoute() {
         </h2>
         <ScenarioOverview document={data.document} />
       </section>
-      <Card aria-labelledby="history-title">
-        <CardTitle id="history-title" className="mb-4">
-          Revision history
-        </CardTitle>
+      <TitledCard title="Revision history">
         {revisions.isPending && <PageSpinner label="Loading revisions…" />}
         {revisions.isError && <LoadError what="the revision history" error={revisions.error} onRetry={() => void revisions.refetch()} />}
         {revisions.data && <RevisionHistory revisions={revisions.data} latestNumber={latest.number} />}
-      </Card>
+      </TitledCard>
     </div>
   );
 }

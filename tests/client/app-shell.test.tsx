@@ -2,7 +2,7 @@ import { screen, waitFor } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { apiRoutes } from '../../shared/api/routes';
 import { apiError, mockApi } from './support/fetch-mock';
-import { me, project } from './support/fixtures';
+import { me, project, uuid } from './support/fixtures';
 import { renderApp } from './support/render-app';
 
 describe('app shell', () => {
@@ -48,5 +48,28 @@ describe('app shell', () => {
     renderApp('/no/such/page');
 
     expect(await screen.findByRole('heading', { name: 'This page was not found' })).toBeTruthy();
+  });
+});
+
+describe('organisation switch', () => {
+  it('shows the chosen organisation with the role held there, and remembers the choice', async () => {
+    const secondOrg = uuid(3);
+    const twoOrgs = { ...me('viewer'), memberships: [...me('viewer').memberships, { organisationId: secondOrg, organisationName: 'Harbour Sensors', role: 'engineer' as const }] };
+    const api = mockApi({
+      [`GET ${apiRoutes.me}`]: { status: 200, body: twoOrgs },
+      [`GET ${apiRoutes.projects}`]: { status: 200, body: [] },
+    });
+    const { user } = renderApp('/');
+
+    await screen.findByRole('heading', { name: 'No projects yet' });
+    expect(screen.getByLabelText('Role: viewer')).toBeTruthy();
+    expect(screen.queryByRole('button', { name: 'New project' })).toBeNull();
+
+    await user.selectOptions(screen.getByLabelText('Organisation'), 'Harbour Sensors');
+
+    expect(await screen.findByRole('button', { name: 'New project' })).toBeTruthy();
+    expect(screen.getByLabelText('Role: engineer')).toBeTruthy();
+    expect(api.calls.some((c) => c.path === apiRoutes.projects && c.search === `?organisationId=${secondOrg}`)).toBe(true);
+    expect(window.localStorage.getItem('lanewright.organisationId')).toBe(secondOrg);
   });
 });

@@ -1,14 +1,14 @@
 // Lint rules that hold the architecture: dependencies point one way
 // (shared <- workers <- server/src), and no import cycles.
 import tseslint from 'typescript-eslint';
-import importX from 'eslint-plugin-import-x';
+import importX, { createNodeResolver } from 'eslint-plugin-import-x';
 
 export default tseslint.config(
   { ignores: ['dist/**', 'node_modules/**', '.data/**', 'test-artifacts/**'] },
   ...tseslint.configs.recommended,
   {
     plugins: { 'import-x': importX },
-    settings: { 'import-x/resolver': { node: { extensions: ['.ts', '.tsx', '.js', '.mjs'] } } },
+    settings: { 'import-x/resolver-next': [createNodeResolver({ extensions: ['.ts', '.tsx', '.js', '.mjs', '.json'] })] },
     rules: {
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
       'import-x/no-cycle': 'error',

@@ -38,6 +38,13 @@ describe('demo engineer in the browser', () => {
     expect(path()).toBe('/sign-in');
     await screenshot(page, '01-sign-in');
 
+    await page.keyboard.press('Tab');
+    expect(await page.evaluate(() => document.activeElement?.textContent)).toBe('Skip to main content');
+    await screenshot(page, '01b-skip-link-focused');
+    await page.keyboard.press('Enter');
+    await page.keyboard.press('Tab');
+    expect(await page.evaluate(() => document.activeElement?.getAttribute('type'))).toBe('email');
+
     await fillSignIn(ENGINEER, 'not-the-demo-password');
     const alert = page.getByRole('alert');
     await alert.waitFor();

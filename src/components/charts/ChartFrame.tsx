@@ -3,6 +3,7 @@
 import { useRef, type ReactNode } from 'react';
 import { ChartExportMenu } from './ChartExportMenu';
 import { Legend, legendHeight, type LegendSpec } from './Legend';
+import { estimateTextWidth } from './format';
 import { FONT_FAMILY, ink } from './palette';
 import type { ChartShell } from './useChartShell';
 import { ChartTooltip } from './ChartTooltip';
@@ -51,9 +52,14 @@ export function ChartFrame(props: ChartFrameProps) {
   const legendSpace = legend ? legendHeight(legend, legendWidth) + 8 : 0;
   const plotTop = headerHeight + legendSpace + margin.top;
   const height = plotTop + plotHeight + margin.bottom;
+  // On narrow screens a long title would run under the buttons; they move above the picture then.
+  const menuBesideTitle = PAD + estimateTextWidth(title, 16) + MENU_ROOM <= width;
 
   return (
     <figure className="relative m-0 w-full" ref={shell.containerRef} data-chart={exportName}>
+      <div className={menuBesideTitle ? 'absolute right-1 top-1' : 'flex justify-end'} style={{ maxWidth: menuBesideTitle ? MENU_ROOM : undefined }}>
+        <ChartExportMenu svgRef={svgRef} fileBase={exportName} title={title} csv={props.csv ?? (() => table)} />
+      </div>
       <svg
         ref={svgRef}
         role="img"
@@ -77,9 +83,6 @@ export function ChartFrame(props: ChartFrameProps) {
         {legend && <Legend spec={legend} x={PAD} y={headerHeight} maxWidth={legendWidth} />}
         <g transform={`translate(${margin.left},${plotTop})`}>{children}</g>
       </svg>
-      <div className="absolute right-1 top-1" style={{ maxWidth: MENU_ROOM }}>
-        <ChartExportMenu svgRef={svgRef} fileBase={exportName} title={title} csv={props.csv ?? (() => table)} />
-      </div>
       <ScreenReaderTable table={table} />
       {shell.tooltip && <ChartTooltip tooltip={shell.tooltip} containerWidth={width} />}
     </figure>

@@ -21,6 +21,8 @@ export interface ShareItem {
   shares: readonly number[];
   /** Text written after the bar, e.g. a bottleneck marker. */
   note?: string;
+  /** Used instead of `note` when the chart is too narrow for it. */
+  shortNote?: string;
   emphasis?: boolean;
 }
 
@@ -40,10 +42,13 @@ interface StackedShareBarsProps {
 const textOn = (fill: string) => (lab(fill).l < 55 ? '#ffffff' : ink.DEFAULT);
 
 export function StackedShareBars(props: StackedShareBarsProps) {
-  const { categories, items, barHeight = 28 } = props;
+  const { categories, barHeight = 28 } = props;
   const shell = useChartShell(props.width);
-  const labelWidth = Math.min(180, Math.max(...items.map((item) => estimateTextWidth(item.label, TICK_FONT))) + 14);
-  const noteWidth = Math.max(0, ...items.map((item) => (item.note ? estimateTextWidth(item.note, TICK_FONT) + 12 : 0)));
+  const labelWidth = Math.min(180, Math.max(...props.items.map((item) => estimateTextWidth(item.label, TICK_FONT))) + 14);
+  const notesWidth = (list: readonly ShareItem[]) => Math.max(0, ...list.map((item) => (item.note ? estimateTextWidth(item.note, TICK_FONT) + 12 : 0)));
+  // Bars keep at least half the room; past that a long note gives way to its short form.
+  const items = notesWidth(props.items) > (shell.width - labelWidth) / 2 ? props.items.map((item) => ({ ...item, note: item.shortNote ?? item.note })) : props.items;
+  const noteWidth = notesWidth(items);
   const margin: Margin = { top: 4, right: Math.max(16, noteWidth), bottom: 50, left: labelWidth };
   const plotWidth = plotWidthOf(shell.width, margin);
   const x = scaleLinear().domain([0, 1]).range([0, plotWidth]);

@@ -65,6 +65,7 @@ export function StationStateBars(props: StationStateBarsProps) {
     label: station.name,
     shares: states.map((state) => station.shares[state] ?? 0),
     note: station.id === bottleneckId ? note : undefined,
+    shortNote: station.id === bottleneckId ? '◀ bottleneck' : undefined,
     emphasis: station.id === bottleneckId,
   }));
   const busiest = [...stations].sort((a, b) => b.shares.processing - a.shares.processing)[0];

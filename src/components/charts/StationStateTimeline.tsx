@@ -103,7 +103,7 @@ export function StationStateTimeline(props: StationStateTimelineProps) {
     <ChartFrame
       shell={shell}
       title={title}
-      subtitle={`Colour: the state that held most of each ${formatOne(binMinutes)} min; hover for all shares`}
+      subtitle={`Each ${formatOne(binMinutes)} min bin shows its main state`}
       summary={timelineSummary(stations, states, shares, bins)}
       legend={{
         kind: 'swatches',

@@ -5,9 +5,10 @@ const CHART_FAMILY = 'IBM Plex Sans';
 /** The weights the charts use: regular text and semibold titles. */
 const WEIGHTS = new Set(['400', '600', 'normal']);
 
+/** Browsers shorten U+0000-00FF to U+0-FF when they read the rule back; both start the basic Latin range. */
 function isLatin(rule: CSSFontFaceRule): boolean {
   const range = rule.style.getPropertyValue('unicode-range');
-  return !range || /U\+0000/i.test(range);
+  return !range || /U\+0+-/i.test(range);
 }
 
 function fontRules(): CSSFontFaceRule[] {

@@ -25,6 +25,8 @@ export class BottleneckTracker {
   private pEnd: number[] = [];
   private settled: number;
   private cuts = new Float64Array(64);
+  private order = new Int32Array(32);
+  private readonly covering: Int32Array;
   private held: Segment | null = null;
   /** Start and end of the overlap between the held segment's period and its predecessor's. */
   private heldOverlapFrom = 0;
@@ -44,6 +46,7 @@ export class BottleneckTracker {
   ) {
     this.activeSince = new Float64Array(stationCount).fill(-1);
     this.idleSince = new Float64Array(stationCount).fill(-1);
+    this.covering = new Int32Array(stationCount);
     this.sole = new Float64Array(stationCount);
     this.shifting = new Float64Array(stationCount);
     this.settled = 0;
@@ -136,9 +139,16 @@ export class BottleneckTracker {
     this.held = null;
   }
 
+  /**
+   * Walks the cut points (period starts and ends) between the settled time and the boundary. At most
+   * one period per station covers any instant, so the covering set is one slot per station.
+   */
   private sweep(boundary: number): void {
     const n = this.pStation.length;
-    if (this.cuts.length < 2 * n + 2) this.cuts = new Float64Array(4 * n + 4);
+    if (this.cuts.length < 2 * n + 2) {
+      this.cuts = new Float64Array(4 * n + 4);
+      this.order = new Int32Array(2 * n + 2);
+    }
     const cuts = this.cuts;
     let count = 0;
     cuts[count++] = this.settled;
@@ -148,21 +158,36 @@ export class BottleneckTracker {
       if (this.pEnd[i] > this.settled && this.pEnd[i] < boundary) cuts[count++] = this.pEnd[i];
     }
     const points = cuts.subarray(0, count).sort();
+    const order = this.order.subarray(0, n);
+    for (let i = 0; i < n; i++) order[i] = i;
+    const starts = this.pStart;
+    order.sort((x, y) => starts[x] - starts[y]);
+    const covering = this.covering.fill(-1);
+    let next = 0;
     for (let k = 0; k + 1 < count; k++) {
       const a = points[k];
       const b = points[k + 1];
       if (b <= a) continue;
+      while (next < n && starts[order[next]] <= a) {
+        const i = order[next++];
+        if (this.pEnd[i] >= b) covering[this.pStation[i]] = i;
+      }
       let best = -1;
       let bestLen = -1;
-      for (let i = 0; i < n; i++) {
-        if (this.pStart[i] > a || this.pEnd[i] < b) continue;
-        const len = this.pEnd[i] - this.pStart[i];
-        if (len > bestLen || (len === bestLen && this.pStation[i] < this.pStation[best])) {
+      for (let s = 0; s < covering.length; s++) {
+        const i = covering[s];
+        if (i < 0) continue;
+        if (this.pEnd[i] < b) {
+          covering[s] = -1;
+          continue;
+        }
+        const len = this.pEnd[i] - starts[i];
+        if (len > bestLen) {
           best = i;
           bestLen = len;
         }
       }
-      if (best >= 0) this.extend(this.pStation[best], this.pStart[best], this.pEnd[best], a, b);
+      if (best >= 0) this.extend(this.pStation[best], starts[best], this.pEnd[best], a, b);
     }
   }
 

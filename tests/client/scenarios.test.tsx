@@ -1,3 +1,4 @@
+import { readdirSync } from 'node:fs';
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { apiRoutes } from '../../shared/api/routes';
@@ -51,6 +52,16 @@ describe('project page', () => {
     expect(sent.document.lanes.map((lane) => lane.id)).toEqual(stackedLoop.lanes.map((lane) => lane.id));
   });
 
+  it('offers every bundled example layout as a starting point', async () => {
+    mockApi(projectRoutes('engineer', []));
+    const { user } = renderApp(`/projects/${project().id}`);
+
+    await user.click(await screen.findByRole('button', { name: 'New scenario' }));
+    const group = screen.getByRole('group', { name: 'Example layouts' });
+    const exampleFiles = readdirSync('shared/examples').filter((name) => name.endsWith('.json'));
+    expect(within(group).getAllByRole('option')).toHaveLength(exampleFiles.length);
+  });
+
   it('lists server issues inside the document in the banner and keeps the form filled', async () => {
     mockApi({
       ...projectRoutes('engineer', []),
@@ -92,6 +103,12 @@ describe('scenario page', () => {
     expect(figure('Carriers')).toBe(String(stackedLoop.carriers.count));
     // Each lane of the example is eight 1000 mm modules.
     expect(figure('Track length')).toBe('16 m');
+    const { calendar } = stackedLoop;
+    expect(
+      screen.getByText(
+        `${calendar.shiftsPerDay} × ${calendar.hoursPerShift} h shifts, ${calendar.daysPerWeek} days a week, ${calendar.weeksPerYear} weeks a year, ${calendar.breaks.length} breaks per shift. Target takt ${stackedLoop.targetTaktSeconds} s.`,
+      ),
+    ).toBeTruthy();
     expect(await screen.findByRole('link', { name: 'Cartridge line 2' })).toBeTruthy();
 
     const history = await screen.findByRole('table', { name: 'Revision history' });

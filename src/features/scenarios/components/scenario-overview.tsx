@@ -8,13 +8,28 @@ import { DocumentFactsList } from './document-facts-list';
 import { ProcessOverview } from './process-overview';
 import { TrackOverview } from './track-overview';
 
-function CarrierSummary({ carriers }: { carriers: Scenario['carriers'] }) {
+const seconds = (value: number) => `${value.toLocaleString('en-GB', { maximumFractionDigits: 2 })} s`;
+
+function LineSummary({ document }: { document: Scenario }) {
+  const { carriers, conveyor, calendar, targetTaktSeconds } = document;
   return (
-    <p className="text-sm text-ink-soft">
-      {carriers.count} carriers, each {formatLengthMm(carriers.lengthMm)} long with at least {formatLengthMm(carriers.minGapMm)} between them;
-      top speed loaded {formatLengthMm(carriers.loaded.vMaxMmPerS)}/s
-      {carriers.empty ? `, empty ${formatLengthMm(carriers.empty.vMaxMmPerS)}/s` : ''}.
-    </p>
+    <ul className="flex flex-col gap-1 text-sm text-ink-soft">
+      <li>
+        {carriers.count} carriers, each {formatLengthMm(carriers.lengthMm)} long with at least {formatLengthMm(carriers.minGapMm)} between them; top
+        speed loaded {formatLengthMm(carriers.loaded.vMaxMmPerS)}/s{carriers.empty ? `, empty ${formatLengthMm(carriers.empty.vMaxMmPerS)}/s` : ''}.
+      </li>
+      {conveyor.kind === 'belt' && (
+        <li>
+          Baseline on a belt conveyor at {formatLengthMm(conveyor.speedMmPerS)}/s, {seconds(conveyor.stopAndLocateSeconds)} to stop and locate at each
+          station.
+        </li>
+      )}
+      <li>
+        {calendar.shiftsPerDay} × {calendar.hoursPerShift} h shifts, {calendar.daysPerWeek} days a week, {calendar.weeksPerYear} weeks a year
+        {calendar.breaks.length > 0 ? `, ${calendar.breaks.length} break${calendar.breaks.length === 1 ? '' : 's'} per shift` : ''}.
+        {targetTaktSeconds !== undefined && ` Target takt ${seconds(targetTaktSeconds)}.`}
+      </li>
+    </ul>
   );
 }
 
@@ -22,7 +37,7 @@ export function ScenarioOverview({ document }: { document: Scenario }) {
   return (
     <div className="flex flex-col gap-6">
       <DocumentFactsList facts={documentFacts(document)} />
-      <CarrierSummary carriers={document.carriers} />
+      <LineSummary document={document} />
       <div className="grid items-start gap-6 lg:grid-cols-2">
         <TitledCard title="Track">
           <TrackOverview document={document} />

@@ -36,7 +36,8 @@ export type RunHooks = {
 export const RESULT_TIME_BINS = 96;
 export const RESULT_POSITION_BINS = 48;
 const SLICE_MS = 50;
-const DEFAULT_EVENT_BUDGET = 200_000_000;
+/** Far above a year of a large line (about 3 × 10^8 events); the wall-clock budget is the usual limit. */
+const DEFAULT_EVENT_BUDGET = 5_000_000_000;
 
 export class InvalidInputError extends Error {
   override readonly name = 'InvalidInputError';

@@ -1,9 +1,23 @@
 // Self-checks of the line model, switched on in tests: carriers never overlap or leave their lane,
 // no carrier is lost or duplicated, and WIP equals the carriers holding a part.
 import { positionAt } from './lanes';
-import { PH_TRANSFER, type LineState } from './state';
+import { PH_MOVING, PH_TRANSFER, type LineState } from './state';
 
 const EPS_MM = 1e-6;
+
+/** Moves are never re-planned before they end, so the pair's future positions up to the first arrival are known. */
+function checkPair(m: LineState, ahead: number, behind: number, lane: number): void {
+  const until = Math.min(m.cPhase[ahead] === PH_MOVING ? m.cMoveEnd[ahead] : Infinity, m.cPhase[behind] === PH_MOVING ? m.cMoveEnd[behind] : Infinity);
+  const horizon = Number.isFinite(until) ? until - m.now : 0;
+  for (let k = 0; k <= 4; k++) {
+    const t = m.now + (horizon * k) / 4;
+    const clearance = positionAt(m, ahead, t) - positionAt(m, behind, t);
+    if (clearance < m.line.pitchMm - EPS_MM) {
+      throw new Error(`invariant: carriers ${ahead} and ${behind} on lane ${lane} are ${clearance} mm apart, less than ${m.line.pitchMm} mm, at t=${t}`);
+    }
+    if (horizon === 0) return;
+  }
+}
 
 export function checkInvariants(m: LineState): void {
   const line = m.line;
@@ -18,12 +32,7 @@ export function checkInvariants(m: LineState): void {
       if (head < line.carrierLengthMm - EPS_MM || head > line.laneLengthMm[lane] + EPS_MM) {
         throw new Error(`invariant: carrier ${c} front at ${head} mm is off lane ${lane} (length ${line.laneLengthMm[lane]} mm) at t=${m.now}`);
       }
-      if (previous >= 0) {
-        const clearance = positionAt(m, previous, m.now) - head;
-        if (clearance < line.pitchMm - EPS_MM) {
-          throw new Error(`invariant: carriers ${previous} and ${c} on lane ${lane} are ${clearance} mm apart, less than ${line.pitchMm} mm, at t=${m.now}`);
-        }
-      }
+      if (previous >= 0) checkPair(m, previous, c, lane);
       previous = c;
     }
     if (count !== m.laneCarriers[lane]) throw new Error(`invariant: lane ${lane} counts ${m.laneCarriers[lane]} carriers but lists ${count}`);

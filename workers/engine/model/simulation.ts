@@ -169,6 +169,13 @@ export class Replication {
     }
   }
 
+  /** With nothing pending that can change the line and no break to end, nothing ever will. */
+  private checkGridlock(): void {
+    const m = this.state;
+    if (this.done || m.activePending > 0 || m.breakActive) return;
+    throw new SimulationStoppedError('gridlock', `gridlock at t=${m.now.toFixed(1)} s: no carrier can move and no station is working`, gridlockReport(m));
+  }
+
   /**
    * Runs events until the replication ends (returns true) or shouldYield, asked every 1024 events,
    * says to hand control back (returns false; call again to continue).
@@ -176,6 +183,7 @@ export class Replication {
   run(shouldYield: () => boolean): boolean {
     const m = this.state;
     const q = m.queue;
+    this.checkGridlock();
     while (!this.done && q.pop()) {
       const t = q.popTime;
       const kind = q.popKind;
@@ -195,9 +203,7 @@ export class Replication {
       this.handle(kind, q.popA, q.popB);
       settle(m);
       if (this.config.checkInvariants) checkInvariants(m);
-      if (m.activePending === 0 && !m.breakActive) {
-        throw new SimulationStoppedError('gridlock', `gridlock at t=${m.now.toFixed(1)} s: no carrier can move and no station is working`, gridlockReport(m));
-      }
+      this.checkGridlock();
       if (this.events > this.config.eventBudget) {
         throw new SimulationStoppedError('eventBudget', `stopped after ${this.config.eventBudget} events, the budget for one replication, at t=${m.now.toFixed(1)} s; shorten the run or raise the budget`);
       }

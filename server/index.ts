@@ -3,6 +3,7 @@ import { once } from 'node:events';
 import type { AddressInfo } from 'node:net';
 import type { DataSource } from 'typeorm';
 import { createApp } from './app';
+import { sweepExpiredSessions } from './auth/session-sweeper';
 import { loadConfig } from './config';
 
 export interface StartServerOptions {
@@ -25,12 +26,14 @@ export async function startServer(opts: StartServerOptions): Promise<RunningServ
   const app = createApp({ dataSource: opts.dataSource, clientDir: opts.clientDir, publicOrigin: opts.publicOrigin ?? config.PUBLIC_ORIGIN });
   const server = app.listen(opts.port, opts.host);
   await once(server, 'listening');
+  const stopSweeping = sweepExpiredSessions(opts.dataSource);
   const { port } = server.address() as AddressInfo;
   const host = opts.host.includes(':') ? `[${opts.host}]` : opts.host;
   return {
     url: `http://${host}:${port}`,
     close: () =>
       new Promise<void>((resolve, reject) => {
+        stopSweeping();
         server.close((error) => (error ? reject(error) : resolve()));
         server.closeAllConnections();
       }),

@@ -14,7 +14,7 @@ export function createDataSource(url: string): DataSource {
     synchronize: false,
     migrationsRun: false,
     uuidExtension: 'pgcrypto',
-    logging: ['error'],
+    logging: false,
     extra: { max: 10 },
   });
 }

@@ -3,6 +3,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import { toFieldIssues, type ApiError } from '../../shared/api/errors';
+import { isUniqueViolation } from '../db/query-errors';
 import { HttpError } from './http-error';
 import { JSON_BODY_LIMIT_BYTES } from './limits';
 
@@ -35,7 +36,10 @@ function toHttpError(err: unknown): HttpError {
   if (err instanceof ZodError) return new HttpError(400, 'bad_request', 'Invalid input.', toFieldIssues(err));
   const parsed = bodyParserError(err);
   if (parsed) return parsed;
-  console.error('Unexpected server error:', err);
+  // Two requests created the same unique thing at once; the loser hears what a later request would.
+  if (isUniqueViolation(err)) return new HttpError(409, 'conflict', 'This already exists; reload and try again.');
+  // The stack only: a failed query's error object carries its parameters, which may hold personal data.
+  console.error('Unexpected server error:', err instanceof Error ? err.stack : String(err));
   return new HttpError(500, 'internal', 'Something went wrong on the server; the error has been logged.');
 }
 

@@ -10,13 +10,27 @@ type Parsed<S extends Schemas> = { [K in keyof S]: S[K] extends z.ZodType ? z.ou
 
 const where = { params: 'in the address', query: 'in the query string', body: 'in the request body' } as const;
 
+function valueAt(value: unknown, path: readonly PropertyKey[]): unknown {
+  let current = value;
+  for (const key of path) {
+    if (current === null || typeof current !== 'object') return undefined;
+    current = (current as Record<PropertyKey, unknown>)[key];
+  }
+  return current;
+}
+
 export function parseInput<S extends z.ZodType>(schema: S, value: unknown, part: keyof typeof where): z.output<S> {
   if (part === 'body' && value === undefined) {
     throw badRequest('This request needs a JSON body sent with Content-Type: application/json.', [{ path: '', message: 'is required' }]);
   }
   const result = schema.safeParse(value ?? {});
   if (result.success) return result.data;
-  const fields = toFieldIssues(result.error);
+  const fields = toFieldIssues(result.error).map((field, i) => {
+    const issue = result.error.issues[i];
+    // Schemas give one message per type check ("must be text"); a field that is absent is better told so.
+    const absent = ['invalid_type', 'invalid_value', 'invalid_union'].includes(issue.code) && valueAt(value, issue.path) === undefined;
+    return absent ? { ...field, message: 'is required' } : field;
+  });
   const summary = fields.map((f) => (f.path ? `${f.path} ${f.message}` : f.message)).join('; ');
   throw badRequest(`Invalid input ${where[part]}: ${summary}`, fields);
 }

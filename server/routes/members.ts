@@ -1,12 +1,12 @@
 // Organisation members. Every member may see the list; owners add, re-role and remove members. An
 // organisation always keeps at least one owner, so it can never be left unmanageable.
-import express, { type RequestHandler } from 'express';
+import express, { type Request, type RequestHandler } from 'express';
 import type { EntityManager } from 'typeorm';
 import { addMemberSchema, memberParamsSchema, updateMemberSchema } from '../../shared/api/members';
 import { loadOrganisation } from '../access/loaders';
 import { requireRole } from '../access/require-role';
 import type { AppContext } from '../app-context';
-import { recordAudit } from '../audit/record-audit';
+import { audited, type AuditInput } from '../audit/record-audit';
 import { MembershipEntity, UserEntity } from '../db/entities';
 import { conflict, HttpError, notFound } from '../http/http-error';
 import { currentUser, loaded } from '../http/request-context';
@@ -14,11 +14,15 @@ import { parseInput, validate } from '../http/validate';
 import { toMember } from '../mappers/organisations';
 
 /** Locks the organisation's owner rows so two owners cannot demote each other at the same moment. */
-async function assertAnotherOwnerRemains(manager: EntityManager, organisationId: string, userId: string): Promise<void> {
+async function assertAnotherOwnerRemains(manager: EntityManager, { organisationId, userId }: MembershipEntity): Promise<void> {
   const owners = await manager.getRepository(MembershipEntity).find({ where: { organisationId, role: 'owner' }, lock: { mode: 'pessimistic_write' } });
   if (owners.length === 1 && owners[0].userId === userId) {
     throw conflict('An organisation needs at least one owner; make another member an owner first.', [{ path: 'role', message: 'cannot change for the last owner' }]);
   }
+}
+
+function memberAudit(req: Request, membership: MembershipEntity, action: 'member-update' | 'member-remove', detail: Record<string, unknown>): AuditInput {
+  return { organisationId: membership.organisationId, actorId: currentUser(req).id, action, entity: 'member', entityId: membership.userId, detail };
 }
 
 export function membersRouter(ctx: AppContext) {
@@ -49,9 +53,13 @@ export function membersRouter(ctx: AppContext) {
       if (!user) throw new HttpError(404, 'not_found', 'No Lanewright account uses this e-mail; ask them to sign up first.', [{ path: 'email', message: 'has no account' }]);
       const exists = await ds.getRepository(MembershipEntity).existsBy({ organisationId: organisation.id, userId: user.id });
       if (exists) throw conflict(`${user.email} is already a member; change their role instead.`, [{ path: 'email', message: 'is already a member' }]);
-      await ds.transaction(async (manager) => {
-        await manager.getRepository(MembershipEntity).insert({ organisationId: organisation.id, userId: user.id, role: body.role });
-        await recordAudit(manager, { organisationId: organisation.id, actorId: currentUser(req).id, action: 'member-add', entity: 'member', entityId: user.id, detail: { email: user.email, role: body.role } });
+      await audited(ds, (manager) => manager.getRepository(MembershipEntity).insert({ organisationId: organisation.id, userId: user.id, role: body.role }), {
+        organisationId: organisation.id,
+        actorId: currentUser(req).id,
+        action: 'member-add',
+        entity: 'member',
+        entityId: user.id,
+        detail: { email: user.email, role: body.role },
       });
       const created = await ds.getRepository(MembershipEntity).findOneOrFail({ where: { organisationId: organisation.id, userId: user.id }, relations: { user: true } });
       res.status(201).json(toMember(created));
@@ -65,22 +73,29 @@ export function membersRouter(ctx: AppContext) {
     loadMember,
     validate({ body: updateMemberSchema }, async ({ body }, req, res) => {
       const membership = memberOf(res);
-      await ds.transaction(async (manager) => {
-        if (membership.role === 'owner' && body.role !== 'owner') await assertAnotherOwnerRemains(manager, membership.organisationId, membership.userId);
-        await manager.getRepository(MembershipEntity).update({ organisationId: membership.organisationId, userId: membership.userId }, { role: body.role });
-        await recordAudit(manager, { organisationId: membership.organisationId, actorId: currentUser(req).id, action: 'member-update', entity: 'member', entityId: membership.userId, detail: { from: membership.role, to: body.role } });
-      });
+      const key = { organisationId: membership.organisationId, userId: membership.userId };
+      await audited(
+        ds,
+        async (manager) => {
+          if (membership.role === 'owner' && body.role !== 'owner') await assertAnotherOwnerRemains(manager, membership);
+          await manager.getRepository(MembershipEntity).update(key, { role: body.role });
+        },
+        memberAudit(req, membership, 'member-update', { from: membership.role, to: body.role }),
+      );
       res.json(toMember({ ...membership, role: body.role }));
     }),
   );
 
   router.delete('/organisations/:id/members/:userId', loadOrganisation(ctx), requireRole('owner'), loadMember, async (req, res) => {
     const membership = memberOf(res);
-    await ds.transaction(async (manager) => {
-      if (membership.role === 'owner') await assertAnotherOwnerRemains(manager, membership.organisationId, membership.userId);
-      await manager.getRepository(MembershipEntity).delete({ organisationId: membership.organisationId, userId: membership.userId });
-      await recordAudit(manager, { organisationId: membership.organisationId, actorId: currentUser(req).id, action: 'member-remove', entity: 'member', entityId: membership.userId, detail: { email: membership.user?.email, role: membership.role } });
-    });
+    await audited(
+      ds,
+      async (manager) => {
+        if (membership.role === 'owner') await assertAnotherOwnerRemains(manager, membership);
+        await manager.getRepository(MembershipEntity).delete({ organisationId: membership.organisationId, userId: membership.userId });
+      },
+      memberAudit(req, membership, 'member-remove', { email: membership.user?.email, role: membership.role }),
+    );
     res.json({ ok: true });
   });
 

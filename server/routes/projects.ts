@@ -7,7 +7,7 @@ import { loadProject } from '../access/loaders';
 import { membershipsOf, roleIn } from '../access/membership';
 import { requireRole, requireSignedIn } from '../access/require-role';
 import type { AppContext } from '../app-context';
-import { recordAudit } from '../audit/record-audit';
+import { audited } from '../audit/record-audit';
 import { ProjectEntity, ScenarioEntity } from '../db/entities';
 import { forbidden, notFound } from '../http/http-error';
 import { currentUser, loaded } from '../http/request-context';
@@ -70,11 +70,11 @@ export function projectsRouter(ctx: AppContext) {
         if (!organisationId) throw forbidden('You are not an engineer or owner in any organisation, so you cannot create projects.');
       }
       const orgId = organisationId;
-      const project = await ds.transaction(async (manager) => {
-        const saved = await manager.getRepository(ProjectEntity).save({ organisationId: orgId, name: body.name, description: body.description ?? '', createdById: user.id });
-        await recordAudit(manager, { organisationId: orgId, actorId: user.id, action: 'create', entity: 'project', entityId: saved.id, detail: { name: saved.name } });
-        return saved;
-      });
+      const project = await audited(
+        ds,
+        (manager) => manager.getRepository(ProjectEntity).save({ organisationId: orgId, name: body.name, description: body.description ?? '', createdById: user.id }),
+        (saved) => ({ organisationId: orgId, actorId: user.id, action: 'create', entity: 'project', entityId: saved.id, detail: { name: saved.name } }),
+      );
       res.status(201).json(await projectView(ds, project.id));
     }),
   );
@@ -89,10 +89,13 @@ export function projectsRouter(ctx: AppContext) {
     requireRole('engineer'),
     validate({ body: updateProjectSchema }, async ({ body }, req, res) => {
       const project = loaded(req, 'project');
-      const user = currentUser(req);
-      await ds.transaction(async (manager) => {
-        await manager.getRepository(ProjectEntity).update({ id: project.id }, body);
-        await recordAudit(manager, { organisationId: project.organisationId, actorId: user.id, action: 'update', entity: 'project', entityId: project.id, detail: { ...body } });
+      await audited(ds, (manager) => manager.getRepository(ProjectEntity).update({ id: project.id }, body), {
+        organisationId: project.organisationId,
+        actorId: currentUser(req).id,
+        action: 'update',
+        entity: 'project',
+        entityId: project.id,
+        detail: { ...body },
       });
       res.json(await projectView(ds, project.id));
     }),
@@ -100,10 +103,13 @@ export function projectsRouter(ctx: AppContext) {
 
   router.delete('/projects/:id', loadProject(ctx), requireRole('engineer'), async (req, res) => {
     const project = loaded(req, 'project');
-    const user = currentUser(req);
-    await ds.transaction(async (manager) => {
-      await manager.getRepository(ProjectEntity).delete({ id: project.id });
-      await recordAudit(manager, { organisationId: project.organisationId, actorId: user.id, action: 'delete', entity: 'project', entityId: project.id, detail: { name: project.name } });
+    await audited(ds, (manager) => manager.getRepository(ProjectEntity).delete({ id: project.id }), {
+      organisationId: project.organisationId,
+      actorId: currentUser(req).id,
+      action: 'delete',
+      entity: 'project',
+      entityId: project.id,
+      detail: { name: project.name },
     });
     res.json({ ok: true });
   });

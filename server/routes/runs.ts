@@ -1,14 +1,14 @@
 // Stored runs. Saving is idempotent on the client's run id: a retried save returns the first run (200)
 // instead of creating a second (201). Renaming and deleting are for owners and the run's author.
-import express, { type RequestHandler } from 'express';
-import { QueryFailedError } from 'typeorm';
+import express, { type Request, type RequestHandler } from 'express';
 import { createRunSchema, listRunsQuerySchema, updateRunSchema } from '../../shared/api/runs';
 import { canEdit } from '../../shared/api/roles';
 import { loadProject, loadRun, loadScenario } from '../access/loaders';
 import { requireRole } from '../access/require-role';
 import type { AppContext } from '../app-context';
-import { recordAudit } from '../audit/record-audit';
+import { audited, type AuditInput } from '../audit/record-audit';
 import { RunEntity, ScenarioRevisionEntity } from '../db/entities';
+import { isUniqueViolation } from '../db/query-errors';
 import { badRequest, conflict, forbidden } from '../http/http-error';
 import { currentUser, loaded } from '../http/request-context';
 import { validate } from '../http/validate';
@@ -22,7 +22,10 @@ const requireRunAuthorOrOwner: RequestHandler = (req, _res, next) => {
   next(forbidden('Only the run’s author or an organisation owner may rename or delete this run.'));
 };
 
-const isUniqueViolation = (error: unknown) => error instanceof QueryFailedError && (error.driverError as { code?: string }).code === '23505';
+function runAudit(req: Request, action: 'update' | 'delete', detail: Record<string, unknown>): AuditInput {
+  const run = loaded(req, 'run');
+  return { organisationId: run.scenario?.project?.organisationId ?? null, actorId: currentUser(req).id, action, entity: 'run', entityId: run.id, detail };
+}
 
 export function runsRouter(ctx: AppContext) {
   const { ds } = ctx;
@@ -65,26 +68,27 @@ export function runsRouter(ctx: AppContext) {
       if (!revision) throw badRequest('The revision does not belong to this scenario.', [{ path: 'revisionId', message: 'is not a revision of this scenario' }]);
       const { summary, seed, engineVersion } = summariseRun(body.settings, body.results);
       try {
-        const runId = await ds.transaction(async (manager) => {
-          const run = await manager.getRepository(RunEntity).save({
-            scenarioId: scenario.id,
-            revisionId: revision.id,
-            clientRunId: body.clientRunId,
-            name: body.name ?? `${scenario.name}, revision ${revision.number}`,
-            settings: body.settings,
-            seed,
-            engineVersion,
-            throughputPerHourMean: summary.throughputPerHour.mean,
-            taktSecondsMean: summary.taktSeconds.mean,
-            carriers: summary.carriers,
-            summary,
-            results: body.results,
-            createdById: user.id,
-          });
-          await recordAudit(manager, { organisationId: scenario.project?.organisationId ?? null, actorId: user.id, action: 'run', entity: 'run', entityId: run.id, detail: { scenarioId: scenario.id, revisionNumber: revision.number } });
-          return run.id;
-        });
-        res.status(201).json(await runListItem(ds, runId));
+        const run = await audited(
+          ds,
+          (manager) =>
+            manager.getRepository(RunEntity).save({
+              scenarioId: scenario.id,
+              revisionId: revision.id,
+              clientRunId: body.clientRunId,
+              name: body.name ?? `${scenario.name}, revision ${revision.number}`,
+              settings: body.settings,
+              seed,
+              engineVersion,
+              throughputPerHourMean: summary.throughputPerHour.mean,
+              taktSecondsMean: summary.taktSeconds.mean,
+              carriers: summary.carriers,
+              summary,
+              results: body.results,
+              createdById: user.id,
+            }),
+          (saved) => ({ organisationId: scenario.project?.organisationId ?? null, actorId: user.id, action: 'run', entity: 'run', entityId: saved.id, detail: { scenarioId: scenario.id, revisionNumber: revision.number } }),
+        );
+        res.status(201).json(await runListItem(ds, run.id));
       } catch (error) {
         // Two attempts raced past the first lookup; the loser answers like any retry.
         const winner = isUniqueViolation(error) ? await findExisting() : null;
@@ -104,20 +108,14 @@ export function runsRouter(ctx: AppContext) {
     requireRunAuthorOrOwner,
     validate({ body: updateRunSchema }, async ({ body }, req, res) => {
       const run = loaded(req, 'run');
-      await ds.transaction(async (manager) => {
-        await manager.getRepository(RunEntity).update({ id: run.id }, { name: body.name });
-        await recordAudit(manager, { organisationId: run.scenario?.project?.organisationId ?? null, actorId: currentUser(req).id, action: 'update', entity: 'run', entityId: run.id, detail: { name: body.name } });
-      });
+      await audited(ds, (manager) => manager.getRepository(RunEntity).update({ id: run.id }, { name: body.name }), runAudit(req, 'update', { name: body.name }));
       res.json(await runListItem(ds, run.id));
     }),
   );
 
   router.delete('/runs/:id', loadRun(ctx), requireRunAuthorOrOwner, async (req, res) => {
     const run = loaded(req, 'run');
-    await ds.transaction(async (manager) => {
-      await manager.getRepository(RunEntity).delete({ id: run.id });
-      await recordAudit(manager, { organisationId: run.scenario?.project?.organisationId ?? null, actorId: currentUser(req).id, action: 'delete', entity: 'run', entityId: run.id, detail: { name: run.name } });
-    });
+    await audited(ds, (manager) => manager.getRepository(RunEntity).delete({ id: run.id }), runAudit(req, 'delete', { name: run.name }));
     res.json({ ok: true });
   });
 

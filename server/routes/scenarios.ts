@@ -5,7 +5,7 @@ import { createScenarioSchema, updateScenarioSchema } from '../../shared/api/sce
 import { loadProject, loadScenario } from '../access/loaders';
 import { requireRole } from '../access/require-role';
 import type { AppContext } from '../app-context';
-import { recordAudit } from '../audit/record-audit';
+import { audited } from '../audit/record-audit';
 import { ScenarioEntity } from '../db/entities';
 import { createScenarioWithFirstRevision } from '../scenarios/create-scenario';
 import { currentUser, loaded } from '../http/request-context';
@@ -29,12 +29,12 @@ export function scenariosRouter(ctx: AppContext) {
     validate({ body: createScenarioSchema }, async ({ body }, req, res) => {
       const project = loaded(req, 'project');
       const user = currentUser(req);
-      const scenarioId = await ds.transaction(async (manager) => {
-        const scenario = await createScenarioWithFirstRevision(manager, { projectId: project.id, name: body.name, description: body.description ?? '', document: body.document, message: 'Created', createdById: user.id });
-        await recordAudit(manager, { organisationId: project.organisationId, actorId: user.id, action: 'create', entity: 'scenario', entityId: scenario.id, detail: { name: scenario.name, projectId: project.id } });
-        return scenario.id;
-      });
-      res.status(201).json(await scenarioDetail(ds, scenarioId));
+      const scenario = await audited(
+        ds,
+        (manager) => createScenarioWithFirstRevision(manager, { projectId: project.id, name: body.name, description: body.description ?? '', document: body.document, message: 'Created', createdById: user.id }),
+        (created) => ({ organisationId: project.organisationId, actorId: user.id, action: 'create', entity: 'scenario', entityId: created.id, detail: { name: created.name, projectId: project.id } }),
+      );
+      res.status(201).json(await scenarioDetail(ds, scenario.id));
     }),
   );
 
@@ -48,10 +48,13 @@ export function scenariosRouter(ctx: AppContext) {
     requireRole('engineer'),
     validate({ body: updateScenarioSchema }, async ({ body }, req, res) => {
       const scenario = loaded(req, 'scenario');
-      const user = currentUser(req);
-      await ds.transaction(async (manager) => {
-        await manager.getRepository(ScenarioEntity).update({ id: scenario.id }, body);
-        await recordAudit(manager, { organisationId: scenario.project?.organisationId ?? null, actorId: user.id, action: 'update', entity: 'scenario', entityId: scenario.id, detail: { ...body } });
+      await audited(ds, (manager) => manager.getRepository(ScenarioEntity).update({ id: scenario.id }, body), {
+        organisationId: scenario.project?.organisationId ?? null,
+        actorId: currentUser(req).id,
+        action: 'update',
+        entity: 'scenario',
+        entityId: scenario.id,
+        detail: { ...body },
       });
       res.json(await scenarioDetail(ds, scenario.id));
     }),
@@ -59,10 +62,13 @@ export function scenariosRouter(ctx: AppContext) {
 
   router.delete('/scenarios/:id', loadScenario(ctx), requireRole('engineer'), async (req, res) => {
     const scenario = loaded(req, 'scenario');
-    const user = currentUser(req);
-    await ds.transaction(async (manager) => {
-      await manager.getRepository(ScenarioEntity).delete({ id: scenario.id });
-      await recordAudit(manager, { organisationId: scenario.project?.organisationId ?? null, actorId: user.id, action: 'delete', entity: 'scenario', entityId: scenario.id, detail: { name: scenario.name } });
+    await audited(ds, (manager) => manager.getRepository(ScenarioEntity).delete({ id: scenario.id }), {
+      organisationId: scenario.project?.organisationId ?? null,
+      actorId: currentUser(req).id,
+      action: 'delete',
+      entity: 'scenario',
+      entityId: scenario.id,
+      detail: { name: scenario.name },
     });
     res.json({ ok: true });
   });

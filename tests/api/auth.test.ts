@@ -2,10 +2,10 @@
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { SessionEntity, UserEntity } from '../../server/db/entities';
-import { useTestDatabase } from '../support/db';
+import { useCleanDatabase } from './fixtures/database';
 import { appFor, PASSWORD, signUp, uniqueEmail } from './fixtures/app';
 
-const db = useTestDatabase();
+const db = useCleanDatabase();
 
 function sessionCookie(res: request.Response): string {
   const cookies = ([] as string[]).concat(res.headers['set-cookie'] ?? []);

@@ -1,14 +1,13 @@
 // Who may call what: every API route, called by an anonymous visitor, a member of another organisation,
 // a viewer, an engineer and an owner, each with the status the role rules give. Ids of another
 // organisation answer 404, never 403, so they reveal nothing.
-import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { apiRoutes } from '../../shared/api/routes';
-import { useTestDatabase } from '../support/db';
-import { appFor } from './fixtures/app';
+import { useCleanDatabase } from './fixtures/database';
 import { stackedLoop } from './fixtures/documents';
-import { ACTORS, createPeople, freshContent, resetMemberships, runBody, type Actor, type Content, type People } from './fixtures/world';
+import { ACTORS, runBody, useOrganisation, type Actor, type Content, type People } from './fixtures/world';
 
-const db = useTestDatabase({ truncate: false });
+const db = useCleanDatabase({ truncate: false });
 
 type Method = 'get' | 'post' | 'patch' | 'delete';
 type Statuses = Record<Actor, number>;
@@ -55,17 +54,7 @@ const cases: RouteCase[] = [
   { route: 'audit', method: 'get', path: (p) => apiRoutes.audit(p.organisationId), expected: manage },
 ];
 
-let people: People;
-let content: Content;
-
-beforeAll(async () => {
-  people = await createPeople(appFor(db()));
-});
-
-beforeEach(async () => {
-  await resetMemberships(db(), people);
-  content = await freshContent(people);
-});
+const org = useOrganisation(db);
 
 describe('role matrix', () => {
   it('covers every route except sign-up, sign-in and sign-out (tested in auth.test.ts)', () => {
@@ -76,10 +65,10 @@ describe('role matrix', () => {
 
   const rows = cases.flatMap((c) => ACTORS.map((actor) => ({ ...c, actor, status: c.expected[actor] })));
   it.each(rows)('$method $route as $actor answers $status', async ({ method, path, body, actor, status }) => {
-    const agent = people.as(actor);
-    const url = path(people, content);
+    const agent = org.people.as(actor);
+    const url = path(org.people, org.content);
     const call = agent[method](url);
-    const res = body ? await call.send(body(people, content)) : await call;
+    const res = body ? await call.send(body(org.people, org.content)) : await call;
     expect(res.status, `${method.toUpperCase()} ${url}: ${JSON.stringify(res.body).slice(0, 300)}`).toBe(status);
     expect(res.headers['content-type']).toMatch(/application\/json/);
     if (status >= 400) expect(res.body.error.code).toBe({ 401: 'unauthenticated', 403: 'forbidden', 404: 'not_found' }[status]);
@@ -88,45 +77,44 @@ describe('role matrix', () => {
 
 describe('what the role rules imply beyond the table', () => {
   it('lists never show another organisation’s projects', async () => {
-    const res = await people.outsider.agent.get(apiRoutes.projects);
+    const res = await org.people.outsider.agent.get(apiRoutes.projects);
     expect(res.status).toBe(200);
-    expect(res.body.map((p: { id: string }) => p.id)).not.toContain(content.projectId);
-    const own = await people.viewer.agent.get(apiRoutes.projects);
-    expect(own.body.map((p: { id: string }) => p.id)).toContain(content.projectId);
+    expect(res.body.map((p: { id: string }) => p.id)).not.toContain(org.content.projectId);
+    const own = await org.people.viewer.agent.get(apiRoutes.projects);
+    expect(own.body.map((p: { id: string }) => p.id)).toContain(org.content.projectId);
   });
 
   it('an engineer who did not make a run may not rename or delete it', async () => {
-    await resetMemberships(db(), people);
-    const other = await people.owner.agent.post(apiRoutes.scenarioRuns(content.scenarioId)).send(runBody(content.revisionId));
+    const other = await org.people.owner.agent.post(apiRoutes.scenarioRuns(org.content.scenarioId)).send(runBody(org.content.revisionId));
     expect(other.status).toBe(201);
-    expect((await people.engineer.agent.patch(apiRoutes.run(other.body.id)).send({ name: 'Mine now' })).status).toBe(403);
-    expect((await people.engineer.agent.delete(apiRoutes.run(other.body.id))).status).toBe(403);
+    expect((await org.people.engineer.agent.patch(apiRoutes.run(other.body.id)).send({ name: 'Mine now' })).status).toBe(403);
+    expect((await org.people.engineer.agent.delete(apiRoutes.run(other.body.id))).status).toBe(403);
   });
 
   it('the last owner can be neither demoted nor removed', async () => {
-    const demote = await people.owner.agent.patch(apiRoutes.member(people.organisationId, people.owner.id)).send({ role: 'engineer' });
+    const demote = await org.people.owner.agent.patch(apiRoutes.member(org.people.organisationId, org.people.owner.id)).send({ role: 'engineer' });
     expect(demote.status).toBe(409);
     expect(demote.body.error.code).toBe('conflict');
-    const remove = await people.owner.agent.delete(apiRoutes.member(people.organisationId, people.owner.id));
+    const remove = await org.people.owner.agent.delete(apiRoutes.member(org.people.organisationId, org.people.owner.id));
     expect(remove.status).toBe(409);
-    await people.owner.agent.patch(apiRoutes.member(people.organisationId, people.engineer.id)).send({ role: 'owner' });
-    const nowAllowed = await people.owner.agent.patch(apiRoutes.member(people.organisationId, people.owner.id)).send({ role: 'engineer' });
+    await org.people.owner.agent.patch(apiRoutes.member(org.people.organisationId, org.people.engineer.id)).send({ role: 'owner' });
+    const nowAllowed = await org.people.owner.agent.patch(apiRoutes.member(org.people.organisationId, org.people.owner.id)).send({ role: 'engineer' });
     expect(nowAllowed.status).toBe(200);
   });
 
   it('creating a project without an organisation picks the caller’s first one where they may edit', async () => {
-    const res = await people.engineer.agent.post(apiRoutes.projects).send({ name: 'Default organisation' });
+    const res = await org.people.engineer.agent.post(apiRoutes.projects).send({ name: 'Default organisation' });
     expect(res.status).toBe(201);
-    expect(res.body.organisationId).toBe(people.engineer.organisationId);
+    expect(res.body.organisationId).toBe(org.people.engineer.organisationId);
   });
 
   it('writes audit rows for changes, readable by owners', async () => {
-    await people.engineer.agent.patch(apiRoutes.project(content.projectId)).send({ name: 'Audited' });
-    const res = await people.owner.agent.get(apiRoutes.audit(people.organisationId)).query({ limit: 5 });
+    await org.people.engineer.agent.patch(apiRoutes.project(org.content.projectId)).send({ name: 'Audited' });
+    const res = await org.people.owner.agent.get(apiRoutes.audit(org.people.organisationId)).query({ limit: 5 });
     expect(res.status).toBe(200);
     expect(res.body).toHaveLength(5);
-    expect(res.body[0]).toMatchObject({ action: 'update', entity: 'project', entityId: content.projectId, actor: { id: people.engineer.id }, detail: { name: 'Audited' } });
-    const actions = (await people.owner.agent.get(apiRoutes.audit(people.organisationId)).query({ limit: 200 })).body.map((e: { action: string; entity: string }) => `${e.action} ${e.entity}`);
+    expect(res.body[0]).toMatchObject({ action: 'update', entity: 'project', entityId: org.content.projectId, actor: { id: org.people.engineer.id }, detail: { name: 'Audited' } });
+    const actions = (await org.people.owner.agent.get(apiRoutes.audit(org.people.organisationId)).query({ limit: 200 })).body.map((e: { action: string; entity: string }) => `${e.action} ${e.entity}`);
     expect(actions).toEqual(expect.arrayContaining(['create project', 'create scenario', 'run run', 'member-add member']));
   });
 });

@@ -1,14 +1,11 @@
 // A line-design job inside an organisation; deleting it removes its scenarios, revisions and runs.
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
+import { EditableRecord } from './authored';
 import { OrganisationEntity } from './organisation.entity';
-import { UserEntity } from './user.entity';
 
 @Entity({ name: 'projects' })
 @Index('IDX_projects_organisation_updated', ['organisationId', 'updatedAt'])
-export class ProjectEntity {
-  @PrimaryGeneratedColumn('uuid')
-  id!: string;
-
+export class ProjectEntity extends EditableRecord {
   @Column({ type: 'uuid', name: 'organisation_id' })
   organisationId!: string;
 
@@ -21,17 +18,4 @@ export class ProjectEntity {
 
   @Column({ type: 'text', default: '' })
   description!: string;
-
-  @Column({ type: 'uuid', name: 'created_by_id', nullable: true })
-  createdById!: string | null;
-
-  @ManyToOne(() => UserEntity, { onDelete: 'SET NULL', nullable: true })
-  @JoinColumn({ name: 'created_by_id' })
-  createdBy?: UserEntity | null;
-
-  @CreateDateColumn({ type: 'timestamptz', name: 'created_at' })
-  createdAt!: Date;
-
-  @UpdateDateColumn({ type: 'timestamptz', name: 'updated_at' })
-  updatedAt!: Date;
 }

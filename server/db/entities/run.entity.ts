@@ -1,22 +1,19 @@
 // A stored simulation run, tied to the exact revision it was computed from. Headline numbers sit in plain
 // columns so lists sort and filter without reading the bulky `results` JSON, which list queries never select.
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique, UpdateDateColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, Unique } from 'typeorm';
+import { EditableRecord } from './authored';
 import type { RunSummary } from '../../../shared/api/runs';
 import type { RunResult } from '../../../shared/results/run-result';
 import type { RunSettings } from '../../../shared/scenario/run-settings';
 import { ScenarioRevisionEntity } from './scenario-revision.entity';
 import { ScenarioEntity } from './scenario.entity';
-import { UserEntity } from './user.entity';
 
 @Entity({ name: 'runs' })
 @Unique('UQ_runs_scenario_client_run', ['scenarioId', 'clientRunId'])
 @Index('IDX_runs_scenario_created', ['scenarioId', 'createdAt'])
 @Index('IDX_runs_revision', ['revisionId'])
 @Index('IDX_runs_created_by', ['createdById'])
-export class RunEntity {
-  @PrimaryGeneratedColumn('uuid')
-  id!: string;
-
+export class RunEntity extends EditableRecord {
   @Column({ type: 'uuid', name: 'scenario_id' })
   scenarioId!: string;
 
@@ -61,17 +58,4 @@ export class RunEntity {
 
   @Column({ type: 'jsonb', select: false })
   results!: RunResult;
-
-  @Column({ type: 'uuid', name: 'created_by_id', nullable: true })
-  createdById!: string | null;
-
-  @ManyToOne(() => UserEntity, { onDelete: 'SET NULL', nullable: true })
-  @JoinColumn({ name: 'created_by_id' })
-  createdBy?: UserEntity | null;
-
-  @CreateDateColumn({ type: 'timestamptz', name: 'created_at' })
-  createdAt!: Date;
-
-  @UpdateDateColumn({ type: 'timestamptz', name: 'updated_at' })
-  updatedAt!: Date;
 }

@@ -1,15 +1,12 @@
 // One saved state of a scenario. Never updated after insert (a database trigger refuses content changes);
 // numbers count up from 1 per scenario.
-import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, Unique } from 'typeorm';
+import { Column, Entity, JoinColumn, ManyToOne, Unique } from 'typeorm';
+import { AuthoredRecord } from './authored';
 import type { Scenario } from '../../../shared/scenario/scenario';
-import { UserEntity } from './user.entity';
 
 @Entity({ name: 'scenario_revisions' })
 @Unique('UQ_scenario_revisions_scenario_number', ['scenarioId', 'number'])
-export class ScenarioRevisionEntity {
-  @PrimaryGeneratedColumn('uuid')
-  id!: string;
-
+export class ScenarioRevisionEntity extends AuthoredRecord {
   @Column({ type: 'uuid', name: 'scenario_id' })
   scenarioId!: string;
 
@@ -25,14 +22,4 @@ export class ScenarioRevisionEntity {
 
   @Column({ type: 'text', default: '' })
   message!: string;
-
-  @Column({ type: 'uuid', name: 'created_by_id', nullable: true })
-  createdById!: string | null;
-
-  @ManyToOne(() => UserEntity, { onDelete: 'SET NULL', nullable: true })
-  @JoinColumn({ name: 'created_by_id' })
-  createdBy?: UserEntity | null;
-
-  @CreateDateColumn({ type: 'timestamptz', name: 'created_at' })
-  createdAt!: Date;
 }

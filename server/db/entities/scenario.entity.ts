@@ -1,15 +1,12 @@
 // A layout being designed. Its content lives in immutable revisions; `latestRevisionId` points at the newest.
 // Relations to revisions name the entity by string because scenario and revision refer to each other.
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
+import { EditableRecord } from './authored';
 import { ProjectEntity } from './project.entity';
-import { UserEntity } from './user.entity';
 
 @Entity({ name: 'scenarios' })
 @Index('IDX_scenarios_project_updated', ['projectId', 'updatedAt'])
-export class ScenarioEntity {
-  @PrimaryGeneratedColumn('uuid')
-  id!: string;
-
+export class ScenarioEntity extends EditableRecord {
   @Column({ type: 'uuid', name: 'project_id' })
   projectId!: string;
 
@@ -30,17 +27,4 @@ export class ScenarioEntity {
   @ManyToOne('ScenarioRevisionEntity', { nullable: true, onDelete: 'NO ACTION' })
   @JoinColumn({ name: 'latest_revision_id' })
   latestRevision?: object | null;
-
-  @Column({ type: 'uuid', name: 'created_by_id', nullable: true })
-  createdById!: string | null;
-
-  @ManyToOne(() => UserEntity, { onDelete: 'SET NULL', nullable: true })
-  @JoinColumn({ name: 'created_by_id' })
-  createdBy?: UserEntity | null;
-
-  @CreateDateColumn({ type: 'timestamptz', name: 'created_at' })
-  createdAt!: Date;
-
-  @UpdateDateColumn({ type: 'timestamptz', name: 'updated_at' })
-  updatedAt!: Date;
 }

@@ -1,6 +1,6 @@
 // Distribution of measured or simulated times (lead time, time-study samples) as a histogram of
 // counts, optionally with fitted densities drawn over it at the same scale.
-import { line, max, scaleLinear } from 'd3';
+import { line, max, min, scaleLinear } from 'd3';
 import { useMemo, type MouseEvent } from 'react';
 import { AxisBottom, AxisLeft, linearTicks } from './Axes';
 import { ChartFrame, ChartMessage, plotWidthOf, type Margin } from './ChartFrame';
@@ -79,7 +79,7 @@ export function Histogram(props: HistogramProps) {
       shell={shell}
       title={title}
       subtitle={`${formatNumber(n)} samples, mean ${formatNumber(mean)} ${unit}, bins of ${formatNumber(binWidth)} ${unit}`}
-      summary={`Histogram of ${n} ${quantity.toLowerCase()} samples from ${formatNumber(Math.min(...values))} to ${formatNumber(Math.max(...values))} ${unit}, mean ${formatNumber(mean)} ${unit}.`}
+      summary={`Histogram of ${n} ${quantity.toLowerCase()} samples from ${formatNumber(min(values) ?? 0)} to ${formatNumber(max(values) ?? 0)} ${unit}, mean ${formatNumber(mean)} ${unit}.`}
       legend={{ kind: 'swatches', items: legendItems }}
       margin={MARGIN}
       plotHeight={plotHeight}

@@ -35,6 +35,7 @@ export interface TimeSeriesChartProps {
 }
 
 const MARGIN: Margin = { top: 10, right: 20, bottom: 56, left: 64 };
+const SPOKEN_ROWS = 100;
 
 function seriesProblem(times: readonly number[], series: readonly TimeSeries[]): Problem {
   return firstProblem(
@@ -65,6 +66,8 @@ export function TimeSeriesChart(props: TimeSeriesChartProps) {
   const x = scaleLinear().domain([times[0], times[times.length - 1] === times[0] ? times[0] + 1 : times[times.length - 1]]).range([0, plotWidth]);
   const y = scaleLinear().domain([Math.min(0, min(all) ?? 0), (max(all) ?? 1) * 1.05 || 1]).nice().range([plotHeight, 0]);
   const hasBand = series.some((s) => s.lower);
+  // A table read aloud stays useful up to about a hundred rows.
+  const every = Math.ceil(times.length / SPOKEN_ROWS);
 
   const legendItems: LegendItem[] = series.map((s, i) => ({ label: s.name, swatch: { kind: 'line', colour: seriesStyle(i).colour, dash: seriesStyle(i).dash } }));
   if (hasBand) legendItems.push({ label: props.bandLabel ?? 'confidence interval', swatch: { kind: 'box', fill: seriesStyle(0).colour, opacity: 0.18 } });
@@ -87,9 +90,9 @@ export function TimeSeriesChart(props: TimeSeriesChartProps) {
       margin={MARGIN}
       plotHeight={plotHeight}
       table={{
-        caption: `${quantity} (${unit}) over simulated time`,
+        caption: `${quantity} (${unit}) over simulated time${every > 1 ? `, every ${every}th point (the CSV export has all)` : ''}`,
         columns: ['Time (min)', ...series.map((s) => `${s.name} (${unit})`)],
-        rows: times.map((t, i) => [formatOne(t), ...series.map((s) => formatNumber(s.values[i]))]),
+        rows: times.flatMap((t, i) => (i % every === 0 ? [[formatOne(t), ...series.map((s) => formatNumber(s.values[i]))]] : [])),
       }}
       csv={() => ({
         caption: quantity,

@@ -65,3 +65,11 @@ describe('Histogram', () => {
     expect(screen.getByRole('alert').textContent).toMatch(/values\[2\] must be a finite number, got Infinity/);
   });
 });
+
+describe('Histogram with a large time study', () => {
+  it('draws 150 000 samples without exhausting the call stack', () => {
+    const values = Array.from({ length: 150_000 }, (_, i) => 5 + (i % 1000) / 100);
+    render(<Histogram values={values} quantity="Cycle time" unit="s" width={WIDTH} />);
+    expect(screen.getByRole('img').getAttribute('aria-label')).toContain('samples from 5 to 14.99 s');
+  });
+});

@@ -89,3 +89,14 @@ describe('CurveWithBand', () => {
     expect(screen.getByRole('status').textContent).toMatch(/The sweep has no finished points yet/);
   });
 });
+
+describe('TimeSeriesChart screen-reader table', () => {
+  it('keeps long series to about a hundred spoken rows and says how it thinned them', () => {
+    const long = Array.from({ length: 1000 }, (_, i) => i);
+    render(<TimeSeriesChart timesMinutes={long} series={[{ name: 'WIP', values: long.map((i) => i % 7) }]} quantity="Work in progress" unit="parts" width={WIDTH} />);
+    const table = screen.getByRole('table');
+    expect(table.querySelectorAll('tbody tr')).toHaveLength(100);
+    expect(table.querySelector('caption')!.textContent).toBe('Work in progress (parts) over simulated time, every 10th point (the CSV export has all)');
+    expect(table.querySelector('tbody tr:nth-child(2)')!.textContent).toBe('10.0' + '3');
+  });
+});

@@ -52,3 +52,11 @@ describe('DistributionPreview', () => {
     expect(screen.getByRole('alert').textContent).toMatch(/domain is needed to draw a density function/);
   });
 });
+
+describe('DistributionPreview with a large time study', () => {
+  it("keeps the exact range and mean of all samples (mean 12.495) while drawing the shape from a thinned set", () => {
+    const samples = Array.from({ length: 100_000 }, (_, i) => 10 + (i % 500) / 100);
+    render(<DistributionPreview label="Study" samples={samples} />);
+    expect(screen.getByRole('img').getAttribute('aria-label')).toBe('Study: from 10 to 14.99 s, mean 12.49 s');
+  });
+});

@@ -38,6 +38,10 @@ function checkResult(r: RunResult, carriers: number): void {
   // Parts loaded in the window either left it (output or scrap) or are still on the line; the
   // change of WIP across the window is at most the carrier count.
   for (const rep of r.replications) expect(rep.output).toBeGreaterThanOrEqual(0);
+  // Output is counted at the unload stations' completions.
+  const unloadStep = r.stations[r.stations.length - 1].stepId;
+  const unloadOps = r.stations.filter((s) => s.stepId === unloadStep).reduce((sum, s) => sum + s.operationsPerHour, 0);
+  expect(unloadOps).toBeCloseTo(r.throughputPerHour.mean, 6);
   const inLine = r.parts.loaded - r.parts.output - r.parts.scrapped;
   expect(Math.abs(inLine)).toBeLessThanOrEqual(carriers + 1e-9);
 }

@@ -11,6 +11,8 @@ export type LoopStation = {
   lane: 0 | 1;
   positionMm: number;
   cycle: Distribution;
+  /** A manual station that stops for the calendar's breaks. */
+  manual?: boolean;
   failures?: { timeBetweenFailuresSeconds: Distribution; timeToRepairSeconds: Distribution };
 };
 
@@ -27,7 +29,12 @@ export type LoopLine = {
   /** In process order: the first is the load step, the last the unload step, the rest process steps. */
   stations: LoopStation[];
   carriers: { count: number; lengthMm: number; minGapMm: number; vMaxMmPerS: number; aMaxMmPerS2: number; empty?: { vMaxMmPerS: number; aMaxMmPerS2: number } };
+  /** Breaks of every 8-hour shift, minutes from its start; none when absent. */
+  breaks?: { startMinute: number; minutes: number }[];
 };
+
+/** Three 8-hour shifts a day, seven days a week, 52 weeks. */
+export const LOOP_HOURS_PER_YEAR = 3 * 8 * 7 * 52;
 
 /** Standard modules of 1000, 100, 10 and 1 mm, so a lane can take any whole length in millimetres. */
 const MODULES = [1000, 100, 10, 1];
@@ -98,13 +105,12 @@ export function loopScenario(spec: LoopLine, name = 'Reference loop'): ScenarioI
           laneId: LANE_IDS[st.lane],
           positionMm: st.positionMm,
           cycleTimeSeconds: st.cycle,
+          ...(st.manual ? { operation: 'manual', pausesForBreaks: true } : {}),
           ...(st.failures ? { failures: st.failures } : {}),
         },
       ],
     })),
-    // Round-the-clock calendar without breaks: no station here pauses, so the calendar only scales
-    // annual output, which these checks do not use.
-    calendar: { shiftsPerDay: 3, hoursPerShift: 8, breaks: [], daysPerWeek: 7, weeksPerYear: 52 },
+    calendar: { shiftsPerDay: 3, hoursPerShift: 8, breaks: spec.breaks ?? [], daysPerWeek: 7, weeksPerYear: 52 },
     conveyor: { kind: 'carriers' },
   } as ScenarioInput;
 }

@@ -96,3 +96,26 @@ describe('line behaviour', () => {
     }
   });
 });
+
+describe('dispatch', () => {
+  function parallelPositions(dispatch: 'shortestQueue' | 'firstFree') {
+    const doc = serialLine({ stations: [{ cycle: fixed(1) }, { cycle: fixed(20) }, { cycle: fixed(1), bufferBefore: 2 }], carriers: 6 });
+    const step = doc.steps[1];
+    step.dispatch = dispatch;
+    step.stations.push({ ...step.stations[0], id: 'S2b', name: 'Station S2b', positionMm: step.stations[0].positionMm + 100 });
+    return doc;
+  }
+
+  it('shortest queue sends the leading carrier to the further of two parallel positions, so both work', async () => {
+    const r = await checkedRun(parallelPositions('shortestQueue'), { hours: 1, warmupMinutes: 10, replications: 1 });
+    // Two 20 s positions side by side on one lane make a part every 10 s.
+    expect(r.throughputPerHour.mean).toBeGreaterThan(340);
+    for (const s of r.stations.filter((st) => st.stepId === 'step-S2')) expect(s.processing).toBeGreaterThan(0.95);
+  });
+
+  it('first free fills stations in the order listed, even when the first blocks the way to the second', async () => {
+    const r = await checkedRun(parallelPositions('firstFree'), { hours: 1, warmupMinutes: 10, replications: 1 });
+    const [upstream, downstream] = r.stations.filter((st) => st.stepId === 'step-S2');
+    expect(upstream.processing).toBeGreaterThan(downstream.processing);
+  });
+});

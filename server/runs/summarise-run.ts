@@ -1,6 +1,6 @@
 // Pulls the headline numbers out of a posted result for the run's plain columns, and makes sure the
 // result belongs to the settings it is stored with.
-import type { RunSummary } from '../../shared/api/runs';
+import { runSummaryOf, type RunSummary } from '../../shared/api/runs';
 import type { RunResult } from '../../shared/results/run-result';
 import type { RunSettings } from '../../shared/scenario/run-settings';
 import { badRequest } from '../http/http-error';
@@ -19,13 +19,7 @@ export function summariseRun(settings: RunSettings, results: RunResult): RunColu
     ]);
   }
   return {
-    summary: {
-      throughputPerHour: results.throughputPerHour,
-      taktSeconds: results.taktSeconds,
-      annualOutput: results.annualOutput,
-      carriers: results.carriers.count,
-      bottleneckStationId: results.bottleneckStationId,
-    },
+    summary: runSummaryOf(results),
     seed: results.seed,
     engineVersion: results.engineVersion,
   };

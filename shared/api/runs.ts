@@ -1,7 +1,7 @@
 // Stored simulation runs. The browser runs the engine and posts the result;
 // the server keeps it tied to the exact revision it was computed from.
 import { z } from 'zod';
-import { runResultSchema } from '../results/run-result';
+import { runResultSchema, type RunResult } from '../results/run-result';
 import { runSettingsSchema } from '../scenario/run-settings';
 import { isoDateSchema, nameSchema, userRefSchema, uuidSchema } from './common';
 
@@ -15,6 +15,17 @@ export const runSummarySchema = z.object({
   carriers: z.number().int().nonnegative(),
   bottleneckStationId: z.string().nullable(),
 });
+
+/** The headline block of a result, as stored beside a run and shown in run lists. */
+export function runSummaryOf(result: RunResult): RunSummary {
+  return {
+    throughputPerHour: result.throughputPerHour,
+    taktSeconds: result.taktSeconds,
+    annualOutput: result.annualOutput,
+    carriers: result.carriers.count,
+    bottleneckStationId: result.bottleneckStationId,
+  };
+}
 
 export const runListItemSchema = z.object({
   id: uuidSchema,

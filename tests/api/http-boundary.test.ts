@@ -73,6 +73,9 @@ describe('serving the client', () => {
     const deep = await request(app).get('/projects/123/scenarios');
     expect(deep.status).toBe(200);
     expect(deep.text).toContain('<title>Lanewright</title>');
+    const missing = await request(app).get('/assets/gone-1234.js');
+    expect(missing.status).toBe(404);
+    expect(missing.body.error.code).toBe('not_found');
     const api = await request(app).get('/api/does-not-exist');
     expect(api.status).toBe(404);
     expect(api.body.error.code).toBe('not_found');

@@ -29,6 +29,14 @@ const signedInPages: RouteObject[] = [
     path: '/scenarios/:scenarioId',
     lazy: async () => ({ Component: (await import('../features/scenarios/routes/scenario-route')).ScenarioRoute }),
   },
+  {
+    path: '/projects/:projectId/runs',
+    lazy: async () => ({ Component: (await import('../features/runs/routes/project-runs-route')).ProjectRunsRoute }),
+  },
+  {
+    path: '/runs/:runId',
+    lazy: async () => ({ Component: (await import('../features/results/routes/run-route')).RunRoute }),
+  },
 ];
 
 export const appRoutes: RouteObject[] = [

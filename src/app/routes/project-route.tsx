@@ -4,7 +4,7 @@ import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
 import { LoadError } from '../../components/load-error';
 import { NotFoundMessage } from '../../components/not-found-message';
-import { Button } from '../../components/ui/button';
+import { Button, ButtonLink } from '../../components/ui/button';
 import { TitledCard } from '../../components/ui/card';
 import { EmptyState } from '../../components/ui/empty-state';
 import { PageHeader } from '../../components/ui/page-header';
@@ -42,7 +42,12 @@ export function ProjectRoute() {
           </Link>
         }
         description={project.data.description || undefined}
-        actions={scenarios.data && scenarios.data.length > 0 ? startButton : undefined}
+        actions={
+          <>
+            <ButtonLink to={`/projects/${projectId}/runs`}>All runs</ButtonLink>
+            {scenarios.data && scenarios.data.length > 0 ? startButton : null}
+          </>
+        }
       />
       {creating && (
         <TitledCard title="New scenario" className="max-w-2xl">

@@ -1,0 +1,73 @@
+// The filter bar above the runs table.
+import type { RunListItem } from '../../../../shared/api/runs';
+import { Button } from '../../../components/ui/button';
+import { filterChoices, NO_FILTERS, type RunFilterValues } from '../utils/run-filters';
+
+interface RunsFiltersProps {
+  runs: readonly RunListItem[];
+  values: RunFilterValues;
+  onChange: (values: RunFilterValues) => void;
+}
+
+const CONTROL = 'rounded-md border border-ink-faint bg-paper-raised px-2 py-1.5 text-sm text-ink focus-visible:outline-2 focus-visible:outline-accent';
+const LABEL = 'flex flex-col gap-1 text-xs font-semibold text-ink-soft';
+
+export function RunsFilters({ runs, values, onChange }: RunsFiltersProps) {
+  const choices = filterChoices(runs);
+  const set = (key: keyof RunFilterValues) => (event: { target: { value: string } }) => onChange({ ...values, [key]: event.target.value });
+  const active = Object.values(values).some((v) => v !== '');
+  return (
+    <div role="group" aria-label="Filter runs" className="flex flex-wrap items-end gap-3">
+      <label className={LABEL}>
+        Author
+        <select className={CONTROL} value={values.author} onChange={set('author')}>
+          <option value="">Anyone</option>
+          {choices.authors.map((a) => (
+            <option key={a.id} value={a.id}>
+              {a.name}
+            </option>
+          ))}
+        </select>
+      </label>
+      <label className={LABEL}>
+        Revision
+        <select className={CONTROL} value={values.revision} onChange={set('revision')}>
+          <option value="">Any</option>
+          {choices.revisions.map((n) => (
+            <option key={n} value={String(n)}>
+              {n}
+            </option>
+          ))}
+        </select>
+      </label>
+      <label className={LABEL}>
+        Carriers
+        <select className={CONTROL} value={values.carriers} onChange={set('carriers')}>
+          <option value="">Any</option>
+          {choices.carriers.map((n) => (
+            <option key={n} value={String(n)}>
+              {n}
+            </option>
+          ))}
+        </select>
+      </label>
+      <label className={LABEL}>
+        Run on or after
+        <input type="date" className={CONTROL} value={values.since} onChange={set('since')} />
+      </label>
+      <label className={LABEL}>
+        Throughput at least (/h)
+        <input type="number" min={0} step="any" className={`${CONTROL} w-28`} value={values.minThroughput} onChange={set('minThroughput')} />
+      </label>
+      <label className={LABEL}>
+        Takt at most (s)
+        <input type="number" min={0} step="any" className={`${CONTROL} w-28`} value={values.maxTakt} onChange={set('maxTakt')} />
+      </label>
+      {active && (
+        <Button variant="quiet" onClick={() => onChange(NO_FILTERS)}>
+          Clear filters
+        </Button>
+      )}
+    </div>
+  );
+}

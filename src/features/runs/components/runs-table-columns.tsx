@@ -1,0 +1,55 @@
+// The columns of the runs table. Headline figures come from the run summary the server keeps
+// beside each result, written with the same decimals as the result page.
+import { createColumnHelper } from '@tanstack/react-table';
+import type { ReactNode } from 'react';
+import type { RunListItem } from '../../../../shared/api/runs';
+import { formatDateTime, formatPerson } from '../../../lib/format';
+import { atLeast, atMost, authorIs, equalsText, sinceDay } from '../utils/run-filters';
+import { formatInterval, formatPerHour, formatTakt } from '../utils/format-run';
+
+const column = createColumnHelper<RunListItem>();
+
+interface ColumnOptions {
+  showScenario: boolean;
+  name: (run: RunListItem) => ReactNode;
+  actions: (run: RunListItem) => ReactNode;
+}
+
+export function runsColumns({ showScenario, name, actions }: ColumnOptions) {
+  return [
+    column.accessor('name', { id: 'name', header: 'Run', sortingFn: 'alphanumeric', cell: (c) => name(c.row.original) }),
+    ...(showScenario ? [column.accessor('scenarioName', { id: 'scenario', header: 'Scenario', sortingFn: 'alphanumeric' })] : []),
+    column.accessor('revisionNumber', { id: 'revision', header: 'Revision', filterFn: equalsText, cell: (c) => `#${c.getValue()}` }),
+    column.accessor((run) => formatPerson(run.createdBy), { id: 'author', header: 'Author', filterFn: authorIs, sortingFn: 'alphanumeric' }),
+    column.accessor('createdAt', {
+      id: 'createdAt',
+      header: 'Run at',
+      filterFn: sinceDay,
+      sortingFn: (a, b) => Date.parse(a.original.createdAt) - Date.parse(b.original.createdAt),
+      cell: (c) => <time dateTime={c.getValue()}>{formatDateTime(c.getValue())}</time>,
+    }),
+    column.accessor((run) => run.summary.throughputPerHour.mean, {
+      id: 'throughput',
+      header: 'Throughput (/h)',
+      filterFn: atLeast,
+      cell: (c) => <Figure value={formatPerHour(c.getValue())} interval={formatInterval(c.row.original.summary.throughputPerHour, formatPerHour)} />,
+    }),
+    column.accessor((run) => run.summary.taktSeconds.mean, {
+      id: 'takt',
+      header: 'Takt (s)',
+      filterFn: atMost,
+      cell: (c) => <Figure value={formatTakt(c.getValue())} interval={formatInterval(c.row.original.summary.taktSeconds, formatTakt)} />,
+    }),
+    column.accessor((run) => run.summary.carriers, { id: 'carriers', header: 'Carriers', filterFn: equalsText }),
+    column.display({ id: 'actions', header: 'Actions', cell: (c) => actions(c.row.original) }),
+  ];
+}
+
+function Figure({ value, interval }: { value: string; interval: string }) {
+  return (
+    <span className="flex flex-col tabular-nums">
+      <span className="font-semibold">{value}</span>
+      <span className="text-xs text-ink-soft">95 % CI {interval}</span>
+    </span>
+  );
+}

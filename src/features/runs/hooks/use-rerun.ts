@@ -1,0 +1,28 @@
+// Repeats a stored run: fetches the exact revision it was computed from and runs it again with the
+// same settings and seed, then saves the new run.
+import { useQueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
+import type { RunListItem } from '../../../../shared/api/runs';
+import { revisionQueryOptions } from '../api/get-revision';
+import { useRunAndSave } from './use-run-and-save';
+
+export function useRerun() {
+  const queryClient = useQueryClient();
+  const runAndSave = useRunAndSave();
+  const [source, setSource] = useState<RunListItem | null>(null);
+  const [loadError, setLoadError] = useState<unknown>(null);
+
+  const rerun = async (run: RunListItem) => {
+    setSource(run);
+    setLoadError(null);
+    try {
+      const revision = await queryClient.fetchQuery(revisionQueryOptions(run.scenarioId, run.revisionNumber));
+      await runAndSave.run(run.scenarioId, revision, run.settings);
+    } catch (error) {
+      setLoadError(error);
+    }
+  };
+
+  const busy = runAndSave.simulation.status === 'running' || runAndSave.save.status === 'saving';
+  return { ...runAndSave, source, loadError, busy, rerun };
+}

@@ -5,6 +5,7 @@ import express from 'express';
 import type { DataSource } from 'typeorm';
 import type { AppContext } from './app-context';
 import { createAuth } from './auth/lucia';
+import { prepareDecoy } from './auth/password';
 import { createAttemptLimiter } from './auth/rate-limit';
 import { loadSession } from './auth/session-middleware';
 import { errorHandler, sendError, unknownApiRoute } from './http/error-handler';
@@ -33,6 +34,7 @@ export interface CreateAppOptions {
 export function createApp(opts: CreateAppOptions): express.Express {
   const publicOrigin = opts.publicOrigin ? new URL(opts.publicOrigin).origin : undefined;
   const ctx: AppContext = { ds: opts.dataSource, auth: createAuth(opts.dataSource), publicOrigin, signInLimiter: createAttemptLimiter() };
+  void prepareDecoy();
   const app = express();
   app.disable('x-powered-by');
   app.set('etag', false);

@@ -18,6 +18,8 @@ export function authRouter(ctx: AppContext) {
   const router = express.Router();
 
   async function startSession(req: Request, res: Response, user: SignedInUser, status: number) {
+    // A new sign-in never keeps a session id that existed before it (no session fixation).
+    if (req.sessionId) await auth.invalidateSession(req.sessionId);
     const session = await auth.createSession(user.id, {});
     writeSessionCookie(req, res, auth.createSessionCookie(session.id), publicOrigin);
     res.status(status).json(toMe(user, await membershipsOf(ds, user.id)));

@@ -104,6 +104,18 @@ describe('sessions', () => {
     expect(me.status).toBe(401);
   });
 
+  it('signing in again replaces the session the browser already had', async () => {
+    const app = appFor(db());
+    const res = await request(app).post('/api/auth/sign-up').send({ email: uniqueEmail('again'), password: PASSWORD, name: 'A', organisationName: 'A' });
+    const before = sessionCookie(res).split(';')[0];
+    const again = await request(app).post('/api/auth/sign-in').set('Cookie', before).send({ email: res.body.user.email, password: PASSWORD });
+    expect(again.status).toBe(200);
+    const after = sessionCookie(again).split(';')[0];
+    expect(after).not.toBe(before);
+    expect((await request(app).get('/api/me').set('Cookie', before)).status).toBe(401);
+    expect((await request(app).get('/api/me').set('Cookie', after)).status).toBe(200);
+  });
+
   it('answers 401 once the session has expired in the database', async () => {
     const app = appFor(db());
     const res = await request(app).post('/api/auth/sign-up').send({ email: uniqueEmail('expiring'), password: PASSWORD, name: 'E', organisationName: 'E' });

@@ -100,4 +100,14 @@ describe('a deterministic line runs at its slowest station (Hopp & Spearman 2000
     // 3 shifts × 8 h × 7 days × 52 weeks (common trade practice).
     expect(annual / throughput).toBeCloseTo(LOOP_HOURS_PER_YEAR, 6);
   }, 60_000);
+
+  it('belt baseline: every visit adds stop-and-locate, and the next pallet closes one pitch at belt speed', async () => {
+    const spec = {
+      ...fiveStations([2, 5, 8, 4, 3], { count: 8, lengthMm: 160, minGapMm: 40, vMaxMmPerS: 2_000, aMaxMmPerS2: 10_000 }),
+      belt: { speedMmPerS: 250, stopAndLocateSeconds: 1.5, pitchMm: 250 },
+    };
+    // 8 s work + 1.5 s locate + 250 mm / 250 mm/s = 10.5 s per part: 342.9 parts/h.
+    const { throughput } = await paced(spec, 'P2');
+    expect(Math.abs(throughput / (3600 / (8 + 1.5 + 250 / 250)) - 1)).toBeLessThan(0.005);
+  }, 60_000);
 });

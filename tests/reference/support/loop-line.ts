@@ -29,6 +29,8 @@ export type LoopLine = {
   /** In process order: the first is the load step, the last the unload step, the rest process steps. */
   stations: LoopStation[];
   carriers: { count: number; lengthMm: number; minGapMm: number; vMaxMmPerS: number; aMaxMmPerS2: number; empty?: { vMaxMmPerS: number; aMaxMmPerS2: number } };
+  /** The belt baseline instead of independent carriers. */
+  belt?: { speedMmPerS: number; stopAndLocateSeconds: number; pitchMm: number };
   /** Breaks of every 8-hour shift, minutes from its start; none when absent. */
   breaks?: { startMinute: number; minutes: number }[];
 };
@@ -111,6 +113,6 @@ export function loopScenario(spec: LoopLine, name = 'Reference loop'): ScenarioI
       ],
     })),
     calendar: { shiftsPerDay: 3, hoursPerShift: 8, breaks: spec.breaks ?? [], daysPerWeek: 7, weeksPerYear: 52 },
-    conveyor: { kind: 'carriers' },
+    conveyor: spec.belt ? { kind: 'belt', ...spec.belt } : { kind: 'carriers' },
   } as ScenarioInput;
 }

@@ -21,34 +21,25 @@ const lane = (id: string, deckId: string, x: number, y: number, heading: 'east' 
 
 const tri = (min: number, mode: number, max: number): Distribution => ({ kind: 'triangular', min, mode, max });
 
+/** A manual step done at several positions of one lane: stations <prefix>1, <prefix>2, … */
+const parallel = (id: string, dispatch: StepSpec['dispatch'], lane: string, prefix: string, positions: number[], cycle: Distribution): StepSpec => ({
+  id,
+  kind: 'process',
+  dispatch,
+  stations: positions.map((at, i) => ({ id: `${prefix}${i + 1}`, lane, at, cycle, manual: true })),
+});
+
 const STEPS: StepSpec[] = [
   { id: 'load', kind: 'load', stations: [{ id: 'LD', lane: 'top', at: 600, cycle: { kind: 'normal', mean: 4, sd: 0.8, min: 2.5 }, manual: true }] },
   { id: 'base', kind: 'process', stations: [{ id: 'BS', lane: 'top', at: 1_600, cycle: { kind: 'fixed', value: 4.5 }, fails: true }] },
   { id: 'seal', kind: 'process', stations: [{ id: 'SL', lane: 'top', at: 2_600, cycle: { kind: 'lognormal', mean: 4, cv: 0.2 }, fails: true }] },
-  {
-    id: 'wind',
-    kind: 'process',
-    dispatch: 'shortestQueue',
-    stations: [
-      { id: 'WD1', lane: 'top', at: 3_800, cycle: tri(8, 10, 14), manual: true },
-      { id: 'WD2', lane: 'top', at: 4_800, cycle: tri(8, 10, 14), manual: true },
-    ],
-  },
+  parallel('wind', 'shortestQueue', 'top', 'WD', [3_800, 4_800], tri(8, 10, 14)),
   { id: 'glue', kind: 'process', stations: [{ id: 'GL', lane: 'top', at: 6_000, cycle: { kind: 'erlang', mean: 4, k: 4 }, fails: true }] },
   { id: 'cure', kind: 'process', stations: [{ id: 'CU', lane: 'top', at: 7_200, cycle: { kind: 'fixed', value: 4.8 } }] },
   { id: 'pins', kind: 'process', stations: [{ id: 'PN', lane: 'top', at: 8_400, cycle: { kind: 'gamma', mean: 3.5, cv: 0.3 }, fails: true }] },
   { id: 'probe', kind: 'inspect', stations: [{ id: 'PB', lane: 'top', at: 9_600, cycle: { kind: 'uniform', min: 3, max: 5 } }] },
   { id: 'press', kind: 'process', stations: [{ id: 'PR', lane: 'top', at: 10_800, cycle: { kind: 'fixed', value: 4.6 }, fails: true }] },
-  {
-    id: 'fit',
-    kind: 'process',
-    dispatch: 'roundRobin',
-    stations: [
-      { id: 'FT1', lane: 'mid', at: 1_200, cycle: tri(9, 12, 16), manual: true },
-      { id: 'FT2', lane: 'mid', at: 2_400, cycle: tri(9, 12, 16), manual: true },
-      { id: 'FT3', lane: 'mid', at: 3_600, cycle: tri(9, 12, 16), manual: true },
-    ],
-  },
+  parallel('fit', 'roundRobin', 'mid', 'FT', [1_200, 2_400, 3_600], tri(9, 12, 16)),
   { id: 'screw', kind: 'process', stations: [{ id: 'SC', lane: 'mid', at: 5_000, cycle: { kind: 'lognormal', mean: 3.8, cv: 0.15 }, fails: true }] },
   { id: 'label', kind: 'process', stations: [{ id: 'LB', lane: 'mid', at: 6_400, cycle: { kind: 'empirical', samples: [3.1, 3.4, 3.2, 3.9, 3.3, 3.6, 4.4, 3.2] } }] },
   { id: 'leak', kind: 'inspect', stations: [{ id: 'LK', lane: 'mid', at: 7_800, cycle: { kind: 'fixed', value: 4.2 }, fails: true }] },

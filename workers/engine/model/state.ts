@@ -40,8 +40,7 @@ export const EV_LANE_WAKE = 6;
 export const EV_LAST_ACTIVE = 6;
 export const EV_BREAK = 7;
 export const EV_SAMPLE = 8;
-export const EV_WARMUP_END = 9;
-export const EV_END = 10;
+export const EV_END = 9;
 
 export type StationSamplers = { cycle: Sampler; failure: Sampler | null; repair: Sampler | null; inspect: Sampler | null };
 

@@ -4,7 +4,7 @@
 import { StreamingHistogram } from '../stats/histogram';
 import type { CompiledLine } from '../model/compile';
 import { PROFILE_EMPTY, PROFILE_LOADED } from '../model/motion';
-import { PH_EXIT, PH_MOVING, PH_QUEUED, PH_STATION, ST_BLOCKED, ST_STARVED, TR_IDLE, TR_HOLDING } from '../model/state';
+import { PH_EXIT, PH_MOVING, PH_QUEUED, PH_STATION, ST_BLOCKED, ST_STARVED, TR_IDLE } from '../model/state';
 import { BottleneckTracker } from './bottleneck';
 import type { Observer } from './observer';
 import { Levels, ObservationWindow } from './window';
@@ -192,10 +192,5 @@ export class Recorder implements Observer {
     for (let k = 0; k < this.tState.length; k++) this.transferState(k, this.tState[k], end);
     this.wip(this.wipLevel.current(0), end);
     this.bottleneck.finish(end);
-  }
-
-  /** Share of time a transfer was holding a carrier it could not deliver. */
-  transferBlockedShare(conn: number): number {
-    return this.transferTime[conn * TRANSFER_STATES + TR_HOLDING] / this.window.length;
   }
 }

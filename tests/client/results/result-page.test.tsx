@@ -8,6 +8,7 @@ import { formatTable } from '../../../workers/cli/table';
 import { mockApi } from '../support/fetch-mock';
 import { me, project, revision, scenarioDetail, scenarioSummary } from '../support/fixtures';
 import { renderApp } from '../support/render-app';
+import { withinWholeBins } from '../../../src/features/results/utils/chart-data';
 import { engineResult, storedRun } from './support/engine-result';
 
 let result: RunResult;
@@ -81,8 +82,10 @@ describe('run result page', { timeout: 60_000 }, () => {
     const bottleneck = result.stations.find((s) => s.id === result.bottleneckStationId);
     expect(bottleneck).toBeDefined();
     expect(screen.getByTestId('bottleneck-sentence').textContent).toContain(`${bottleneck?.name} is the bottleneck: the sole bottleneck ${(100 * (bottleneck?.soleBottleneckShare ?? 0)).toFixed(1)} %`);
-    const stationRows = within(screen.getByRole('table', { name: 'Station results' })).getAllByRole('row');
+    const stationRows = within(screen.getByRole('table', { name: 'Station time shares and bottleneck' })).getAllByRole('row');
     expect(stationRows).toHaveLength(result.stations.length + 1);
+    const workTable = screen.getByRole('table', { name: 'Station cycle, output and queue' });
+    expect(await within(workTable).findByText('Press seat ring')).toBeTruthy();
 
     for (const chart of ['space-time', 'station-timeline']) {
       const frame = document.querySelector(`[data-chart="run-${run.id.slice(0, 8)}-${chart}"]`);
@@ -107,5 +110,15 @@ describe('run result page', { timeout: 60_000 }, () => {
     const run = mockRunPage('engineer');
     renderApp(`/runs/${run.id}`);
     expect(await screen.findByRole('button', { name: `Delete ${run.name}` })).toBeTruthy();
+  });
+});
+
+describe('station timeline shares', () => {
+  it('scales only bins whose four-decimal shares add up past 1, and leaves the rest as stored', () => {
+    const shares = [0.5378, 0.0472, 0.4151, 0, 0, 0.25, 0.25, 0.25, 0.25, 0];
+    const out = withinWholeBins(shares, 5);
+    expect(out.slice(0, 5).reduce((a, b) => a + b, 0)).toBeCloseTo(1, 12);
+    expect(out[0] / out[2]).toBeCloseTo(0.5378 / 0.4151, 12);
+    expect(out.slice(5)).toEqual([0.25, 0.25, 0.25, 0.25, 0]);
   });
 });

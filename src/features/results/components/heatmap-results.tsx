@@ -12,7 +12,8 @@ export function HeatmapResults({ result, fileBase }: { result: RunResult; fileBa
       <div className="flex flex-col gap-1">
         <CardTitle id="heatmaps-title">Over time</CardTitle>
         <p className="max-w-prose text-sm text-ink-soft">
-          Time runs from the end of the warm-up; each cell is the mean over {replications} replication{replications === 1 ? '' : 's'}.
+          Time counts from the start of the simulation; statistics begin after the {result.settings.warmupMinutes} min warm-up. Each cell is the mean over{' '}
+          {replications} replication{replications === 1 ? '' : 's'}.
         </p>
       </div>
       <SpaceTimeHeatmap lanes={spaceTimeLanes(result)} timeBinSeconds={result.heatmaps.binSeconds} startMinutes={result.heatmaps.startSeconds / 60} exportName={`${fileBase}-space-time`} />

@@ -47,7 +47,7 @@ export function LeadTimeHistogram({ leadTime, exportName }: { leadTime: RunResul
       csv={() => ({ caption: 'Lead time', columns: ['bin_from_s', 'bin_to_s', 'parts'], rows: counts.map((count, i) => [i * width, (i + 1) * width, count]) })}
       exportName={exportName}
     >
-      <AxisLeft ticks={linearTicks(y, PLOT_HEIGHT / 45)} height={PLOT_HEIGHT} label="Parts (count)" gridWidth={plotWidth} labelOffset={48} />
+      <AxisLeft ticks={linearTicks(y, PLOT_HEIGHT / 45, (v) => v.toLocaleString('en-GB'))} height={PLOT_HEIGHT} label="Parts (count)" gridWidth={plotWidth} labelOffset={48} />
       <AxisBottom ticks={linearTicks(x, plotWidth / 80)} width={plotWidth} plotHeight={PLOT_HEIGHT} label="Lead time (s)" />
       <g data-chart-part="marks">
         {rows.map(([from, to, count]) => (

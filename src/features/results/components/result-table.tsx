@@ -54,7 +54,8 @@ export function ResultTable<T>({ caption, rows, columns, rowKey, fileBase, empha
 
   return (
     <div className="flex flex-col gap-2">
-      <div className="flex justify-end">
+      <div className="flex items-end justify-between gap-3">
+        <h3 className="font-semibold text-ink">{caption}</h3>
         <CsvButton what={caption} fileBase={fileBase} rows={rows} columns={columns.map((c) => ({ header: c.header, get: c.value }))} />
       </div>
       <Table caption={caption}>

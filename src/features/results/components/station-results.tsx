@@ -1,5 +1,6 @@
 // Per station: where its time went, how often it was the bottleneck (alone, or shifting with a
 // neighbour), its cycle and output. Bars for the eye, a sortable table for the figures.
+import { useMemo } from 'react';
 import type { RunResult, StationResult } from '../../../../shared/results/run-result';
 import { StationStateBars } from '../../../components/charts';
 import { Card, CardTitle } from '../../../components/ui/card';
@@ -7,25 +8,34 @@ import { formatMean2, formatPercent, formatTakt } from '../../runs/utils/format-
 import { stationBars } from '../utils/chart-data';
 import { ResultTable, type ResultColumn } from './result-table';
 
-export function stationColumns(laneName: (id: string) => string, stepName: (id: string) => string): ResultColumn<StationResult>[] {
-  return [
-    { id: 'name', header: 'Station', value: (s) => s.name },
-    { id: 'step', header: 'Step', value: (s) => stepName(s.stepId) },
-    { id: 'lane', header: 'Lane', value: (s) => laneName(s.laneId) },
-    { id: 'processing', header: 'Processing', value: (s) => s.processing, format: formatPercent, numeric: true },
-    { id: 'starved', header: 'Starved', value: (s) => s.starved, format: formatPercent, numeric: true },
-    { id: 'blocked', header: 'Blocked', value: (s) => s.blocked, format: formatPercent, numeric: true },
-    { id: 'down', header: 'Down', value: (s) => s.down, format: formatPercent, numeric: true },
-    { id: 'onBreak', header: 'On break', value: (s) => s.onBreak, format: formatPercent, numeric: true },
-    { id: 'bottleneck', header: 'Bottleneck', value: (s) => s.bottleneckShare, format: formatPercent, numeric: true },
-    { id: 'sole', header: 'Sole bottleneck', value: (s) => s.soleBottleneckShare, format: formatPercent, numeric: true },
-    { id: 'shifting', header: 'Shifting bottleneck', value: (s) => s.shiftingBottleneckShare, format: formatPercent, numeric: true },
-    { id: 'cycle', header: 'Mean cycle (s)', value: (s) => s.meanCycleSeconds, format: formatTakt, numeric: true },
-    { id: 'operations', header: 'Operations per hour', value: (s) => s.operationsPerHour, format: formatMean2, numeric: true },
-    { id: 'failures', header: 'Failures per hour', value: (s) => s.failuresPerHour, format: formatMean2, numeric: true },
-    { id: 'queue', header: 'Mean queue (carriers)', value: (s) => s.meanQueue, format: formatMean2, numeric: true },
-  ];
-}
+/** A station with the names of its step and lane, which the result knows only by id. */
+type StationRow = StationResult & { stepName: string; laneName: string };
+
+const stationName: ResultColumn<StationRow> = { id: 'name', header: 'Station', value: (s) => s.name };
+
+/** Where each station's time went and how often it held the line back. */
+const stateColumns: ResultColumn<StationRow>[] = [
+  stationName,
+  { id: 'processing', header: 'Processing', value: (s) => s.processing, format: formatPercent, numeric: true },
+  { id: 'starved', header: 'Starved', value: (s) => s.starved, format: formatPercent, numeric: true },
+  { id: 'blocked', header: 'Blocked', value: (s) => s.blocked, format: formatPercent, numeric: true },
+  { id: 'down', header: 'Down', value: (s) => s.down, format: formatPercent, numeric: true },
+  { id: 'onBreak', header: 'On break', value: (s) => s.onBreak, format: formatPercent, numeric: true },
+  { id: 'bottleneck', header: 'Bottleneck', value: (s) => s.bottleneckShare, format: formatPercent, numeric: true },
+  { id: 'sole', header: 'Sole bottleneck', value: (s) => s.soleBottleneckShare, format: formatPercent, numeric: true },
+  { id: 'shifting', header: 'Shifting bottleneck', value: (s) => s.shiftingBottleneckShare, format: formatPercent, numeric: true },
+];
+
+/** What each station did: its work content, output, failures and the carriers waiting for it. */
+const workColumns: ResultColumn<StationRow>[] = [
+  stationName,
+  { id: 'step', header: 'Step', value: (s) => s.stepName },
+  { id: 'lane', header: 'Lane', value: (s) => s.laneName },
+  { id: 'cycle', header: 'Mean cycle (s)', value: (s) => s.meanCycleSeconds, format: formatTakt, numeric: true },
+  { id: 'operations', header: 'Operations per hour', value: (s) => s.operationsPerHour, format: formatMean2, numeric: true },
+  { id: 'failures', header: 'Failures per hour', value: (s) => s.failuresPerHour, format: formatMean2, numeric: true },
+  { id: 'queue', header: 'Mean queue (carriers)', value: (s) => s.meanQueue, format: formatMean2, numeric: true },
+];
 
 function bottleneckSentence(result: RunResult): string {
   const station = result.stations.find((s) => s.id === result.bottleneckStationId);
@@ -40,13 +50,24 @@ function bottleneckSentence(result: RunResult): string {
 
 interface StationResultsProps {
   result: RunResult;
-  stepName: (id: string) => string;
+  /** Step names by id, from the run's revision; ids stand in until it has loaded. */
+  stepNames: ReadonlyMap<string, string> | undefined;
   fileBase: string;
 }
 
-export function StationResults({ result, stepName, fileBase }: StationResultsProps) {
-  const laneName = (id: string) => result.lanes.find((lane) => lane.id === id)?.name ?? id;
+export function StationResults({ result, stepNames, fileBase }: StationResultsProps) {
+  // Rows are rebuilt when the names arrive, since the table caches cell values per row.
+  const rows = useMemo<StationRow[]>(
+    () =>
+      result.stations.map((s) => ({
+        ...s,
+        stepName: stepNames?.get(s.stepId) ?? s.stepId,
+        laneName: result.lanes.find((lane) => lane.id === s.laneId)?.name ?? s.laneId,
+      })),
+    [result, stepNames],
+  );
   const bottleneck = result.stations.find((s) => s.id === result.bottleneckStationId);
+  const emphasise = (s: StationRow) => (s.id === result.bottleneckStationId ? 'bottleneck' : null);
   return (
     <Card aria-labelledby="stations-title" className="flex flex-col gap-4">
       <CardTitle id="stations-title">Stations</CardTitle>
@@ -55,12 +76,20 @@ export function StationResults({ result, stepName, fileBase }: StationResultsPro
       </p>
       <StationStateBars stations={stationBars(result)} bottleneckId={result.bottleneckStationId} bottleneckShare={bottleneck?.bottleneckShare} exportName={`${fileBase}-station-states`} />
       <ResultTable
-        caption="Station results"
-        rows={result.stations}
-        columns={stationColumns(laneName, stepName)}
+        caption="Station time shares and bottleneck"
+        rows={rows}
+        columns={stateColumns}
         rowKey={(s) => s.id}
-        fileBase={`${fileBase}-stations`}
-        emphasise={(s) => (s.id === result.bottleneckStationId ? 'bottleneck' : null)}
+        fileBase={`${fileBase}-station-states`}
+        emphasise={emphasise}
+      />
+      <ResultTable
+        caption="Station cycle, output and queue"
+        rows={rows}
+        columns={workColumns}
+        rowKey={(s) => s.id}
+        fileBase={`${fileBase}-station-work`}
+        emphasise={emphasise}
       />
     </Card>
   );

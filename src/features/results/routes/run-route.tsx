@@ -1,6 +1,7 @@
 // /runs/:runId : one stored run's results, exactly as the engine produced them, with the revision,
 // seed and settings that repeat it, and exports for every table and chart.
 import { useQuery } from '@tanstack/react-query';
+import { useMemo } from 'react';
 import { useNavigate, useParams } from 'react-router-dom';
 import { LoadError } from '../../../components/load-error';
 import { NotFoundMessage } from '../../../components/not-found-message';
@@ -34,6 +35,7 @@ export function RunRoute() {
   const project = useProject(scenario.data?.projectId);
   const revision = useRevision(scenarioId, run.data?.revisionNumber);
   const { mayChange } = useRunPermissions(project.data?.organisationId);
+  const stepNames = useMemo(() => (revision.data ? new Map(revision.data.document.steps.map((step) => [step.id, step.name])) : undefined), [revision.data]);
 
   if (run.isPending) return <PageSpinner label="Loading the run…" />;
   if (run.isError) {
@@ -43,7 +45,6 @@ export function RunRoute() {
   const { data } = run;
   const result = data.results;
   const fileBase = `run-${data.id.slice(0, 8)}`;
-  const stepName = (id: string) => revision.data?.document.steps.find((step) => step.id === id)?.name ?? id;
 
   return (
     <div className="flex flex-col gap-8">
@@ -67,7 +68,7 @@ export function RunRoute() {
       <SafetyCaution />
       <ResultHeadline result={result} />
       <HeatmapResults result={result} fileBase={fileBase} />
-      <StationResults result={result} stepName={stepName} fileBase={fileBase} />
+      <StationResults result={result} stepNames={stepNames} fileBase={fileBase} />
       <TrackResults result={result} fileBase={fileBase} />
       <FlowResults result={result} fileBase={fileBase} />
       <ReplicationResults replications={result.replications} fileBase={fileBase} />

@@ -15,12 +15,30 @@ export function spaceTimeLanes(result: RunResult): SpaceTimeLane[] {
   });
 }
 
+/**
+ * The engine stores timeline shares rounded to four decimals, so a bin's five shares can add up to
+ * 1.0001 or so; the timeline refuses any sum above 1 beyond floating-point noise. Only such bins are
+ * scaled back to 1, a change far below the tenth of a percent the chart shows.
+ */
+export function withinWholeBins(shares: readonly number[], groupSize: number): number[] {
+  const out = [...shares];
+  for (let start = 0; start < out.length; start += groupSize) {
+    let sum = 0;
+    for (let i = start; i < start + groupSize; i++) sum += out[i];
+    if (sum > 1) for (let i = start; i < start + groupSize; i++) out[i] /= sum;
+  }
+  return out;
+}
+
 export function stationTimeline(result: RunResult) {
   const { heatmaps } = result;
   return {
     stations: heatmaps.stations.map((s) => ({ id: s.stationId, name: nameOf(result.stations, s.stationId) })),
     states: heatmaps.stationStates.map(chartState),
-    shares: heatmaps.stations.flatMap((s) => s.shares),
+    shares: withinWholeBins(
+      heatmaps.stations.flatMap((s) => s.shares),
+      heatmaps.stationStates.length,
+    ),
     timeBinSeconds: heatmaps.binSeconds,
     startMinutes: heatmaps.startSeconds / 60,
   };

@@ -22,6 +22,8 @@ import { projectsRouter } from './routes/projects';
 import { revisionsRouter } from './routes/revisions';
 import { runsRouter } from './routes/runs';
 import { scenariosRouter } from './routes/scenarios';
+import { timeStudiesRouter } from './routes/time-studies';
+import { exceptTimeStudyUploads } from './time-studies/upload-route';
 
 export interface CreateAppOptions {
   dataSource: DataSource;
@@ -46,10 +48,10 @@ export function createApp(opts: CreateAppOptions): express.Express {
     res.set('Cache-Control', 'no-store');
     next();
   });
-  api.use(requireJsonBody);
+  api.use(exceptTimeStudyUploads(requireJsonBody));
   api.use(express.json({ limit: JSON_BODY_LIMIT_BYTES, strict: true }));
   api.use(loadSession(ctx.auth, publicOrigin));
-  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, membersRouter, auditRouter]) api.use(router(ctx));
+  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, membersRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));
   api.use(unknownApiRoute);
   app.use('/api', api);
 

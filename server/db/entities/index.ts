@@ -7,6 +7,7 @@ import { RunEntity } from './run.entity';
 import { ScenarioRevisionEntity } from './scenario-revision.entity';
 import { ScenarioEntity } from './scenario.entity';
 import { SessionEntity } from './session.entity';
+import { TimeStudyEntity } from './time-study.entity';
 import { UserEntity } from './user.entity';
 
 export {
@@ -18,6 +19,7 @@ export {
   ScenarioRevisionEntity,
   ScenarioEntity,
   SessionEntity,
+  TimeStudyEntity,
   UserEntity,
 };
 
@@ -30,5 +32,6 @@ export const entities = [
   ScenarioEntity,
   ScenarioRevisionEntity,
   RunEntity,
+  TimeStudyEntity,
   AuditEntryEntity,
 ];

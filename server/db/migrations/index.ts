@@ -1,5 +1,6 @@
 // Migrations in the order they apply.
 import { InitialSchema1796189683213 } from './1796189683213-InitialSchema';
 import { RevisionImmutability1796189683214 } from './1796189683214-RevisionImmutability';
+import { TimeStudies1796193256066 } from './1796193256066-TimeStudies';
 
-export const migrations = [InitialSchema1796189683213, RevisionImmutability1796189683214];
+export const migrations = [InitialSchema1796189683213, RevisionImmutability1796189683214, TimeStudies1796193256066];

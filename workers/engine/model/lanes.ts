@@ -158,7 +158,7 @@ export function scheduleEntryWake(m: LineState, lane: number): void {
   if (m.cDest[rear] < needed - EPS_MM) return;
   let lo = m.now;
   let hi = m.cMoveEnd[rear];
-  for (let i = 0; i < 60 && hi - lo > 1e-9; i++) {
+  for (let i = 0; i < 60 && hi - lo > 1e-7; i++) {
     const mid = (lo + hi) / 2;
     if (positionAt(m, rear, mid) >= needed - EPS_MM) hi = mid;
     else lo = mid;

@@ -13,6 +13,8 @@
 import type { ObservationWindow } from './window';
 
 const MAX_PENDING = 2_000;
+/** Completed periods collected before the timeline is resolved. */
+const MIN_BATCH = 64;
 
 type Segment = { station: number; periodStart: number; periodEnd: number; from: number; to: number };
 
@@ -25,7 +27,10 @@ export class BottleneckTracker {
   private pEnd: number[] = [];
   private settled: number;
   private cuts = new Float64Array(64);
-  private order = new Int32Array(32);
+  private resolveAt = MIN_BATCH;
+  /** No station has been idle since before this (Infinity: none is idle); skips needless scans. */
+  private oldestIdle = Infinity;
+  private nextSame = new Int32Array(32);
   private readonly covering: Int32Array;
   private held: Segment | null = null;
   /** Start and end of the overlap between the held segment's period and its predecessor's. */
@@ -58,6 +63,7 @@ export class BottleneckTracker {
     if (active === isActive) return;
     if (!active) {
       this.idleSince[station] = t;
+      if (t < this.oldestIdle) this.oldestIdle = t;
       return;
     }
     if (this.idleSince[station] >= 0) {
@@ -84,16 +90,21 @@ export class BottleneckTracker {
   }
 
   private closeStale(t: number): void {
+    if (!(t - this.oldestIdle > this.bridgeSeconds)) return;
     let closed = false;
+    let oldest = Infinity;
     for (let s = 0; s < this.idleSince.length; s++) {
-      if (this.idleSince[s] >= 0 && t - this.idleSince[s] > this.bridgeSeconds) {
+      const idle = this.idleSince[s];
+      if (idle < 0) continue;
+      if (t - idle > this.bridgeSeconds) {
         this.close(s);
         closed = true;
-      }
+      } else if (idle < oldest) oldest = idle;
     }
+    this.oldestIdle = oldest;
     if (!closed) return;
     if (this.pStation.length > MAX_PENDING) this.resolve(t, true);
-    else if (this.pStation.length > 16) this.resolve(t, false);
+    else if (this.pStation.length > this.resolveAt) this.resolve(t, false);
   }
 
   /** Resolves the timeline up to t (forced: running periods end at t). */
@@ -130,6 +141,9 @@ export class BottleneckTracker {
     this.pStation.length = kept;
     this.pStart.length = kept;
     this.pEnd.length = kept;
+    // Periods that stay pending (behind a long-running one) are re-read by each sweep; growing the
+    // trigger with them keeps the work per period constant.
+    this.resolveAt = Math.max(MIN_BATCH, 2 * kept);
   }
 
   /** Closes every running period at the end of the run and attributes the last segment. */
@@ -140,14 +154,15 @@ export class BottleneckTracker {
   }
 
   /**
-   * Walks the cut points (period starts and ends) between the settled time and the boundary. At most
-   * one period per station covers any instant, so the covering set is one slot per station.
+   * Walks the cut points (period starts and ends) between the settled time and the boundary. A
+   * station's periods are disjoint and close in order, so each station keeps a pointer to its first
+   * period not yet over; at most one period per station covers any instant.
    */
   private sweep(boundary: number): void {
     const n = this.pStation.length;
     if (this.cuts.length < 2 * n + 2) {
       this.cuts = new Float64Array(4 * n + 4);
-      this.order = new Int32Array(2 * n + 2);
+      this.nextSame = new Int32Array(2 * n + 2);
     }
     const cuts = this.cuts;
     let count = 0;
@@ -158,36 +173,32 @@ export class BottleneckTracker {
       if (this.pEnd[i] > this.settled && this.pEnd[i] < boundary) cuts[count++] = this.pEnd[i];
     }
     const points = cuts.subarray(0, count).sort();
-    const order = this.order.subarray(0, n);
-    for (let i = 0; i < n; i++) order[i] = i;
+    const pointer = this.covering.fill(-1);
+    for (let i = n - 1; i >= 0; i--) {
+      const st = this.pStation[i];
+      this.nextSame[i] = pointer[st];
+      pointer[st] = i;
+    }
     const starts = this.pStart;
-    order.sort((x, y) => starts[x] - starts[y]);
-    const covering = this.covering.fill(-1);
-    let next = 0;
+    const ends = this.pEnd;
     for (let k = 0; k + 1 < count; k++) {
       const a = points[k];
       const b = points[k + 1];
       if (b <= a) continue;
-      while (next < n && starts[order[next]] <= a) {
-        const i = order[next++];
-        if (this.pEnd[i] >= b) covering[this.pStation[i]] = i;
-      }
       let best = -1;
       let bestLen = -1;
-      for (let s = 0; s < covering.length; s++) {
-        const i = covering[s];
-        if (i < 0) continue;
-        if (this.pEnd[i] < b) {
-          covering[s] = -1;
-          continue;
-        }
-        const len = this.pEnd[i] - starts[i];
+      for (let st = 0; st < pointer.length; st++) {
+        let i = pointer[st];
+        while (i >= 0 && ends[i] <= a) i = this.nextSame[i];
+        pointer[st] = i;
+        if (i < 0 || starts[i] > a) continue;
+        const len = ends[i] - starts[i];
         if (len > bestLen) {
           best = i;
           bestLen = len;
         }
       }
-      if (best >= 0) this.extend(this.pStation[best], starts[best], this.pEnd[best], a, b);
+      if (best >= 0) this.extend(this.pStation[best], starts[best], ends[best], a, b);
     }
   }
 

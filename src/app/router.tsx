@@ -30,6 +30,10 @@ const signedInPages: RouteObject[] = [
     lazy: async () => ({ Component: (await import('../features/scenarios/routes/scenario-route')).ScenarioRoute }),
   },
   {
+    path: '/scenarios/:scenarioId/revisions/:number',
+    lazy: async () => ({ Component: (await import('../features/editor/routes/revision-route')).RevisionRoute }),
+  },
+  {
     path: '/projects/:projectId/runs',
     lazy: async () => ({ Component: (await import('../features/runs/routes/project-runs-route')).ProjectRunsRoute }),
   },

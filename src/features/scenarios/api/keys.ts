@@ -7,4 +7,6 @@ export const scenarioKeys = {
   details: () => [...scenarioKeys.all, 'detail'] as const,
   detail: (id: string) => [...scenarioKeys.details(), id] as const,
   revisions: (id: string) => [...scenarioKeys.all, 'revisions', id] as const,
+  /** One revision with its document; revisions never change. */
+  revision: (id: string, number: number) => [...scenarioKeys.all, 'revision', id, number] as const,
 };

@@ -1,29 +1,31 @@
-// /scenarios/:scenarioId : one scenario, its latest revision, its layout and its history.
+// /scenarios/:scenarioId : the scenario workspace (draft editor, live drawing, line balance, history)
+// with the run panel for the latest saved revision and the scenario's runs.
+import { useState } from 'react';
 import { useParams } from 'react-router-dom';
+import type { FieldIssue } from '../../../../shared/api/errors';
 import { LoadError } from '../../../components/load-error';
+import { NotFoundMessage } from '../../../components/not-found-message';
 import { Breadcrumbs } from '../../../components/ui/breadcrumbs';
-import { TitledCard } from '../../../components/ui/card';
 import { PageHeader } from '../../../components/ui/page-header';
 import { PageSpinner } from '../../../components/ui/spinner';
 import { isApiRequestError } from '../../../lib/api-client';
 import { formatDateTime, formatPerson } from '../../../lib/format';
 import { useCanEdit } from '../../auth/hooks/use-can-edit';
+import { ScenarioWorkspace } from '../../editor/components/scenario-workspace';
 import { useProject } from '../../projects/api/get-project';
-import { NotFoundMessage } from '../../../components/not-found-message';
-import { useRevisions } from '../api/get-revisions';
+import { RunPanel } from '../../runs/components/run-panel';
+import { ScenarioRuns } from '../../runs/components/scenario-runs';
 import { useScenario } from '../api/get-scenario';
-import { EditorSlot } from '../components/editor-slot';
-import { RevisionHistory } from '../components/revision-history';
-import { ScenarioOverview } from '../components/scenario-overview';
 
 export function ScenarioRoute() {
   const { scenarioId = '' } = useParams();
   const scenario = useScenario(scenarioId);
   const project = useProject(scenario.data?.projectId);
-  const revisions = useRevisions(scenarioId);
-  const mayEdit = useCanEdit(project.data?.organisationId);
+  const organisationId = project.data?.organisationId;
+  const mayEdit = useCanEdit(organisationId);
+  const [engineIssues, setEngineIssues] = useState<FieldIssue[]>([]);
 
-  if (scenario.isPending) return <PageSpinner label="Loading the scenario…" />;
+  if (scenario.isPending || (scenario.data && project.isPending)) return <PageSpinner label="Loading the scenario…" />;
   if (scenario.isError) {
     if (isApiRequestError(scenario.error) && scenario.error.status === 404) return <NotFoundMessage what="scenario" />;
     return <LoadError what="the scenario" error={scenario.error} onRetry={() => void scenario.refetch()} />;
@@ -54,18 +56,11 @@ export function ScenarioRoute() {
           </>
         }
       />
-      <EditorSlot mayEdit={mayEdit} />
-      <section aria-labelledby="overview-title" className="flex flex-col gap-4">
-        <h2 id="overview-title" className="text-xl font-semibold">
-          Layout overview
-        </h2>
-        <ScenarioOverview document={data.document} />
-      </section>
-      <TitledCard title="Revision history">
-        {revisions.isPending && <PageSpinner label="Loading revisions…" />}
-        {revisions.isError && <LoadError what="the revision history" error={revisions.error} onRetry={() => void revisions.refetch()} />}
-        {revisions.data && <RevisionHistory revisions={revisions.data} latestNumber={latest.number} />}
-      </TitledCard>
+      <div>
+        <ScenarioWorkspace key={`${data.id}:${mayEdit}`} scenario={data} mayEdit={mayEdit} engineIssues={engineIssues} />
+      </div>
+      <RunPanel scenarioId={data.id} organisationId={organisationId} revision={{ id: latest.id, number: latest.number, document: data.document }} onScenarioIssues={setEngineIssues} openResultWhenSaved={false} />
+      <ScenarioRuns scenarioId={data.id} organisationId={organisationId} />
     </div>
   );
 }

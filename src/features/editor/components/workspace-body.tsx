@@ -1,0 +1,76 @@
+// The editor beside the live drawing, and the line balance under them. Shared by the editable
+// workspace and the read-only view of an old revision; the form comes from the surrounding provider.
+import { useCallback, useMemo, useState } from 'react';
+import { useWatch } from 'react-hook-form';
+import { LineBalanceChart } from '../../../components/charts';
+import { Card, CardTitle } from '../../../components/ui/card';
+import { LayoutDrawing } from '../../layout/layout-drawing';
+import type { LayoutDraft } from '../../layout/layout-model';
+import type { LayoutSelection } from '../../layout/selection';
+import { EditorContext, useEditor, type ScenarioForm } from '../editor-context';
+import { balanceSteps } from '../utils/line-balance';
+import type { SectionId } from '../utils/paths';
+import { ScenarioEditor } from './scenario-editor';
+
+function DraftDrawing() {
+  const document = useWatch<ScenarioForm>();
+  const { selection, select } = useEditor();
+  return <LayoutDrawing document={document as LayoutDraft} selection={selection} onSelect={select} />;
+}
+
+function DraftBalance() {
+  const steps = useWatch<ScenarioForm, 'steps'>({ name: 'steps' });
+  const takt = useWatch<ScenarioForm, 'targetTaktSeconds'>({ name: 'targetTaktSeconds' });
+  const balance = useMemo(() => balanceSteps(steps), [steps]);
+  if (typeof takt !== 'number' || !Number.isFinite(takt) || takt <= 0) {
+    return <p className="text-sm text-ink-soft">Set a target takt under General to compare each step with it.</p>;
+  }
+  return <LineBalanceChart steps={balance} taktSeconds={takt} title="Line balance against the target takt (before simulation)" exportName="line-balance" />;
+}
+
+interface WorkspaceBodyProps {
+  readOnly: boolean;
+  externalIssues?: Readonly<Record<string, string>>;
+  clearExternal?: (path: string) => void;
+}
+
+const NO_ISSUES: Readonly<Record<string, string>> = {};
+
+export function WorkspaceBody({ readOnly, externalIssues = NO_ISSUES, clearExternal }: WorkspaceBodyProps) {
+  const [selection, setSelection] = useState<LayoutSelection>(null);
+  const [section, setSection] = useState<SectionId>('general');
+  const select = useCallback((next: LayoutSelection) => {
+    setSelection(next);
+    if (next?.kind === 'lane') setSection('lanes');
+    if (next?.kind === 'station') setSection('process');
+  }, []);
+  const context = useMemo(
+    () => ({ readOnly, externalIssues, clearExternal: clearExternal ?? (() => undefined), selection, select }),
+    [readOnly, externalIssues, clearExternal, selection, select],
+  );
+  return (
+    <EditorContext.Provider value={context}>
+      <div className="grid gap-6 xl:grid-cols-[minmax(0,11fr)_minmax(0,10fr)]">
+        <Card aria-labelledby="editor-title" className="min-w-0">
+          <CardTitle id="editor-title" className="mb-4">
+            {readOnly ? 'Scenario (read-only)' : 'Edit the scenario'}
+          </CardTitle>
+          <ScenarioEditor section={section} onSection={setSection} />
+        </Card>
+        <Card aria-labelledby="drawing-title" className="min-w-0 self-start xl:sticky xl:top-4">
+          <CardTitle id="drawing-title" className="mb-4">
+            Layout drawing
+          </CardTitle>
+          <DraftDrawing />
+        </Card>
+      </div>
+      <Card aria-labelledby="balance-title" className="mt-6">
+        <CardTitle id="balance-title" className="mb-2">
+          Line balance
+        </CardTitle>
+        <p className="mb-4 max-w-prose text-sm text-ink-soft">Each step's mean cycle time per station (mean ÷ parallel stations) from the distributions in the draft, against the target takt. Variability, blocking and failures need the simulation.</p>
+        <DraftBalance />
+      </Card>
+    </EditorContext.Provider>
+  );
+}

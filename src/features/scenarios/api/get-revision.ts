@@ -1,0 +1,19 @@
+// One revision of a scenario with its document, for the read-only view and for restoring it.
+// Revisions never change, so a fetched one stays fresh.
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRoutes } from '../../../../shared/api/routes';
+import { revisionSchema } from '../../../../shared/api/scenarios';
+import { api } from '../../../lib/api-client';
+import { scenarioKeys } from './keys';
+
+export const getScenarioRevision = (scenarioId: string, number: number, signal?: AbortSignal) =>
+  api.get(apiRoutes.scenarioRevision(scenarioId, number), revisionSchema, { signal });
+
+export const scenarioRevisionQueryOptions = (scenarioId: string, number: number) =>
+  queryOptions({
+    queryKey: scenarioKeys.revision(scenarioId, number),
+    queryFn: ({ signal }) => getScenarioRevision(scenarioId, number, signal),
+    staleTime: Infinity,
+  });
+
+export const useScenarioRevision = (scenarioId: string, number: number) => useQuery(scenarioRevisionQueryOptions(scenarioId, number));

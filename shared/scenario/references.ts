@@ -59,7 +59,11 @@ function checkTrack(s: ScenarioShape, ctx: Ctx, deckIds: Map<string, number>, la
 }
 
 function checkStations(s: ScenarioShape, ctx: Ctx, laneIds: Map<string, number>): void {
-  const pitch = s.carriers.lengthMm + s.carriers.minGapMm;
+  // On a belt, queued pallets keep the belt's pitch centre to centre, so two stations closer than
+  // that can never both hold a pallet.
+  const belt = s.conveyor.kind === 'belt' ? s.conveyor.pitchMm : 0;
+  const pitch = Math.max(s.carriers.lengthMm + s.carriers.minGapMm, belt);
+  const spacing = belt >= s.carriers.lengthMm + s.carriers.minGapMm ? `the belt's pallet pitch (${pitch} mm)` : `one carrier length plus gap (${pitch} mm)`;
   const byLane = new Map<string, { position: number; path: Path }[]>();
   s.steps.forEach((step, i) =>
     step.stations.forEach((station, j) => {
@@ -76,7 +80,7 @@ function checkStations(s: ScenarioShape, ctx: Ctx, laneIds: Map<string, number>)
       const list = byLane.get(station.laneId) ?? [];
       for (const other of list) {
         if (Math.abs(other.position - station.positionMm) < pitch) {
-          ctx.addIssue({ code: 'custom', path: [...path, 'positionMm'], message: `is closer than one carrier length plus gap (${pitch} mm) to the station at ${other.position} mm on lane "${station.laneId}"` });
+          ctx.addIssue({ code: 'custom', path: [...path, 'positionMm'], message: `is closer than ${spacing} to the station at ${other.position} mm on lane "${station.laneId}"` });
         }
       }
       list.push({ position: station.positionMm, path });

@@ -2,15 +2,22 @@
 // served by one or more stations at positions on lanes; a dispatch rule picks among them.
 import { z } from 'zod';
 import { distributionSchema } from './distribution';
+import { distributionMean } from './distribution-moments';
 import { idSchema, labelSchema, nonNegative, share } from './units';
 
 export const DISPATCH_RULES = ['firstFree', 'shortestQueue', 'roundRobin'] as const;
 export const STEP_KINDS = ['load', 'process', 'inspect', 'unload'] as const;
 export const STATION_OPERATIONS = ['automatic', 'manual'] as const;
 
+/** A station that fails after less than this much work on average is a typing mistake (our choice). */
+export const FAILURE_LIMITS = { meanTimeBetweenFailuresMinSeconds: 1 } as const;
+
 export const failureSchema = z.object({
   /** Operating (processing) time between the end of one repair and the next failure. */
-  timeBetweenFailuresSeconds: distributionSchema,
+  timeBetweenFailuresSeconds: distributionSchema.refine(
+    (d) => distributionMean(d) >= FAILURE_LIMITS.meanTimeBetweenFailuresMinSeconds,
+    `the mean time between failures must be at least ${FAILURE_LIMITS.meanTimeBetweenFailuresMinSeconds} s of work; check that it is in seconds`,
+  ),
   timeToRepairSeconds: distributionSchema,
 });
 

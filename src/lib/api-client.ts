@@ -30,6 +30,8 @@ type Query = Record<string, string | undefined>;
 
 interface RequestOptions {
   body?: unknown;
+  /** A multipart body (file uploads); the browser writes its Content-Type with the boundary. */
+  form?: FormData;
   query?: Query;
   signal?: AbortSignal;
 }
@@ -72,7 +74,7 @@ async function request<S extends z.ZodType>(method: Method, path: string, schema
       method,
       headers,
       credentials: 'same-origin',
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body: options.form ?? (options.body === undefined ? undefined : JSON.stringify(options.body)),
       signal: options.signal,
     });
   } catch (cause) {
@@ -98,8 +100,9 @@ async function request<S extends z.ZodType>(method: Method, path: string, schema
 }
 
 export const api = {
-  get: <S extends z.ZodType>(path: string, schema: S, options?: Omit<RequestOptions, 'body'>) => request('GET', path, schema, options),
+  get: <S extends z.ZodType>(path: string, schema: S, options?: Omit<RequestOptions, 'body' | 'form'>) => request('GET', path, schema, options),
   post: <S extends z.ZodType>(path: string, body: unknown, schema: S) => request('POST', path, schema, { body }),
+  postForm: <S extends z.ZodType>(path: string, form: FormData, schema: S) => request('POST', path, schema, { form }),
   patch: <S extends z.ZodType>(path: string, body: unknown, schema: S) => request('PATCH', path, schema, { body }),
   delete: <S extends z.ZodType>(path: string, schema: S) => request('DELETE', path, schema),
 };

@@ -140,6 +140,25 @@ describe('TimeStudyPanel', () => {
     expect(screen.queryByRole('alert')).toBeNull();
   });
 
+  it('deletes a study after a second press and refetches the list', async () => {
+    const detail = study();
+    let listed = [detail];
+    const api = mockApi({
+      [`GET ${apiRoutes.scenarioTimeStudies(SCENARIO_ID)}`]: () => ({ status: 200, body: listed.map(listItem) }),
+      [`GET ${apiRoutes.timeStudy(STUDY_ID)}`]: { status: 200, body: detail },
+      [`DELETE ${apiRoutes.timeStudy(STUDY_ID)}`]: () => {
+        listed = [];
+        return { status: 200, body: { ok: true } };
+      },
+    });
+    const { user } = renderPanel(true);
+    await user.click(await screen.findByRole('button', { name: 'Delete time study Press, week 12' }));
+    expect(api.callsTo('DELETE', apiRoutes.timeStudy(STUDY_ID))).toHaveLength(0);
+    await user.click(screen.getByRole('button', { name: 'Confirm: delete the 120 samples of Press, week 12 for everyone' }));
+    await screen.findByText(/No time study yet/);
+    expect(api.callsTo('DELETE', apiRoutes.timeStudy(STUDY_ID))).toHaveLength(1);
+  });
+
   it('refuses a file over 1 MB or of another type before sending it', async () => {
     const api = mockApi({ [`GET ${apiRoutes.scenarioTimeStudies(SCENARIO_ID)}`]: { status: 200, body: [] } });
     const { user } = renderPanel(true);

@@ -149,22 +149,18 @@ export function entryClear(m: LineState, lane: number): boolean {
 
 /**
  * Schedules a lane check for the moment the moving rear carrier clears the lane start, found by
- * bisection on its motion (the move is monotone). Nothing to schedule when it stops short of that.
+ * inverting its motion profile. Nothing to schedule when it stops short of that.
  */
 export function scheduleEntryWake(m: LineState, lane: number): void {
   const rear = m.laneRear[lane];
   if (rear < 0 || m.cPhase[rear] !== PH_MOVING || m.laneWakePending[lane]) return;
   const needed = m.line.carrierLengthMm + m.line.pitchMm;
   if (m.cDest[rear] < needed - EPS_MM) return;
-  let lo = m.now;
-  let hi = m.cMoveEnd[rear];
-  for (let i = 0; i < 60 && hi - lo > 1e-7; i++) {
-    const mid = (lo + hi) / 2;
-    if (positionAt(m, rear, mid) >= needed - EPS_MM) hi = mid;
-    else lo = mid;
-  }
+  // Aim half the tolerance past the threshold, so rounding can never wake the lane a hair too early.
+  const start = m.cPos[rear];
+  const into = m.line.motion.secondsToCover(m.cDest[rear] - start, m.cProfile[rear], needed - EPS_MM / 2 - start);
   m.laneWakePending[lane] = 1;
-  scheduleActive(m, hi - m.now, EV_LANE_WAKE, lane);
+  scheduleActive(m, Math.max(0, m.cMoveStart[rear] + into - m.now), EV_LANE_WAKE, lane);
 }
 
 /** Marks a lane whose entry should be re-examined after the current event, if anything waits for it. */

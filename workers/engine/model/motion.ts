@@ -4,7 +4,7 @@
 // (both start from rest, the follower no earlier, and its target is behind the leader's). Belt
 // pallets move at the constant belt speed.
 import type { Scenario } from '../../../shared/scenario/scenario';
-import { moveTime, positionAt, type MotionProfile } from '../motion/profile';
+import { moveTime, positionAt, timeToReach, type MotionProfile } from '../motion/profile';
 
 export const PROFILE_LOADED = 0;
 export const PROFILE_EMPTY = 1;
@@ -14,6 +14,8 @@ export const PROFILE_SLOWER = 2;
 export type Motion = {
   moveSeconds(distanceMm: number, profile: number): number;
   travelledMm(distanceMm: number, profile: number, elapsedSeconds: number): number;
+  /** Seconds into a move of distanceMm until the carrier has covered xMm (the inverse of travelledMm). */
+  secondsToCover(distanceMm: number, profile: number, xMm: number): number;
   /** Top speed of a loaded carrier, for route estimates. */
   cruiseMmPerS: number;
 };
@@ -35,6 +37,7 @@ export function createMotion(s: Scenario): Motion {
     return {
       moveSeconds: (d) => (d > 0 ? d / speed : 0),
       travelledMm: (d, _p, t) => (t <= 0 ? 0 : Math.min(d, t * speed)),
+      secondsToCover: (d, _p, x) => (x <= 0 ? 0 : Math.min(d, x) / speed),
       cruiseMmPerS: speed,
     };
   }
@@ -44,6 +47,7 @@ export function createMotion(s: Scenario): Motion {
   return {
     moveSeconds: (d, p) => moveTime(d, profiles[p]),
     travelledMm: (d, p, t) => positionAt(d, profiles[p], t),
+    secondsToCover: (d, p, x) => timeToReach(d, profiles[p], x),
     cruiseMmPerS: loaded.vMax,
   };
 }

@@ -76,3 +76,44 @@ export function positionAt(distanceMm: number, p: MotionProfile, t: number): num
   if (t < total - ramp) return (peak * ramp) / 2 + peak * (t - ramp);
   return distanceMm - rampDistance(total - t, peak, ramp, p);
 }
+
+/** The time into the ramp at which it has covered y (0 ≤ y ≤ peak · ramp / 2): the inverse of rampDistance. */
+function rampTime(y: number, peak: number, ramp: number, p: MotionProfile): number {
+  const jMax = jerkLimit(p);
+  if (jMax === undefined) return Math.sqrt((2 * y) / p.aMax);
+  const peakAcceleration = Math.min(p.aMax, Math.sqrt(peak * jMax));
+  const jerkTime = peakAcceleration / jMax;
+  // First jerk phase: y = j t³ / 6.
+  if (y <= (jMax * jerkTime ** 3) / 6) return Math.cbrt((6 * y) / jMax);
+  // Constant acceleration: y = A Tj²/6 + (A Tj/2) u + (A/2) u², u = t − Tj.
+  if (y <= rampDistance(ramp - jerkTime, peak, ramp, p)) {
+    const b = jerkTime / 2;
+    const c = (jerkTime * jerkTime) / 6 - y / peakAcceleration;
+    return jerkTime - b + Math.sqrt(b * b - 2 * c);
+  }
+  // Last jerk phase (a cubic): bisect the closed-form ramp distance there, which is monotone.
+  let lo = ramp - jerkTime;
+  let hi = ramp;
+  for (let i = 0; i < 60 && hi - lo > 1e-10; i++) {
+    const mid = (lo + hi) / 2;
+    if (rampDistance(mid, peak, ramp, p) >= y) hi = mid;
+    else lo = mid;
+  }
+  return hi;
+}
+
+/**
+ * The earliest time into a move of distanceMm at which the carrier has covered xMm: the inverse of
+ * positionAt, for waking whoever waits until a moving carrier has cleared a point.
+ */
+export function timeToReach(distanceMm: number, p: MotionProfile, xMm: number): number {
+  if (!(distanceMm > 0) || !(xMm > 0)) return 0;
+  const total = moveTime(distanceMm, p);
+  if (xMm >= distanceMm) return total;
+  const peak = peakSpeed(distanceMm, p);
+  const ramp = accelerationTime(peak, p);
+  const rampMm = (peak * ramp) / 2;
+  if (xMm <= rampMm) return rampTime(xMm, peak, ramp, p);
+  if (xMm <= distanceMm - rampMm) return ramp + (xMm - rampMm) / peak;
+  return total - rampTime(distanceMm - xMm, peak, ramp, p);
+}

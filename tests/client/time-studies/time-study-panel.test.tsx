@@ -44,12 +44,12 @@ function listItem(detail: TimeStudyDetail) {
   return item;
 }
 
-function renderPanel(canEdit: boolean) {
+function renderPanel(canEdit: boolean, stationId = 'press') {
   const onUse = vi.fn<(d: Distribution) => void>();
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   render(
     <QueryClientProvider client={queryClient}>
-      <TimeStudyPanel scenarioId={SCENARIO_ID} stationId="press" stationName="Press" canEdit={canEdit} onUse={onUse} />
+      <TimeStudyPanel scenarioId={SCENARIO_ID} stationId={stationId} stationName="Press" canEdit={canEdit} onUse={onUse} />
     </QueryClientProvider>,
   );
   return { onUse, user: userEvent.setup() };
@@ -157,6 +157,13 @@ describe('TimeStudyPanel', () => {
     await user.click(screen.getByRole('button', { name: 'Confirm: delete the 120 samples of Press, week 12 for everyone' }));
     await screen.findByText(/No time study yet/);
     expect(api.callsTo('DELETE', apiRoutes.timeStudy(STUDY_ID))).toHaveLength(1);
+  });
+
+  it('asks for a valid station id before fetching anything', () => {
+    const api = mockApi({});
+    renderPanel(true, 'press #2');
+    expect(screen.getByText(/give the station a valid id first/)).toBeTruthy();
+    expect(api.calls).toHaveLength(0);
   });
 
   it('refuses a file over 1 MB or of another type before sending it', async () => {

@@ -4,6 +4,7 @@
 import { useId, useState } from 'react';
 import type { TimeStudyDetail } from '../../../../shared/api/time-studies';
 import type { Distribution } from '../../../../shared/scenario/distribution';
+import { idSchema } from '../../../../shared/scenario/units';
 import { LoadError } from '../../../components/load-error';
 import { Spinner } from '../../../components/ui/spinner';
 import { useTimeStudies } from '../api/get-time-studies';
@@ -29,7 +30,16 @@ function SelectedStudy({ id, stationName, canEdit, onUse }: { id: string; statio
   return <TimeStudyAnalysis study={study.data} stationName={stationName} canEdit={canEdit} onUse={onUse} />;
 }
 
-export function TimeStudyPanel({ scenarioId, stationId, stationName, canEdit, onUse }: TimeStudyPanelProps) {
+/** While a station's id is being typed it may be invalid; studies are keyed by it, so wait for a valid one. */
+export function TimeStudyPanel(props: TimeStudyPanelProps) {
+  const parsed = idSchema.safeParse(props.stationId);
+  if (!parsed.success) {
+    return <p className="text-sm text-ink-soft">Time studies: give the station a valid id first ({parsed.error.issues[0]?.message}).</p>;
+  }
+  return <StationTimeStudies {...props} />;
+}
+
+function StationTimeStudies({ scenarioId, stationId, stationName, canEdit, onUse }: TimeStudyPanelProps) {
   const headingId = useId();
   const studies = useTimeStudies({ scenarioId, stationId });
   const [chosenId, setChosenId] = useState<string | null>(null);

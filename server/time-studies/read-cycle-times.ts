@@ -42,13 +42,14 @@ function findSeparator(text: string): string {
     const counts = lines.map((l) => l.split(sep).length - 1);
     if (counts.length > 0 && counts[0] > 0 && counts.every((c) => c === counts[0])) return sep;
   }
-  for (const sep of SEPARATORS) if (lines.length > 0 && lines.every((l) => l.includes(sep))) return sep;
+  // Short rows (a missing last cell) break the equal count; a separator in the header and in most lines still counts.
+  for (const sep of SEPARATORS) if (lines.length > 0 && lines[0].includes(sep) && lines.filter((l) => l.includes(sep)).length * 2 > lines.length) return sep;
   return ONE_COLUMN;
 }
 
 const isBlank = (row: readonly string[]) => row.every((cell) => cell.trim() === '');
 
-function chooseColumn(header: string[] | null, data: string[][], width: number): { index: number; name: string } {
+function chooseColumn(header: string[] | null, data: string[][], width: number, separator: string): { index: number; name: string } {
   const names = Array.from({ length: width }, (_, i) => (header?.[i]?.trim() ? header[i].trim() : `column ${i + 1}`));
   const sample = data.slice(0, SNIFF_LINES);
   const counts = names.map((_, i) => {
@@ -71,7 +72,9 @@ function chooseColumn(header: string[] | null, data: string[][], width: number):
   if (candidates.length === 1) return { index: candidates[0], name: names[candidates[0]] };
   if (candidates.length === 0) throw badRequest(`No numeric column found; columns are: ${listed}.`, [{ path: 'file', message: `has no numeric column; columns are: ${listed}` }]);
   const several = candidates.map((i) => names[i]).join(', ');
-  throw badRequest(`Several numeric columns (${several}) and none is named like cycle, seconds or time; name the column of cycle times so, or remove the others.`, [
+  // "12,5" on every line of a one-column file without a header looks exactly like two columns.
+  const decimalComma = !header && separator === ',' && width === 2 ? ' If the file is one column of times with a decimal comma, add a header row such as "cycle_s".' : '';
+  throw badRequest(`Several numeric columns (${several}) and none is named like cycle, seconds or time; name the column of cycle times so, or remove the others.${decimalComma}`, [
     { path: 'file', message: `has several numeric columns (${several}); name the cycle-time column "cycle_s"` },
   ]);
 }
@@ -84,7 +87,7 @@ function tooManyRows(rows: number): HttpError {
 }
 
 function cellProblem(cell: string, value: number | null): string | null {
-  if (cell.trim() === '') return 'is empty';
+  if (cell.trim() === '') return 'the cell is empty';
   if (value === null) return `"${cell.trim().slice(0, 40)}" is not a number`;
   if (value < 0) return `${cell.trim()} is below zero; a cycle time cannot be negative`;
   return null;
@@ -110,7 +113,7 @@ export function readCycleTimes(text: string): CycleTimeColumn {
   if (filled === 0) throw badRequest('The file has a header row but no cycle times below it.', [{ path: 'file', message: 'has no rows of cycle times' }]);
 
   const width = Math.max(...rows.slice(firstIndex, firstIndex + SNIFF_LINES).map((row) => row.length));
-  const { index, name } = chooseColumn(header, dataRows.filter((row) => !isBlank(row)), width);
+  const { index, name } = chooseColumn(header, dataRows.filter((row) => !isBlank(row)), width, separator);
   const samples: number[] = [];
   const problems: FieldIssue[] = [];
   let problemCount = 0;

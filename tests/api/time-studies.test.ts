@@ -90,6 +90,15 @@ describe('refusing bad files with the reason and the place', () => {
     expect(error.message).toMatch(/^9 rows could not be read: .* \(and 4 more\)\.$/);
   });
 
+  it('a short row is named as an empty cell, and a headerless decimal-comma column gets a hint', async () => {
+    const short = await upload(org.people.engineer.agent, { content: 'operator;cycle\nA;9,5\nB\nA;9,9\n', name: 'short.csv' });
+    expect(short.status).toBe(400);
+    expect(errorOf(short).fields).toEqual([{ path: 'file', message: 'row 3, column "cycle": the cell is empty' }]);
+    const ambiguous = await upload(org.people.engineer.agent, { content: '12,5\n13,0\n', name: 'ambiguous.csv' });
+    expect(ambiguous.status).toBe(400);
+    expect(errorOf(ambiguous).message).toContain('add a header row such as "cycle_s"');
+  });
+
   it('no numeric column answers 400 listing the columns', async () => {
     const res = await upload(org.people.engineer.agent, { content: 'operator,note\nA,fine\nB,slow\n', name: 'notes.csv' });
     expect(res.status).toBe(400);

@@ -13,6 +13,8 @@ export type LoopStation = {
   cycle: Distribution;
   /** A manual station that stops for the calendar's breaks. */
   manual?: boolean;
+  /** Makes the station's step an inspection; rework goes back to the step of station reworkTo. */
+  inspect?: { rejectShare: number; reworkShare: number; reworkTo: string };
   failures?: { timeBetweenFailuresSeconds: Distribution; timeToRepairSeconds: Distribution };
 };
 
@@ -70,7 +72,9 @@ function joinsOf(spec: LoopLine) {
 export function loopScenario(spec: LoopLine, name = 'Reference loop'): ScenarioInput {
   const last = spec.stations.length - 1;
   const twoDecks = spec.joins?.[0].kind === 'elevator';
-  const stepKind = (i: number) => (i === 0 ? 'load' : i === last ? 'unload' : 'process');
+  const stepKind = (i: number) => (i === 0 ? 'load' : i === last ? 'unload' : spec.stations[i].inspect ? 'inspect' : 'process');
+  const inspection = (st: LoopStation) =>
+    st.inspect ? { rejectShare: st.inspect.rejectShare, reworkShare: st.inspect.reworkShare, reworkStepId: `step-${st.inspect.reworkTo}` } : {};
   return {
     schemaVersion: 1,
     name,
@@ -100,6 +104,7 @@ export function loopScenario(spec: LoopLine, name = 'Reference loop'): ScenarioI
       name: `Step ${st.id}`,
       kind: stepKind(i),
       dispatch: 'firstFree',
+      ...inspection(st),
       stations: [
         {
           id: st.id,

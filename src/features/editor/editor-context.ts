@@ -13,7 +13,7 @@ export interface EditorContextValue {
   externalIssues: Readonly<Record<string, string>>;
   clearExternal: (path: string) => void;
   selection: LayoutSelection;
-  select: (selection: LayoutSelection) => void;
+  select: (selection: LayoutSelection, from?: 'drawing' | 'editor') => void;
 }
 
 export const EditorContext = createContext<EditorContextValue>({

@@ -51,3 +51,10 @@ export function scaleBarLengthMm(spanMm: number): number {
   const steps = [1, 2, 5, 10];
   return (steps.find((s) => s * power >= target) ?? 10) * power;
 }
+
+/** Labels near either edge grow inwards, so they are never cut off by the drawing's border. */
+export function anchorFor(xPx: number, widthPx: number = DRAWING.widthPx): 'start' | 'middle' | 'end' {
+  if (xPx > widthPx - 120) return 'end';
+  if (xPx < 120) return 'start';
+  return 'middle';
+}

@@ -1,7 +1,7 @@
 // Side elevation: each deck at its height, its lanes projected onto the layout's long axis, and the
 // elevators as vertical connectors between the decks they join. Heights are to their own scale.
 import { formatLengthMm } from '../../lib/format';
-import { DRAWING } from './drawing-frame';
+import { anchorFor, DRAWING } from './drawing-frame';
 import type { LayoutModel } from './layout-model';
 
 const HEIGHT_PX = 200;
@@ -11,7 +11,8 @@ export function ElevationView({ model }: { model: LayoutModel }) {
   const { colour } = DRAWING;
   const box = model.footprint?.box;
   const decks = model.decks.filter((deck) => deck.elevationMm !== null);
-  if (!box || decks.length === 0) return null;
+  // With one deck there is nothing to show side-on that the plan does not already say.
+  if (!box || decks.length < 2) return null;
   const alongX = box.maxX - box.minX >= box.maxY - box.minY;
   const lo = alongX ? box.minX : box.minY;
   const hi = alongX ? box.maxX : box.maxY;
@@ -59,7 +60,7 @@ export function ElevationView({ model }: { model: LayoutModel }) {
                 <title>{`Elevator ${join.name}: ${join.from.id} to ${join.to.id}`}</title>
                 <line x1={x} x2={x} y1={y1} y2={y2} stroke={colour.join} strokeWidth={3} />
                 <rect x={x - 7} y={Math.min(y1, y2) - 4} width={14} height={Math.abs(y2 - y1) + 8} fill="none" stroke={colour.join} strokeWidth={1} />
-                <text x={x} y={Math.min(y1, y2) - 10} textAnchor="middle" fontSize={10} fill={colour.join}>
+                <text x={x} y={Math.min(y1, y2) - 10} textAnchor={anchorFor(x)} fontSize={10} fill={colour.join}>
                   {y2 < y1 ? '↑' : '↓'} {join.name}
                 </text>
               </g>

@@ -1,6 +1,6 @@
 // Joins between lanes in plan. Links and same-deck transfers are drawn from one lane's exit to the
 // next lane's entry; an elevator is a square marker at each end, naming the deck it leads to.
-import { DRAWING, type PlanFrame } from './drawing-frame';
+import { anchorFor, DRAWING, type PlanFrame } from './drawing-frame';
 import type { PlanDeck, PlanJoin } from './layout-model';
 
 const KIND_LABEL = { link: 'link', elevator: 'elevator', lateral: 'lateral transfer', curve: 'curve' } as const;
@@ -54,7 +54,7 @@ export function ElevatorEnd({ join, frame, deckId, decks }: { join: PlanJoin; fr
       <title>{`Elevator ${text}`}</title>
       <rect x={x - 9} y={y - 9} width={18} height={18} fill={colour.paper} stroke={colour.join} strokeWidth={2} />
       <path d={`M${x},${y - 6} L${x},${y + 6} M${x - 3},${y - 3} L${x},${y - 6} L${x + 3},${y - 3} M${x - 3},${y + 3} L${x},${y + 6} L${x + 3},${y + 3}`} stroke={colour.join} fill="none" strokeWidth={1.5} />
-      <text x={x} y={y + 24} fontSize={10} fill={colour.join} textAnchor="middle">
+      <text x={x} y={y + 24} fontSize={10} fill={colour.join} textAnchor={anchorFor(x)}>
         {leaving ? '↧' : '↥'} {other}
       </text>
     </g>

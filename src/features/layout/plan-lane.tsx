@@ -81,7 +81,15 @@ export function PlanLaneShape({ lane, frame, widthMm, selected, onSelect }: Plan
         return <polyline key={i} points={`${left} ${tip} ${right}`} fill="none" stroke={colour.inkSoft} strokeWidth={1.5} />;
       })}
       <circle cx={entry.x} cy={entry.y} r={3} fill={colour.ink} />
-      <text x={entry.x + 4} y={entry.y - across - 5} fontSize={11} fill={colour.ink} fontWeight={selected ? 700 : 500}>
+      {/* The id sits just before the entry, away from the station labels above and below the lane. */}
+      <text
+        x={entry.x - dx * 14}
+        y={entry.y + dy * 14 + (dy === 0 ? 4 : dy > 0 ? 8 : 0)}
+        textAnchor={dx > 0 ? 'end' : dx < 0 ? 'start' : 'middle'}
+        fontSize={11}
+        fill={colour.ink}
+        fontWeight={selected ? 700 : 500}
+      >
         {lane.id}
       </text>
     </g>

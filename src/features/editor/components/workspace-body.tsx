@@ -1,6 +1,6 @@
 // The editor beside the live drawing, and the line balance under them. Shared by the editable
 // workspace and the read-only view of an old revision; the form comes from the surrounding provider.
-import { useCallback, useMemo, useState } from 'react';
+import { useCallback, useMemo, useRef, useState } from 'react';
 import { useWatch } from 'react-hook-form';
 import { LineBalanceChart } from '../../../components/charts';
 import { Card, CardTitle } from '../../../components/ui/card';
@@ -15,7 +15,7 @@ import { ScenarioEditor } from './scenario-editor';
 function DraftDrawing() {
   const document = useWatch<ScenarioForm>();
   const { selection, select } = useEditor();
-  return <LayoutDrawing document={document as LayoutDraft} selection={selection} onSelect={select} />;
+  return <LayoutDrawing document={document as LayoutDraft} selection={selection} onSelect={(next) => select(next, 'drawing')} />;
 }
 
 function DraftBalance() {
@@ -39,10 +39,13 @@ const NO_ISSUES: Readonly<Record<string, string>> = {};
 export function WorkspaceBody({ readOnly, externalIssues = NO_ISSUES, clearExternal }: WorkspaceBodyProps) {
   const [selection, setSelection] = useState<LayoutSelection>(null);
   const [section, setSection] = useState<SectionId>('general');
-  const select = useCallback((next: LayoutSelection) => {
+  const editorRef = useRef<HTMLElement>(null);
+  const select = useCallback((next: LayoutSelection, from: 'drawing' | 'editor' = 'editor') => {
     setSelection(next);
     if (next?.kind === 'lane') setSection('lanes');
     if (next?.kind === 'station') setSection('process');
+    // The editor sits under the drawing: bring the picked item's form into view.
+    if (from === 'drawing') editorRef.current?.scrollIntoView?.({ behavior: 'smooth', block: 'start' });
   }, []);
   const context = useMemo(
     () => ({ readOnly, externalIssues, clearExternal: clearExternal ?? (() => undefined), selection, select }),
@@ -50,18 +53,18 @@ export function WorkspaceBody({ readOnly, externalIssues = NO_ISSUES, clearExter
   );
   return (
     <EditorContext.Provider value={context}>
-      <div className="grid gap-6 xl:grid-cols-[minmax(0,11fr)_minmax(0,10fr)]">
-        <Card aria-labelledby="editor-title" className="min-w-0">
-          <CardTitle id="editor-title" className="mb-4">
-            {readOnly ? 'Scenario (read-only)' : 'Edit the scenario'}
-          </CardTitle>
-          <ScenarioEditor section={section} onSection={setSection} />
-        </Card>
-        <Card aria-labelledby="drawing-title" className="min-w-0 self-start xl:sticky xl:top-4">
+      <div className="flex flex-col gap-6">
+        <Card aria-labelledby="drawing-title" className="min-w-0">
           <CardTitle id="drawing-title" className="mb-4">
             Layout drawing
           </CardTitle>
           <DraftDrawing />
+        </Card>
+        <Card aria-labelledby="editor-title" className="min-w-0" ref={editorRef}>
+          <CardTitle id="editor-title" className="mb-4">
+            {readOnly ? 'Scenario (read-only)' : 'Edit the scenario'}
+          </CardTitle>
+          <ScenarioEditor section={section} onSection={setSection} />
         </Card>
       </div>
       <Card aria-labelledby="balance-title" className="mt-6">

@@ -14,10 +14,10 @@ import { PageHeader } from '../../../components/ui/page-header';
 import { PageSpinner } from '../../../components/ui/spinner';
 import { isApiRequestError } from '../../../lib/api-client';
 import { formatDateTime, formatPerson } from '../../../lib/format';
-import { useCanEdit } from '../../auth/hooks/use-can-edit';
 import { useProject } from '../../projects/api/get-project';
 import { useScenarioRevision } from '../../scenarios/api/get-revision';
 import { useScenario } from '../../scenarios/api/get-scenario';
+import { useEditPermission } from '../../scenarios/hooks/use-edit-permission';
 import { ScenarioOverview } from '../../scenarios/components/scenario-overview';
 import { ImportExport } from '../components/import-export';
 import { WorkspaceBody } from '../components/workspace-body';
@@ -39,12 +39,12 @@ export function RevisionRoute() {
   const scenario = useScenario(scenarioId);
   const revision = useScenarioRevision(scenarioId, valid ? revisionNumber : 0);
   const project = useProject(scenario.data?.projectId);
-  const mayEdit = useCanEdit(project.data?.organisationId);
+  const { ready, mayEdit } = useEditPermission(project.data?.organisationId);
   const { restore, restoring, error } = useRestoreRevision(scenarioId);
   const navigate = useNavigate();
 
   if (!valid) return <NotFoundMessage what="revision" />;
-  if (scenario.isPending || revision.isPending) return <PageSpinner label="Loading the revision…" />;
+  if (!ready || scenario.isPending || revision.isPending) return <PageSpinner label="Loading the revision…" />;
   for (const query of [scenario, revision]) {
     if (query.isError) {
       if (isApiRequestError(query.error) && query.error.status === 404) return <NotFoundMessage what="revision" />;

@@ -10,22 +10,22 @@ import { PageHeader } from '../../../components/ui/page-header';
 import { PageSpinner } from '../../../components/ui/spinner';
 import { isApiRequestError } from '../../../lib/api-client';
 import { formatDateTime, formatPerson } from '../../../lib/format';
-import { useCanEdit } from '../../auth/hooks/use-can-edit';
 import { ScenarioWorkspace } from '../../editor/components/scenario-workspace';
 import { useProject } from '../../projects/api/get-project';
 import { RunPanel } from '../../runs/components/run-panel';
 import { ScenarioRuns } from '../../runs/components/scenario-runs';
 import { useScenario } from '../api/get-scenario';
+import { useEditPermission } from '../hooks/use-edit-permission';
 
 export function ScenarioRoute() {
   const { scenarioId = '' } = useParams();
   const scenario = useScenario(scenarioId);
   const project = useProject(scenario.data?.projectId);
   const organisationId = project.data?.organisationId;
-  const mayEdit = useCanEdit(organisationId);
+  const { ready, mayEdit } = useEditPermission(organisationId);
   const [engineIssues, setEngineIssues] = useState<FieldIssue[]>([]);
 
-  if (scenario.isPending || (scenario.data && project.isPending)) return <PageSpinner label="Loading the scenario…" />;
+  if (!ready || scenario.isPending || (scenario.data && project.isPending)) return <PageSpinner label="Loading the scenario…" />;
   if (scenario.isError) {
     if (isApiRequestError(scenario.error) && scenario.error.status === 404) return <NotFoundMessage what="scenario" />;
     return <LoadError what="the scenario" error={scenario.error} onRetry={() => void scenario.refetch()} />;

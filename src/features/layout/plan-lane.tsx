@@ -1,6 +1,6 @@
 // One lane in plan: a strip to scale, module joints as ticks across it, chevrons for the direction
 // of travel and its id at the entry. Clicking or pressing Enter on it selects it.
-import type { KeyboardEvent } from 'react';
+import type { KeyboardEvent, MouseEvent } from 'react';
 import { formatLengthMm } from '../../lib/format';
 import { DRAWING, type PlanFrame } from './drawing-frame';
 import { directionOf, pointAlong, type PlanLane } from './geometry';
@@ -15,12 +15,25 @@ interface PlanLaneProps {
 
 const ARROW_SPACING_PX = 140;
 
-export function activateOnKey(onSelect: (() => void) | undefined) {
-  return (event: KeyboardEvent) => {
-    if (onSelect && (event.key === 'Enter' || event.key === ' ')) {
-      event.preventDefault();
-      onSelect();
-    }
+/** What makes a drawn item pickable: a button to assistive technology, clickable, and Enter or Space on it. */
+export function selectable(label: string, selected: boolean, onSelect: (() => void) | undefined) {
+  return {
+    'data-selected': selected || undefined,
+    role: onSelect ? 'button' : 'img',
+    tabIndex: onSelect ? 0 : undefined,
+    'aria-label': label,
+    'aria-pressed': onSelect ? selected : undefined,
+    className: onSelect ? 'cursor-pointer focus:outline-none' : undefined,
+    onClick: (event: MouseEvent) => {
+      event.stopPropagation();
+      onSelect?.();
+    },
+    onKeyDown: (event: KeyboardEvent) => {
+      if (onSelect && (event.key === 'Enter' || event.key === ' ')) {
+        event.preventDefault();
+        onSelect();
+      }
+    },
   };
 }
 
@@ -41,14 +54,7 @@ export function PlanLaneShape({ lane, frame, widthMm, selected, onSelect }: Plan
     <g
       data-lane-id={lane.id}
       data-length-mm={lane.lengthMm}
-      data-selected={selected || undefined}
-      role={onSelect ? 'button' : 'img'}
-      tabIndex={onSelect ? 0 : undefined}
-      aria-label={label}
-      aria-pressed={onSelect ? selected : undefined}
-      onClick={onSelect}
-      onKeyDown={activateOnKey(onSelect)}
-      className={onSelect ? 'cursor-pointer focus:outline-none' : undefined}
+      {...selectable(label, selected, onSelect)}
     >
       <title>{label}</title>
       <rect

@@ -2,7 +2,7 @@
 // and a scale bar. Every deck uses the same frame, so the plans stack into one comparable picture.
 import { DRAWING, type PlanFrame } from './drawing-frame';
 import type { LayoutModel, PlanDeck, PlanStation } from './layout-model';
-import { activateOnKey, PlanLaneShape } from './plan-lane';
+import { PlanLaneShape, selectable } from './plan-lane';
 import { ElevatorEnd, PlanJoinShape } from './plan-join';
 import { ScaleBar } from './scale-bar';
 import { isLaneSelected, isStationSelected, type LayoutSelection } from './selection';
@@ -24,17 +24,7 @@ function StationMarker({ station, frame, selected, labelBelow, onSelect }: { sta
   return (
     <g
       data-station-id={station.id}
-      data-selected={selected || undefined}
-      role={onSelect ? 'button' : 'img'}
-      tabIndex={onSelect ? 0 : undefined}
-      aria-label={label}
-      aria-pressed={onSelect ? selected : undefined}
-      onClick={(event) => {
-        event.stopPropagation();
-        onSelect?.();
-      }}
-      onKeyDown={activateOnKey(onSelect)}
-      className={onSelect ? 'cursor-pointer focus:outline-none' : undefined}
+      {...selectable(label, selected, onSelect)}
     >
       <title>{label}</title>
       {/* Manual stations are drawn hollow and automatic ones filled, so print in grey still tells them apart. */}

@@ -42,3 +42,14 @@ export function PickRow({ selected, onPick, invalid, children, label }: { select
     </button>
   );
 }
+
+/** The Remove button at the end of a list row, level with the row's inputs. */
+export function RemoveCell({ onClick, label, disabled }: { onClick: () => void; label: string; disabled?: boolean }) {
+  return (
+    <div className="pt-5">
+      <SmallButton onClick={onClick} label={label} disabled={disabled}>
+        Remove
+      </SmallButton>
+    </div>
+  );
+}

@@ -2,7 +2,7 @@
 import { useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import type { ScenarioForm } from '../../editor-context';
 import { ListIssue, NumberField } from '../fields';
-import { SectionHeading, SmallButton } from '../row-actions';
+import { RemoveCell, SectionHeading, SmallButton } from '../row-actions';
 
 function WorkingHours() {
   const calendar = useWatch<ScenarioForm, 'calendar'>({ name: 'calendar' });
@@ -42,11 +42,7 @@ export function CalendarSection() {
           <li key={field.id} className="grid grid-cols-[1fr_1fr_auto] items-start gap-2">
             <NumberField name={`calendar.breaks.${i}.startMinute`} label={`Break ${i + 1} starts at minute`} />
             <NumberField name={`calendar.breaks.${i}.minutes`} label="Length (minutes)" />
-            <div className="pt-5">
-              <SmallButton onClick={() => breaks.remove(i)} label={`Remove break ${i + 1}`}>
-                Remove
-              </SmallButton>
-            </div>
+            <RemoveCell onClick={() => breaks.remove(i)} label={`Remove break ${i + 1}`} />
           </li>
         ))}
       </ol>

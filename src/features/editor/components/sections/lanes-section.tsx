@@ -7,7 +7,7 @@ import { useEditor, type ScenarioForm } from '../../editor-context';
 import { useIssueCount } from '../../hooks/use-has-issues';
 import { freeId, newLane } from '../../utils/defaults';
 import { ListIssue, NumberField, SelectField, TextField } from '../fields';
-import { PickRow, SectionHeading, SmallButton } from '../row-actions';
+import { PickRow, RemoveCell, SectionHeading, SmallButton } from '../row-actions';
 
 type DraftLane = NonNullable<ScenarioForm['lanes']>[number];
 
@@ -57,11 +57,7 @@ function LaneDetails({ index }: { index: number }) {
           <li key={field.id} className="grid grid-cols-[1fr_1fr_auto] items-start gap-2">
             <NumberField name={`lanes.${index}.modules.${j}.lengthMm`} label="Module length (mm)" />
             <NumberField name={`lanes.${index}.modules.${j}.count`} label="Count" step="1" />
-            <div className="pt-5">
-              <SmallButton onClick={() => modules.remove(j)} label={`Remove module group ${j + 1}`} disabled={modules.fields.length <= 1}>
-                Remove
-              </SmallButton>
-            </div>
+            <RemoveCell onClick={() => modules.remove(j)} label={`Remove module group ${j + 1}`} disabled={modules.fields.length <= 1} />
           </li>
         ))}
       </ol>

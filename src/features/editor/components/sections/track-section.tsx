@@ -4,7 +4,7 @@ import type { ScenarioForm } from '../../editor-context';
 import { freeId } from '../../utils/defaults';
 import { ListIssue, NumberField, TextField } from '../fields';
 import { NumberListField } from '../number-list-field';
-import { SectionHeading, SmallButton } from '../row-actions';
+import { RemoveCell, SectionHeading, SmallButton } from '../row-actions';
 
 export function TrackSection() {
   const { control, getValues } = useFormContext<ScenarioForm>();
@@ -31,11 +31,7 @@ export function TrackSection() {
             <TextField name={`decks.${i}.id`} label="Id" />
             <TextField name={`decks.${i}.name`} label="Name" />
             <NumberField name={`decks.${i}.elevationMm`} label="Elevation (mm)" />
-            <div className="pt-5">
-              <SmallButton onClick={() => decks.remove(i)} label={`Remove deck ${i + 1}`} disabled={decks.fields.length <= 1}>
-                Remove
-              </SmallButton>
-            </div>
+            <RemoveCell onClick={() => decks.remove(i)} label={`Remove deck ${i + 1}`} disabled={decks.fields.length <= 1} />
           </li>
         ))}
       </ol>

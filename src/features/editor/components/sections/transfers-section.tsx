@@ -5,7 +5,7 @@ import { TRANSFER_KINDS, type TransferKind } from '../../../../../shared/scenari
 import { useEditor, type ScenarioForm } from '../../editor-context';
 import { freeId, transferOfKind } from '../../utils/defaults';
 import { ListIssue, NumberField, SelectField, TextField } from '../fields';
-import { SectionHeading, SmallButton } from '../row-actions';
+import { RemoveCell, SectionHeading, SmallButton } from '../row-actions';
 
 const KIND_LABELS: Record<TransferKind, string> = { elevator: 'Elevator', lateral: 'Lateral transfer', curve: 'Curve' };
 
@@ -107,11 +107,7 @@ export function TransfersSection() {
           <li key={field.id} className="grid grid-cols-[1fr_1fr_auto] items-start gap-2">
             <SelectField name={`links.${i}.fromLaneId`} label="From the end of lane" options={laneOptions} />
             <SelectField name={`links.${i}.toLaneId`} label="To the start of lane" options={laneOptions} />
-            <div className="pt-5">
-              <SmallButton onClick={() => links.remove(i)} label={`Remove link ${i + 1}`}>
-                Remove
-              </SmallButton>
-            </div>
+            <RemoveCell onClick={() => links.remove(i)} label={`Remove link ${i + 1}`} />
           </li>
         ))}
       </ol>

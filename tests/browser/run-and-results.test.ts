@@ -63,12 +63,12 @@ describe('running the demo scenario as the demo engineer', () => {
   });
 
   it('runs 5 replications with visible progress, then opens the stored result with both heatmaps', async () => {
-    await fillSettings({ 'Hours simulated': '6', 'Warm-up (minutes)': '10', Replications: '5', Seed: '2026', 'Carrier count': '' });
+    await fillSettings({ 'Hours simulated': '24', 'Warm-up (minutes)': '10', Replications: '5', Seed: '2026', 'Carrier count': '' });
     await page.getByRole('button', { name: 'Run simulation' }).click();
     await page.getByText(/Replication [2-5] of 5/).waitFor({ timeout: RUN_TIMEOUT });
     const progress = page.getByRole('progressbar', { name: 'Simulation progress' });
     expect(Number(await progress.getAttribute('aria-valuenow'))).toBeGreaterThan(0);
-    expect(await page.getByTestId('simulation-progress').textContent()).toMatch(/Simulated: .+ of 6 h 10 min/);
+    expect(await page.getByTestId('simulation-progress').textContent()).toMatch(/Simulated: .+ of 24 h 10 min/);
     await screenshot(page, 'run-01-progress');
 
     const open = page.getByRole('link', { name: 'Open the results' });

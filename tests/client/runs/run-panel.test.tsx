@@ -93,6 +93,7 @@ describe('run panel', () => {
     expect(posts[1]).toEqual(posts[0]);
     expect(posts[0].revisionId).toBe(latest.id);
     expect(posts[0].settings).toEqual({ hours: 0.05, warmupMinutes: 1, replications: 2, seed: 42 });
+    expect(posts[0].name).toBe('Revision 2: 2 × 0.05 h, seed 42');
     expect(posts[0].results.replications).toHaveLength(2);
     expect(ports.runs).toHaveLength(1);
   }, 30_000);

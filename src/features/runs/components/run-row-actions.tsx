@@ -42,7 +42,7 @@ export function RunRowActions({ run, mayRerun, mayDelete, rerunBusy, onRerun, on
   }
   if (!mayRerun && !mayDelete) return null;
   return (
-    <div className="flex flex-wrap gap-2">
+    <div className="flex gap-2 whitespace-nowrap">
       {mayRerun && onRerun && (
         <Button variant="secondary" className={SMALL} disabled={rerunBusy} aria-label={`Rerun ${run.name}`} onClick={() => onRerun?.(run)}>
           Rerun

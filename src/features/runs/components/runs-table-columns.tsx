@@ -11,11 +11,13 @@ const column = createColumnHelper<RunListItem>();
 
 interface ColumnOptions {
   showScenario: boolean;
+  /** Left out when the user may do nothing to any run, so viewers see no empty column. */
+  showActions: boolean;
   name: (run: RunListItem) => ReactNode;
   actions: (run: RunListItem) => ReactNode;
 }
 
-export function runsColumns({ showScenario, name, actions }: ColumnOptions) {
+export function runsColumns({ showScenario, showActions, name, actions }: ColumnOptions) {
   return [
     column.accessor('name', { id: 'name', header: 'Run', sortingFn: 'alphanumeric', cell: (c) => name(c.row.original) }),
     ...(showScenario ? [column.accessor('scenarioName', { id: 'scenario', header: 'Scenario', sortingFn: 'alphanumeric' })] : []),
@@ -41,7 +43,7 @@ export function runsColumns({ showScenario, name, actions }: ColumnOptions) {
       cell: (c) => <Figure value={formatTakt(c.getValue())} interval={formatInterval(c.row.original.summary.taktSeconds, formatTakt)} />,
     }),
     column.accessor((run) => run.summary.carriers, { id: 'carriers', header: 'Carriers', filterFn: equalsText }),
-    column.display({ id: 'actions', header: 'Actions', cell: (c) => actions(c.row.original) }),
+    ...(showActions ? [column.display({ id: 'actions', header: 'Actions', cell: (c) => actions(c.row.original) })] : []),
   ];
 }
 

@@ -34,10 +34,11 @@ export function RunsTable({ runs, organisationId, showScenario = false, caption 
     () =>
       runsColumns({
         showScenario,
+        showActions: mayRun || runs.some(mayChange),
         name: (run) => <RunNameCell run={run} mayRename={mayChange(run)} />,
         actions: (run) => <RunRowActions run={run} mayRerun={mayRun} mayDelete={mayChange(run)} rerunBusy={rerun.busy} onRerun={(r) => void rerun.rerun(r)} />,
       }),
-    [showScenario, mayChange, mayRun, rerun],
+    [showScenario, mayChange, mayRun, rerun, runs],
   );
   const table = useReactTable({
     data: runs as RunListItem[],

@@ -22,6 +22,12 @@ interface PendingSave {
 
 export type SaveState = { status: 'idle' } | ({ status: 'saving' } & PendingSave) | ({ status: 'failed'; error: unknown } & PendingSave) | { status: 'saved'; run: RunListItem };
 
+/** Names runs apart in a list before anyone renames them: revision, length, seed and any carrier override. */
+export function defaultRunName(revisionNumber: number, settings: RunSettings): string {
+  const carriers = settings.carriers === undefined ? '' : `, ${settings.carriers} carriers`;
+  return `Revision ${revisionNumber}: ${settings.replications} × ${settings.hours} h, seed ${settings.seed}${carriers}`;
+}
+
 export function useRunAndSave(onSaved?: (run: RunListItem) => void) {
   const simulation = useSimulation();
   const createRun = useCreateRun();
@@ -46,7 +52,8 @@ export function useRunAndSave(onSaved?: (run: RunListItem) => void) {
       setSave({ status: 'idle' });
       const outcome = await simulation.start(revision.document, settings);
       if (outcome.status === 'finished') {
-        await attemptSave({ scenarioId, input: { clientRunId: crypto.randomUUID(), revisionId: revision.id, settings, results: outcome.result } });
+        const input = { clientRunId: crypto.randomUUID(), revisionId: revision.id, name: defaultRunName(revision.number, settings), settings, results: outcome.result };
+        await attemptSave({ scenarioId, input });
       }
       return outcome;
     },

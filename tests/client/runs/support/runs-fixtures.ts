@@ -18,7 +18,7 @@ export function runItem(n: number, overrides: { throughput?: number; takt?: numb
     revisionNumber: overrides.revision ?? 2,
     name: `Run ${n}`,
     seed: String(n),
-    engineVersion: '1.0.0',
+    engineVersion: '1.1.0',
     settings: runSettingsSchema.parse({ hours: 1, warmupMinutes: 5, replications: 3, seed: n }),
     summary: {
       throughputPerHour: interval(throughput, 4),

@@ -11,9 +11,9 @@ import { renderApp } from './support/render-app';
 // The scenario page mounts the whole editor and drawing; on a busy machine that takes longer than 5 s.
 vi.setConfig({ testTimeout: 20_000 });
 
-// The page loads on demand; importing it once up front keeps that first import out of the tests' waits.
+// The pages load on demand; importing them once up front keeps that first import out of the tests' waits.
 beforeAll(async () => {
-  await import('../../src/features/scenarios/routes/scenario-route');
+  await Promise.all([import('../../src/features/scenarios/routes/scenario-route'), import('../../src/app/routes/project-route')]);
 }, 60_000);
 
 const projectRoutes = (role: 'engineer' | 'viewer', scenarios = [scenarioSummary()]) => ({

@@ -12,6 +12,30 @@ interface RunsFiltersProps {
 const CONTROL = 'rounded-md border border-ink-faint bg-paper-raised px-2 py-1.5 text-sm text-ink focus-visible:outline-2 focus-visible:outline-accent';
 const LABEL = 'flex flex-col gap-1 text-xs font-semibold text-ink-soft';
 
+interface NumberChoiceProps {
+  label: string;
+  values: readonly number[];
+  value: string;
+  onChange: (event: { target: { value: string } }) => void;
+}
+
+/** One of the values the listed runs actually have, or any. */
+function NumberChoice({ label, values, value, onChange }: NumberChoiceProps) {
+  return (
+    <label className={LABEL}>
+      {label}
+      <select className={CONTROL} value={value} onChange={onChange}>
+        <option value="">Any</option>
+        {values.map((n) => (
+          <option key={n} value={String(n)}>
+            {n}
+          </option>
+        ))}
+      </select>
+    </label>
+  );
+}
+
 export function RunsFilters({ runs, values, onChange }: RunsFiltersProps) {
   const choices = filterChoices(runs);
   const set = (key: keyof RunFilterValues) => (event: { target: { value: string } }) => onChange({ ...values, [key]: event.target.value });
@@ -29,28 +53,8 @@ export function RunsFilters({ runs, values, onChange }: RunsFiltersProps) {
           ))}
         </select>
       </label>
-      <label className={LABEL}>
-        Revision
-        <select className={CONTROL} value={values.revision} onChange={set('revision')}>
-          <option value="">Any</option>
-          {choices.revisions.map((n) => (
-            <option key={n} value={String(n)}>
-              {n}
-            </option>
-          ))}
-        </select>
-      </label>
-      <label className={LABEL}>
-        Carriers
-        <select className={CONTROL} value={values.carriers} onChange={set('carriers')}>
-          <option value="">Any</option>
-          {choices.carriers.map((n) => (
-            <option key={n} value={String(n)}>
-              {n}
-            </option>
-          ))}
-        </select>
-      </label>
+      <NumberChoice label="Revision" values={choices.revisions} value={values.revision} onChange={set('revision')} />
+      <NumberChoice label="Carriers" values={choices.carriers} value={values.carriers} onChange={set('carriers')} />
       <label className={LABEL}>
         Run on or after
         <input type="date" className={CONTROL} value={values.since} onChange={set('since')} />

@@ -68,6 +68,8 @@ describe('project page', () => {
     const group = screen.getByRole('group', { name: 'Example layouts' });
     const exampleFiles = readdirSync('shared/examples').filter((name) => name.endsWith('.json'));
     expect(within(group).getAllByRole('option')).toHaveLength(exampleFiles.length);
+    await user.selectOptions(screen.getByLabelText('Start from'), stackedLoop.name);
+    expect(document.querySelector('[data-source-note]')?.textContent).toContain('Stacked loop with elevators');
   });
 
   it('lists server issues inside the document in the banner and keeps the form filled', async () => {

@@ -3,7 +3,7 @@
 import { useId, useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { exampleScenarios } from '../../scenarios/utils/examples';
-import { TEMPLATE_NOTES } from '../utils/templates';
+import { TEMPLATE_NOTES } from '../../scenarios/utils/template-notes';
 
 export function TemplatePicker({ onPick }: { onPick: (document: (typeof exampleScenarios)[number]['document']) => void }) {
   const id = useId();

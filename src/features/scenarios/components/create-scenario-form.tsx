@@ -12,6 +12,7 @@ import { useApiFormSubmit } from '../../../lib/use-api-form-submit';
 import { useCreateScenario } from '../api/create-scenario';
 import { scenarioQueryOptions } from '../api/get-scenario';
 import { exampleScenarios } from '../utils/examples';
+import { TEMPLATE_NOTES } from '../utils/template-notes';
 
 const EXAMPLE = 'example:';
 const COPY = 'copy:';
@@ -27,6 +28,26 @@ interface CreateScenarioFormProps {
   existing: ScenarioSummary[];
   onCreated: (scenario: ScenarioSummary) => void;
   onCancel: () => void;
+}
+
+/** A line on what the chosen starting point is, so the examples can be told apart before creating. */
+function SourceNote({ source, existing }: { source: string; existing: ScenarioSummary[] }) {
+  const example = exampleScenarios.find((e) => `${EXAMPLE}${e.id}` === source);
+  const copied = existing.find((s) => `${COPY}${s.id}` === source);
+  const note = example ? TEMPLATE_NOTES[example.id] : undefined;
+  const text = example
+    ? note
+      ? `${note.title}: ${note.summary}`
+      : example.document.description
+    : copied
+      ? `A copy of revision ${copied.latestRevision.number} of “${copied.name}”; the original is not changed.`
+      : '';
+  if (!text) return null;
+  return (
+    <p className="-mt-1 mb-2 text-sm text-ink-soft" data-source-note>
+      {text}
+    </p>
+  );
 }
 
 export function CreateScenarioForm({ projectId, existing, onCreated, onCancel }: CreateScenarioFormProps) {
@@ -85,6 +106,7 @@ export function CreateScenarioForm({ projectId, existing, onCreated, onCancel }:
           </optgroup>
         )}
       </SelectField>
+      <SourceNote source={form.watch('source')} existing={existing} />
       <TextField label="Scenario name" error={errors.name?.message} {...form.register('name')} />
       <TextAreaField label="Description (optional)" error={errors.description?.message} {...form.register('description')} />
       <div className="mt-2 flex flex-wrap gap-3">

@@ -62,7 +62,7 @@ export function ScenarioWorkspace({ scenario, mayEdit, engineIssues }: ScenarioW
 
   return (
     <FormProvider {...draft.form}>
-      <Card aria-label="Draft and saving" className="mb-6 flex flex-col gap-4">
+      <Card aria-label="Draft and saving" className="mb-6 flex flex-col gap-4 print:hidden">
         <div className="flex flex-wrap items-center gap-3 text-sm text-ink-soft">
           <span>
             Based on revision <strong className="text-ink">{draft.baseNumber}</strong>

@@ -109,7 +109,12 @@ export const replicationResultSchema = z.object({
   taktSeconds: z.number(),
   output: z.number(),
   scrapped: z.number(),
+  /** Output parts only (load to unload), as `leadTimeSeconds`. */
   leadTimeMeanSeconds: z.number(),
+  /** Output and scrapped parts per hour of observed time. */
+  departuresPerHour: z.number(),
+  /** Mean time from load to leaving (unload or scrap) over every part that left. */
+  timeInLineMeanSeconds: z.number(),
   wipMean: z.number(),
   events: z.number(),
 });
@@ -132,7 +137,18 @@ export const runResultSchema = z.object({
   transfers: z.array(transferResultSchema),
   lanes: z.array(laneResultSchema),
   carriers: carrierResultSchema,
+  /** Load completion to unload, over output parts only; scrapped parts are not in it. */
   leadTimeSeconds: summaryQuantilesSchema.extend({ histogram: histogramSchema }),
+  /**
+   * Load completion to leaving the line, over every part that left in the window: output (at unload)
+   * and scrapped (at the inspection that rejected it). With `departuresPerHour` and `wip.mean` it
+   * satisfies Little's law, WIP = departure rate × mean time in line; lead time × throughput does
+   * not when parts are scrapped.
+   */
+  timeInLineSeconds: summaryQuantilesSchema,
+  /** Output plus scrapped parts per hour of observed time (throughput counts output only). */
+  departuresPerHour: intervalSchema,
+  /** Time-average parts in line: from load completion until unload or scrap. */
   wip: z.object({ mean: z.number(), series: timeSeriesSchema }),
   parts: z.object({ loaded: z.number(), output: z.number(), scrapped: z.number(), reworked: z.number() }),
   heatmaps: heatmapsSchema,

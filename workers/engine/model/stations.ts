@@ -132,7 +132,7 @@ function finishWork(m: LineState, s: number): void {
     const reject = m.line.stepRejectShare[step];
     if (u < reject) {
       m.cLoaded[c] = 0;
-      m.observer.scrapped(m.now);
+      m.observer.scrapped(m.now, m.now - m.cLoadTime[c]);
       m.observer.wip(--m.wip, m.now);
       next = 0;
     } else if (u < reject + m.line.stepReworkShare[step]) {

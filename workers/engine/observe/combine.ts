@@ -24,6 +24,10 @@ function meanOf(reps: ReplicationSummary[], pick: (r: ReplicationSummary) => num
   return sum / reps.length;
 }
 
+function meanQuantiles(reps: ReplicationSummary[], pick: (r: ReplicationSummary) => [number, number, number]) {
+  return { mean: meanOf(reps, (r) => pick(r)[0]), p50: meanOf(reps, (r) => pick(r)[1]), p95: meanOf(reps, (r) => pick(r)[2]) };
+}
+
 function meanArray(arrays: ArrayLike<number>[], digits = 4): number[] {
   const out = new Array<number>(arrays[0].length).fill(0);
   for (const a of arrays) for (let i = 0; i < out.length; i++) out[i] += a[i];
@@ -128,18 +132,15 @@ export function combineReplications({ line, settings, engineVersion, reps, event
     })),
     carriers: {
       count: line.carrierCount,
-      loopTimeSeconds: { mean: meanOf(reps, (r) => r.loop[0]), p50: meanOf(reps, (r) => r.loop[1]), p95: meanOf(reps, (r) => r.loop[2]) },
+      loopTimeSeconds: meanQuantiles(reps, (r) => r.loop),
       moving: meanOf(reps, (r) => r.carrierShares[0]),
       waiting: meanOf(reps, (r) => r.carrierShares[1]),
       working: meanOf(reps, (r) => r.carrierShares[2]),
       inTransfer: meanOf(reps, (r) => r.carrierShares[3]),
     },
-    leadTimeSeconds: {
-      mean: meanOf(reps, (r) => r.lead[0]),
-      p50: meanOf(reps, (r) => r.lead[1]),
-      p95: meanOf(reps, (r) => r.lead[2]),
-      histogram: mergeHistograms(reps),
-    },
+    leadTimeSeconds: { ...meanQuantiles(reps, (r) => r.lead), histogram: mergeHistograms(reps) },
+    timeInLineSeconds: meanQuantiles(reps, (r) => r.timeInLine),
+    departuresPerHour: interval(reps.map((r) => r.departuresPerHour)),
     wip: {
       mean: meanOf(reps, (r) => r.wipMean),
       series: { startSeconds: settings.warmupMinutes * 60, binSeconds: observedSeconds / timeBins, values: meanArray(reps.map((r) => r.wipSeries)) },
@@ -169,6 +170,8 @@ export function combineReplications({ line, settings, engineVersion, reps, event
       output: r.output,
       scrapped: r.scrapped,
       leadTimeMeanSeconds: r.lead[0],
+      departuresPerHour: r.departuresPerHour,
+      timeInLineMeanSeconds: r.timeInLine[0],
       wipMean: r.wipMean,
       events: events[i],
     })),

@@ -15,7 +15,9 @@ export type Observer = {
   transferMove(conn: number, t: number): void;
   /** A part was loaded; loopSeconds is the time since this carrier's previous load, or -1. */
   loaded(t: number, loopSeconds: number): void;
+  /** A part was unloaded; leadSeconds is the time since its load completed. */
   output(t: number, leadSeconds: number): void;
-  scrapped(t: number): void;
+  /** A part was rejected at an inspection; inLineSeconds is the time since its load completed. */
+  scrapped(t: number, inLineSeconds: number): void;
   reworked(t: number): void;
 };

@@ -1,5 +1,6 @@
 // Collects the statistics of one replication from the model's reports: time shares per station,
-// carrier and transfer, counts, lead and loop times, WIP, and the binned series behind the heatmaps.
+// carrier and transfer, counts, lead times (output parts), times in line (every part that leaves),
+// loop times, WIP, and the binned series behind the heatmaps.
 // Memory is fixed at construction (entities × bins); nothing grows with the run length.
 import { StreamingHistogram } from '../stats/histogram';
 import type { CompiledLine } from '../model/compile';
@@ -37,7 +38,10 @@ export class Recorder implements Observer {
   readonly wipLevel: Levels;
   readonly wipSeries: Float64Array;
   readonly laneHeat: Float64Array[];
+  /** Output parts only: load to unload. */
   readonly leadTimes = new StreamingHistogram(1, 128);
+  /** Every part that leaves, output or scrapped: the W of Little's law for the WIP recorded here. */
+  readonly timesInLine = new StreamingHistogram(1, 128);
   readonly loopTimes = new StreamingHistogram(1, 128);
   readonly bottleneck: BottleneckTracker;
   readonly samplesPerBin: number;
@@ -156,10 +160,13 @@ export class Recorder implements Observer {
     if (!this.window.contains(t)) return;
     this.outputCount++;
     this.leadTimes.add(leadSeconds);
+    this.timesInLine.add(leadSeconds);
   }
 
-  scrapped(t: number): void {
-    if (this.window.contains(t)) this.scrappedCount++;
+  scrapped(t: number, inLineSeconds: number): void {
+    if (!this.window.contains(t)) return;
+    this.scrappedCount++;
+    this.timesInLine.add(inLineSeconds);
   }
 
   reworked(t: number): void {

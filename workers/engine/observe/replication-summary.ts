@@ -1,6 +1,7 @@
 // Reads one finished replication's recorder into plain numbers (shares, rates, series) ready to be
 // averaged across replications. Shares are of the observation window (warm-up excluded).
 import type { CompiledLine } from '../model/compile';
+import type { StreamingHistogram } from '../stats/histogram';
 import { CARRIER_SHARES, TRANSFER_STATES, type Recorder } from './recorder';
 
 export type ReplicationSummary = {
@@ -9,6 +10,8 @@ export type ReplicationSummary = {
   loaded: number;
   reworked: number;
   throughputPerHour: number;
+  /** Output and scrapped parts per hour: the departure rate that goes with WIP in Little's law. */
+  departuresPerHour: number;
   taktSeconds: number;
   stationShares: Float64Array;
   sole: Float64Array;
@@ -25,6 +28,7 @@ export type ReplicationSummary = {
   carrierShares: Float64Array;
   loop: [number, number, number];
   lead: [number, number, number];
+  timeInLine: [number, number, number];
   leadHistogram: { binWidth: number; counts: Float64Array };
   wipMean: number;
   wipSeries: Float64Array;
@@ -33,6 +37,7 @@ export type ReplicationSummary = {
 };
 
 const orZero = (x: number) => (Number.isFinite(x) ? x : 0);
+const quantiles = (h: StreamingHistogram): [number, number, number] => [orZero(h.mean), orZero(h.p50), orZero(h.p95)];
 
 export function summarizeReplication(line: CompiledLine, r: Recorder): ReplicationSummary {
   const w = r.window;
@@ -52,6 +57,7 @@ export function summarizeReplication(line: CompiledLine, r: Recorder): Replicati
     loaded: r.loadedCount,
     reworked: r.reworkedCount,
     throughputPerHour: perHour(r.outputCount),
+    departuresPerHour: perHour(r.outputCount + r.scrappedCount),
     taktSeconds: r.outputCount > 0 ? seconds / r.outputCount : seconds,
     stationShares,
     sole: r.bottleneck.sole.map((x) => x / seconds),
@@ -66,8 +72,9 @@ export function summarizeReplication(line: CompiledLine, r: Recorder): Replicati
     transferMovesPerHour: r.transferMoves.map(perHour),
     laneMean: Float64Array.from({ length: line.laneCount }, (_, l) => r.laneLevels.mean(l)),
     carrierShares: Float64Array.from({ length: CARRIER_SHARES }, (_, i) => r.carrierTime[i] / carrierTotal),
-    loop: [orZero(r.loopTimes.mean), orZero(r.loopTimes.p50), orZero(r.loopTimes.p95)],
-    lead: [orZero(r.leadTimes.mean), orZero(r.leadTimes.p50), orZero(r.leadTimes.p95)],
+    loop: quantiles(r.loopTimes),
+    lead: quantiles(r.leadTimes),
+    timeInLine: quantiles(r.timesInLine),
     leadHistogram: r.leadTimes.snapshot(),
     wipMean: r.wipLevel.mean(0),
     wipSeries: r.wipSeries.map((x) => x / w.binSeconds),

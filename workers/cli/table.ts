@@ -13,6 +13,7 @@ export function formatTable(r: RunResult): string {
     `takt           ${interval(r.taktSeconds, 2)} s${r.targetTaktSeconds !== null ? `   (target ${r.targetTaktSeconds} s)` : ''}`,
     `annual output  ${interval(r.annualOutput, 0)} parts over ${num(r.hoursPerYear, 0)} h/year`,
     `lead time      mean ${num(r.leadTimeSeconds.mean)} s, p50 ${num(r.leadTimeSeconds.p50)} s, p95 ${num(r.leadTimeSeconds.p95)} s`,
+    `time in line   mean ${num(r.timeInLineSeconds.mean)} s over ${num(r.departuresPerHour.mean)} departures/h (output and scrap)`,
     `WIP            ${num(r.wip.mean, 2)} parts on ${r.carriers.count} carriers`,
     `bottleneck     ${r.bottleneckStationId ?? 'none'}`,
     '',

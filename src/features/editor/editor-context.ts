@@ -9,6 +9,8 @@ export type ScenarioForm = ScenarioInput;
 
 export interface EditorContextValue {
   readOnly: boolean;
+  /** The saved scenario the document belongs to; absent for a document that has none yet. */
+  scenarioId?: string;
   /** Messages keyed by dotted form path, shown beside their field until it is edited. */
   externalIssues: Readonly<Record<string, string>>;
   clearExternal: (path: string) => void;

@@ -113,7 +113,7 @@ export function ScenarioWorkspace({ scenario, mayEdit, engineIssues }: ScenarioW
           )}
         </div>
       </Card>
-      <WorkspaceBody readOnly={!mayEdit} externalIssues={external} clearExternal={clearExternal} />
+      <WorkspaceBody readOnly={!mayEdit} scenarioId={scenario.id} externalIssues={external} clearExternal={clearExternal} />
       <WorkspaceHistory scenarioId={scenario.id} draft={draft} mayEdit={mayEdit} />
     </FormProvider>
   );

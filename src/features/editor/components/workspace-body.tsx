@@ -30,13 +30,15 @@ function DraftBalance() {
 
 interface WorkspaceBodyProps {
   readOnly: boolean;
+  /** Lets station forms show the time studies stored with this scenario. */
+  scenarioId?: string;
   externalIssues?: Readonly<Record<string, string>>;
   clearExternal?: (path: string) => void;
 }
 
 const NO_ISSUES: Readonly<Record<string, string>> = {};
 
-export function WorkspaceBody({ readOnly, externalIssues = NO_ISSUES, clearExternal }: WorkspaceBodyProps) {
+export function WorkspaceBody({ readOnly, scenarioId, externalIssues = NO_ISSUES, clearExternal }: WorkspaceBodyProps) {
   const [selection, setSelection] = useState<LayoutSelection>(null);
   const [section, setSection] = useState<SectionId>('general');
   const editorRef = useRef<HTMLElement>(null);
@@ -48,8 +50,8 @@ export function WorkspaceBody({ readOnly, externalIssues = NO_ISSUES, clearExter
     if (from === 'drawing') editorRef.current?.scrollIntoView?.({ behavior: 'smooth', block: 'start' });
   }, []);
   const context = useMemo(
-    () => ({ readOnly, externalIssues, clearExternal: clearExternal ?? (() => undefined), selection, select }),
-    [readOnly, externalIssues, clearExternal, selection, select],
+    () => ({ readOnly, scenarioId, externalIssues, clearExternal: clearExternal ?? (() => undefined), selection, select }),
+    [readOnly, scenarioId, externalIssues, clearExternal, selection, select],
   );
   return (
     <EditorContext.Provider value={context}>

@@ -27,7 +27,7 @@ function ReadOnlyRevision({ revision }: { revision: Revision }) {
   const form = useForm<ScenarioInput>({ defaultValues: revision.document });
   return (
     <FormProvider {...form}>
-      <WorkspaceBody readOnly />
+      <WorkspaceBody readOnly scenarioId={revision.scenarioId} />
     </FormProvider>
   );
 }

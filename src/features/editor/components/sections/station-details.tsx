@@ -1,6 +1,7 @@
-// One station: where it stands, how it works, its cycle time and, optionally, its failures.
+// One station: where it stands, how it works, its cycle time (with the time studies measured for it) and, optionally, its failures.
 import { useFormContext, useWatch } from 'react-hook-form';
 import { STATION_OPERATIONS } from '../../../../../shared/scenario/process';
+import { TimeStudyPanel } from '../../../time-studies';
 import { useEditor, type ScenarioForm } from '../../editor-context';
 import { DistributionEditor } from '../distribution-editor';
 import { CheckField, NumberField, SelectField, TextField } from '../fields';
@@ -13,7 +14,9 @@ const DEFAULT_FAILURES = {
 export function StationDetails({ stepIndex, stationIndex }: { stepIndex: number; stationIndex: number }) {
   const base = `steps.${stepIndex}.stations.${stationIndex}` as const;
   const { setValue } = useFormContext<ScenarioForm>();
-  const { readOnly } = useEditor();
+  const { readOnly, scenarioId } = useEditor();
+  const stationId = useWatch<ScenarioForm, `steps.${number}.stations.${number}.id`>({ name: `${base}.id` });
+  const stationName = useWatch<ScenarioForm, `steps.${number}.stations.${number}.name`>({ name: `${base}.name` });
   const lanes = useWatch<ScenarioForm, 'lanes'>({ name: 'lanes' }) ?? [];
   const failures = useWatch<ScenarioForm, `steps.${number}.stations.${number}.failures`>({ name: `${base}.failures` });
   const toggleFailures = (on: boolean) => setValue(`${base}.failures`, on ? structuredClone(DEFAULT_FAILURES) : undefined, { shouldDirty: true, shouldValidate: true });
@@ -30,6 +33,15 @@ export function StationDetails({ stepIndex, stationIndex }: { stepIndex: number;
         </div>
       </div>
       <DistributionEditor name={`${base}.cycleTimeSeconds`} label="Cycle time" />
+      {scenarioId && (
+        <TimeStudyPanel
+          scenarioId={scenarioId}
+          stationId={stationId ?? ''}
+          stationName={stationName || stationId || 'this station'}
+          canEdit={!readOnly}
+          onUse={(d) => setValue(`${base}.cycleTimeSeconds`, d, { shouldDirty: true, shouldValidate: true })}
+        />
+      )}
       <label className="flex items-center gap-2 text-sm text-ink">
         <input type="checkbox" className="size-4 accent-accent" checked={failures !== undefined} disabled={readOnly} onChange={(e) => toggleFailures(e.target.checked)} />
         This station fails now and then

@@ -106,8 +106,9 @@ describe('running the demo scenario as the demo engineer', () => {
     expect(await projectRow.textContent()).toContain(DEMO_SCENARIO);
     await screenshot(page, 'run-03-project-runs');
 
-    await page.getByRole('link', { name: DEMO_PROJECT, exact: true }).click();
-    await page.getByRole('link', { name: new RegExp(DEMO_SCENARIO) }).click();
+    await projectRow.getByRole('link').first().click();
+    await page.getByRole('heading', { name: 'Headline' }).waitFor();
+    await page.getByRole('link', { name: DEMO_SCENARIO, exact: true }).click();
     await page.getByRole('heading', { level: 1, name: DEMO_SCENARIO, exact: true }).waitFor();
     const row = page.getByRole('table', { name: 'Runs of this scenario' }).locator(`tr[data-run-id="${runId}"]`);
     await row.waitFor();

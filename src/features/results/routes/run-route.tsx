@@ -46,8 +46,10 @@ export function RunRoute() {
   const result = data.results;
   const fileBase = `run-${data.id.slice(0, 8)}`;
 
+  // Clipped sideways: the charts' screen-reader tables are positioned off-layout and would otherwise
+  // widen the page on a phone.
   return (
-    <div className="flex flex-col gap-8">
+    <div className="flex flex-col gap-8 overflow-x-clip">
       <PageHeader
         title={data.name}
         trail={

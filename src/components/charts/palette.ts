@@ -18,7 +18,7 @@ export const stateLabel: Record<StationState, string> = {
   starved: 'starved',
   blocked: 'blocked',
   down: 'down',
-  idle: 'idle (off shift)',
+  idle: 'on break',
 };
 
 /**

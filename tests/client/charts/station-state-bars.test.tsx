@@ -43,11 +43,11 @@ describe('StationStateBars', () => {
     expect(tooltipRows()).toEqual({ processing: '60.0%', starved: '10.0%', blocked: '25.0%', down: '5.0%' });
   });
 
-  it('adds idle (off shift) only when a station reports it', () => {
+  it('adds on break only when a station reports it', () => {
     const withIdle = [...stations, { id: 'man', name: 'Manual', shares: { processing: 0.5, starved: 0.1, blocked: 0, down: 0, idle: 0.4 } }];
     const { container } = render(<StationStateBars stations={withIdle} width={WIDTH} />);
-    expect(legendLabels(container)).toContain('idle (off shift)');
-    expect(within(screen.getByRole('table')).getAllByRole('columnheader').map((th) => th.textContent)).toContain('idle (off shift)');
+    expect(legendLabels(container)).toContain('on break');
+    expect(within(screen.getByRole('table')).getAllByRole('columnheader').map((th) => th.textContent)).toContain('on break');
   });
 
   it('explains an empty line and names shares that do not cover the whole time', () => {

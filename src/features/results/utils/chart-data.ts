@@ -1,6 +1,6 @@
 // Stored results reshaped for the chart components, without changing a value: only the layout of
-// the arrays and the names beside them. The result calls time off shift "onBreak"; the charts call
-// the same state "idle (off shift)".
+// the arrays and the names beside them. The result calls break time "onBreak"; the charts call
+// the same state "idle" and label it "on break".
 import type { RunResult, StationState } from '../../../../shared/results/run-result';
 import type { SpaceTimeLane, StationStateBarsStation, StationState as ChartState } from '../../../components/charts';
 

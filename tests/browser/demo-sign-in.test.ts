@@ -67,12 +67,15 @@ describe('demo engineer in the browser', () => {
     await screenshot(page, '04-project');
   });
 
-  it('opens a scenario with its overview and revision history', async () => {
+  it('opens a scenario with its layout, editor and revision history', async () => {
     await page.getByRole('link', { name: /Stacked loop/ }).click();
     await page.getByRole('heading', { level: 1, name: 'Stacked loop' }).waitFor();
     await page.getByRole('table', { name: 'Revision history' }).waitFor();
     expect(await page.getByRole('table', { name: 'Revision history' }).textContent()).toContain('Demo Engineer');
-    expect(await page.getByText('Carriers', { exact: true }).locator('xpath=following-sibling::dd').textContent()).toBe('20');
+    // The stacked loop is two decks of eight 1000 mm modules each (shared/examples/stacked-loop.json).
+    expect(await page.locator('[data-fact="modules"]').textContent()).toBe('16');
+    await page.getByRole('navigation', { name: 'Scenario sections' }).getByRole('button', { name: /^Carriers/ }).click();
+    expect(await page.getByRole('region', { name: 'Carriers' }).getByLabel('Carrier count').inputValue()).toBe('20');
     await screenshot(page, '05-scenario');
 
     await page.setViewportSize({ width: 390, height: 844 });

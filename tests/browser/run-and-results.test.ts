@@ -1,6 +1,6 @@
-// The demo engineer runs the demo scenario in the browser, follows the progress, reads the stored
-// result and finds the run again after a reload; the demo viewer reads the same run without any
-// control that changes it. Screenshots go to test-artifacts/screenshots/run-*.png.
+// The demo engineer changes a station's cycle time and saves a new revision, runs it in the browser,
+// follows the progress, reads the stored result and finds the run again after a reload; the demo
+// viewer reads the same run without any control that changes it. Screenshots go to test-artifacts/screenshots/run-*.png.
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, screenshot, startTestApp, type TestApp, type TestBrowser } from '../support/browser';
@@ -62,6 +62,21 @@ describe('running the demo scenario as the demo engineer', () => {
     expect(await page.getByRole('button', { name: 'Run simulation' }).isEnabled()).toBe(true);
   });
 
+  it('changes the press cycle time and saves it as a new revision', async () => {
+    await page.getByRole('navigation', { name: 'Scenario sections' }).getByRole('button', { name: /^Process and stations/ }).click();
+    await page.getByRole('button', { name: /^Step 2: Press seat ring/ }).click();
+    await page.getByRole('button', { name: 'Station PR', exact: true }).click();
+    const value = page.locator('[data-distribution$="cycleTimeSeconds"]').getByLabel('Value (s)', { exact: true });
+    await value.fill('8.5');
+    await page.getByLabel('What changed (optional)').fill('Faster press');
+    await page.getByRole('button', { name: 'Save as revision 2' }).click();
+    await page.getByText('No unsaved changes').waitFor();
+    const history = page.getByRole('table').filter({ hasText: 'Faster press' });
+    await history.getByText('#2').waitFor();
+    await page.getByRole('heading', { name: 'Run revision 2' }).waitFor();
+    await screenshot(page, 'run-00-saved-revision');
+  });
+
   it('runs 5 replications with visible progress, then opens the stored result with both heatmaps', async () => {
     await fillSettings({ 'Hours simulated': '24', 'Warm-up (minutes)': '10', Replications: '5', Seed: '2026', 'Carrier count': '' });
     await page.getByRole('button', { name: 'Run simulation' }).click();
@@ -112,7 +127,7 @@ describe('running the demo scenario as the demo engineer', () => {
     await page.getByRole('heading', { level: 1, name: DEMO_SCENARIO, exact: true }).waitFor();
     const row = page.getByRole('table', { name: 'Runs of this scenario' }).locator(`tr[data-run-id="${runId}"]`);
     await row.waitFor();
-    expect(await row.textContent()).toContain('#1');
+    expect(await row.textContent()).toContain('#2');
     await row.scrollIntoViewIfNeeded();
     await screenshot(page, 'run-04-scenario-runs');
 
@@ -139,7 +154,7 @@ describe('the demo viewer', () => {
     await page.getByRole('heading', { level: 1, name: DEMO_SCENARIO, exact: true }).waitFor();
     await page.getByRole('table', { name: 'Runs of this scenario' }).waitFor();
     expect(await page.getByRole('button', { name: 'Run simulation' }).count()).toBe(0);
-    for (const name of [/^Delete/, /^Rename/, /^Rerun/]) expect(await page.getByRole('button', { name }).count()).toBe(0);
+    for (const name of [/^Delete/, /^Rename/, /^Rerun/, /^Save as revision/, /^Restore/]) expect(await page.getByRole('button', { name }).count()).toBe(0);
     await screenshot(page, 'run-07-viewer-scenario');
     expect(browser.pageErrors).toEqual([]);
   });

@@ -66,57 +66,53 @@ interface FieldProps {
   className?: string;
 }
 
-export function NumberField({ name, label, hint, className, step = 'any', min }: FieldProps & { step?: string; min?: number }) {
+/**
+ * The id, registration and accessibility attributes every boxed control shares, so each field
+ * below only adds what makes it different.
+ */
+function useBoundControl(name: Name, setValueAs?: (value: unknown) => unknown) {
   const id = useId();
   const { register } = useFormContext<ScenarioForm>();
   const { clearExternal, readOnly } = useEditor();
+  const registration = register(asPath(name), { setValueAs, onChange: () => clearExternal(name) });
+  const bind = (describedBy: string | undefined, invalid: boolean) => ({
+    id,
+    disabled: readOnly,
+    'aria-invalid': invalid || undefined,
+    'aria-describedby': describedBy,
+    className: `${control} ${border(invalid)}`,
+    ...registration,
+  });
+  return { id, bind };
+}
+
+export function NumberField({ name, label, hint, className, step = 'any', min }: FieldProps & { step?: string; min?: number }) {
+  const { id, bind } = useBoundControl(name, numberFromInput);
   return (
     <FieldFrame id={id} name={name} label={label} hint={hint} className={className}>
-      {(describedBy, invalid) => (
-        <input
-          id={id}
-          type="number"
-          disabled={readOnly}
-          inputMode="decimal"
-          step={step}
-          min={min}
-          aria-invalid={invalid || undefined}
-          aria-describedby={describedBy}
-          className={`${control} ${border(invalid)}`}
-          {...register(asPath(name), { setValueAs: numberFromInput, onChange: () => clearExternal(name) })}
-        />
-      )}
+      {(describedBy, invalid) => <input type="number" inputMode="decimal" step={step} min={min} {...bind(describedBy, invalid)} />}
     </FieldFrame>
   );
 }
 
 export function TextField({ name, label, hint, className, multiline = false }: FieldProps & { multiline?: boolean }) {
-  const id = useId();
-  const { register } = useFormContext<ScenarioForm>();
-  const { clearExternal, readOnly } = useEditor();
-  const props = register(asPath(name), { onChange: () => clearExternal(name) });
+  const { id, bind } = useBoundControl(name);
   return (
     <FieldFrame id={id} name={name} label={label} hint={hint} className={className}>
-      {(describedBy, invalid) =>
-        multiline ? (
-          <textarea id={id} rows={3} disabled={readOnly} aria-invalid={invalid || undefined} aria-describedby={describedBy} className={`${control} ${border(invalid)}`} {...props} />
-        ) : (
-          <input id={id} type="text" disabled={readOnly} aria-invalid={invalid || undefined} aria-describedby={describedBy} className={`${control} ${border(invalid)}`} {...props} />
-        )
-      }
+      {(describedBy, invalid) => (multiline ? <textarea rows={3} {...bind(describedBy, invalid)} /> : <input type="text" {...bind(describedBy, invalid)} />)}
     </FieldFrame>
   );
 }
 
+const emptyAsNone = (value: unknown) => (value === '' ? undefined : value);
+
 /** `emptyMeansNone`: the empty option stands for an optional reference that is not set. */
 export function SelectField({ name, label, hint, className, options, emptyMeansNone = false }: FieldProps & { options: readonly { value: string; label: string }[]; emptyMeansNone?: boolean }) {
-  const id = useId();
-  const { register } = useFormContext<ScenarioForm>();
-  const { clearExternal, readOnly } = useEditor();
+  const { id, bind } = useBoundControl(name, emptyMeansNone ? emptyAsNone : undefined);
   return (
     <FieldFrame id={id} name={name} label={label} hint={hint} className={className}>
       {(describedBy, invalid) => (
-        <select id={id} disabled={readOnly} aria-invalid={invalid || undefined} aria-describedby={describedBy} className={`${control} ${border(invalid)}`} {...register(asPath(name), { onChange: () => clearExternal(name), setValueAs: emptyMeansNone ? (v: unknown) => (v === '' ? undefined : v) : undefined })}>
+        <select {...bind(describedBy, invalid)}>
           {options.map((option) => (
             <option key={option.value} value={option.value}>
               {option.label}

@@ -64,15 +64,42 @@ function prepare(scenarioInput: unknown, settingsInput: unknown): { scenario: Sc
 
 const defaultYield = () => new Promise<void>((resolve) => setTimeout(resolve, 0));
 
-export async function runExperiment(scenarioInput: Scenario | unknown, settingsInput: RunSettings | unknown, hooks: RunHooks = {}): Promise<RunResult> {
+/** One block of finished replications: enough to merge with other blocks into one run result. */
+export type ReplicationBlock = {
+  /** Index of the first replication in the block; replication r always draws from stream (seed, r). */
+  first: number;
+  summaries: ReplicationSummary[];
+  events: number[];
+};
+
+export type ReplicationRange = { first: number; count: number };
+
+/**
+ * Runs replications first .. first + count - 1 of an experiment. Blocks run anywhere (several Web
+ * Workers, server threads) and merged with combineBlocks give the same result as one runExperiment,
+ * because each replication's streams depend only on (seed, replication index).
+ */
+export async function runReplicationRange(
+  scenarioInput: Scenario | unknown,
+  settingsInput: RunSettings | unknown,
+  range: ReplicationRange,
+  hooks: RunHooks = {},
+): Promise<ReplicationBlock> {
   const { scenario, settings } = prepare(scenarioInput, settingsInput);
+  return runRange(scenario, settings, range, hooks);
+}
+
+async function runRange(scenario: Scenario, settings: RunSettings, range: ReplicationRange, hooks: RunHooks): Promise<ReplicationBlock> {
+  if (!Number.isInteger(range.first) || range.first < 0 || !Number.isInteger(range.count) || range.count < 1) {
+    throw new InvalidInputError([{ path: 'range', message: `a replication range needs a whole first index of 0 or more and a count of 1 or more (got first ${range.first}, count ${range.count})` }]);
+  }
   const now = hooks.now ?? (() => Date.now());
   const started = now();
   const wallBudget = hooks.wallClockBudgetMs ?? Infinity;
   const line = compileLine(scenario, settings.carriers ?? scenario.carriers.count);
   const warmupSeconds = settings.warmupMinutes * 60;
   const endSeconds = warmupSeconds + settings.hours * 3600;
-  const totalSeconds = endSeconds * settings.replications;
+  const totalSeconds = endSeconds * range.count;
   const summaries: ReplicationSummary[] = [];
   const events: number[] = [];
   const yieldToHost = hooks.yieldToHost ?? defaultYield;
@@ -80,8 +107,12 @@ export async function runExperiment(scenarioInput: Scenario | unknown, settingsI
     if (hooks.isCancelled?.()) throw new SimulationStoppedError('cancelled', 'the run was cancelled');
     if (now() - started > wallBudget) throw new SimulationStoppedError('wallClockBudget', `stopped after ${Math.round(wallBudget / 1000)} s of wall time, the budget for this run; use fewer replications or hours`);
   };
-  for (let r = 0; r < settings.replications; r++) {
-    const replication = new Replication(line, createStreamFactory(settings.seed, r), {
+  const report = (done: number, simulatedInBlock: number) => {
+    const simulatedSeconds = done * endSeconds + simulatedInBlock;
+    hooks.onProgress?.({ replication: range.first + done, replications: range.count, simulatedSeconds, totalSeconds, fraction: simulatedSeconds / totalSeconds });
+  };
+  for (let k = 0; k < range.count; k++) {
+    const replication = new Replication(line, createStreamFactory(settings.seed, range.first + k), {
       warmupSeconds,
       endSeconds,
       timeBins: RESULT_TIME_BINS,
@@ -93,15 +124,49 @@ export async function runExperiment(scenarioInput: Scenario | unknown, settingsI
       checkStop();
       const sliceEnd = now() + SLICE_MS;
       if (replication.run(() => now() >= sliceEnd)) break;
-      const simulatedSeconds = r * endSeconds + replication.state.now;
-      hooks.onProgress?.({ replication: r, replications: settings.replications, simulatedSeconds, totalSeconds, fraction: simulatedSeconds / totalSeconds });
+      report(k, replication.state.now);
       await yieldToHost();
     }
     summaries.push(summarizeReplication(line, replication.recorder));
     events.push(replication.events);
-    const simulatedSeconds = (r + 1) * endSeconds;
-    hooks.onProgress?.({ replication: r, replications: settings.replications, simulatedSeconds, totalSeconds, fraction: simulatedSeconds / totalSeconds });
+    report(k, endSeconds);
   }
   checkStop();
-  return combineReplications({ line, settings, engineVersion: ENGINE_VERSION, reps: summaries, events, timeBins: RESULT_TIME_BINS, positionBins: RESULT_POSITION_BINS });
+  return { first: range.first, summaries, events };
+}
+
+/** Merges blocks (in any order, without gaps or overlaps) into the run result of the whole experiment. */
+export function combineBlocks(scenarioInput: Scenario | unknown, settingsInput: RunSettings | unknown, blocks: ReplicationBlock[]): RunResult {
+  const { scenario, settings } = prepare(scenarioInput, settingsInput);
+  return combine(scenario, settings, blocks);
+}
+
+function combine(scenario: Scenario, settings: RunSettings, blocks: ReplicationBlock[]): RunResult {
+  const ordered = [...blocks].sort((a, b) => a.first - b.first);
+  let next = 0;
+  for (const block of ordered) {
+    if (block.first !== next) {
+      throw new InvalidInputError([{ path: 'blocks', message: `replication ${next} is ${block.first > next ? 'missing' : 'present twice'}; blocks must cover 0 .. ${settings.replications - 1} once each` }]);
+    }
+    next += block.summaries.length;
+  }
+  if (next !== settings.replications) {
+    throw new InvalidInputError([{ path: 'blocks', message: `the blocks hold ${next} replications but the settings ask for ${settings.replications}` }]);
+  }
+  const line = compileLine(scenario, settings.carriers ?? scenario.carriers.count);
+  return combineReplications({
+    line,
+    settings,
+    engineVersion: ENGINE_VERSION,
+    reps: ordered.flatMap((b) => b.summaries),
+    events: ordered.flatMap((b) => b.events),
+    timeBins: RESULT_TIME_BINS,
+    positionBins: RESULT_POSITION_BINS,
+  });
+}
+
+export async function runExperiment(scenarioInput: Scenario | unknown, settingsInput: RunSettings | unknown, hooks: RunHooks = {}): Promise<RunResult> {
+  const { scenario, settings } = prepare(scenarioInput, settingsInput);
+  const block = await runRange(scenario, settings, { first: 0, count: settings.replications }, hooks);
+  return combine(scenario, settings, [block]);
 }

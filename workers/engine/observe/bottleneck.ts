@@ -45,9 +45,9 @@ export class BottleneckTracker {
    * hand the bottleneck to whichever station happens to be working at that moment.
    */
   constructor(
-    private readonly window: ObservationWindow,
+    readonly window: ObservationWindow,
     stationCount: number,
-    private readonly bridgeSeconds = 0,
+    readonly bridgeSeconds = 0,
   ) {
     this.activeSince = new Float64Array(stationCount).fill(-1);
     this.idleSince = new Float64Array(stationCount).fill(-1);

@@ -23,7 +23,9 @@ function where(m: LineState, c: number): string {
 }
 
 function waitingFor(m: LineState, c: number): string {
-  const target = m.cTarget[c] >= 0 ? `station "${m.line.stationIds[m.cTarget[c]]}"` : 'nothing';
+  const step = m.cTarget[c] >= 0 ? m.line.stationStep[m.cTarget[c]] : -1;
+  const target = step < 0 ? 'nothing' : m.cPending[c] ? `a station of step "${m.line.scenario.steps[step].id}"` : `station "${m.line.stationIds[m.cTarget[c]]}"`;
+  if (step >= 0 && m.stepWaiting[step].includes(c)) return `room on the way to ${target}: every station's lane is full`;
   if (m.cPhase[c] === PH_TRANSFER) {
     for (let k = 0; k < m.line.connCount; k++) {
       if (m.tCarrier[k] === c && m.tState[k] === TR_HOLDING) return `room at the start of lane "${laneId(m, m.line.connTo[k])}" (heading for ${target})`;

@@ -16,15 +16,30 @@ export function positionAt(m: LineState, c: number, t: number): number {
   return start + m.line.motion.travelledMm(m.cDest[c] - start, m.cProfile[c], t - m.cMoveStart[c]);
 }
 
-/** The point on its lane the carrier is heading for: its station there, else the lane end. */
+/**
+ * The point on its lane the carrier is heading for: its station there, else the lane end. A carrier
+ * that has not yet chosen among a pooled step's stations stops at the first of them ahead on its
+ * lane, where it decides.
+ */
 export function stopPoint(m: LineState, c: number): number {
   const lane = m.cLane[c];
   const target = m.cTarget[c];
-  if (target >= 0 && m.line.stationLane[target] === lane) {
-    const p = m.line.stationPositionMm[target];
+  const line = m.line;
+  let stop = line.laneLengthMm[lane];
+  if (target < 0) return stop;
+  if (m.cPending[c]) {
+    const stations = line.stepStations[line.stationStep[target]];
+    for (let i = 0; i < stations.length; i++) {
+      const p = line.stationPositionMm[stations[i]];
+      if (line.stationLane[stations[i]] === lane && p >= m.cPos[c] - EPS_MM && p < stop) stop = p;
+    }
+    return stop;
+  }
+  if (line.stationLane[target] === lane) {
+    const p = line.stationPositionMm[target];
     if (p >= m.cPos[c] - EPS_MM) return p;
   }
-  return m.line.laneLengthMm[lane];
+  return stop;
 }
 
 export function wake(m: LineState, c: number): void {

@@ -11,6 +11,7 @@ import type { StreamFactory } from '../random/streams';
 import { inBreak, nextBreakEdge } from './breaks';
 import type { CompiledLine } from './compile';
 import { gridlockReport } from './gridlock';
+import { decidePending } from './dispatch';
 import { checkInvariants } from './invariants';
 import { advance, completeMove, nextWoken, positionAt, wake } from './lanes';
 import { placeCarriers } from './placement';
@@ -77,9 +78,13 @@ function settle(m: LineState): void {
       if (m.cAtStation[c] >= 0) releaseStation(m, c);
     } else if (outcome === 'atStop') {
       if (m.cAtStation[c] >= 0) releaseStation(m, c);
+      if (m.cPending[c] && !decidePending(m, c)) continue;
       const target = m.cTarget[c];
-      const atTarget = m.line.stationLane[target] === m.cLane[c] && Math.abs(m.line.stationPositionMm[target] - m.cPos[c]) < 1e-6;
-      if (atTarget) arriveAtStation(m, c, target);
+      const onLane = m.line.stationLane[target] === m.cLane[c];
+      const offset = m.line.stationPositionMm[target] - m.cPos[c];
+      if (onLane && Math.abs(offset) < 1e-6) arriveAtStation(m, c, target);
+      // Chose a station further along this lane: run on to it.
+      else if (onLane && offset > 0 && !m.cPending[c]) wake(m, c);
       else requestExit(m, c);
     }
   }

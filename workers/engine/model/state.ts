@@ -71,6 +71,8 @@ export type LineState = {
   cConn: Int32Array;
   cQueueConn: Int32Array;
   cWoken: Uint8Array;
+  /** 1 while the carrier heads for a pooled step without having chosen its station (cTarget is then only a route hint). */
+  cPending: Uint8Array;
   wakeRing: Int32Array;
   wakeHead: number;
   wakeCount: number;
@@ -101,6 +103,8 @@ export type LineState = {
   sAssigned: Int32Array;
   samplers: StationSamplers[];
   stepRoundRobin: Int32Array;
+  /** Carriers standing at a decision point of a pooled step until one of its stations has room. */
+  stepWaiting: number[][];
   wip: number;
 };
 
@@ -133,6 +137,7 @@ export function createState(line: CompiledLine, queue: EventQueue, observer: Obs
     cConn: new Int32Array(n).fill(-1),
     cQueueConn: new Int32Array(n).fill(-1),
     cWoken: new Uint8Array(n),
+    cPending: new Uint8Array(n),
     wakeRing: new Int32Array(n),
     wakeHead: 0,
     wakeCount: 0,
@@ -158,6 +163,7 @@ export function createState(line: CompiledLine, queue: EventQueue, observer: Obs
     sAssigned: new Int32Array(s),
     samplers,
     stepRoundRobin: new Int32Array(line.stepCount),
+    stepWaiting: Array.from({ length: line.stepCount }, () => []),
     wip: 0,
   };
 }

@@ -15,6 +15,7 @@ import { decidePending } from './dispatch';
 import { checkInvariants } from './invariants';
 import { advance, completeMove, nextWoken, positionAt, wake } from './lanes';
 import { placeCarriers } from './placement';
+import { leaderOf, leave } from './platoons';
 import {
   createState,
   EV_ARRIVE,
@@ -72,11 +73,13 @@ function settle(m: LineState): void {
     }
     const c = nextWoken(m);
     if (c < 0) return;
-    if (m.cPhase[c] !== PH_QUEUED) continue;
+    // Riders move only with their leader.
+    if (m.cPhase[c] !== PH_QUEUED || leaderOf(m, c) !== c) continue;
     const outcome = advance(m, c);
     if (outcome === 'moved') {
       if (m.cAtStation[c] >= 0) releaseStation(m, c);
     } else if (outcome === 'atStop') {
+      leave(m, c);
       if (m.cAtStation[c] >= 0) releaseStation(m, c);
       if (m.cPending[c] && !decidePending(m, c)) continue;
       const target = m.cTarget[c];

@@ -17,8 +17,8 @@
 import type { ObservationWindow } from './window';
 
 const MAX_PENDING = 2_000;
-/** Completed periods collected before the timeline is resolved. */
-const MIN_BATCH = 64;
+/** Completed periods collected before the timeline is resolved (larger batches sort less often; memory stays under MAX_PENDING). */
+const MIN_BATCH = 256;
 
 type Segment = { station: number; periodStart: number; periodEnd: number; from: number; to: number };
 
@@ -168,8 +168,8 @@ export class BottleneckTracker {
     this.pStart.length = kept;
     this.pEnd.length = kept;
     // Periods that stay pending (behind a long-running one) are re-read by each sweep; growing the
-    // trigger with them keeps the work per period constant.
-    this.resolveAt = Math.max(MIN_BATCH, 2 * kept);
+    // trigger with them (four times their number) keeps the work per period constant and small.
+    this.resolveAt = Math.max(MIN_BATCH, 4 * kept);
   }
 
   /** Closes every running period at the end of the run and attributes the last segment. */

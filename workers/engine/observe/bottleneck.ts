@@ -26,9 +26,11 @@ export class BottleneckTracker {
   private readonly activeSince: Float64Array;
   /** When a station still in an active period went inactive (-1: it has not). */
   private readonly idleSince: Float64Array;
-  private pStation: number[] = [];
-  private pStart: number[] = [];
-  private pEnd: number[] = [];
+  /** Completed periods not yet resolved: station, start, end; the first pCount entries are used. */
+  private pStation = new Int32Array(256);
+  private pStart = new Float64Array(256);
+  private pEnd = new Float64Array(256);
+  private pCount = 0;
   private settled: number;
   private cuts = new Float64Array(64);
   private resolveAt = MIN_BATCH;
@@ -91,10 +93,26 @@ export class BottleneckTracker {
     this.activeSince[station] = -1;
     this.idleSince[station] = -1;
     if (end > start) {
-      this.pStation.push(station);
-      this.pStart.push(start);
-      this.pEnd.push(end);
+      this.addPeriod(station, start, end);
     }
+  }
+
+  private addPeriod(station: number, start: number, end: number): void {
+    if (this.pCount === this.pStation.length) {
+      const n = 2 * this.pCount;
+      const stations = new Int32Array(n);
+      stations.set(this.pStation);
+      const starts = new Float64Array(n);
+      starts.set(this.pStart);
+      const ends = new Float64Array(n);
+      ends.set(this.pEnd);
+      this.pStation = stations;
+      this.pStart = starts;
+      this.pEnd = ends;
+    }
+    this.pStation[this.pCount] = station;
+    this.pStart[this.pCount] = start;
+    this.pEnd[this.pCount++] = end;
   }
 
   private pushIdle(station: number, t: number): void {
@@ -129,8 +147,8 @@ export class BottleneckTracker {
       closed = true;
     }
     if (!closed) return;
-    if (this.pStation.length > MAX_PENDING) this.resolve(t, true);
-    else if (this.pStation.length > this.resolveAt) this.resolve(t, false);
+    if (this.pCount > MAX_PENDING) this.resolve(t, true);
+    else if (this.pCount > this.resolveAt) this.resolve(t, false);
   }
 
   /** Resolves the timeline up to t (forced: running periods end at t). */
@@ -144,9 +162,7 @@ export class BottleneckTracker {
         }
         const since = this.activeSince[s];
         if (since >= 0 && t > since) {
-          this.pStation.push(s);
-          this.pStart.push(since);
-          this.pEnd.push(t);
+          this.addPeriod(s, since, t);
           this.activeSince[s] = t;
         }
       }
@@ -157,16 +173,14 @@ export class BottleneckTracker {
     this.sweep(boundary);
     this.settled = boundary;
     let kept = 0;
-    for (let i = 0; i < this.pStation.length; i++) {
+    for (let i = 0; i < this.pCount; i++) {
       if (this.pEnd[i] <= boundary) continue;
       this.pStation[kept] = this.pStation[i];
       this.pStart[kept] = this.pStart[i];
       this.pEnd[kept] = this.pEnd[i];
       kept++;
     }
-    this.pStation.length = kept;
-    this.pStart.length = kept;
-    this.pEnd.length = kept;
+    this.pCount = kept;
     // Periods that stay pending (behind a long-running one) are re-read by each sweep; growing the
     // trigger with them (four times their number) keeps the work per period constant and small.
     this.resolveAt = Math.max(MIN_BATCH, 4 * kept);
@@ -185,7 +199,7 @@ export class BottleneckTracker {
    * index); periods join the heap as the sweep passes their start and leave it once over.
    */
   private sweep(boundary: number): void {
-    const n = this.pStation.length;
+    const n = this.pCount;
     if (this.cuts.length < 2 * n + 2) {
       this.cuts = new Float64Array(4 * n + 4);
       this.byStart = new Int32Array(2 * n + 2);
@@ -204,7 +218,8 @@ export class BottleneckTracker {
     const points = cuts.subarray(0, count).sort();
     const order = this.byStart.subarray(0, n);
     for (let i = 0; i < n; i++) order[i] = i;
-    order.sort((x, y) => starts[x] - starts[y]);
+    // A comparator returning -1, 0 or 1 (small integers) keeps the sort free of allocations.
+    order.sort((x, y) => (starts[x] < starts[y] ? -1 : starts[x] > starts[y] ? 1 : 0));
     this.heapSize = 0;
     let next = 0;
     for (let k = 0; k + 1 < count; k++) {

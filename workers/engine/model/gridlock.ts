@@ -4,27 +4,28 @@ import type { GridlockEntry } from '../kernel/stop';
 import { positionAt } from './lanes';
 import { phaseOf } from './platoons';
 import { PH_EXIT, PH_STATION, PH_TRANSFER, TR_HOLDING, type LineState } from './state';
+import type { CarrierIndex, ConnIndex, LaneIndex } from './indexes';
 
-function laneId(m: LineState, lane: number): string {
+function laneId(m: LineState, lane: LaneIndex): string {
   return m.line.scenario.lanes[lane].id;
 }
 
-function connName(m: LineState, conn: number): string {
+function connName(m: LineState, conn: ConnIndex): string {
   const t = m.line.connTransfer[conn];
   if (t >= 0) return `transfer "${m.line.scenario.transfers[t].id}"`;
   return `link to lane "${laneId(m, m.line.connTo[conn])}"`;
 }
 
-function where(m: LineState, c: number): string {
+function where(m: LineState, c: CarrierIndex): string {
   if (phaseOf(m, c) === PH_TRANSFER) {
-    for (let k = 0; k < m.line.connCount; k++) if (m.tCarrier[k] === c) return connName(m, k);
+    for (let k = 0; k < m.line.connCount; k++) if (m.tCarrier[k] === c) return connName(m, k as ConnIndex);
     return 'a transfer';
   }
   const atStation = m.cAtStation[c] >= 0 ? ` (station "${m.line.stationIds[m.cAtStation[c]]}")` : '';
   return `lane "${laneId(m, m.cLane[c])}" at ${positionAt(m, c, m.now).toFixed(0)} mm${atStation}`;
 }
 
-function waitingFor(m: LineState, c: number): string {
+function waitingFor(m: LineState, c: CarrierIndex): string {
   const step = m.cTarget[c] >= 0 ? m.line.stationStep[m.cTarget[c]] : -1;
   const target = step < 0 ? 'nothing' : m.cPending[c] ? `a station of step "${m.line.scenario.steps[step].id}"` : `station "${m.line.stationIds[m.cTarget[c]]}"`;
   if (step >= 0 && m.stepWaiting[step].includes(c)) return `room on the way to ${target}: every station's lane is full`;
@@ -47,6 +48,9 @@ function waitingFor(m: LineState, c: number): string {
 
 export function gridlockReport(m: LineState): GridlockEntry[] {
   const out: GridlockEntry[] = [];
-  for (let c = 0; c < m.line.carrierCount; c++) out.push({ carrier: c, at: where(m, c), waitingFor: waitingFor(m, c) });
+  for (let i = 0; i < m.line.carrierCount; i++) {
+    const c = i as CarrierIndex;
+    out.push({ carrier: c, at: where(m, c), waitingFor: waitingFor(m, c) });
+  }
   return out;
 }

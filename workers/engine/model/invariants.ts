@@ -3,12 +3,13 @@
 import { positionAt } from './lanes';
 import { leaderOf, phaseOf } from './platoons';
 import { PH_MOVING, PH_TRANSFER, type LineState } from './state';
+import { NONE, type CarrierIndex, type LaneIndex } from './indexes';
 
 const EPS_MM = 1e-6;
 
 /** Moves are never re-planned before they end, so the pair's future positions up to the first arrival are known. */
-function checkPair(m: LineState, ahead: number, behind: number, lane: number): void {
-  const moveEnd = (c: number) => (phaseOf(m, c) === PH_MOVING ? m.cMoveEnd[leaderOf(m, c)] : Infinity);
+function checkPair(m: LineState, ahead: CarrierIndex, behind: CarrierIndex, lane: LaneIndex): void {
+  const moveEnd = (c: CarrierIndex) => (phaseOf(m, c) === PH_MOVING ? m.cMoveEnd[leaderOf(m, c)] : Infinity);
   const until = Math.min(moveEnd(ahead), moveEnd(behind));
   const horizon = Number.isFinite(until) ? until - m.now : 0;
   for (let k = 0; k <= 4; k++) {
@@ -24,8 +25,9 @@ function checkPair(m: LineState, ahead: number, behind: number, lane: number): v
 export function checkInvariants(m: LineState): void {
   const line = m.line;
   let onLanes = 0;
-  for (let lane = 0; lane < line.laneCount; lane++) {
-    let previous = -1;
+  for (let l = 0; l < line.laneCount; l++) {
+    const lane = l as LaneIndex;
+    let previous: CarrierIndex = NONE;
     let count = 0;
     for (let c = m.laneFront[lane]; c >= 0; c = m.cBehind[c]) {
       count++;
@@ -41,7 +43,7 @@ export function checkInvariants(m: LineState): void {
     onLanes += count;
   }
   let inTransfers = 0;
-  for (let c = 0; c < line.carrierCount; c++) if (phaseOf(m, c) === PH_TRANSFER) inTransfers++;
+  for (let c = 0; c < line.carrierCount; c++) if (phaseOf(m, c as CarrierIndex) === PH_TRANSFER) inTransfers++;
   if (onLanes + inTransfers !== line.carrierCount) {
     throw new Error(`invariant: ${onLanes} carriers on lanes and ${inTransfers} in transfers, but the line has ${line.carrierCount}`);
   }

@@ -12,6 +12,7 @@ import { inBreak, nextBreakEdge } from './breaks';
 import type { CompiledLine } from './compile';
 import { gridlockReport } from './gridlock';
 import { decidePending } from './dispatch';
+import type { CarrierIndex, ConnIndex, LaneIndex, StationIndex } from './indexes';
 import { checkInvariants } from './invariants';
 import { advance, completeMove, nextWoken, positionAt, wake } from './lanes';
 import { placeCarriers } from './placement';
@@ -66,7 +67,7 @@ function makeSamplers(line: CompiledLine, streams: StreamFactory): StationSample
 function settle(m: LineState): void {
   for (;;) {
     if (m.laneRing.length > 0) {
-      const lane = m.laneRing.shift() as number;
+      const lane = m.laneRing.shift() as LaneIndex;
       m.laneDirty[lane] = 0;
       serveLane(m, lane);
       continue;
@@ -134,7 +135,8 @@ export class Replication {
 
   private sample(t: number): void {
     const m = this.state;
-    for (let c = 0; c < this.line.carrierCount; c++) {
+    for (let i = 0; i < this.line.carrierCount; i++) {
+      const c = i as CarrierIndex;
       const lane = m.cLane[c];
       if (lane < 0) continue;
       const head = positionAt(m, c, t);
@@ -144,28 +146,29 @@ export class Replication {
     if (next < this.config.endSeconds) m.queue.push(next, 2, EV_SAMPLE, 0, 0);
   }
 
+  /** Event payloads are plain numbers; each kind says what its first one indexes. */
   private handle(kind: number, a: number, b: number): void {
     const m = this.state;
     switch (kind) {
       case EV_ARRIVE:
-        completeMove(m, a);
-        wake(m, a);
+        completeMove(m, a as CarrierIndex);
+        wake(m, a as CarrierIndex);
         break;
       case EV_SEGMENT_END:
-        onSegmentEnd(m, a, b);
+        onSegmentEnd(m, a as StationIndex, b);
         break;
       case EV_REPAIR_END:
-        onRepairEnd(m, a);
+        onRepairEnd(m, a as StationIndex);
         break;
       case EV_CARRIED:
-        onCarried(m, a);
+        onCarried(m, a as ConnIndex);
         break;
       case EV_RETURNED:
-        onReturned(m, a);
+        onReturned(m, a as ConnIndex);
         break;
       case EV_LANE_WAKE:
         m.laneWakePending[a] = 0;
-        serveLane(m, a);
+        serveLane(m, a as LaneIndex);
         break;
       case EV_BREAK:
         setBreak(m, a === 1);

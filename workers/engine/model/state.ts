@@ -5,6 +5,7 @@ import type { Sampler } from '../random/sampler';
 import type { EventQueue } from '../kernel/event-queue';
 import type { Observer } from '../observe/observer';
 import type { CompiledLine } from './compile';
+import { indexArray, type CarrierIndex, type ConnIndex, type IndexArray, type LaneIndex, type StationIndex, type StepIndex } from './indexes';
 
 /** Carrier phases. */
 export const PH_MOVING = 0;
@@ -53,23 +54,23 @@ export type LineState = {
   activePending: number;
   breakActive: boolean;
   // Carriers.
-  cLane: Int32Array;
+  cLane: IndexArray<LaneIndex>;
   cPos: Float64Array;
   cDest: Float64Array;
   cMoveStart: Float64Array;
   cMoveEnd: Float64Array;
   cProfile: Int8Array;
   cPhase: Int8Array;
-  cAhead: Int32Array;
-  cBehind: Int32Array;
-  cStep: Int32Array;
-  cTarget: Int32Array;
+  cAhead: IndexArray<CarrierIndex>;
+  cBehind: IndexArray<CarrierIndex>;
+  cStep: IndexArray<StepIndex>;
+  cTarget: IndexArray<StationIndex>;
   cLoaded: Uint8Array;
-  cAtStation: Int32Array;
+  cAtStation: IndexArray<StationIndex>;
   cLoadTime: Float64Array;
   cLastLoad: Float64Array;
-  cConn: Int32Array;
-  cQueueConn: Int32Array;
+  cConn: IndexArray<ConnIndex>;
+  cQueueConn: IndexArray<ConnIndex>;
   cWoken: Uint8Array;
   /** 1 while the carrier heads for a pooled step without having chosen its station (cTarget is then only a route hint). */
   cPending: Uint8Array;
@@ -77,34 +78,34 @@ export type LineState = {
   cPlatoon: Int32Array;
   /** Order of arrival on its lane: consecutive from the lane's front to its rear. */
   cSeq: Int32Array;
-  pLeader: Int32Array;
-  pRear: Int32Array;
+  pLeader: IndexArray<CarrierIndex>;
+  pRear: IndexArray<CarrierIndex>;
   pSize: Int32Array;
   /** The transfer whose queue the platoon's riders count in while they stand (-1: none). */
-  pConn: Int32Array;
+  pConn: IndexArray<ConnIndex>;
   pFree: Int32Array;
   pFreeTop: number;
-  wakeRing: Int32Array;
+  wakeRing: IndexArray<CarrierIndex>;
   wakeHead: number;
   wakeCount: number;
   // Lanes.
-  laneFront: Int32Array;
-  laneRear: Int32Array;
+  laneFront: IndexArray<CarrierIndex>;
+  laneRear: IndexArray<CarrierIndex>;
   laneCarriers: Int32Array;
   laneSeq: Int32Array;
   laneWakePending: Uint8Array;
   laneDirty: Uint8Array;
   /** Lanes to re-examine after the current event. */
-  laneRing: number[];
+  laneRing: LaneIndex[];
   /** Connections waiting to put a carrier on the lane, in request order. */
-  laneRequests: number[][];
+  laneRequests: ConnIndex[][];
   // Connections (links and transfers).
   tState: Int8Array;
-  tCarrier: Int32Array;
-  tWaiting: Int32Array;
+  tCarrier: IndexArray<CarrierIndex>;
+  tWaiting: IndexArray<CarrierIndex>;
   // Stations.
   sState: Int8Array;
-  sCarrier: Int32Array;
+  sCarrier: IndexArray<CarrierIndex>;
   sDone: Uint8Array;
   sDown: Uint8Array;
   sSegmentActive: Uint8Array;
@@ -116,7 +117,7 @@ export type LineState = {
   samplers: StationSamplers[];
   stepRoundRobin: Int32Array;
   /** Carriers standing at a decision point of a pooled step until one of its stations has room. */
-  stepWaiting: number[][];
+  stepWaiting: CarrierIndex[][];
   wip: number;
 };
 
@@ -131,38 +132,38 @@ export function createState(line: CompiledLine, queue: EventQueue, observer: Obs
     now: 0,
     activePending: 0,
     breakActive: false,
-    cLane: new Int32Array(n).fill(-1),
+    cLane: indexArray<LaneIndex>(n),
     cPos: new Float64Array(n),
     cDest: new Float64Array(n),
     cMoveStart: new Float64Array(n),
     cMoveEnd: new Float64Array(n),
     cProfile: new Int8Array(n),
     cPhase: new Int8Array(n).fill(-1),
-    cAhead: new Int32Array(n).fill(-1),
-    cBehind: new Int32Array(n).fill(-1),
-    cStep: new Int32Array(n),
-    cTarget: new Int32Array(n).fill(-1),
+    cAhead: indexArray<CarrierIndex>(n),
+    cBehind: indexArray<CarrierIndex>(n),
+    cStep: indexArray<StepIndex>(n, 0),
+    cTarget: indexArray<StationIndex>(n),
     cLoaded: new Uint8Array(n),
-    cAtStation: new Int32Array(n).fill(-1),
+    cAtStation: indexArray<StationIndex>(n),
     cLoadTime: new Float64Array(n),
     cLastLoad: new Float64Array(n).fill(-1),
-    cConn: new Int32Array(n).fill(-1),
-    cQueueConn: new Int32Array(n).fill(-1),
+    cConn: indexArray<ConnIndex>(n),
+    cQueueConn: indexArray<ConnIndex>(n),
     cWoken: new Uint8Array(n),
     cPending: new Uint8Array(n),
     cPlatoon: new Int32Array(n).fill(-1),
     cSeq: new Int32Array(n),
-    pLeader: new Int32Array(n).fill(-1),
-    pRear: new Int32Array(n).fill(-1),
+    pLeader: indexArray<CarrierIndex>(n),
+    pRear: indexArray<CarrierIndex>(n),
     pSize: new Int32Array(n),
-    pConn: new Int32Array(n).fill(-1),
+    pConn: indexArray<ConnIndex>(n),
     pFree: Int32Array.from({ length: n }, (_, i) => n - 1 - i),
     pFreeTop: n,
-    wakeRing: new Int32Array(n),
+    wakeRing: indexArray<CarrierIndex>(n, 0),
     wakeHead: 0,
     wakeCount: 0,
-    laneFront: new Int32Array(line.laneCount).fill(-1),
-    laneRear: new Int32Array(line.laneCount).fill(-1),
+    laneFront: indexArray<CarrierIndex>(line.laneCount),
+    laneRear: indexArray<CarrierIndex>(line.laneCount),
     laneCarriers: new Int32Array(line.laneCount),
     laneSeq: new Int32Array(line.laneCount),
     laneWakePending: new Uint8Array(line.laneCount),
@@ -170,10 +171,10 @@ export function createState(line: CompiledLine, queue: EventQueue, observer: Obs
     laneRing: [],
     laneRequests: Array.from({ length: line.laneCount }, () => []),
     tState: new Int8Array(c),
-    tCarrier: new Int32Array(c).fill(-1),
-    tWaiting: new Int32Array(c).fill(-1),
+    tCarrier: indexArray<CarrierIndex>(c),
+    tWaiting: indexArray<CarrierIndex>(c),
     sState: new Int8Array(s).fill(ST_STARVED),
-    sCarrier: new Int32Array(s).fill(-1),
+    sCarrier: indexArray<CarrierIndex>(s),
     sDone: new Uint8Array(s),
     sDown: new Uint8Array(s),
     sSegmentActive: new Uint8Array(s),

@@ -18,14 +18,15 @@ import {
   ST_STARVED,
   type LineState,
 } from './state';
+import { NONE, type CarrierIndex, type StationIndex, type StepIndex } from './indexes';
 
 const EPS_S = 1e-9;
 
-function onBreak(m: LineState, s: number): boolean {
+function onBreak(m: LineState, s: StationIndex): boolean {
   return m.breakActive && m.line.stationPausesForBreaks[s] === 1;
 }
 
-export function updateStationState(m: LineState, s: number): void {
+export function updateStationState(m: LineState, s: StationIndex): void {
   let state: number;
   if (m.sDown[s]) state = ST_DOWN;
   else if (onBreak(m, s)) state = ST_BREAK;
@@ -36,7 +37,7 @@ export function updateStationState(m: LineState, s: number): void {
   m.observer.stationState(s, state, m.now);
 }
 
-function resume(m: LineState, s: number): void {
+function resume(m: LineState, s: StationIndex): void {
   if (m.sCarrier[s] < 0 || m.sDone[s] || m.sDown[s] || m.sSegmentActive[s] || onBreak(m, s)) return;
   const segment = Math.min(m.sWorkLeft[s], m.sToFailure[s]);
   m.sSegmentActive[s] = 1;
@@ -45,7 +46,7 @@ function resume(m: LineState, s: number): void {
   scheduleActive(m, segment, EV_SEGMENT_END, s, m.sGen[s]);
 }
 
-function pause(m: LineState, s: number): void {
+function pause(m: LineState, s: StationIndex): void {
   if (!m.sSegmentActive[s]) return;
   const elapsed = m.now - m.sSegmentStart[s];
   m.sWorkLeft[s] -= elapsed;
@@ -54,7 +55,7 @@ function pause(m: LineState, s: number): void {
   m.sGen[s]++;
 }
 
-export function arriveAtStation(m: LineState, c: number, s: number): void {
+export function arriveAtStation(m: LineState, c: CarrierIndex, s: StationIndex): void {
   const work = m.samplers[s].cycle() + m.line.locateSeconds;
   m.observer.cycleSampled(s, work);
   m.cAtStation[c] = s;
@@ -67,21 +68,21 @@ export function arriveAtStation(m: LineState, c: number, s: number): void {
 }
 
 /** The carrier has started to move away: the station waits for its next carrier. */
-export function releaseStation(m: LineState, c: number): void {
+export function releaseStation(m: LineState, c: CarrierIndex): void {
   const s = m.cAtStation[c];
-  m.cAtStation[c] = -1;
-  m.sCarrier[s] = -1;
+  m.cAtStation[c] = NONE;
+  m.sCarrier[s] = NONE;
   m.sDone[s] = 0;
   updateStationState(m, s);
 }
 
-function fail(m: LineState, s: number): void {
+function fail(m: LineState, s: StationIndex): void {
   m.sDown[s] = 1;
   m.observer.failure(s, m.now);
   scheduleActive(m, m.samplers[s].repair?.() ?? 0, EV_REPAIR_END, s);
 }
 
-export function onSegmentEnd(m: LineState, s: number, generation: number): void {
+export function onSegmentEnd(m: LineState, s: StationIndex, generation: number): void {
   if (generation !== m.sGen[s] || !m.sSegmentActive[s]) return;
   pause(m, s);
   if (m.sWorkLeft[s] <= EPS_S) finishWork(m, s);
@@ -90,7 +91,7 @@ export function onSegmentEnd(m: LineState, s: number, generation: number): void 
   updateStationState(m, s);
 }
 
-export function onRepairEnd(m: LineState, s: number): void {
+export function onRepairEnd(m: LineState, s: StationIndex): void {
   m.sDown[s] = 0;
   m.sToFailure[s] = m.samplers[s].failure?.() ?? Infinity;
   resume(m, s);
@@ -99,7 +100,8 @@ export function onRepairEnd(m: LineState, s: number): void {
 
 export function setBreak(m: LineState, active: boolean): void {
   m.breakActive = active;
-  for (let s = 0; s < m.line.stationCount; s++) {
+  for (let i = 0; i < m.line.stationCount; i++) {
+    const s = i as StationIndex;
     if (!m.line.stationPausesForBreaks[s]) continue;
     if (active) pause(m, s);
     else resume(m, s);
@@ -108,14 +110,14 @@ export function setBreak(m: LineState, active: boolean): void {
 }
 
 /** What the finished step does to the part, and which step and station the carrier needs next. */
-function finishWork(m: LineState, s: number): void {
+function finishWork(m: LineState, s: StationIndex): void {
   const c = m.sCarrier[s];
   const step = m.line.stationStep[s];
   const kind = m.line.stepKind[step];
   m.sDone[s] = 1;
   m.observer.operationDone(s, m.now);
   unassign(m, s);
-  let next = step + 1;
+  let next = (step + 1) as StepIndex;
   if (kind === STEP_LOAD) {
     m.cLoaded[c] = 1;
     m.cLoadTime[c] = m.now;
@@ -126,7 +128,7 @@ function finishWork(m: LineState, s: number): void {
     m.cLoaded[c] = 0;
     m.observer.output(m.now, m.now - m.cLoadTime[c]);
     m.observer.wip(--m.wip, m.now);
-    next = 0;
+    next = 0 as StepIndex;
   } else if (kind === STEP_INSPECT) {
     const u = m.samplers[s].inspect?.() ?? 1;
     const reject = m.line.stepRejectShare[step];
@@ -134,7 +136,7 @@ function finishWork(m: LineState, s: number): void {
       m.cLoaded[c] = 0;
       m.observer.scrapped(m.now, m.now - m.cLoadTime[c]);
       m.observer.wip(--m.wip, m.now);
-      next = 0;
+      next = 0 as StepIndex;
     } else if (u < reject + m.line.stepReworkShare[step]) {
       m.observer.reworked(m.now);
       next = m.line.stepReworkTarget[step];

@@ -52,7 +52,6 @@ export function CompareRoute() {
         actions={comparing && data.items ? <ButtonLink to={`/projects/${projectId}/compare/report?runs=${runIds.join(',')}`}>Printable report</ButtonLink> : undefined}
       />
       <CompareSetup
-        key={runIds.join()}
         runs={runs.data ?? []}
         scenarios={(scenarios.data ?? []).map((s) => ({ id: s.id, name: s.name, latestRevisionNumber: s.latestRevision.number }))}
         selectedRunIds={runIds}

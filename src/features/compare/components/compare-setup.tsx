@@ -55,8 +55,8 @@ function ScenarioPicker({ scenarios, mayRun, progress, problem, onRunScenarios, 
     setIssues(parsed.success ? {} : Object.fromEntries(parsed.error.issues.map((i) => [formatIssuePath(i.path), i.message])));
     if (parsed.success && !count) onRunScenarios(chosen, parsed.data);
   };
-  const field = (name: keyof typeof values, label: string, hint?: string) => (
-    <TextField label={label} hint={hint} value={values[name]} error={issues[name]} onChange={(e) => setValues((v) => ({ ...v, [name]: e.target.value }))} inputMode="decimal" />
+  const field = (name: keyof typeof values, label: string) => (
+    <TextField label={label} value={values[name]} error={issues[name]} onChange={(e) => setValues((v) => ({ ...v, [name]: e.target.value }))} inputMode="decimal" />
   );
 
   if (!mayRun) return <p className="text-sm text-ink-soft">Engineers and owners can run scenarios for a comparison; you can compare runs already stored.</p>;
@@ -76,8 +76,9 @@ function ScenarioPicker({ scenarios, mayRun, progress, problem, onRunScenarios, 
         {field('replications', 'Replications')}
         {field('hours', 'Hours each')}
         {field('warmupMinutes', 'Warm-up (min)')}
-        {field('seed', 'Seed', 'One seed for all, so differences are paired.')}
+        {field('seed', 'Seed')}
       </div>
+      <p className="-mt-2 text-sm text-ink-soft">Every scenario runs with this one seed (common random numbers), so their differences are paired.</p>
       {progress ? (
         <div className="flex flex-col gap-2" role="status">
           <p className="text-sm">{progress.label}</p>
@@ -143,7 +144,7 @@ export function CompareSetup(props: CompareSetupProps) {
       <Card aria-labelledby="pick-runs-title" className="flex flex-col gap-3">
         <CardTitle id="pick-runs-title">Or compare stored runs</CardTitle>
         <p className="text-sm text-ink-soft">Runs with one seed and replication count are paired; others are compared as independent samples.</p>
-        <RunPicker runs={props.runs} selectedRunIds={props.selectedRunIds} onCompareRuns={props.onCompareRuns} />
+        <RunPicker key={props.selectedRunIds.join()} runs={props.runs} selectedRunIds={props.selectedRunIds} onCompareRuns={props.onCompareRuns} />
       </Card>
     </div>
   );

@@ -38,7 +38,8 @@ export interface CompareViewProps {
 
 export function CompareView({ items, stepNames, costs, costSection, question }: CompareViewProps) {
   const comparison = compareRuns(items.map((item) => ({ id: item.id, label: item.label, result: item.result })));
-  const answer = answerOf(comparison, costs);
+  const areas = new Map(items.flatMap((item) => (item.document ? [[item.id, footprintOf(item.document).areaM2] as const] : [])));
+  const answer = answerOf(comparison, costs, areas);
   const groups = heatmapGroups(items);
   return (
     <div className="flex flex-col gap-6" data-testid="comparison">

@@ -2,7 +2,7 @@
 // difference is significant at 95 %, and what each costs when a price list is known.
 import type { MeanDifference } from '../../../../workers/analysis/compare-means';
 import type { Comparison, RunFigures } from './comparison';
-import { formatMoney, formatNumber } from './format';
+import { formatMoney, formatNumber, formatSigned } from './format';
 
 export interface RunCost {
   capitalCost: number;
@@ -10,6 +10,9 @@ export interface RunCost {
   perHourlyPart: number | null;
   currency: string;
 }
+
+/** Floor area per run id, in m², when the scenario documents are known. */
+export type FloorAreas = ReadonlyMap<string, number>;
 
 export interface Answer {
   sentence: string;
@@ -34,7 +37,12 @@ function costClause(figures: readonly RunFigures[], costs: ReadonlyMap<string, R
   return ` Capital cost: ${parts.join(' against ')}.`;
 }
 
-export function answerOf(comparison: Comparison, costs?: ReadonlyMap<string, RunCost>): Answer {
+function areaClause(figures: readonly RunFigures[], areas: FloorAreas | undefined): string {
+  if (!areas || figures.some((f) => !areas.has(f.run.id))) return '';
+  return ` Floor area: ${figures.map((f) => `${f.run.label} ${formatNumber(areas.get(f.run.id)!, 1)} m²`).join(' against ')}.`;
+}
+
+export function answerOf(comparison: Comparison, costs?: ReadonlyMap<string, RunCost>, areas?: FloorAreas): Answer {
   const byThroughput = [...comparison.figures].sort((a, b) => b.values.throughputPerHour.mean - a.values.throughputPerHour.mean);
   const winner = byThroughput[0];
   const reference = comparison.figures[0];
@@ -42,8 +50,8 @@ export function answerOf(comparison: Comparison, costs?: ReadonlyMap<string, Run
   const d = differenceBetween(winner, other);
   const method = comparison.pairing === 'paired' ? 'paired' : 'Welch';
   const rate = (f: RunFigures) => `${formatNumber(f.values.throughputPerHour.mean, 1)} parts/h`;
-  const interval = d.unavailable ? `no interval: ${d.unavailable}` : `95 % ${method} interval ${formatNumber(d.ciLow, 1)} to ${formatNumber(d.ciHigh, 1)}`;
-  const costs2 = costClause([winner, other], costs);
+  const interval = d.unavailable ? `no interval: ${d.unavailable}` : `95 % ${method} interval ${formatSigned(d.ciLow, 1)} to ${formatSigned(d.ciHigh, 1)}`;
+  const costs2 = costClause([winner, other], costs) + areaClause([winner, other], areas);
   if (d.significant && d.difference > 0) {
     return {
       sentence: `${winner.run.label} makes more: ${rate(winner)} against ${rate(other)} for ${other.run.label}, ${formatNumber(d.difference, 1)} parts/h more (${interval}), a significant difference.${costs2}`,
@@ -52,7 +60,7 @@ export function answerOf(comparison: Comparison, costs?: ReadonlyMap<string, Run
     };
   }
   return {
-    sentence: `Neither makes significantly more: ${winner.run.label} ${rate(winner)} against ${rate(other)} for ${other.run.label} (difference ${formatNumber(d.difference, 1)} parts/h, ${interval}, which includes zero), so choose on cost and space.${costs2}`,
+    sentence: `Neither makes significantly more: ${winner.run.label} ${rate(winner)} against ${rate(other)} for ${other.run.label} (difference ${formatSigned(d.difference, 1)} parts/h, ${interval}, which includes zero), so choose on cost and space.${costs2}`,
     winnerId: null,
     significant: false,
   };

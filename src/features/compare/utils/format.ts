@@ -7,7 +7,9 @@ export function formatNumber(value: number, decimals: number): string {
 export function formatSigned(value: number, decimals: number): string {
   if (!Number.isFinite(value)) return '—';
   const text = formatNumber(Math.abs(value), decimals);
-  return value > 0 ? `+${text}` : value < 0 ? `−${text}` : text;
+  // A value that rounds to zero is shown without a sign: "−0.0" reads as a real loss.
+  if (Number(text.replace(/,/g, '')) === 0) return text;
+  return value > 0 ? `+${text}` : `−${text}`;
 }
 
 export function formatMoney(value: number, currency: string): string {

@@ -9,7 +9,7 @@ import { Wordmark } from './wordmark';
 export function AppFrame() {
   const session = useOptionalSession();
   return (
-    <div className="flex min-h-screen flex-col">
+    <div className="flex min-h-screen flex-col print:min-h-0">
       <a
         href="#main"
         className="sr-only z-50 rounded-md bg-paper-raised px-4 py-2 font-semibold text-ink focus:not-sr-only focus:fixed focus:top-3 focus:left-3 focus:outline-3 focus:outline-accent"

@@ -21,8 +21,9 @@ export function CompareReportRoute() {
   if (data.failed) return <LoadError what="the comparison" error={data.failed} />;
   if (!data.items || !data.project.data || !data.allRevisionsLoaded) return <PageSpinner label="Preparing the report…" />;
 
+  // The page is as wide as A4 less its margins, so charts are drawn at the width they print at.
   return (
-    <article className="report flex flex-col gap-6" data-testid="report" data-ready={data.priceListSettled ? 'yes' : 'no'}>
+    <article className="report mx-auto flex w-full max-w-[186mm] flex-col gap-6" data-testid="report" data-ready={data.priceListSettled ? 'yes' : 'no'}>
       <header className="flex flex-col gap-2 border-b-2 border-ink pb-4">
         <div className="flex flex-wrap items-center justify-between gap-3" data-print="hide">
           <Link className="text-sm underline underline-offset-4" to={`/projects/${projectId}/compare?runs=${runIds.join(',')}`}>

@@ -22,7 +22,8 @@ export function CompareRoute() {
   const { projectId = '' } = useParams();
   const [search] = useSearchParams();
   const navigate = useNavigate();
-  const runIds = parseRunIds(search.get('runs')).slice(0, COMPARE_LIMITS.max);
+  const askedFor = parseRunIds(search.get('runs'));
+  const runIds = askedFor.slice(0, COMPARE_LIMITS.max);
   const data = useComparisonData(projectId, runIds);
   const scenarios = useScenarios(projectId);
   const runs = useRuns({ projectId });
@@ -62,6 +63,11 @@ export function CompareRoute() {
         onRunScenarios={(ids, settings) => void scenarioRuns.start((scenarios.data ?? []).filter((s) => ids.includes(s.id)).map((s) => ({ id: s.id, name: s.name, latestRevisionNumber: s.latestRevision.number })), settings)}
         onCancel={scenarioRuns.cancel}
       />
+      {askedFor.length > COMPARE_LIMITS.max && (
+        <p className="text-sm font-medium text-caution">
+          The address names {askedFor.length} runs; a comparison holds at most {COMPARE_LIMITS.max}, so the first {COMPARE_LIMITS.max} are shown.
+        </p>
+      )}
       {comparing && data.failed && <LoadError what="a run of the comparison" error={data.failed} />}
       {comparing && !data.failed && !data.items && <PageSpinner label="Loading the runs…" />}
       {comparing && data.items && organisationId && (

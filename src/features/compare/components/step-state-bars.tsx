@@ -12,11 +12,14 @@ function Bar({ shares }: { shares: StepShares }) {
   const words = SHOWN.filter((s) => shares[s] >= 0.005).map((s) => `${stateLabel[chartState(s)]} ${percent(shares[s])}`);
   return (
     <div className="flex flex-col gap-1">
-      <div className="flex h-4 w-full overflow-hidden rounded-sm border border-ink-faint" aria-hidden>
-        {SHOWN.map((s) => (
-          <div key={s} style={{ width: `${shares[s] * 100}%`, background: stateColour[chartState(s)] }} />
-        ))}
-      </div>
+      {/* SVG fills print even where browsers leave out background colours. */}
+      <svg className="h-4 w-full" viewBox="0 0 100 4" preserveAspectRatio="none" aria-hidden>
+        {SHOWN.map((s, i) => {
+          const x = SHOWN.slice(0, i).reduce((sum, before) => sum + shares[before] * 100, 0);
+          return <rect key={s} x={x} y={0} width={shares[s] * 100} height={4} fill={stateColour[chartState(s)]} />;
+        })}
+        <rect x={0} y={0} width={100} height={4} fill="none" stroke="currentColor" strokeWidth={0.4} vectorEffect="non-scaling-stroke" />
+      </svg>
       <p className="text-xs text-ink-soft">
         {words.join(' · ')}
         {shares.stations > 1 && ` (mean of ${shares.stations} stations)`}
@@ -31,7 +34,9 @@ export function StepStateBars({ rows, labels }: { rows: readonly StepRow[]; labe
       <div className="flex flex-wrap gap-4 text-xs text-ink-soft" aria-hidden>
         {SHOWN.map((s) => (
           <span key={s} className="flex items-center gap-1">
-            <span className="inline-block size-3 rounded-sm border border-ink-faint" style={{ background: stateColour[chartState(s)] }} />
+            <svg className="size-3" viewBox="0 0 12 12">
+              <rect x={0.5} y={0.5} width={11} height={11} fill={stateColour[chartState(s)]} stroke="currentColor" />
+            </svg>
             {stateLabel[chartState(s)]}
           </span>
         ))}

@@ -38,6 +38,10 @@ const signedInPages: RouteObject[] = [
     lazy: async () => ({ Component: (await import('../features/runs/routes/project-runs-route')).ProjectRunsRoute }),
   },
   {
+    path: '/runs/:runId/playback',
+    lazy: async () => ({ Component: (await import('./routes/playback-route')).PlaybackRoute }),
+  },
+  {
     path: '/runs/:runId',
     lazy: async () => ({ Component: (await import('../features/results/routes/run-route')).RunRoute }),
   },

@@ -1,14 +1,23 @@
 // Side elevation: each deck at its height, its lanes projected onto the layout's long axis, and the
 // elevators as vertical connectors between the decks they join. Heights are to their own scale.
+import type { ReactNode } from 'react';
 import { formatLengthMm } from '../../lib/format';
 import { anchorFor, DRAWING } from './drawing-frame';
-import type { LayoutModel } from './layout-model';
+import type { LayoutModel, PlanDeck } from './layout-model';
 
 const HEIGHT_PX = 200;
 const LEFT_PX = 150;
 
-export function ElevationView({ model }: { model: LayoutModel }) {
-  const { colour } = DRAWING;
+/** Where things go in the side elevation: plan points onto the long axis, elevations onto height. */
+export interface ElevationFrame {
+  alongX: boolean;
+  decks: PlanDeck[];
+  deckAt: Map<string, number>;
+  along: (p: { x: number; y: number }) => number;
+  height: (mm: number) => number;
+}
+
+export function elevationFrame(model: LayoutModel): ElevationFrame | null {
   const box = model.footprint?.box;
   const decks = model.decks.filter((deck) => deck.elevationMm !== null);
   // With one deck there is nothing to show side-on that the plan does not already say.
@@ -17,10 +26,21 @@ export function ElevationView({ model }: { model: LayoutModel }) {
   const lo = alongX ? box.minX : box.minY;
   const hi = alongX ? box.maxX : box.maxY;
   const span = Math.max(hi - lo, 1);
-  const along = (p: { x: number; y: number }) => LEFT_PX + (((alongX ? p.x : p.y) - lo) / span) * (DRAWING.widthPx - LEFT_PX - 40);
   const top = Math.max(...decks.map((d) => d.elevationMm ?? 0), 1);
-  const height = (mm: number) => HEIGHT_PX - 28 - (mm / top) * (HEIGHT_PX - 60);
-  const deckAt = new Map(decks.map((deck) => [deck.id, deck.elevationMm ?? 0]));
+  return {
+    alongX,
+    decks,
+    deckAt: new Map(decks.map((deck) => [deck.id, deck.elevationMm ?? 0])),
+    along: (p) => LEFT_PX + (((alongX ? p.x : p.y) - lo) / span) * (DRAWING.widthPx - LEFT_PX - 40),
+    height: (mm) => HEIGHT_PX - 28 - (mm / top) * (HEIGHT_PX - 60),
+  };
+}
+
+export function ElevationView({ model, overlay }: { model: LayoutModel; overlay?: (frame: ElevationFrame) => ReactNode }) {
+  const { colour } = DRAWING;
+  const frame = elevationFrame(model);
+  if (!frame) return null;
+  const { alongX, decks, deckAt, along, height } = frame;
   return (
     <figure className="flex flex-col gap-1">
       <figcaption className="text-sm font-semibold text-ink">
@@ -66,6 +86,7 @@ export function ElevationView({ model }: { model: LayoutModel }) {
               </g>
             );
           })}
+        {overlay?.(frame)}
       </svg>
     </figure>
   );

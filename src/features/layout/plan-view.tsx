@@ -1,5 +1,6 @@
 // The plan of one deck: its lanes to scale, joins, elevator ends, stations labelled with their step,
 // and a scale bar. Every deck uses the same frame, so the plans stack into one comparable picture.
+import type { ReactNode } from 'react';
 import { DRAWING, type PlanFrame } from './drawing-frame';
 import type { LayoutModel, PlanDeck, PlanStation } from './layout-model';
 import { PlanLaneShape, selectable } from './plan-lane';
@@ -13,6 +14,8 @@ interface PlanViewProps {
   frame: PlanFrame;
   selection: LayoutSelection;
   onSelect?: (selection: LayoutSelection) => void;
+  /** Drawn over the plan (the playback's carriers and station states). */
+  overlay?: (deck: PlanDeck, frame: PlanFrame) => ReactNode;
 }
 
 function StationMarker({ station, frame, selected, labelBelow, onSelect }: { station: PlanStation; frame: PlanFrame; selected: boolean; labelBelow: boolean; onSelect?: () => void }) {
@@ -39,7 +42,7 @@ function StationMarker({ station, frame, selected, labelBelow, onSelect }: { sta
   );
 }
 
-export function PlanView({ model, deck, frame, selection, onSelect }: PlanViewProps) {
+export function PlanView({ model, deck, frame, selection, onSelect, overlay }: PlanViewProps) {
   const lanes = model.lanes.filter((lane) => lane.deckId === deck.id);
   const stations = model.stations.filter((station) => station.deckId === deck.id);
   const onDeck = (laneDeck: string) => laneDeck === deck.id;
@@ -91,6 +94,7 @@ export function PlanView({ model, deck, frame, selection, onSelect }: PlanViewPr
             onSelect={onSelect && (() => onSelect({ kind: 'station', stepIndex: station.stepIndex, stationIndex: station.stationIndex }))}
           />
         ))}
+        {overlay?.(deck, frame)}
         <ScaleBar frame={frame} spanMm={span} x={DRAWING.padPx} y={frame.heightPx - 14} />
         <text x={DRAWING.widthPx - 12} y={20} textAnchor="end" fontSize={11} fill={DRAWING.colour.inkSoft}>
           N ↑

@@ -4,6 +4,7 @@ import type { ReactNode } from 'react';
 import { formatLengthMm } from '../../lib/format';
 import { anchorFor, DRAWING } from './drawing-frame';
 import type { LayoutModel, PlanDeck } from './layout-model';
+import { OverlayLayer } from './overlay-layer';
 
 const HEIGHT_PX = 200;
 const LEFT_PX = 150;
@@ -46,6 +47,7 @@ export function ElevationView({ model, overlay }: { model: LayoutModel; overlay?
       <figcaption className="text-sm font-semibold text-ink">
         Side elevation <span className="font-normal text-ink-soft">(looking along the {alongX ? 'north–south' : 'east–west'} axis; heights not to plan scale)</span>
       </figcaption>
+      <div className="relative">
       <svg viewBox={`0 0 ${DRAWING.widthPx} ${HEIGHT_PX}`} className="h-auto w-full rounded-md border border-paper-sunk bg-white" role="img" aria-label="Side elevation of the decks and elevators" fontFamily="IBM Plex Sans, system-ui, sans-serif">
         <line x1={LEFT_PX - 10} x2={DRAWING.widthPx - 20} y1={height(0)} y2={height(0)} stroke={colour.ink} strokeWidth={2} />
         <text x={LEFT_PX - 14} y={height(0) + 4} textAnchor="end" fontSize={11} fill={colour.inkSoft}>
@@ -86,8 +88,9 @@ export function ElevationView({ model, overlay }: { model: LayoutModel; overlay?
               </g>
             );
           })}
-        {overlay?.(frame)}
       </svg>
+        {overlay && <OverlayLayer widthPx={DRAWING.widthPx} heightPx={HEIGHT_PX}>{overlay(frame)}</OverlayLayer>}
+      </div>
     </figure>
   );
 }

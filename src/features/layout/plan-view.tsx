@@ -5,6 +5,7 @@ import { DRAWING, type PlanFrame } from './drawing-frame';
 import type { LayoutModel, PlanDeck, PlanStation } from './layout-model';
 import { PlanLaneShape, selectable } from './plan-lane';
 import { ElevatorEnd, PlanJoinShape } from './plan-join';
+import { OverlayLayer } from './overlay-layer';
 import { ScaleBar } from './scale-bar';
 import { isLaneSelected, isStationSelected, type LayoutSelection } from './selection';
 
@@ -55,6 +56,7 @@ export function PlanView({ model, deck, frame, selection, onSelect, overlay }: P
       <figcaption className="text-sm font-semibold text-ink">
         {deck.name} <span className="font-normal text-ink-soft">plan{deck.elevationMm === null ? '' : `, running surface at ${deck.elevationMm} mm`}</span>
       </figcaption>
+      <div className="relative">
       <svg
         viewBox={`0 0 ${DRAWING.widthPx} ${frame.heightPx}`}
         className="h-auto w-full rounded-md border border-paper-sunk bg-white"
@@ -94,12 +96,13 @@ export function PlanView({ model, deck, frame, selection, onSelect, overlay }: P
             onSelect={onSelect && (() => onSelect({ kind: 'station', stepIndex: station.stepIndex, stationIndex: station.stationIndex }))}
           />
         ))}
-        {overlay?.(deck, frame)}
         <ScaleBar frame={frame} spanMm={span} x={DRAWING.padPx} y={frame.heightPx - 14} />
         <text x={DRAWING.widthPx - 12} y={20} textAnchor="end" fontSize={11} fill={DRAWING.colour.inkSoft}>
           N ↑
         </text>
       </svg>
+        {overlay && <OverlayLayer widthPx={DRAWING.widthPx} heightPx={frame.heightPx}>{overlay(deck, frame)}</OverlayLayer>}
+      </div>
     </figure>
   );
 }

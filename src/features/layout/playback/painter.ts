@@ -10,6 +10,16 @@ import { ELEVATION_VIEW } from './playback-overlay';
 import { carrierAt, stationStateAt, type CarrierPlace, type TraceIndex } from './trace-index';
 import type { LayoutModel } from '../layout-model';
 
+/** Writes an attribute only when its value changes (most carriers stand still in most frames), remembering what it wrote. */
+const written = new WeakMap<Element, Record<string, string>>();
+function set(el: Element, name: string, value: string): void {
+  let last = written.get(el);
+  if (!last) written.set(el, (last = {}));
+  if (last[name] === value) return;
+  last[name] = value;
+  el.setAttribute(name, value);
+}
+
 export interface Painter {
   paint(t: number): void;
 }
@@ -36,30 +46,30 @@ export function createPainter(root: HTMLElement, model: LayoutModel, index: Trac
       for (let c = 0; c < trace.carrierCount; c++) {
         const known = carrierAt(index, c, t, at) && placer.place(at, drawn);
         const fill = at.loaded ? DRAWING.colour.ink : DRAWING.colour.paper;
+        const transform = known && plan ? `translate(${plan.x(drawn.x).toFixed(1)},${plan.y(drawn.y).toFixed(1)}) rotate(${drawn.angle})` : '';
         for (const [deckId, marks] of planViews) {
           const mark = marks[c];
           if (!mark) continue;
-          if (!known || !plan || drawn.deckId !== deckId) {
-            mark.setAttribute('visibility', 'hidden');
+          if (!transform || drawn.deckId !== deckId) {
+            set(mark, 'visibility', 'hidden');
             continue;
           }
-          mark.setAttribute('visibility', 'visible');
-          mark.setAttribute('transform', `translate(${plan.x(drawn.x).toFixed(1)},${plan.y(drawn.y).toFixed(1)}) rotate(${drawn.angle})`);
-          mark.setAttribute('fill', fill);
+          set(mark, 'visibility', 'visible');
+          set(mark, 'transform', transform);
+          set(mark, 'fill', fill);
         }
         const side = sideView[c];
         if (side && elevation && known) {
           const p = elevationPoint(elevation, drawn);
-          side.setAttribute('visibility', 'visible');
-          side.setAttribute('transform', `translate(${p.x.toFixed(1)},${(p.y - 7).toFixed(1)})`);
-          side.setAttribute('fill', fill);
+          set(side, 'visibility', 'visible');
+          set(side, 'transform', `translate(${p.x.toFixed(1)},${(p.y - 7).toFixed(1)})`);
+          set(side, 'fill', fill);
         }
       }
       for (const ring of stations) {
         const state = stationStateAt(index, Number(ring.dataset.pbStation), t);
-        ring.setAttribute('stroke', state >= 0 ? stateColours[state] : 'transparent');
+        set(ring, 'stroke', state >= 0 ? stateColours[state] : 'transparent');
       }
-      root.dataset.playbackTime = t.toFixed(2);
     },
   };
 }

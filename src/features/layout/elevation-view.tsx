@@ -83,7 +83,7 @@ export function ElevationView({ model, overlay }: { model: LayoutModel; overlay?
                 <line x1={x} x2={x} y1={y1} y2={y2} stroke={colour.join} strokeWidth={3} />
                 <rect x={x - 7} y={Math.min(y1, y2) - 4} width={14} height={Math.abs(y2 - y1) + 8} fill="none" stroke={colour.join} strokeWidth={1} />
                 <text x={x} y={Math.min(y1, y2) - 10} textAnchor={anchorFor(x)} fontSize={10} fill={colour.join}>
-                  {y2 < y1 ? '↑' : '↓'} {join.name}
+                  {join.name}: {y2 < y1 ? 'lifts up' : 'lowers'}
                 </text>
               </g>
             );

@@ -47,7 +47,9 @@ export function ElevationView({ model, overlay }: { model: LayoutModel; overlay?
       <figcaption className="text-sm font-semibold text-ink">
         Side elevation <span className="font-normal text-ink-soft">(looking along the {alongX ? 'north–south' : 'east–west'} axis; heights not to plan scale)</span>
       </figcaption>
-      <div className="relative">
+      {/* On a phone the drawing keeps a legible size and scrolls sideways inside its own box, not the page. */}
+      <div className="overflow-x-auto" data-drawing-scroll>
+      <div className="relative min-w-[640px]">
       <svg viewBox={`0 0 ${DRAWING.widthPx} ${HEIGHT_PX}`} className="h-auto w-full rounded-md border border-paper-sunk bg-white" role="img" aria-label="Side elevation of the decks and elevators" fontFamily="IBM Plex Sans, system-ui, sans-serif">
         <line x1={LEFT_PX - 10} x2={DRAWING.widthPx - 20} y1={height(0)} y2={height(0)} stroke={colour.ink} strokeWidth={2} />
         <text x={LEFT_PX - 14} y={height(0) + 4} textAnchor="end" fontSize={11} fill={colour.inkSoft}>
@@ -90,6 +92,7 @@ export function ElevationView({ model, overlay }: { model: LayoutModel; overlay?
           })}
       </svg>
         {overlay && <OverlayLayer widthPx={DRAWING.widthPx} heightPx={HEIGHT_PX}>{overlay(frame)}</OverlayLayer>}
+      </div>
       </div>
     </figure>
   );

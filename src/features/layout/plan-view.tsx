@@ -56,7 +56,9 @@ export function PlanView({ model, deck, frame, selection, onSelect, overlay }: P
       <figcaption className="text-sm font-semibold text-ink">
         {deck.name} <span className="font-normal text-ink-soft">plan{deck.elevationMm === null ? '' : `, running surface at ${deck.elevationMm} mm`}</span>
       </figcaption>
-      <div className="relative">
+      {/* On a phone the drawing keeps a legible size and scrolls sideways inside its own box, not the page. */}
+      <div className="overflow-x-auto" data-drawing-scroll>
+      <div className="relative min-w-[640px]">
       <svg
         viewBox={`0 0 ${DRAWING.widthPx} ${frame.heightPx}`}
         className="h-auto w-full rounded-md border border-paper-sunk bg-white"
@@ -102,6 +104,7 @@ export function PlanView({ model, deck, frame, selection, onSelect, overlay }: P
         </text>
       </svg>
         {overlay && <OverlayLayer widthPx={DRAWING.widthPx} heightPx={frame.heightPx}>{overlay(deck, frame)}</OverlayLayer>}
+      </div>
       </div>
     </figure>
   );

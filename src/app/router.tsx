@@ -46,6 +46,10 @@ const signedInPages: RouteObject[] = [
     lazy: async () => ({ Component: (await import('./routes/compare/compare-report-route')).CompareReportRoute }),
   },
   {
+    path: '/runs/:runId/playback',
+    lazy: async () => ({ Component: (await import('./routes/playback-route')).PlaybackRoute }),
+  },
+  {
     path: '/runs/:runId',
     lazy: async () => ({ Component: (await import('../features/results/routes/run-route')).RunRoute }),
   },

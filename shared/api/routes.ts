@@ -2,6 +2,11 @@
 // fetchers cannot drift apart.
 export const apiRoutes = {
   signUp: '/api/auth/sign-up',
+  signUpConfirm: '/api/auth/sign-up/confirm',
+  passwordResetRequest: '/api/auth/password-reset/request',
+  passwordReset: '/api/auth/password-reset',
+  accountPassword: '/api/account/password',
+  accountOtherSessions: '/api/account/other-sessions',
   signIn: '/api/auth/sign-in',
   signOut: '/api/auth/sign-out',
   me: '/api/me',
@@ -18,5 +23,16 @@ export const apiRoutes = {
   timeStudy: (id: string) => `/api/time-studies/${id}`,
   members: (organisationId: string) => `/api/organisations/${organisationId}/members`,
   member: (organisationId: string, userId: string) => `/api/organisations/${organisationId}/members/${userId}`,
+  membership: (organisationId: string) => `/api/organisations/${organisationId}/membership`,
+  invitations: (organisationId: string) => `/api/organisations/${organisationId}/invitations`,
+  invitation: (organisationId: string, invitationId: string) => `/api/organisations/${organisationId}/invitations/${invitationId}`,
+  invitationResend: (organisationId: string, invitationId: string) => `/api/organisations/${organisationId}/invitations/${invitationId}/resend`,
+  invitationPreview: '/api/invitations/preview',
+  invitationAccept: '/api/invitations/accept',
   audit: (organisationId: string) => `/api/organisations/${organisationId}/audit`,
+  auditCsv: (organisationId: string) => `/api/organisations/${organisationId}/audit.csv`,
+  shares: '/api/shares',
+  share: (id: string) => `/api/shares/${id}`,
+  sharedView: '/api/shared/view',
+  mailbox: '/api/dev/mailbox',
 } as const;

@@ -13,6 +13,7 @@ import { createDataSource } from '../../server/db/data-source';
 import { runMigrations } from '../../server/db/migrate';
 import { seedDemo } from '../../server/db/seed/demo';
 import { startServer } from '../../server/index';
+import type { CaughtMailbox } from '../../server/mail/mailbox';
 import { clientOutDir, projectRoot } from '../../server/setup/paths';
 import { CHROMIUM_PATH } from './chromium-path';
 import { browserDatabaseUrl } from './test-database';
@@ -31,6 +32,8 @@ const CHROMIUM_ARGS = [
 
 export interface TestApp {
   url: string;
+  /** The fake SMTP server's catch (the app's /dev/mailbox page shows the same). */
+  mailbox: CaughtMailbox;
   dataSource: DataSource;
   close(): Promise<void>;
 }
@@ -64,9 +67,11 @@ export async function startTestApp(): Promise<TestApp> {
   try {
     await runMigrations(dataSource);
     await seedDemo(dataSource);
-    const server = await startServer({ dataSource, port: await freePort(), host: HOST, clientDir: clientOutDir });
+    const server = await startServer({ dataSource, port: await freePort(), host: HOST, clientDir: clientOutDir, fakeSmtpPort: 0 });
+    if (!server.mailbox) throw new Error('the browser tests need the fake mailbox: unset SMTP_HOST');
     return {
       url: server.url,
+      mailbox: server.mailbox,
       dataSource,
       close: async () => {
         await server.close();

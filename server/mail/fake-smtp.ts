@@ -28,6 +28,8 @@ export async function startFakeSmtp(options: { port: number; host?: string; mail
     disabledCommands: ['AUTH', 'STARTTLS'],
     size: FAKE_SMTP_MAX_BYTES,
     logger: false,
+    // Loopback only: a reverse DNS lookup per connection would only add a delay.
+    disableReverseLookup: true,
     banner: 'Lanewright development mailbox (nothing is delivered)',
     onData(stream, _session, callback) {
       simpleParser(stream)

@@ -10,7 +10,7 @@ import { useSignUp } from '../api/sign-up';
 
 const FIELDS = ['name', 'organisationName', 'email', 'password'] as const;
 
-export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
+export function SignUpForm({ onAsked }: { onAsked: (message: string) => void }) {
   const form = useForm({
     resolver: zodResolver(signUpSchema),
     defaultValues: { name: '', organisationName: '', email: '', password: '' },
@@ -18,8 +18,8 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
   const { errors } = form.formState;
   const signUp = useSignUp();
   const { onSubmit, failure } = useApiFormSubmit(form, FIELDS, async (values) => {
-    await signUp.mutateAsync(values);
-    onSignedUp();
+    const answer = await signUp.mutateAsync(values);
+    onAsked(answer.message);
   });
 
   return (
@@ -42,8 +42,8 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
         error={errors.password?.message}
         {...form.register('password')}
       />
-      <Button type="submit" pending={signUp.isPending} pendingLabel="Creating your account…" className="mt-2 self-stretch sm:self-start">
-        Create account
+      <Button type="submit" pending={signUp.isPending} pendingLabel="Sending…" className="mt-2 self-stretch sm:self-start">
+        Send me the link
       </Button>
     </form>
   );

@@ -42,8 +42,8 @@ export function SignUpForm({ onAsked }: { onAsked: (message: string) => void }) 
         error={errors.password?.message}
         {...form.register('password')}
       />
-      <Button type="submit" pending={signUp.isPending} pendingLabel="Sending…" className="mt-2 self-stretch sm:self-start">
-        Send me the link
+      <Button type="submit" pending={signUp.isPending} pendingLabel="Creating your account…" className="mt-2 self-stretch sm:self-start">
+        Create account
       </Button>
     </form>
   );

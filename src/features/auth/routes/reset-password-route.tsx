@@ -46,7 +46,7 @@ export function ResetPasswordRoute() {
           </ButtonLink>
         </div>
       ) : (
-        <form noValidate onSubmit={onSubmit} className="flex flex-col gap-2" aria-label="New password">
+        <form noValidate onSubmit={onSubmit} className="flex flex-col gap-2" aria-label="Choose a new password">
           <FormErrorBanner title="The password was not changed" failure={failure} />
           <TextField
             label="New password"

@@ -27,7 +27,11 @@ export async function setUpMail(config: MailConfig): Promise<MailSetup> {
     });
     return { mailer, describe: `mail goes out through ${config.SMTP_HOST}:${config.SMTP_PORT}`, close: async () => {} };
   }
-  const fake = await startFakeSmtp({ port: config.LANEWRIGHT_FAKE_SMTP_PORT });
+  const fake = await startFakeSmtp({ port: config.LANEWRIGHT_FAKE_SMTP_PORT }).catch((error: unknown) => {
+    if ((error as NodeJS.ErrnoException).code !== 'EADDRINUSE') throw error;
+    // Worded so the HTTP port's "in use" advice does not claim this error for itself.
+    throw new Error(`the mail catcher cannot listen on 127.0.0.1:${config.LANEWRIGHT_FAKE_SMTP_PORT}, another program holds it; choose another with LANEWRIGHT_FAKE_SMTP_PORT (0 picks any free port) or set SMTP_HOST`);
+  });
   const mailer = createSmtpMailer({ host: fake.host, port: fake.port, secure: false, ignoreTls: true, from: config.MAIL_FROM });
   return {
     mailer,

@@ -62,6 +62,7 @@ describe('sharing a run read-only', () => {
     expect(await main.getByRole('link', { name: /revision/i }).count()).toBe(0);
     expect(await page.getByRole('navigation', { name: 'Team and account' }).getByRole('link', { name: 'Members' }).count()).toBe(0);
     await screenshot(page, 'share-02-shared-view');
+    await page.screenshot({ path: (await screenshot(page, 'share-02-shared-view')).replace('.png', '-top.png') });
   });
 
   it('once withdrawn, the link shows nothing', async () => {

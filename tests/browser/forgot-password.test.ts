@@ -2,32 +2,24 @@
 // development mailbox, choose a new password, and sign in with it.
 import { randomUUID } from 'node:crypto';
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { hashPassword } from '../../server/auth/password';
 import { MembershipEntity, OrganisationEntity, UserEntity } from '../../server/db/entities';
-import { launchBrowser, screenshot, startTestApp, type TestApp, type TestBrowser } from '../support/browser';
+import { screenshot, useAppInBrowser, type TestApp } from '../support/browser';
 import { followMailedLink } from './support/mailbox';
 
 const person = { email: `forgetful-${randomUUID().slice(0, 8)}@example.test`, name: 'Fen Forgetful', old: 'the password I forgot', fresh: 'a brand new passphrase' };
 
-let app: TestApp;
-let browser: TestBrowser;
-let page: Page;
-
-beforeAll(async () => {
-  app = await startTestApp();
-  const users = app.dataSource.getRepository(UserEntity);
-  const user = await users.save({ email: person.email, name: person.name, passwordHash: await hashPassword(person.old) });
-  const organisation = await app.dataSource.getRepository(OrganisationEntity).save({ name: 'Forgetful fixtures' });
-  await app.dataSource.getRepository(MembershipEntity).insert({ organisationId: organisation.id, userId: user.id, role: 'owner' });
-  browser = await launchBrowser();
-  page = browser.page;
-  await page.setViewportSize({ width: 1280, height: 800 });
+const session = useAppInBrowser(async ({ dataSource }) => {
+  const user = await dataSource.getRepository(UserEntity).save({ email: person.email, name: person.name, passwordHash: await hashPassword(person.old) });
+  const organisation = await dataSource.getRepository(OrganisationEntity).save({ name: 'Forgetful fixtures' });
+  await dataSource.getRepository(MembershipEntity).insert({ organisationId: organisation.id, userId: user.id, role: 'owner' });
 });
+let page: Page;
+let app: TestApp;
 
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
+beforeAll(() => {
+  ({ page, app } = session);
 });
 
 describe('forgot password', () => {
@@ -69,6 +61,6 @@ describe('forgot password', () => {
     await page.getByRole('heading', { level: 1, name: /projects/i }).waitFor();
     expect(await page.getByRole('banner').textContent()).toContain(person.name);
     await screenshot(page, 'reset-04-signed-in');
-    expect(browser.pageErrors).toEqual([]);
+    expect(session.browser.pageErrors).toEqual([]);
   });
 });

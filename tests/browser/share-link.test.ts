@@ -1,21 +1,17 @@
 // An engineer makes a read-only link to a run; a visitor without an account opens it and sees the results,
 // told it is a shared view, with no control that changes anything; once withdrawn the link shows nothing.
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/db/seed/demo';
 import request from 'supertest';
 import { ScenarioEntity } from '../../server/db/entities';
 import { runBody } from '../api/fixtures/world';
-import { launchBrowser, screenshot, startTestApp, type TestApp, type TestBrowser } from '../support/browser';
+import { screenshot, useAppInBrowser, type TestApp } from '../support/browser';
 
-let app: TestApp;
-let browser: TestBrowser;
-let page: Page;
 let runId: string;
 let shareUrl: string;
 
-beforeAll(async () => {
-  app = await startTestApp();
+const session = useAppInBrowser(async (app) => {
   // A stored run of the demo's first scenario, saved through the API as the engineer.
   const engineer = request.agent(app.url);
   await engineer.post('/api/auth/sign-in').send({ email: 'engineer@demo.lanewright.test', password: DEMO_PASSWORD }).expect(200);
@@ -23,14 +19,12 @@ beforeAll(async () => {
   const saved = await engineer.post(`/api/scenarios/${scenario.id}/runs`).send(runBody(scenario.latestRevisionId!));
   expect(saved.status, JSON.stringify(saved.body)).toBe(201);
   runId = saved.body.id;
-  browser = await launchBrowser();
-  page = browser.page;
-  await page.setViewportSize({ width: 1280, height: 800 });
 });
+let page: Page;
+let app: TestApp;
 
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
+beforeAll(() => {
+  ({ page, app } = session);
 });
 
 describe('sharing a run read-only', () => {
@@ -71,6 +65,6 @@ describe('sharing a run read-only', () => {
     await page.goto(shareUrl);
     await page.getByRole('alert').waitFor();
     expect(await page.getByRole('alert').textContent()).toContain('withdrawn');
-    expect(browser.pageErrors).toEqual([]);
+    expect(session.browser.pageErrors).toEqual([]);
   });
 });

@@ -3,29 +3,21 @@
 // a run read-only and an anonymous visitor opens the link.
 import { randomUUID } from 'node:crypto';
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/db/seed/demo';
-import { launchBrowser, screenshot, startTestApp, type TestApp, type TestBrowser } from '../support/browser';
+import { screenshot, useAppInBrowser, type TestApp } from '../support/browser';
 import { followMailedLink } from './support/mailbox';
 
 const OWNER = 'owner@demo.lanewright.test';
 const DEMO_PROJECT = 'Cartridge line layout study';
 const invitee = { email: `new-engineer-${randomUUID().slice(0, 8)}@example.test`, name: 'Noor Invitee', password: 'a long enough passphrase' };
 
-let app: TestApp;
-let browser: TestBrowser;
+const session = useAppInBrowser();
 let page: Page;
+let app: TestApp;
 
-beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-  page = browser.page;
-  await page.setViewportSize({ width: 1280, height: 800 });
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
+beforeAll(() => {
+  ({ page, app } = session);
 });
 
 async function signIn(email: string, password: string) {
@@ -95,6 +87,6 @@ describe('inviting an engineer', () => {
     await page.getByRole('table', { name: 'Audit trail' }).getByText(invitee.email).first().waitFor();
     expect(await page.getByRole('table', { name: 'Audit trail' }).textContent()).toContain('invited');
     await screenshot(page, 'team-06-audit');
-    expect(browser.pageErrors).toEqual([]);
+    expect(session.browser.pageErrors).toEqual([]);
   });
 });

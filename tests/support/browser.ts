@@ -9,6 +9,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import type { DataSource } from 'typeorm';
+import { afterAll, beforeAll } from 'vitest';
 import { createDataSource } from '../../server/db/data-source';
 import { runMigrations } from '../../server/db/migrate';
 import { seedDemo } from '../../server/db/seed/demo';
@@ -117,4 +118,38 @@ export async function screenshot(page: Page, name: string): Promise<string> {
   const path = join(SCREENSHOT_DIR, `${safeName}.png`);
   await page.screenshot({ path, fullPage: true });
   return path;
+}
+
+/**
+ * The usual set-up of a browser test file: the app and Chromium before the first test (a desktop-sized
+ * tab), both closed after the last. `prepare` runs against the app before the browser starts.
+ */
+export function useAppInBrowser(prepare?: (app: TestApp) => Promise<void>) {
+  let app: TestApp | undefined;
+  let browser: TestBrowser | undefined;
+  beforeAll(async () => {
+    app = await startTestApp();
+    await prepare?.(app);
+    browser = await launchBrowser();
+    await browser.page.setViewportSize({ width: 1280, height: 800 });
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await app?.close();
+  });
+  const need = <T>(value: T | undefined): T => {
+    if (!value) throw new Error('useAppInBrowser(): the app and browser exist only inside tests');
+    return value;
+  };
+  return {
+    get app(): TestApp {
+      return need(app);
+    },
+    get browser(): TestBrowser {
+      return need(browser);
+    },
+    get page(): Page {
+      return need(browser).page;
+    },
+  };
 }

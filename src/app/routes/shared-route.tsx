@@ -8,6 +8,7 @@ import { RunMetadata } from '../../features/results/components/run-metadata';
 import { RunResultSections } from '../../features/results/components/run-result-sections';
 import { useSharedView } from '../../features/sharing/api/shares';
 import { SharedViewBanner } from '../../features/sharing/components/shared-view-banner';
+import { IncompleteLink } from '../../components/incomplete-link';
 import { useLinkToken } from '../../lib/use-link-token';
 
 export function SharedRoute() {
@@ -18,9 +19,7 @@ export function SharedRoute() {
 
   if (!token) {
     return (
-      <ErrorBanner title="This link is incomplete">
-        <p>Copy the whole address you were sent, including everything after the # sign.</p>
-      </ErrorBanner>
+      <IncompleteLink from="the message you were sent" />
     );
   }
   if (view.isPending) return <PageSpinner label="Opening the shared view…" />;

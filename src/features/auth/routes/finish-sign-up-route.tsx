@@ -3,6 +3,7 @@
 import { Link, useNavigate } from 'react-router-dom';
 import { ErrorBanner } from '../../../components/ui/error-banner';
 import { Button } from '../../../components/ui/button';
+import { IncompleteLink } from '../../../components/incomplete-link';
 import { useLinkToken } from '../../../lib/use-link-token';
 import { useFinishSignUp } from '../api/finish-sign-up';
 import { AuthPanel } from '../components/auth-panel';
@@ -22,9 +23,7 @@ export function FinishSignUpRoute() {
       }
     >
       {!token ? (
-        <ErrorBanner title="This link is incomplete">
-          <p>Copy the whole address from the e-mail, including everything after the # sign.</p>
-        </ErrorBanner>
+        <IncompleteLink />
       ) : (
         <div className="flex flex-col gap-3">
           {finish.isError && (

@@ -7,9 +7,9 @@ import { z } from 'zod';
 import { passwordSchema, PASSWORD_MIN_LENGTH } from '../../../../shared/api/auth';
 import { FormErrorBanner } from '../../../components/form-error-banner';
 import { Button, ButtonLink } from '../../../components/ui/button';
-import { ErrorBanner } from '../../../components/ui/error-banner';
 import { TextField } from '../../../components/ui/field';
 import { useApiFormSubmit } from '../../../lib/use-api-form-submit';
+import { IncompleteLink } from '../../../components/incomplete-link';
 import { useLinkToken } from '../../../lib/use-link-token';
 import { useResetPassword } from '../api/password-reset';
 import { AuthPanel } from '../components/auth-panel';
@@ -35,9 +35,7 @@ export function ResetPasswordRoute() {
       }
     >
       {!token ? (
-        <ErrorBanner title="This link is incomplete">
-          <p>Copy the whole address from the e-mail, including everything after the # sign.</p>
-        </ErrorBanner>
+        <IncompleteLink />
       ) : reset.isSuccess ? (
         <div role="status" className="flex flex-col gap-3">
           <p className="font-semibold text-ink">Your password is changed. Sign in with the new one.</p>

@@ -12,6 +12,7 @@ import { ErrorBanner } from '../../../components/ui/error-banner';
 import { TextField } from '../../../components/ui/field';
 import { PageSpinner } from '../../../components/ui/spinner';
 import { formatDateTime } from '../../../lib/format';
+import { IncompleteLink } from '../../../components/incomplete-link';
 import { useApiFormSubmit } from '../../../lib/use-api-form-submit';
 import { useAcceptInvitation, useInvitationPreview } from '../api/invitations';
 
@@ -64,9 +65,7 @@ export function AcceptInvitation({ token, signedInAs, signInPath, onJoined }: Ac
   const accept = useAcceptInvitation();
   if (!token) {
     return (
-      <ErrorBanner title="This link is incomplete">
-        <p>Copy the whole address from the e-mail, including everything after the # sign.</p>
-      </ErrorBanner>
+      <IncompleteLink />
     );
   }
   if (preview.isPending) return <PageSpinner label="Reading the invitation…" />;

@@ -23,6 +23,7 @@ import { invitationsRouter } from './routes/invitations';
 import { mailboxRouter } from './routes/mailbox';
 import { authRouter } from './routes/auth';
 import { membersRouter } from './routes/members';
+import { priceListsRouter } from './routes/price-lists';
 import { projectsRouter } from './routes/projects';
 import { revisionsRouter } from './routes/revisions';
 import { runsRouter } from './routes/runs';
@@ -72,7 +73,7 @@ export function createApp(opts: CreateAppOptions): express.Express {
   api.use(exceptTimeStudyUploads(requireJsonBody));
   api.use(express.json({ limit: JSON_BODY_LIMIT_BYTES, strict: true }));
   api.use(loadSession(ctx.auth, publicOrigin));
-  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, membersRouter, invitationsRouter, accountRouter, sharesRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));
+  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, membersRouter, invitationsRouter, accountRouter, sharesRouter, priceListsRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));
   if (ctx.mailbox) api.use(mailboxRouter(ctx.mailbox));
   api.use(unknownApiRoute);
   app.use('/api', api);

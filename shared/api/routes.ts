@@ -35,4 +35,5 @@ export const apiRoutes = {
   share: (id: string) => `/api/shares/${id}`,
   sharedView: '/api/shared/view',
   mailbox: '/api/dev/mailbox',
+  priceList: (organisationId: string) => `/api/organisations/${organisationId}/price-list`,
 } as const;

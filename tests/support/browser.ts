@@ -13,6 +13,7 @@ import { afterAll, beforeAll } from 'vitest';
 import { createDataSource } from '../../server/db/data-source';
 import { runMigrations } from '../../server/db/migrate';
 import { seedDemo } from '../../server/db/seed/demo';
+import { seedDemoPrices } from '../../server/db/seed/demo-prices';
 import { startServer } from '../../server/index';
 import type { CaughtMailbox } from '../../server/mail/mailbox';
 import { clientOutDir, projectRoot } from '../../server/setup/paths';
@@ -69,6 +70,7 @@ export async function startTestApp(): Promise<TestApp> {
     await runMigrations(dataSource);
     // The browser tests sign in as the demo accounts, whatever LANEWRIGHT_DEMO says.
     await seedDemo(dataSource, { LANEWRIGHT_DEMO: 'on' });
+    await seedDemoPrices(dataSource);
     const server = await startServer({ dataSource, port: await freePort(), host: HOST, clientDir: clientOutDir, fakeSmtpPort: 0 });
     if (!server.mailbox) throw new Error('the browser tests need the fake mailbox: unset SMTP_HOST');
     return {

@@ -4,6 +4,7 @@ import { InvitationEntity } from './invitation.entity';
 import { MembershipEntity } from './membership.entity';
 import { OneTimeTokenEntity } from './one-time-token.entity';
 import { OrganisationEntity } from './organisation.entity';
+import { PriceListEntity } from './price-list.entity';
 import { ProjectEntity } from './project.entity';
 import { RunEntity } from './run.entity';
 import { ScenarioRevisionEntity } from './scenario-revision.entity';
@@ -19,6 +20,7 @@ export {
   MembershipEntity,
   OneTimeTokenEntity,
   OrganisationEntity,
+  PriceListEntity,
   ProjectEntity,
   RunEntity,
   ScenarioRevisionEntity,
@@ -39,6 +41,7 @@ export const entities = [
   ScenarioRevisionEntity,
   RunEntity,
   TimeStudyEntity,
+  PriceListEntity,
   AuditEntryEntity,
   InvitationEntity,
   OneTimeTokenEntity,

@@ -50,6 +50,8 @@ export type CompiledLine = {
   stationPositionMm: Float64Array;
   stationStep: Int32Array;
   stationPausesForBreaks: Uint8Array;
+  /** Breaks stop the whole line (calendar breakMode 'wholeLine'), not only manual stations. */
+  wholeLineBreaks: boolean;
   stationIds: string[];
   stepCount: number;
   stepKind: Int32Array;
@@ -128,6 +130,7 @@ export function compileLine(s: Scenario, carrierCount = s.carriers.count): Compi
     stationPositionMm: Float64Array.from(stations, (x) => x.station.positionMm),
     stationStep: Int32Array.from(stations, (x) => x.stepIndex),
     stationPausesForBreaks: Uint8Array.from(stations, (x) => (x.station.pausesForBreaks ? 1 : 0)),
+    wholeLineBreaks: s.calendar.breakMode === 'wholeLine' && s.calendar.breaks.length > 0,
     stationIds: stations.map((x) => x.station.id),
     stepCount: s.steps.length,
     stepKind: Int32Array.from(s.steps, (st) => STEP_CODES[st.kind]),

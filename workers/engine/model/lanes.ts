@@ -5,7 +5,7 @@
 // Carriers that may be able to move are put on a wake ring and retried after the current event, so
 // no handler re-enters another.
 import { followerProfile, PROFILE_EMPTY, PROFILE_LOADED } from './motion';
-import { EV_ARRIVE, EV_LANE_WAKE, PH_EXIT, PH_MOVING, PH_QUEUED, scheduleActive, type LineState } from './state';
+import { EV_ARRIVE, EV_LANE_WAKE, PH_EXIT, PH_MOVING, PH_QUEUED, scheduleActive, scheduleActiveAt, type LineState } from './state';
 
 const EPS_MM = 1e-6;
 
@@ -140,27 +140,37 @@ export function detachFront(m: LineState, c: number): void {
   requestLaneCheck(m, lane);
 }
 
+/**
+ * When the moving rear carrier clears the lane start (aimed half the tolerance past the threshold, so
+ * rounding never lets a carrier in a hair too early), or Infinity when this move stops short of it.
+ * Entry is decided by comparing the clock with this time, never by recomputing a position from the
+ * clock: late in a long run a time difference carries rounding of the clock's magnitude, and a
+ * position recomputed from it could stay a hair short of the threshold at the very event scheduled
+ * for the crossing, so the lane would be woken again and again at the same instant.
+ */
+function clearsEntryAt(m: LineState, rear: number): number {
+  const needed = m.line.carrierLengthMm + m.line.pitchMm;
+  if (m.cDest[rear] < needed - EPS_MM) return Infinity;
+  const start = m.cPos[rear];
+  return m.cMoveStart[rear] + m.line.motion.secondsToCover(m.cDest[rear] - start, m.cProfile[rear], needed - EPS_MM / 2 - start);
+}
+
 /** Whether a carrier can be put at the lane start now (the rear carrier has cleared it). */
 export function entryClear(m: LineState, lane: number): boolean {
   const rear = m.laneRear[lane];
   if (rear < 0) return true;
-  return positionAt(m, rear, m.now) >= m.line.carrierLengthMm + m.line.pitchMm - EPS_MM;
+  if (m.cPhase[rear] === PH_MOVING) return m.now >= clearsEntryAt(m, rear);
+  return m.cPos[rear] >= m.line.carrierLengthMm + m.line.pitchMm - EPS_MM;
 }
 
-/**
- * Schedules a lane check for the moment the moving rear carrier clears the lane start, found by
- * inverting its motion profile. Nothing to schedule when it stops short of that.
- */
+/** Schedules a lane check for the moment the moving rear carrier clears the lane start. */
 export function scheduleEntryWake(m: LineState, lane: number): void {
   const rear = m.laneRear[lane];
   if (rear < 0 || m.cPhase[rear] !== PH_MOVING || m.laneWakePending[lane]) return;
-  const needed = m.line.carrierLengthMm + m.line.pitchMm;
-  if (m.cDest[rear] < needed - EPS_MM) return;
-  // Aim half the tolerance past the threshold, so rounding can never wake the lane a hair too early.
-  const start = m.cPos[rear];
-  const into = m.line.motion.secondsToCover(m.cDest[rear] - start, m.cProfile[rear], needed - EPS_MM / 2 - start);
+  const at = clearsEntryAt(m, rear);
+  if (at === Infinity) return;
   m.laneWakePending[lane] = 1;
-  scheduleActive(m, Math.max(0, m.cMoveStart[rear] + into - m.now), EV_LANE_WAKE, lane);
+  scheduleActiveAt(m, Math.max(m.now, at), EV_LANE_WAKE, lane);
 }
 
 /** Marks a lane whose entry should be re-examined after the current event, if anything waits for it. */

@@ -1,24 +1,32 @@
 // Every entity class, listed once for the data source (no globs: tsx and vitest resolve no patterns).
 import { AuditEntryEntity } from './audit-entry.entity';
+import { InvitationEntity } from './invitation.entity';
 import { MembershipEntity } from './membership.entity';
+import { OneTimeTokenEntity } from './one-time-token.entity';
 import { OrganisationEntity } from './organisation.entity';
+import { PriceListEntity } from './price-list.entity';
 import { ProjectEntity } from './project.entity';
 import { RunEntity } from './run.entity';
 import { ScenarioRevisionEntity } from './scenario-revision.entity';
 import { ScenarioEntity } from './scenario.entity';
 import { SessionEntity } from './session.entity';
+import { ShareLinkEntity } from './share-link.entity';
 import { TimeStudyEntity } from './time-study.entity';
 import { UserEntity } from './user.entity';
 
 export {
   AuditEntryEntity,
+  InvitationEntity,
   MembershipEntity,
+  OneTimeTokenEntity,
   OrganisationEntity,
+  PriceListEntity,
   ProjectEntity,
   RunEntity,
   ScenarioRevisionEntity,
   ScenarioEntity,
   SessionEntity,
+  ShareLinkEntity,
   TimeStudyEntity,
   UserEntity,
 };
@@ -33,5 +41,9 @@ export const entities = [
   ScenarioRevisionEntity,
   RunEntity,
   TimeStudyEntity,
+  PriceListEntity,
   AuditEntryEntity,
+  InvitationEntity,
+  OneTimeTokenEntity,
+  ShareLinkEntity,
 ];

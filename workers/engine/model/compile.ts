@@ -52,6 +52,8 @@ export type CompiledLine = {
   stationPositionMm: Float64Array;
   stationStep: IndexArray<StepIndex>;
   stationPausesForBreaks: Uint8Array;
+  /** Breaks stop the whole line (calendar breakMode 'wholeLine'), not only manual stations. */
+  wholeLineBreaks: boolean;
   stationIds: string[];
   /** Carriers that fit on a station's lane from the lane start up to and including the station: how many a pooled step may send its way. */
   stationRoom: Int32Array;
@@ -129,6 +131,7 @@ export function compileLine(s: Scenario, carrierCount = s.carriers.count): Compi
     stationPositionMm: Float64Array.from(stations, (x) => x.station.positionMm),
     stationStep: asIndexArray<StepIndex>(Int32Array.from(stations, (x) => x.stepIndex)),
     stationPausesForBreaks: Uint8Array.from(stations, (x) => (x.station.pausesForBreaks ? 1 : 0)),
+    wholeLineBreaks: s.calendar.breakMode === 'wholeLine' && s.calendar.breaks.length > 0,
     stationIds: stations.map((x) => x.station.id),
     stationRoom: Int32Array.from(stations, (x) => Math.max(1, Math.floor((x.station.positionMm - s.carriers.lengthMm) / pitchMm + 1e-9) + 1)),
     stepCount: s.steps.length,

@@ -2,6 +2,8 @@
 // done in segments that end at completion or at the next failure, whichever comes first; time to
 // failure counts operating (processing) time only, so a starved or blocked station does not fail.
 // A failure or a break pauses the work, which resumes where it stopped. Repairs run in elapsed time.
+// A segment that runs to its scheduled end takes off exactly its planned length, so the work or the
+// time to failure that ended it reaches zero exactly, however large the clock: no tolerance on times.
 import { STEP_INSPECT, STEP_LOAD, STEP_UNLOAD } from './compile';
 import { chooseStation, unassign } from './dispatch';
 import { setPhase, wake } from './lanes';
@@ -20,10 +22,8 @@ import {
 } from './state';
 import { NONE, type CarrierIndex, type StationIndex, type StepIndex } from './indexes';
 
-const EPS_S = 1e-9;
-
 function onBreak(m: LineState, s: StationIndex): boolean {
-  return m.breakActive && m.line.stationPausesForBreaks[s] === 1;
+  return m.breakActive && (m.line.wholeLineBreaks || m.line.stationPausesForBreaks[s] === 1);
 }
 
 export function updateStationState(m: LineState, s: StationIndex): void {
@@ -42,13 +42,14 @@ function resume(m: LineState, s: StationIndex): void {
   const segment = Math.min(m.sWorkLeft[s], m.sToFailure[s]);
   m.sSegmentActive[s] = 1;
   m.sSegmentStart[s] = m.now;
+  m.sSegmentLength[s] = segment;
   m.sGen[s]++;
   scheduleActive(m, segment, EV_SEGMENT_END, s, m.sGen[s]);
 }
 
-function pause(m: LineState, s: StationIndex): void {
+/** Stops the running segment; elapsed is its whole planned length when it ran to its end. */
+function pause(m: LineState, s: StationIndex, elapsed = Math.min(Math.max(0, m.now - m.sSegmentStart[s]), m.sSegmentLength[s])): void {
   if (!m.sSegmentActive[s]) return;
-  const elapsed = m.now - m.sSegmentStart[s];
   m.sWorkLeft[s] -= elapsed;
   m.sToFailure[s] -= elapsed;
   m.sSegmentActive[s] = 0;
@@ -84,9 +85,9 @@ function fail(m: LineState, s: StationIndex): void {
 
 export function onSegmentEnd(m: LineState, s: StationIndex, generation: number): void {
   if (generation !== m.sGen[s] || !m.sSegmentActive[s]) return;
-  pause(m, s);
-  if (m.sWorkLeft[s] <= EPS_S) finishWork(m, s);
-  if (m.sToFailure[s] <= EPS_S) fail(m, s);
+  pause(m, s, m.sSegmentLength[s]);
+  if (m.sWorkLeft[s] <= 0) finishWork(m, s);
+  if (m.sToFailure[s] <= 0) fail(m, s);
   else resume(m, s);
   updateStationState(m, s);
 }
@@ -98,13 +99,20 @@ export function onRepairEnd(m: LineState, s: StationIndex): void {
   updateStationState(m, s);
 }
 
+/**
+ * Starts or ends a break. Manual stations that pause for breaks stop their work and resume it; in a
+ * whole-line stop every station reports the break, and its work waits with the rest of the line
+ * (line-stop.ts postpones it), so nothing is paused here.
+ */
 export function setBreak(m: LineState, active: boolean): void {
   m.breakActive = active;
   for (let i = 0; i < m.line.stationCount; i++) {
     const s = i as StationIndex;
-    if (!m.line.stationPausesForBreaks[s]) continue;
-    if (active) pause(m, s);
-    else resume(m, s);
+    if (!m.line.wholeLineBreaks) {
+      if (!m.line.stationPausesForBreaks[s]) continue;
+      if (active) pause(m, s);
+      else resume(m, s);
+    }
     updateStationState(m, s);
   }
 }

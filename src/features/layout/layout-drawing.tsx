@@ -1,6 +1,7 @@
 // The live drawing of a (draft) layout: key figures, a plan per deck on one shared scale, and a side
 // elevation. Clicking a lane or a station reports it, so the editor can open it.
 import { useMemo, type ReactNode } from 'react';
+import { BeltBaselineTag } from '../../components/ui/belt-baseline-tag';
 import { formatCount, formatLengthMm } from '../../lib/format';
 import { planFrame, type PlanFrame } from './drawing-frame';
 import { ElevationView, type ElevationFrame } from './elevation-view';
@@ -40,6 +41,12 @@ export function LayoutDrawing({ document, selection = null, onSelect, overlay }:
   const print = model.footprint;
   return (
     <div className="flex flex-col gap-4" data-layout-drawing>
+      {document.conveyor?.kind === 'belt' && (
+        <p className="flex flex-wrap items-center gap-2 text-sm text-ink-soft">
+          <BeltBaselineTag />
+          Drawn on the same track as the carrier layouts; pallets ride a constant-speed belt instead.
+        </p>
+      )}
       <dl className="grid grid-cols-2 gap-4 sm:grid-cols-4">
         <Fact name="footprint" label="Footprint" value={print ? `${metres(print.lengthMm)} × ${metres(print.widthMm)}` : '—'} />
         <Fact name="area" label="Floor area" value={print ? `${print.areaM2.toLocaleString('en-GB', { maximumFractionDigits: 2 })} m²` : '—'} />

@@ -3,6 +3,7 @@
 import { footprint, planLanes, pointAlong, type DraftLane, type Footprint, type PlanLane } from './geometry';
 
 export interface LayoutDraft {
+  conveyor?: { kind?: string };
   track?: { widthMm?: unknown };
   decks?: ({ id?: string; name?: string; elevationMm?: unknown } | undefined)[];
   lanes?: (DraftLane | undefined)[];

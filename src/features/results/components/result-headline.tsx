@@ -1,6 +1,7 @@
 // The figures a manager reads first: throughput and takt with their 95 % intervals against the
 // target, annual output over the calendar's hours, WIP and lead time.
 import type { ReactNode } from 'react';
+import { BeltBaselineTag } from '../../../components/ui/belt-baseline-tag';
 import type { Interval, RunResult } from '../../../../shared/results/run-result';
 import { formatInterval, formatMean1, formatMean2, formatParts, formatPerHour, formatSeconds, formatTakt } from '../../runs/utils/format-run';
 import { taktVerdict } from '../utils/takt-verdict';
@@ -36,6 +37,12 @@ export function ResultHeadline({ result }: { result: RunResult }) {
       <h2 id="headline-title" className="text-xl font-semibold">
         Headline
       </h2>
+      {result.conveyor === 'belt' && (
+        <p className="flex flex-wrap items-center gap-2 text-sm text-ink-soft">
+          <BeltBaselineTag />
+          This run models the layout on a belt conveyor, as a baseline to compare carrier layouts with.
+        </p>
+      )}
       <p className={`rounded-md border-l-4 px-4 py-3 font-semibold text-ink ${VERDICT_TONE[verdict.tone]}`} data-verdict={verdict.tone}>
         {verdict.text}
       </p>

@@ -83,6 +83,11 @@ export function StationResults({ result, stepNames, fileBase }: StationResultsPr
         fileBase={`${fileBase}-station-shares-table`}
         emphasise={emphasise}
       />
+      {result.conveyor === 'belt' && (
+        <p className="text-sm text-ink-soft" data-testid="belt-cycle-note">
+          On the belt baseline each station&apos;s mean cycle includes the time to stop and locate the pallet.
+        </p>
+      )}
       <ResultTable
         caption="Station cycle, output and queue"
         rows={rows}

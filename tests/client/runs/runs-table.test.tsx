@@ -52,6 +52,16 @@ describe('runs table', () => {
     expect(runOrder()).toEqual(['Run 3']);
   });
 
+  it('offers the days runs were made, written as the app writes dates, and keeps runs from that day on', async () => {
+    const { user } = renderTable('viewer');
+    await screen.findByRole('table', { name: 'Runs of this scenario' });
+    const since = screen.getByLabelText('Run on or after');
+    // The fixtures make runs 1–4 on 11–14 Nov 2026 at 09:00 UTC.
+    expect(within(since).getAllByRole('option').map((o) => o.textContent)).toEqual(['Any day', '14 Nov 2026', '13 Nov 2026', '12 Nov 2026', '11 Nov 2026']);
+    await user.selectOptions(since, '13 Nov 2026');
+    expect(runOrder()).toEqual(['Run 4', 'Run 3']);
+  });
+
   it('shows a viewer no rename, delete or rerun', async () => {
     renderTable('viewer');
     await screen.findByRole('table', { name: 'Runs of this scenario' });

@@ -1,6 +1,7 @@
 // The filter bar above the runs table.
 import type { RunListItem } from '../../../../shared/api/runs';
 import { Button } from '../../../components/ui/button';
+import { formatDay } from '../../../lib/format';
 import { filterChoices, NO_FILTERS, type RunFilterValues } from '../utils/run-filters';
 
 interface RunsFiltersProps {
@@ -57,7 +58,14 @@ export function RunsFilters({ runs, values, onChange }: RunsFiltersProps) {
       <NumberChoice label="Carriers" values={choices.carriers} value={values.carriers} onChange={set('carriers')} />
       <label className={LABEL}>
         Run on or after
-        <input type="date" className={CONTROL} value={values.since} onChange={set('since')} />
+        <select className={CONTROL} value={values.since} onChange={set('since')}>
+          <option value="">Any day</option>
+          {choices.days.map((d) => (
+            <option key={d} value={d}>
+              {formatDay(d)}
+            </option>
+          ))}
+        </select>
       </label>
       <label className={LABEL}>
         Throughput at least (/h)

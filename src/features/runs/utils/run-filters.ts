@@ -2,6 +2,7 @@
 // the sort together.
 import type { FilterFn } from '@tanstack/react-table';
 import type { RunListItem } from '../../../../shared/api/runs';
+import { localDayOf } from '../../../lib/format';
 
 export interface RunFilterValues {
   author: string;
@@ -46,6 +47,8 @@ export function filterChoices(runs: readonly RunListItem[]) {
     authors: [...authors].map(([id, name]) => ({ id, name })).sort((a, b) => a.name.localeCompare(b.name)),
     revisions: distinct(runs.map((r) => r.revisionNumber)),
     carriers: distinct(runs.map((r) => r.summary.carriers)),
+    /** Days with at least one run, newest first. */
+    days: [...new Set(runs.map((r) => localDayOf(r.createdAt)))].sort().reverse(),
   };
 }
 

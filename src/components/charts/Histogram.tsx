@@ -5,7 +5,7 @@ import { useMemo, type MouseEvent } from 'react';
 import { AxisBottom, AxisLeft, linearTicks } from './Axes';
 import { ChartFrame, ChartMessage, plotWidthOf, type Margin } from './ChartFrame';
 import type { LegendItem } from './Legend';
-import { histogramBins, sampleCurve } from './density';
+import { histogramBins, sampleCurve, type Bin } from './density';
 import { formatNumber, formatShare } from './format';
 import { seriesStyle } from './palette';
 import { useChartShell } from './useChartShell';
@@ -26,6 +26,8 @@ export interface HistogramProps {
   unit: string;
   fits?: readonly FittedDensity[];
   binCount?: number;
+  /** Bins already counted elsewhere (e.g. by the server); drawn as given, so a caption quoting them agrees. */
+  bins?: readonly Bin[];
   title?: string;
   plotHeight?: number;
   width?: number;
@@ -43,7 +45,8 @@ export function Histogram(props: HistogramProps) {
     () => checkNumbers(values, 'values'),
     () => (props.binCount !== undefined && !(Number.isInteger(props.binCount) && props.binCount >= 1) ? `binCount must be a whole number of at least 1, got ${props.binCount}` : null),
   );
-  const bins = useMemo(() => (problem ? [] : histogramBins(values, props.binCount)), [values, props.binCount, problem]);
+  const given = props.bins;
+  const bins = useMemo(() => (problem ? [] : given && given.length > 0 ? given : histogramBins(values, props.binCount)), [values, props.binCount, given, problem]);
   if (problem) return <ChartMessage title={title} tone="problem" message={`This histogram cannot be drawn: ${problem}.`} />;
   if (values.length === 0) return <ChartMessage title={title} tone="empty" message={`No ${quantity.toLowerCase()} samples to show yet: nothing was measured or no part finished after warm-up.`} />;
 

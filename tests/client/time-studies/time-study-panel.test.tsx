@@ -74,6 +74,10 @@ describe('TimeStudyPanel', () => {
     expect(statValue('Mean')).toBe(`${new Intl.NumberFormat('en-GB', { maximumSignificantDigits: 4 }).format(detail.analysis.summary.mean)} s`);
     expect(statValue('Coefficient of variation')).toBe(new Intl.NumberFormat('en-GB', { maximumSignificantDigits: 4 }).format(detail.analysis.summary.cv ?? 0));
     expect(document.querySelectorAll('[data-chart-part="fit"]')).toHaveLength(3);
+    // The chart draws the server's Freedman–Diaconis bins, the same number the caption quotes.
+    const bars = Array.from(document.querySelectorAll('[data-chart-part="marks"] rect'));
+    expect(bars).toHaveLength(detail.analysis.histogram.bins.length);
+    expect(screen.getByText(new RegExp(`${detail.analysis.histogram.bins.length} bins by the Freedman–Diaconis rule`))).toBeTruthy();
     const table = screen.getByRole('table', { name: /Fitted distributions/ });
     const rows = within(table).getAllByRole('row').slice(1);
     expect(rows.map((r) => (r as HTMLTableRowElement).cells[0].textContent?.replace('closest', ''))).toEqual(detail.analysis.candidates.map((c) => ({ normal: 'Normal', lognormal: 'Lognormal', gamma: 'Gamma' })[c.kind]));
@@ -138,6 +142,21 @@ describe('TimeStudyPanel', () => {
     await screen.findByRole('button', { name: /^screwing/ });
     expect(statValue('Samples')).toBe('5');
     expect(screen.queryByRole('alert')).toBeNull();
+  });
+
+  it('states each problem of a refused upload once', async () => {
+    const rowProblems = ['row 3, column "cycle_s": "abc" is not a number', 'row 5, column "cycle_s": "-2" is below zero'];
+    mockApi({
+      [`GET ${apiRoutes.scenarioTimeStudies(SCENARIO_ID)}`]: { status: 200, body: [] },
+      [`POST ${apiRoutes.scenarioTimeStudies(SCENARIO_ID)}`]: {
+        status: 400,
+        body: apiError('bad_request', `2 rows could not be read: ${rowProblems.join('; ')}.`, rowProblems.map((message) => ({ path: 'file', message }))),
+      },
+    });
+    const { user } = renderPanel(true);
+    await user.upload(await screen.findByLabelText('Upload a time study (CSV)'), new File(['cycle_s\n9\nabc\n9\n-2\n'], 'bad.csv', { type: 'text/csv' }));
+    const alert = await screen.findByRole('alert');
+    for (const problem of rowProblems) expect(alert.textContent?.split(problem)).toHaveLength(2);
   });
 
   it('deletes a study after a second press and refetches the list', async () => {

@@ -45,7 +45,7 @@ export function TimeStudyAnalysis({ study, stationName, canEdit, onUse }: TimeSt
         quantity="Cycle time"
         unit="s"
         fits={fittedDensities(candidates)}
-        binCount={histogram.bins.length}
+        bins={histogram.bins}
         title={`Measured cycle times, ${stationName}`}
         exportName={`time-study-${study.stationId}`}
       />

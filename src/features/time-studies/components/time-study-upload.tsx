@@ -50,7 +50,11 @@ export function TimeStudyUpload({ scenarioId, stationId, onUploaded }: TimeStudy
   };
 
   const error = upload.error;
-  const fieldMessages = isApiRequestError(error) ? error.fields.filter((f) => f.message).map((f) => `${f.path}: ${f.message}`) : [];
+  // The server's message often lists the field problems already; list only what it leaves out, so
+  // no rejection reads twice.
+  const fieldMessages = isApiRequestError(error) && error.fields.length > 1
+    ? error.fields.filter((f) => f.message && !error.message.includes(f.message)).map((f) => `${f.path}: ${f.message}`)
+    : [];
 
   return (
     <div className="flex flex-col gap-3">
@@ -88,7 +92,7 @@ export function TimeStudyUpload({ scenarioId, stationId, onUploaded }: TimeStudy
       {error && (
         <ErrorBanner title={`${file?.name ?? 'The file'} was not accepted.`}>
           <p>{error.message}</p>
-          {fieldMessages.length > 1 && (
+          {fieldMessages.length > 0 && (
             <ul className="mt-1 list-disc pl-5">
               {fieldMessages.map((message) => (
                 <li key={message}>{message}</li>

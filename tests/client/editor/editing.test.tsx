@@ -121,8 +121,26 @@ describe('scenario editor', () => {
 
     const banner = await screen.findByText(/broken.json was not imported: 2 problems/);
     const items = within(banner.closest('[role="alert"]') as HTMLElement).getAllByRole('listitem').map((li) => li.textContent);
-    expect(items).toEqual(expect.arrayContaining([expect.stringContaining('carriers.count: count must be from 1 to 2000'), expect.stringContaining('lanes[0].deckId: no deck "mezzanine"')]));
+    expect(items).toEqual(expect.arrayContaining(['Carriers count: count must be from 1 to 2000', expect.stringContaining(`Lane '${stackedLoop.lanes[0].name}', deck id: no deck "mezzanine"`)]));
     expect(screen.getByText('No unsaved changes')).toBeTruthy();
+  });
+
+  it('says plainly when a JSON file is not a scenario at all, or where a field is missing', async () => {
+    const { user } = await openScenarioPage('engineer');
+    const noSteps: Record<string, unknown> = structuredClone(stackedLoop);
+    delete noSteps.steps;
+    await user.upload(screen.getByLabelText('Import scenario JSON'), new File([JSON.stringify(noSteps)], 'list.json', { type: 'application/json' }));
+    const banner = await screen.findByText(/list.json was not imported: 1 problem/);
+    const items = within(banner.closest('[role="alert"]') as HTMLElement).getAllByRole('listitem').map((li) => li.textContent);
+    expect(items).toEqual(["This file is not a Lanewright scenario: the field 'steps' is missing"]);
+
+    const noMean = structuredClone(stackedLoop) as unknown as { steps: { stations: { name: string; cycleTimeSeconds: Record<string, unknown> }[] }[] };
+    delete noMean.steps[2].stations[0].cycleTimeSeconds.mean;
+    await user.upload(screen.getByLabelText('Import scenario JSON'), new File([JSON.stringify(noMean)], 'no-mean.json', { type: 'application/json' }));
+    const second = await screen.findByText(/no-mean.json was not imported/);
+    const texts = within(second.closest('[role="alert"]') as HTMLElement).getAllByRole('listitem').map((li) => li.textContent ?? '');
+    expect(texts).toContain(`Station '${noMean.steps[2].stations[0].name}', cycle time mean is missing`);
+    expect(texts.join(' ')).not.toMatch(/expected|received|steps\[/);
   });
 
   it('shows a viewer no save, import or restore controls', async () => {

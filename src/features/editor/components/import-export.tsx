@@ -65,8 +65,8 @@ export function ImportExport({ exportDocument, onImported }: ImportExportProps) 
         <ErrorBanner title={`${problem.file} was not imported: ${problem.issues.length} problem${problem.issues.length === 1 ? '' : 's'}`}>
           <ul className="list-disc pl-5" data-import-issues>
             {problem.issues.slice(0, 50).map((issue) => (
-              <li key={`${issue.path}:${issue.message}`}>
-                <code className="font-mono text-xs">{issue.path}</code>: {issue.message}
+              <li key={`${issue.path}:${issue.message}`} data-issue-path={issue.path}>
+                {issue.message}
               </li>
             ))}
             {problem.issues.length > 50 && <li>and {problem.issues.length - 50} more</li>}

@@ -64,7 +64,10 @@ describe('scenario editor', () => {
     const { user, api } = await openScenarioPage('engineer', {
       [`POST ${apiRoutes.scenarioRevisions(SCENARIO_ID)}`]: {
         status: 400,
-        body: apiError('bad_request', 'The scenario document is not valid.', [{ path: 'document.carriers.count', message: 'count must be at most 40 for this track' }]),
+        body: apiError('bad_request', 'The scenario document is not valid.', [
+          { path: 'document.carriers.count', message: 'count must be at most 40 for this track' },
+          { path: 'document.steps[1].stations[0].cycleTimeSeconds.value', message: 'value must be at most 3600' },
+        ]),
       },
     });
     await user.click(section('Carriers'));
@@ -82,7 +85,10 @@ describe('scenario editor', () => {
     const sent = api.callsTo('POST', apiRoutes.scenarioRevisions(SCENARIO_ID))[0].body as CreateRevisionInput;
     expect(sent).toMatchObject({ baseRevisionNumber: 2, message: 'more carriers' });
     expect(sent.document.carriers.count).toBe(55);
-    expect(screen.getByRole('alert').textContent).toContain('carriers.count: count must be at most 40 for this track');
+    expect(screen.getByRole('alert').textContent).toContain('Carriers count: count must be at most 40 for this track');
+    // Step 2's only station is "Press": the list names it, never the internal path.
+    expect(screen.getByRole('alert').textContent).toContain("Station 'Press', cycle time value: value must be at most 3600");
+    expect(screen.getByRole('alert').textContent).not.toContain('steps[1]');
   });
 
   it('on a conflict keeps the draft and puts it on top of the revision saved meanwhile', async () => {

@@ -1,4 +1,4 @@
-// What happened to the last save, said plainly; problems list their paths, and a conflict offers to
+// What happened to the last save, said plainly; problems name their station and field, and a conflict offers to
 // keep the user's work on top of the revision someone else saved.
 import { Link } from 'react-router-dom';
 import { Button } from '../../../components/ui/button';
@@ -6,13 +6,16 @@ import { ErrorBanner } from '../../../components/ui/error-banner';
 import type { SaveOutcome } from '../hooks/use-save-draft';
 import { displayPath, type PathIssue } from '../utils/paths';
 
-function IssueList({ issues }: { issues: PathIssue[] }) {
+/** Names the station and field of a dotted form path, from the draft being saved. */
+type DescribePath = (formPath: string) => string;
+
+function IssueList({ issues, describe }: { issues: PathIssue[]; describe: DescribePath }) {
   const shown = issues.slice(0, 12);
   return (
     <ul className="mt-1 list-disc pl-5" data-issue-list>
       {shown.map((issue) => (
-        <li key={`${issue.path}:${issue.message}`}>
-          <code className="font-mono text-xs">{displayPath(issue.path)}</code>: {issue.message}
+        <li key={`${issue.path}:${issue.message}`} data-issue-path={displayPath(issue.path)}>
+          {describe(issue.path)}: {issue.message}
         </li>
       ))}
       {issues.length > shown.length && <li>and {issues.length - shown.length} more, marked in the editor</li>}
@@ -25,9 +28,10 @@ interface SaveOutcomeProps {
   scenarioId: string;
   onKeepMine: () => void;
   rebasing: boolean;
+  describe: DescribePath;
 }
 
-export function SaveOutcomeMessage({ outcome, scenarioId, onKeepMine, rebasing }: SaveOutcomeProps) {
+export function SaveOutcomeMessage({ outcome, scenarioId, onKeepMine, rebasing, describe }: SaveOutcomeProps) {
   if (!outcome) return null;
   switch (outcome.kind) {
     case 'saved':
@@ -40,14 +44,14 @@ export function SaveOutcomeMessage({ outcome, scenarioId, onKeepMine, rebasing }
       return (
         <ErrorBanner title={`Not saved: ${outcome.issues.length} problem${outcome.issues.length === 1 ? '' : 's'} to fix first`}>
           <p>Each is marked beside its field; the section list shows where they are. Nothing you typed is lost.</p>
-          <IssueList issues={outcome.issues} />
+          <IssueList issues={outcome.issues} describe={describe} />
         </ErrorBanner>
       );
     case 'rejected':
       return (
         <ErrorBanner title="The server did not accept this revision">
           <p>{outcome.message} Your draft is unchanged.</p>
-          <IssueList issues={outcome.issues} />
+          <IssueList issues={outcome.issues} describe={describe} />
         </ErrorBanner>
       );
     case 'conflict': {

@@ -14,6 +14,7 @@ import { useSaveDraft } from '../hooks/use-save-draft';
 import { useScenarioDraft } from '../hooks/use-scenario-draft';
 import { toFormPath, type PathIssue } from '../utils/paths';
 import { ImportExport } from './import-export';
+import { describeFormPath } from '../utils/describe-issue';
 import { SaveOutcomeMessage } from './save-outcome';
 import { TemplatePicker } from './template-picker';
 import { WorkspaceBody } from './workspace-body';
@@ -103,7 +104,13 @@ export function ScenarioWorkspace({ scenario, mayEdit, engineIssues }: ScenarioW
             </Button>
           </div>
         )}
-        <SaveOutcomeMessage outcome={saving.outcome} scenarioId={scenario.id} onKeepMine={() => void saving.keepMineOnTop()} rebasing={saving.rebasing} />
+        <SaveOutcomeMessage
+          outcome={saving.outcome}
+          scenarioId={scenario.id}
+          onKeepMine={() => void saving.keepMineOnTop()}
+          rebasing={saving.rebasing}
+          describe={(path) => describeFormPath(path, draft.form.getValues())}
+        />
         <div className="flex flex-wrap items-start justify-between gap-4 border-t border-paper-sunk pt-4">
           <ImportExport exportDocument={exportDocument} onImported={mayEdit ? draft.replaceDraft : undefined} />
           {mayEdit && (

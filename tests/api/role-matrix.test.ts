@@ -58,8 +58,9 @@ const org = useOrganisation(db);
 
 describe('role matrix', () => {
   // Sign-up, sign-in and sign-out are covered in auth.test.ts; the multipart time-study routes run
-  // every actor in time-studies.test.ts, since this table sends JSON bodies only.
-  const coveredElsewhere = ['signUp', 'signIn', 'signOut', 'scenarioTimeStudies', 'timeStudy'];
+  // every actor in time-studies.test.ts, since this table sends JSON bodies only; studies have their own
+  // table in studies.test.ts, since they need a study and engine summaries to act on.
+  const coveredElsewhere = ['signUp', 'signIn', 'signOut', 'scenarioTimeStudies', 'timeStudy', 'projectStudies', 'study', 'studyResults', 'studyPointBlocks'];
   it('covers every other route', () => {
     const covered = new Set(cases.map((c) => c.route));
     const expected = Object.keys(apiRoutes).filter((r) => !coveredElsewhere.includes(r));

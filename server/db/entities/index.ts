@@ -7,6 +7,9 @@ import { RunEntity } from './run.entity';
 import { ScenarioRevisionEntity } from './scenario-revision.entity';
 import { ScenarioEntity } from './scenario.entity';
 import { SessionEntity } from './session.entity';
+import { StudyJobResultEntity } from './study-job-result.entity';
+import { StudyPointEntity } from './study-point.entity';
+import { StudyEntity } from './study.entity';
 import { TimeStudyEntity } from './time-study.entity';
 import { UserEntity } from './user.entity';
 
@@ -19,6 +22,9 @@ export {
   ScenarioRevisionEntity,
   ScenarioEntity,
   SessionEntity,
+  StudyEntity,
+  StudyJobResultEntity,
+  StudyPointEntity,
   TimeStudyEntity,
   UserEntity,
 };
@@ -33,5 +39,8 @@ export const entities = [
   ScenarioRevisionEntity,
   RunEntity,
   TimeStudyEntity,
+  StudyEntity,
+  StudyPointEntity,
+  StudyJobResultEntity,
   AuditEntryEntity,
 ];

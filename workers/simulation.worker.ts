@@ -4,6 +4,7 @@
 import * as Comlink from 'comlink';
 import { createWorkerApi } from './engine/worker-api';
 
-export type { SimulationWorkerApi, WorkerOutcome } from './engine/worker-api';
+export type { RangeOutcome, SimulationWorkerApi, WorkerOutcome } from './engine/worker-api';
+export type { StudyJobOutcome } from './studies/run-study-job';
 
 Comlink.expose(createWorkerApi(() => performance.now()));

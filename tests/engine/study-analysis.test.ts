@@ -34,7 +34,7 @@ describe('point changes', () => {
     const after = scenarioSchema.parse(changed.document);
     expect(after.carriers.count).toBe(9);
     const key = cycle.path.split('.').at(-1)!;
-    expect((after.steps[1].stations[0].cycleTimeSeconds as Record<string, number>)[key]).toBeCloseTo(cycle.value * (key === 'cv' || key === 'k' ? 1 : 0.5));
+    expect((after.steps[1].stations[0].cycleTimeSeconds as unknown as Record<string, number>)[key]).toBeCloseTo(cycle.value * (key === 'cv' || key === 'k' ? 1 : 0.5));
     expect((doc.carriers as { count: number }).count).not.toBe(9);
   });
 

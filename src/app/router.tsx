@@ -38,6 +38,14 @@ const signedInPages: RouteObject[] = [
     lazy: async () => ({ Component: (await import('../features/runs/routes/project-runs-route')).ProjectRunsRoute }),
   },
   {
+    path: '/projects/:projectId/studies',
+    lazy: async () => ({ Component: (await import('./routes/project-studies-route')).ProjectStudiesRoute }),
+  },
+  {
+    path: '/studies/:studyId',
+    lazy: async () => ({ Component: (await import('./routes/study-route')).StudyRoute }),
+  },
+  {
     path: '/runs/:runId',
     lazy: async () => ({ Component: (await import('../features/results/routes/run-route')).RunRoute }),
   },

@@ -77,9 +77,10 @@ describe('the job plan', () => {
 });
 
 describe('carrier range and grid', () => {
-  it('steps 1, 2, 5, 10 … so about twenty counts fit, always ending at the top', () => {
+  it('takes the smallest whole step that keeps to about twenty counts, always ending at the top', () => {
     expect(carrierGrid(4, 12)).toEqual([4, 5, 6, 7, 8, 9, 10, 11, 12]);
-    expect(carrierGrid(6, 80)).toEqual([6, 11, 16, 21, 26, 31, 36, 41, 46, 51, 56, 61, 66, 71, 76, 80]);
+    expect(carrierGrid(7, 82)).toEqual([7, 11, 15, 19, 23, 27, 31, 35, 39, 43, 47, 51, 55, 59, 63, 67, 71, 75, 79, 82]);
+    expect(carrierGrid(7, 82, 8)).toEqual([7, 18, 29, 40, 51, 62, 73, 82]);
     expect(carrierGrid(10, 10)).toEqual([10]);
   });
 

@@ -8,13 +8,12 @@ import type { PointStatistics } from './point-statistics';
 
 export const SIZING_DEFAULTS = { tolerance: 0.01, gridPoints: 20 } as const;
 
-/** Counts from `low` to `high` on a step of 1, 2, 5, 10, 20, … so about `points` of them fit; `high` always included. */
+/** Counts from `low` to `high` on the smallest whole step that keeps to about `points` of them; `high` always included. */
 export function carrierGrid(low: number, high: number, points: number = SIZING_DEFAULTS.gridPoints): number[] {
   const from = Math.max(1, Math.floor(low));
   const to = Math.max(from, Math.floor(high));
   const raw = (to - from) / Math.max(1, points - 1);
-  const steps = [1, 2, 5].flatMap((m) => [1, 10, 100, 1000].map((p) => m * p)).sort((a, b) => a - b);
-  const step = steps.find((s) => s >= raw) ?? Math.ceil(raw);
+  const step = Math.max(1, Math.ceil(raw));
   const counts: number[] = [];
   for (let n = from; n < to; n += step) counts.push(n);
   counts.push(to);

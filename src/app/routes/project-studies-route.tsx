@@ -15,7 +15,7 @@ import { useProject } from '../../features/projects/api/get-project';
 import { useScenarioRevision } from '../../features/scenarios/api/get-revision';
 import { useScenarios } from '../../features/scenarios/api/get-scenarios';
 import { useStudies } from '../../features/studies/api/get-studies';
-import { CreateStudyForm } from '../../features/studies/components/create-study-form';
+import { CreateStudyForm, type ScenarioChoice } from '../../features/studies/components/create-study-form';
 import { StudyList } from '../../features/studies/components/study-list';
 
 export function ProjectStudiesRoute() {
@@ -29,7 +29,6 @@ export function ProjectStudiesRoute() {
   const navigate = useNavigate();
   const choices = (scenarios.data ?? []).map((s) => ({ id: s.id, name: s.name, revisionId: s.latestRevision.id, revisionNumber: s.latestRevision.number }));
   const chosen = choices.find((c) => c.id === picked) ?? choices[0];
-  const revision = useScenarioRevision(chosen?.id ?? '', chosen?.revisionNumber ?? 0);
 
   if (project.isPending) return <PageSpinner label="Loading the project…" />;
   if (project.isError) {
@@ -52,15 +51,7 @@ export function ProjectStudiesRoute() {
       />
       {creating && chosen && (
         <TitledCard title="New study" className="max-w-3xl">
-          <CreateStudyForm
-            projectId={projectId}
-            scenarios={choices}
-            scenarioId={chosen.id}
-            onScenarioChange={setPicked}
-            scenario={revision.data?.document}
-            onCancel={() => setCreating(false)}
-            onCreated={(study) => navigate(`/studies/${study.id}`)}
-          />
+          <NewStudy projectId={projectId} choices={choices} chosen={chosen} onPick={setPicked} onCancel={() => setCreating(false)} onCreated={(id) => navigate(`/studies/${id}`)} />
         </TitledCard>
       )}
       {studies.isPending && <PageSpinner label="Loading studies…" />}
@@ -76,5 +67,29 @@ export function ProjectStudiesRoute() {
       )}
       {studies.data && studies.data.length > 0 && <StudyList studies={studies.data} />}
     </div>
+  );
+}
+
+interface NewStudyProps {
+  projectId: string;
+  choices: ScenarioChoice[];
+  chosen: ScenarioChoice;
+  onPick: (id: string) => void;
+  onCancel: () => void;
+  onCreated: (studyId: string) => void;
+}
+
+function NewStudy({ projectId, choices, chosen, onPick, onCancel, onCreated }: NewStudyProps) {
+  const revision = useScenarioRevision(chosen.id, chosen.revisionNumber);
+  return (
+    <CreateStudyForm
+      projectId={projectId}
+      scenarios={choices}
+      scenarioId={chosen.id}
+      onScenarioChange={onPick}
+      scenario={revision.data?.document}
+      onCancel={onCancel}
+      onCreated={(study) => onCreated(study.id)}
+    />
   );
 }

@@ -1,6 +1,7 @@
 // /studies/:studyId : one study. It composes the studies feature with the scenario revision its jobs
 // run and the project that says whether the reader may run them.
 import { Link, useParams } from 'react-router-dom';
+import type { StudyDetail } from '../../../shared/api/studies';
 import { LoadError } from '../../components/load-error';
 import { NotFoundMessage } from '../../components/not-found-message';
 import { PageHeader } from '../../components/ui/page-header';
@@ -15,8 +16,7 @@ import { StudyView } from '../../features/studies/components/study-view';
 export function StudyRoute() {
   const { studyId = '' } = useParams();
   const study = useStudy(studyId);
-  const project = useProject(study.data?.projectId ?? '');
-  const revision = useScenarioRevision(study.data?.scenarioId ?? '', study.data?.revisionNumber ?? 0);
+  const project = useProject(study.data?.projectId);
   const mayRun = useCanEdit(project.data?.organisationId);
 
   if (study.isPending) return <PageSpinner label="Loading the study…" />;
@@ -34,9 +34,14 @@ export function StudyRoute() {
           </Link>
         }
       />
-      {revision.isError && <LoadError what="the scenario revision" error={revision.error} onRetry={() => void revision.refetch()} />}
-      {revision.isPending && <PageSpinner label="Loading the scenario…" />}
-      {revision.data && <StudyView study={study.data} scenario={revision.data.document} documents={{ [study.data.revisionId]: revision.data.document }} mayRun={mayRun} />}
+      <StudyWithScenario study={study.data} mayRun={mayRun} />
     </div>
   );
+}
+
+function StudyWithScenario({ study, mayRun }: { study: StudyDetail; mayRun: boolean }) {
+  const revision = useScenarioRevision(study.scenarioId, study.revisionNumber);
+  if (revision.isError) return <LoadError what="the scenario revision" error={revision.error} onRetry={() => void revision.refetch()} />;
+  if (revision.isPending) return <PageSpinner label="Loading the scenario…" />;
+  return <StudyView study={study} scenario={revision.data.document} documents={{ [study.revisionId]: revision.data.document }} mayRun={mayRun} />;
 }

@@ -28,7 +28,7 @@ export function StudyView({ study, scenario, documents, mayRun }: StudyViewProps
   const stats = useMemo(() => pointStatistics(study), [study]);
   const pending = pendingJobs(study).length;
   const { start, running } = runner;
-  const shouldRun = mayRun && study.status === 'running' && pending > 0 && !running && !runner.problem;
+  const shouldRun = mayRun && study.status === 'running' && pending > 0 && !running && !runner.held && !runner.problem;
   useEffect(() => {
     if (shouldRun) start();
   }, [shouldRun, start]);
@@ -49,7 +49,7 @@ export function StudyView({ study, scenario, documents, mayRun }: StudyViewProps
           remainingMs={runner.remainingMs}
           workers={sharedEnginePool().size}
           onCancel={mayRun ? () => void runner.cancel() : undefined}
-          onResume={mayRun && study.status === 'cancelled' ? () => void runner.resume() : undefined}
+          onResume={mayRun && (study.status === 'cancelled' || runner.held) ? () => void runner.resume() : undefined}
         />
       )}
       {runner.problem && <ErrorBanner title="The study stopped">{runner.problem} Finished jobs are kept; reload the page to carry on.</ErrorBanner>}

@@ -13,7 +13,8 @@ import { saveJobResult } from '../api/save-job-result';
 import { studyKeys } from '../api/keys';
 import { updateStudy } from '../api/update-study';
 
-export type RunnerState = { running: boolean; done: number; total: number; remainingMs: number | null; problem: string | null };
+/** `held`: the reader cancelled here, so the page must not start the jobs again until they resume. */
+export type RunnerState = { running: boolean; held: boolean; done: number; total: number; remainingMs: number | null; problem: string | null };
 
 const MIN_ELAPSED_MS = 1_000;
 const SAVE_ATTEMPTS = 3;
@@ -41,7 +42,7 @@ function resultBody(job: StudyJob, answer: Exclude<StudyJobOutcome, { outcome: '
 export function useStudyRunner(study: StudyDetail | undefined, documents: Record<string, unknown> | undefined) {
   const queryClient = useQueryClient();
   const session = useRef<PoolSession | null>(null);
-  const [state, setState] = useState<RunnerState>({ running: false, done: 0, total: 0, remainingMs: null, problem: null });
+  const [state, setState] = useState<RunnerState>({ running: false, held: false, done: 0, total: 0, remainingMs: null, problem: null });
 
   const refresh = useRef<ReturnType<typeof setTimeout> | null>(null);
   const refreshSoon = useCallback(
@@ -112,7 +113,7 @@ export function useStudyRunner(study: StudyDetail | undefined, documents: Record
   const cancel = useCallback(async () => {
     session.current?.cancel();
     session.current = null;
-    setState((s) => ({ ...s, running: false, remainingMs: null }));
+    setState((s) => ({ ...s, running: false, held: true, remainingMs: null }));
     if (study) await updateStudy(study.id, { status: 'cancelled' });
     await queryClient.invalidateQueries({ queryKey: studyKeys.all });
   }, [study, queryClient]);
@@ -121,6 +122,7 @@ export function useStudyRunner(study: StudyDetail | undefined, documents: Record
     if (!study) return;
     await updateStudy(study.id, { status: 'running' });
     await queryClient.invalidateQueries({ queryKey: studyKeys.detail(study.id) });
+    setState((s) => ({ ...s, held: false }));
   }, [study, queryClient]);
 
   // Leaving the page stops this tab's work; the study stays running and continues when reopened.

@@ -2,8 +2,10 @@
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
+import { loadConfig } from './server/config';
 
-const apiPort = Number(process.env.PORT ?? 3000);
+// The dev server's /api proxy points at the API's port, read through the server's parsed configuration.
+const apiPort = loadConfig().PORT;
 
 export default defineConfig({
   plugins: [react(), tailwindcss()],

@@ -27,7 +27,7 @@ function connectionHelp(url: string, error: unknown): SetupError {
 export async function prepareDatabase(options: { seed: boolean }): Promise<DataSource> {
   const server = await ensureLocalPostgres();
   onCleanup(() => server.stop());
-  const url = server.external ? process.env.DATABASE_URL! : server.url(APP_DATABASE);
+  const url = server.external ? loadConfig().DATABASE_URL! : server.url(APP_DATABASE);
   if (!server.external && (await createDatabase(url))) say(`created database ${APP_DATABASE}`);
 
   const dataSource = createDataSource(url);

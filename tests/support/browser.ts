@@ -63,7 +63,8 @@ export async function startTestApp(): Promise<TestApp> {
   await dataSource.initialize();
   try {
     await runMigrations(dataSource);
-    await seedDemo(dataSource);
+    // The browser tests sign in as the demo accounts, whatever LANEWRIGHT_DEMO says.
+    await seedDemo(dataSource, { LANEWRIGHT_DEMO: 'on' });
     const server = await startServer({ dataSource, port: await freePort(), host: HOST, clientDir: clientOutDir });
     return {
       url: server.url,

@@ -47,7 +47,7 @@ describe('a carrier-sizing study of the demo scenario', () => {
     await form.getByLabel('Name', { exact: true }).fill('How many carriers?');
     await form.getByLabel('Hours per replication').fill('20');
     await form.getByLabel('Warm-up (min)').fill('10');
-    await form.getByLabel('Replications').fill('20');
+    await form.getByLabel('Replications').fill('4');
     await form.getByLabel('Counts to try').fill('8');
     await screenshot(page, 'study-new-form');
     await form.getByRole('button', { name: 'Make and run the study' }).click();

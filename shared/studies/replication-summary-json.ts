@@ -25,8 +25,10 @@ export const replicationSummaryJsonSchema = z.object({
   operationsPerHour: list(SUMMARY_LIMITS.perStation),
   failuresPerHour: list(SUMMARY_LIMITS.perStation),
   stationQueue: list(SUMMARY_LIMITS.perStation),
-  transferBusy: list(SUMMARY_LIMITS.perTransfer),
-  transferBlocked: list(SUMMARY_LIMITS.perTransfer),
+  /** Per connection, shares of time in each transfer state, connection-major. */
+  transferShares: list(SUMMARY_LIMITS.perTransfer * 8),
+  transferSole: list(SUMMARY_LIMITS.perTransfer),
+  transferShifting: list(SUMMARY_LIMITS.perTransfer),
   transferQueue: list(SUMMARY_LIMITS.perTransfer),
   transferMovesPerHour: list(SUMMARY_LIMITS.perTransfer),
   laneMean: list(SUMMARY_LIMITS.perLane),

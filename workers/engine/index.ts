@@ -5,3 +5,5 @@ export { runExperiment, runReplicationRange, combineBlocks, InvalidInputError, t
 export { SimulationStoppedError, isSimulationStopped, type GridlockEntry, type StopReason } from './kernel/stop';
 export { ENGINE_VERSION } from './version';
 export { toSummaryJson, fromSummaryJson, blockToJson, blockFromJson, type ReplicationBlockJson } from './observe/summary-json';
+export { recordPlayback } from './record-playback';
+export { TraceLimitError } from './observe/trace';

@@ -3,9 +3,10 @@
 // rejecting, because an error crossing comlink keeps only its name and message, and the caller needs
 // the field paths or the stop reason. One worker runs one call at a time; a pool of workers spreads
 // the replications of a run, or the jobs of a study, over the cores.
+import type { PlaybackTrace } from '../../shared/results/playback';
 import type { RunResult } from '../../shared/results/run-result';
 import { runStudyJob, type StudyJobInput, type StudyJobOutcome } from '../studies/run-study-job';
-import { combineBlocks, ENGINE_VERSION, InvalidInputError, isSimulationStopped, runExperiment, runReplicationRange, validateScenario, type GridlockEntry, type Progress, type ReplicationBlock, type ReplicationRange, type RunHooks, type StopReason, type ValidationIssue } from './index';
+import { combineBlocks, ENGINE_VERSION, InvalidInputError, isSimulationStopped, recordPlayback, runExperiment, runReplicationRange, TraceLimitError, validateScenario, type GridlockEntry, type Progress, type ReplicationBlock, type ReplicationRange, type RunHooks, type StopReason, type ValidationIssue } from './index';
 
 type Failure = { ok: false; kind: 'invalid'; message: string; issues: ValidationIssue[] } | { ok: false; kind: 'stopped'; reason: StopReason; message: string; gridlock: GridlockEntry[] };
 
@@ -16,6 +17,18 @@ function asFailure(e: unknown): Failure {
   if (e instanceof InvalidInputError) return { ok: false, kind: 'invalid', message: e.message, issues: e.issues };
   if (isSimulationStopped(e)) return { ok: false, kind: 'stopped', reason: e.reason, message: e.message, gridlock: e.gridlock };
   throw e;
+}
+
+export type PlaybackOutcome =
+  | { ok: true; trace: PlaybackTrace }
+  | { ok: false; kind: 'invalid'; message: string; issues: ValidationIssue[] }
+  | { ok: false; kind: 'stopped'; reason: StopReason; message: string; gridlock: GridlockEntry[] }
+  | { ok: false; kind: 'tooLarge'; message: string };
+
+/** The typed arrays of a trace, handed over to the page rather than copied. */
+export function traceBuffers(trace: PlaybackTrace): ArrayBuffer[] {
+  const columns = [...Object.values(trace.carriers), ...Object.values(trace.stations), trace.connFrom, trace.connTo];
+  return columns.flatMap((c) => (ArrayBuffer.isView(c) ? [c.buffer as ArrayBuffer] : []));
 }
 
 export function createWorkerApi(now: () => number) {
@@ -51,6 +64,23 @@ export function createWorkerApi(now: () => number) {
     },
     runStudyJob(document: unknown, job: StudyJobInput, onProgress?: (p: Progress) => unknown): Promise<StudyJobOutcome> {
       return runStudyJob(document, job, hooks(onProgress));
+    },
+    /** Replays one replication of a run and records a window of it for the player. */
+    async playback(scenario: unknown, settings: unknown, request: unknown, onProgress?: (p: Progress) => unknown): Promise<PlaybackOutcome> {
+      cancelled = false;
+      try {
+        const trace = await recordPlayback(scenario, settings, request, {
+          onProgress: onProgress ? (p) => void onProgress(p) : undefined,
+          isCancelled: () => cancelled,
+          now,
+        });
+        return { ok: true, trace };
+      } catch (e) {
+        if (e instanceof InvalidInputError) return { ok: false, kind: 'invalid', message: e.message, issues: e.issues };
+        if (e instanceof TraceLimitError) return { ok: false, kind: 'tooLarge', message: e.message };
+        if (isSimulationStopped(e)) return { ok: false, kind: 'stopped', reason: e.reason, message: e.message, gridlock: e.gridlock };
+        throw e;
+      }
     },
     /** Stops the call in progress at its next slice (within about 50 ms). */
     cancel() {

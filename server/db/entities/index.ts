@@ -1,12 +1,16 @@
 // Every entity class, listed once for the data source (no globs: tsx and vitest resolve no patterns).
 import { AuditEntryEntity } from './audit-entry.entity';
+import { InvitationEntity } from './invitation.entity';
 import { MembershipEntity } from './membership.entity';
+import { OneTimeTokenEntity } from './one-time-token.entity';
 import { OrganisationEntity } from './organisation.entity';
+import { PriceListEntity } from './price-list.entity';
 import { ProjectEntity } from './project.entity';
 import { RunEntity } from './run.entity';
 import { ScenarioRevisionEntity } from './scenario-revision.entity';
 import { ScenarioEntity } from './scenario.entity';
 import { SessionEntity } from './session.entity';
+import { ShareLinkEntity } from './share-link.entity';
 import { StudyJobResultEntity } from './study-job-result.entity';
 import { StudyPointEntity } from './study-point.entity';
 import { StudyEntity } from './study.entity';
@@ -15,13 +19,17 @@ import { UserEntity } from './user.entity';
 
 export {
   AuditEntryEntity,
+  InvitationEntity,
   MembershipEntity,
+  OneTimeTokenEntity,
   OrganisationEntity,
+  PriceListEntity,
   ProjectEntity,
   RunEntity,
   ScenarioRevisionEntity,
   ScenarioEntity,
   SessionEntity,
+  ShareLinkEntity,
   StudyEntity,
   StudyJobResultEntity,
   StudyPointEntity,
@@ -39,8 +47,12 @@ export const entities = [
   ScenarioRevisionEntity,
   RunEntity,
   TimeStudyEntity,
+  PriceListEntity,
   StudyEntity,
   StudyPointEntity,
   StudyJobResultEntity,
   AuditEntryEntity,
+  InvitationEntity,
+  OneTimeTokenEntity,
+  ShareLinkEntity,
 ];

@@ -1,10 +1,12 @@
 // /runs/:runId : one stored run's results, exactly as the engine produced them, with the revision,
 // seed and settings that repeat it, and exports for every table and chart.
 import { useQuery } from '@tanstack/react-query';
-import { useMemo } from 'react';
+import { useMemo, type ReactNode } from 'react';
+import type { RunDetail } from '../../../../shared/api/runs';
 import { useNavigate, useParams } from 'react-router-dom';
 import { LoadError } from '../../../components/load-error';
 import { NotFoundMessage } from '../../../components/not-found-message';
+import { ButtonLink } from '../../../components/ui/button';
 import { Card, CardTitle } from '../../../components/ui/card';
 import { Breadcrumbs } from '../../../components/ui/breadcrumbs';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -17,16 +19,15 @@ import { RunRowActions } from '../../runs/components/run-row-actions';
 import { useRunPermissions } from '../../runs/hooks/use-run-permissions';
 import { scenarioQueryOptions } from '../../scenarios/api/get-scenario';
 import { ControlsExport } from '../components/controls-export';
-import { FlowResults } from '../components/flow-results';
-import { HeatmapResults } from '../components/heatmap-results';
-import { ReplicationResults } from '../components/replication-results';
-import { ResultHeadline } from '../components/result-headline';
 import { RunMetadata } from '../components/run-metadata';
-import { SafetyCaution } from '../components/safety-caution';
-import { StationResults } from '../components/station-results';
-import { TrackResults } from '../components/track-results';
+import { RunResultSections } from '../components/run-result-sections';
 
-export function RunRoute() {
+interface RunRouteProps {
+  /** Extra panels below the run's description, composed by the app (sharing, for one). */
+  renderAside?: (run: RunDetail, organisationId: string | undefined) => ReactNode;
+}
+
+export function RunRoute({ renderAside }: RunRouteProps = {}) {
   const { runId = '' } = useParams();
   const navigate = useNavigate();
   const run = useRun(runId);
@@ -64,17 +65,17 @@ export function RunRoute() {
         }
         description={`Revision ${data.revisionNumber}, seed ${data.seed}: ${data.settings.replications} replication${data.settings.replications === 1 ? '' : 's'} of ${data.settings.hours} h after ${data.settings.warmupMinutes} min warm-up.`}
         actions={
-          <RunRowActions run={data} mayRerun={false} mayDelete={mayChange(data)} onDeleted={() => navigate(`/scenarios/${data.scenarioId}`, { replace: true })} />
+          <>
+            <ButtonLink variant="secondary" to={`/runs/${data.id}/playback`} data-watch-run>
+              Watch the line run
+            </ButtonLink>
+            <RunRowActions run={data} mayRerun={false} mayDelete={mayChange(data)} onDeleted={() => navigate(`/scenarios/${data.scenarioId}`, { replace: true })} />
+          </>
         }
       />
-      <SafetyCaution />
-      <ResultHeadline result={result} />
-      <HeatmapResults result={result} fileBase={fileBase} />
-      <StationResults result={result} stepNames={stepNames} fileBase={fileBase} />
-      <TrackResults result={result} fileBase={fileBase} />
-      <FlowResults result={result} fileBase={fileBase} />
-      <ReplicationResults replications={result.replications} fileBase={fileBase} />
+      <RunResultSections result={result} stepNames={stepNames} fileBase={fileBase} />
       <RunMetadata run={data} />
+      {renderAside?.(data, project.data?.organisationId)}
       <Card aria-labelledby="exports-title" className="flex flex-col gap-3">
         <CardTitle id="exports-title">Exports</CardTitle>
         <p className="text-sm text-ink-soft">Every table above has a CSV button, every chart PNG, SVG and CSV buttons in its corner.</p>

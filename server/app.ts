@@ -28,6 +28,7 @@ import { projectsRouter } from './routes/projects';
 import { revisionsRouter } from './routes/revisions';
 import { runsRouter } from './routes/runs';
 import { scenariosRouter } from './routes/scenarios';
+import { studiesRouter } from './routes/studies';
 import { sharesRouter } from './routes/shares';
 import { timeStudiesRouter } from './routes/time-studies';
 import { exceptTimeStudyUploads } from './time-studies/upload-route';
@@ -73,7 +74,7 @@ export function createApp(opts: CreateAppOptions): express.Express {
   api.use(exceptTimeStudyUploads(requireJsonBody));
   api.use(express.json({ limit: JSON_BODY_LIMIT_BYTES, strict: true }));
   api.use(loadSession(ctx.auth, publicOrigin));
-  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, membersRouter, invitationsRouter, accountRouter, sharesRouter, priceListsRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));
+  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, studiesRouter, membersRouter, invitationsRouter, accountRouter, sharesRouter, priceListsRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));
   if (ctx.mailbox) api.use(mailboxRouter(ctx.mailbox));
   api.use(unknownApiRoute);
   app.use('/api', api);

@@ -47,6 +47,14 @@ const signedInPages: RouteObject[] = [
     lazy: async () => ({ Component: (await import('../features/runs/routes/project-runs-route')).ProjectRunsRoute }),
   },
   {
+    path: '/projects/:projectId/studies',
+    lazy: async () => ({ Component: (await import('./routes/project-studies-route')).ProjectStudiesRoute }),
+  },
+  {
+    path: '/studies/:studyId',
+    lazy: async () => ({ Component: (await import('./routes/study-route')).StudyRoute }),
+  },
+  {
     path: '/projects/:projectId/compare',
     lazy: async () => ({ Component: (await import('./routes/compare/compare-route')).CompareRoute }),
   },

@@ -96,6 +96,11 @@ describe('role matrix', () => {
     'invitationAccept',
     'sharedView',
     'mailbox',
+    // Studies have their own table in studies.test.ts: they need a study and engine summaries to act on.
+    'projectStudies',
+    'study',
+    'studyResults',
+    'studyPointBlocks',
   ];
   it('covers every other route', () => {
     const covered = new Set(cases.map((c) => c.route));

@@ -11,6 +11,9 @@ import { ScenarioRevisionEntity } from './scenario-revision.entity';
 import { ScenarioEntity } from './scenario.entity';
 import { SessionEntity } from './session.entity';
 import { ShareLinkEntity } from './share-link.entity';
+import { StudyJobResultEntity } from './study-job-result.entity';
+import { StudyPointEntity } from './study-point.entity';
+import { StudyEntity } from './study.entity';
 import { TimeStudyEntity } from './time-study.entity';
 import { UserEntity } from './user.entity';
 
@@ -27,6 +30,9 @@ export {
   ScenarioEntity,
   SessionEntity,
   ShareLinkEntity,
+  StudyEntity,
+  StudyJobResultEntity,
+  StudyPointEntity,
   TimeStudyEntity,
   UserEntity,
 };
@@ -42,6 +48,9 @@ export const entities = [
   RunEntity,
   TimeStudyEntity,
   PriceListEntity,
+  StudyEntity,
+  StudyPointEntity,
+  StudyJobResultEntity,
   AuditEntryEntity,
   InvitationEntity,
   OneTimeTokenEntity,

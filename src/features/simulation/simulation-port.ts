@@ -1,12 +1,15 @@
-// The page's end of one simulation worker. Each run gets its own worker so Cancel can simply
-// terminate it, whatever the engine is doing, and nothing of a run outlives it.
+// The page's end of the simulation: each run takes a session of the shared worker pool, so its
+// replications spread over the cores, and Cancel stops just that run's work. Playback records one
+// replication in a worker of its own, which Cancel terminates.
 import * as Comlink from 'comlink';
 import type { Progress } from '../../../workers/engine';
 import type { PlaybackOutcome, SimulationWorkerApi, WorkerOutcome } from '../../../workers/simulation.worker';
+import { sharedEnginePool } from '../../lib/engine/engine-pool';
+import { runAcrossPool } from '../../lib/engine/split-run';
 
 export interface SimulationPort {
   run(scenario: unknown, settings: unknown, onProgress: (progress: Progress) => void): Promise<WorkerOutcome>;
-  /** Stops the worker at once; a pending run() then never settles, so callers stop listening first. */
+  /** Stops the run's work; a pending run() then settles as cancelled or not at all, so callers stop listening first. */
   terminate(): void;
 }
 
@@ -34,8 +37,11 @@ function spawnWorker() {
 }
 
 export const openWorkerPort: OpenSimulationPort = () => {
-  const { remote, crashed, terminate } = spawnWorker();
-  return { run: (scenario, settings, onProgress) => Promise.race([remote.run(scenario, settings, Comlink.proxy(onProgress)), crashed]), terminate };
+  const session = sharedEnginePool().session();
+  return {
+    run: (scenario, settings, onProgress) => runAcrossPool(session, scenario, settings, onProgress),
+    terminate: () => session.cancel(),
+  };
 };
 
 export const openPlaybackPort = (): PlaybackPort => {

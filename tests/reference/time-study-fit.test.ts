@@ -3,22 +3,8 @@
 import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
 import type { FittedCandidate } from '../../shared/api/time-studies';
-import {
-  analyseTimeStudy,
-  digamma,
-  fitGamma,
-  fitLognormal,
-  fitNormal,
-  histogram,
-  kolmogorovSurvival,
-  ksPValue,
-  ksStatistic,
-  lnGamma,
-  regularizedLowerGamma,
-  standardNormalCdf,
-  summarise,
-  trigamma,
-} from '../../workers/analysis';
+import { analyseTimeStudy, fitGamma, fitLognormal, fitNormal, histogram, kolmogorovSurvival, ksPValue, ksStatistic, summarise } from '../../workers/analysis';
+import { digamma, lnGamma, regularizedLowerGamma, standardNormalCdf, trigamma } from '../../workers/engine/stats/special-functions';
 import { createSampler } from '../../workers/engine/random/sampler';
 import { createStreamFactory } from '../../workers/engine/random/streams';
 

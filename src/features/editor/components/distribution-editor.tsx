@@ -3,7 +3,7 @@
 import { useId } from 'react';
 import { useFormContext, useWatch, type FieldPath } from 'react-hook-form';
 import { distributionSchema, type DistributionKind } from '../../../../shared/scenario/distribution';
-import { distributionMean, distributionVariance } from '../../../../shared/scenario/distribution-moments';
+import { distributionMean, distributionVariance } from '../../../../workers/engine/stats/distribution-moments';
 import { DistributionPreview } from '../../../components/charts';
 import { useEditor, type ScenarioForm } from '../editor-context';
 import { distributionOfKind } from '../utils/defaults';

@@ -1,7 +1,7 @@
 // The line-balance picture before any simulation: each step's mean cycle time from its stations'
 // distributions (exact moments, not samples), shared over its parallel stations.
 import { distributionSchema } from '../../../../shared/scenario/distribution';
-import { distributionMean, distributionVariance } from '../../../../shared/scenario/distribution-moments';
+import { distributionMean, distributionVariance } from '../../../../workers/engine/stats/distribution-moments';
 import type { BalanceStep } from '../../../components/charts';
 
 interface DraftStep {

@@ -11,7 +11,7 @@ import { PageHeader } from '../../../components/ui/page-header';
 import { PageSpinner } from '../../../components/ui/spinner';
 import { isApiRequestError } from '../../../lib/api-client';
 import { useProject } from '../../projects/api/get-project';
-import { useRevision } from '../../runs/api/get-revision';
+import { useScenarioRevision } from '../../scenarios/api/get-revision';
 import { useRun } from '../../runs/api/get-run';
 import { RunRowActions } from '../../runs/components/run-row-actions';
 import { useRunPermissions } from '../../runs/hooks/use-run-permissions';
@@ -33,7 +33,7 @@ export function RunRoute() {
   const scenarioId = run.data?.scenarioId ?? '';
   const scenario = useQuery({ ...scenarioQueryOptions(scenarioId), enabled: scenarioId !== '' });
   const project = useProject(scenario.data?.projectId);
-  const revision = useRevision(scenarioId, run.data?.revisionNumber);
+  const revision = useScenarioRevision(scenarioId, run.data?.revisionNumber);
   const { mayChange } = useRunPermissions(project.data?.organisationId);
   const stepNames = useMemo(() => (revision.data ? new Map(revision.data.document.steps.map((step) => [step.id, step.name])) : undefined), [revision.data]);
 

@@ -3,7 +3,7 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { RunListItem } from '../../../../shared/api/runs';
-import { revisionQueryOptions } from '../api/get-revision';
+import { scenarioRevisionQueryOptions } from '../../scenarios/api/get-revision';
 import { useRunAndSave } from './use-run-and-save';
 
 export function useRerun() {
@@ -16,7 +16,7 @@ export function useRerun() {
     setSource(run);
     setLoadError(null);
     try {
-      const revision = await queryClient.fetchQuery(revisionQueryOptions(run.scenarioId, run.revisionNumber));
+      const revision = await queryClient.fetchQuery(scenarioRevisionQueryOptions(run.scenarioId, run.revisionNumber));
       await runAndSave.run(run.scenarioId, revision, run.settings);
     } catch (error) {
       setLoadError(error);

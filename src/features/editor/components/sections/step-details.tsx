@@ -2,7 +2,7 @@
 import { useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import { DISPATCH_RULES, STEP_KINDS, type Step, type StepKind } from '../../../../../shared/scenario/process';
 import { distributionSchema } from '../../../../../shared/scenario/distribution';
-import { distributionMean } from '../../../../../shared/scenario/distribution-moments';
+import { distributionMean } from '../../../../../workers/engine/stats/distribution-moments';
 import { useEditor, type ScenarioForm } from '../../editor-context';
 import { useIssueCount } from '../../hooks/use-has-issues';
 import { freeId, newStation, stepOfKind } from '../../utils/defaults';

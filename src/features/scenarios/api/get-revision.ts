@@ -5,7 +5,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { revisionSchema } from '../../../../shared/api/scenarios';
 import { api } from '../../../lib/api-client';
-import { scenarioKeys } from './keys';
+import { scenarioKeys } from '../../../lib/query-keys/scenarios';
 
 export const getScenarioRevision = (scenarioId: string, number: number, signal?: AbortSignal) =>
   api.get(apiRoutes.scenarioRevision(scenarioId, number), revisionSchema, { signal });

@@ -1,0 +1,30 @@
+// The page's end of one simulation worker. Each run gets its own worker so Cancel can simply
+// terminate it, whatever the engine is doing, and nothing of a run outlives it.
+import * as Comlink from 'comlink';
+import type { Progress } from '../../../../workers/engine';
+import type { SimulationWorkerApi, WorkerOutcome } from '../../../../workers/simulation.worker';
+
+export interface SimulationPort {
+  run(scenario: unknown, settings: unknown, onProgress: (progress: Progress) => void): Promise<WorkerOutcome>;
+  /** Stops the worker at once; a pending run() then never settles, so callers stop listening first. */
+  terminate(): void;
+}
+
+export type OpenSimulationPort = () => SimulationPort;
+
+export const openWorkerPort: OpenSimulationPort = () => {
+  const worker = new Worker(new URL('../../../workers/simulation.worker.ts', import.meta.url), { type: 'module', name: 'lanewright-simulation' });
+  const remote = Comlink.wrap<SimulationWorkerApi>(worker);
+  // A worker that fails to load or crashes answers nothing over comlink; its error event is the only news.
+  const crashed = new Promise<never>((_, reject) => {
+    worker.addEventListener('error', (event) => reject(new Error(event.message || 'the simulation worker stopped unexpectedly')));
+  });
+  crashed.catch(() => undefined);
+  return {
+    run: (scenario, settings, onProgress) => Promise.race([remote.run(scenario, settings, Comlink.proxy(onProgress)), crashed]),
+    terminate: () => {
+      remote[Comlink.releaseProxy]();
+      worker.terminate();
+    },
+  };
+};

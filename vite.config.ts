@@ -25,6 +25,8 @@ export default defineConfig({
           name: 'unit',
           environment: 'node',
           include: ['tests/engine/**/*.test.ts', 'tests/reference/**/*.test.ts', 'tests/shared/**/*.test.ts'],
+          // Simulation tests take seconds on a loaded 2-core machine; speed is measured by `npm run bench`, not here.
+          testTimeout: 60_000,
         },
       },
       {

@@ -7,6 +7,7 @@ import { requireRole } from '../access/require-role';
 import type { AppContext } from '../app-context';
 import { audited } from '../audit/record-audit';
 import { ScenarioEntity } from '../db/entities';
+import { touchProject } from '../projects/touch-project';
 import { createScenarioWithFirstRevision } from '../scenarios/create-scenario';
 import { currentUser, loaded } from '../http/request-context';
 import { validate } from '../http/validate';
@@ -48,7 +49,10 @@ export function scenariosRouter(ctx: AppContext) {
     requireRole('engineer'),
     validate({ body: updateScenarioSchema }, async ({ body }, req, res) => {
       const scenario = loaded(req, 'scenario');
-      await audited(ds, (manager) => manager.getRepository(ScenarioEntity).update({ id: scenario.id }, body), {
+      await audited(ds, async (manager) => {
+        await manager.getRepository(ScenarioEntity).update({ id: scenario.id }, body);
+        await touchProject(manager, scenario.projectId);
+      }, {
         organisationId: scenario.project?.organisationId ?? null,
         actorId: currentUser(req).id,
         action: 'update',
@@ -62,7 +66,10 @@ export function scenariosRouter(ctx: AppContext) {
 
   router.delete('/scenarios/:id', loadScenario(ctx), requireRole('engineer'), async (req, res) => {
     const scenario = loaded(req, 'scenario');
-    await audited(ds, (manager) => manager.getRepository(ScenarioEntity).delete({ id: scenario.id }), {
+    await audited(ds, async (manager) => {
+      await manager.getRepository(ScenarioEntity).delete({ id: scenario.id });
+      await touchProject(manager, scenario.projectId);
+    }, {
       organisationId: scenario.project?.organisationId ?? null,
       actorId: currentUser(req).id,
       action: 'delete',

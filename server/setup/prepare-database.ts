@@ -6,6 +6,7 @@ import { loadConfig } from '../config';
 import { createDataSource } from '../db/data-source';
 import { runMigrations } from '../db/migrate';
 import { seedDemo } from '../db/seed/demo';
+import { seedDemoPrices } from '../db/seed/demo-prices';
 import { createDatabase, ensureLocalPostgres } from './local-postgres';
 import { redactUrl, say, SetupError } from './log';
 import { onCleanup } from './shutdown';
@@ -45,6 +46,7 @@ export async function prepareDatabase(options: { seed: boolean }): Promise<DataS
   if (!options.seed) return dataSource;
   if (demoEnabled()) {
     await seedDemo(dataSource);
+    await seedDemoPrices(dataSource);
     say('demo organisation is in place');
   } else {
     say('LANEWRIGHT_DEMO=off: the demo organisation is not seeded');

@@ -5,6 +5,12 @@ import { useEditor, type ScenarioForm } from '../../editor-context';
 import { DistributionEditor } from '../distribution-editor';
 import { CheckField, NumberField, SelectField, TextField } from '../fields';
 
+/**
+ * Station cycle times on carrier lines run from a fraction of a second (a pick or a press stroke) to
+ * several minutes (a manual fitting or a leak test): common trade practice, not a standard.
+ */
+const CYCLE_TIME_RANGE = { minSeconds: 0.2, maxSeconds: 3600 };
+
 const DEFAULT_FAILURES = {
   timeBetweenFailuresSeconds: { kind: 'exponential', mean: 3600 },
   timeToRepairSeconds: { kind: 'lognormal', mean: 120, cv: 0.5 },
@@ -31,7 +37,7 @@ export function StationDetails({ stepIndex, stationIndex }: { stepIndex: number;
           <CheckField name={`${base}.pausesForBreaks`} label="Pauses for breaks" />
         </div>
       </div>
-      <DistributionEditor name={`${base}.cycleTimeSeconds`} label="Cycle time" />
+      <DistributionEditor name={`${base}.cycleTimeSeconds`} label="Cycle time" plausible={CYCLE_TIME_RANGE} />
       {scenarioId &&
         stationStudies?.({
           scenarioId,

@@ -1,7 +1,8 @@
 // /runs/:runId : one stored run's results, exactly as the engine produced them, with the revision,
 // seed and settings that repeat it, and exports for every table and chart.
 import { useQuery } from '@tanstack/react-query';
-import { useMemo } from 'react';
+import { useMemo, type ReactNode } from 'react';
+import type { RunDetail } from '../../../shared/api/runs';
 import { useNavigate, useParams } from 'react-router-dom';
 import { LoadError } from '../../components/load-error';
 import { NotFoundMessage } from '../../components/not-found-message';
@@ -18,16 +19,15 @@ import { RunRowActions } from '../../features/runs/components/run-row-actions';
 import { useRunPermissions } from '../../features/runs/hooks/use-run-permissions';
 import { scenarioQueryOptions } from '../../features/scenarios/api/get-scenario';
 import { ControlsExport } from '../../features/results/components/controls-export';
-import { FlowResults } from '../../features/results/components/flow-results';
-import { HeatmapResults } from '../../features/results/components/heatmap-results';
-import { ReplicationResults } from '../../features/results/components/replication-results';
-import { ResultHeadline } from '../../features/results/components/result-headline';
 import { RunMetadata } from '../../features/results/components/run-metadata';
-import { SafetyCaution } from '../../features/results/components/safety-caution';
-import { StationResults } from '../../features/results/components/station-results';
-import { TrackResults } from '../../features/results/components/track-results';
+import { RunResultSections } from '../../features/results/components/run-result-sections';
 
-export function RunRoute() {
+interface RunRouteProps {
+  /** Extra panels below the run's description, composed by the app (sharing, for one). */
+  renderAside?: (run: RunDetail, organisationId: string | undefined) => ReactNode;
+}
+
+export function RunRoute({ renderAside }: RunRouteProps = {}) {
   const { runId = '' } = useParams();
   const navigate = useNavigate();
   const run = useRun(runId);
@@ -73,14 +73,9 @@ export function RunRoute() {
           </>
         }
       />
-      <SafetyCaution />
-      <ResultHeadline result={result} />
-      <HeatmapResults result={result} fileBase={fileBase} />
-      <StationResults result={result} stepNames={stepNames} fileBase={fileBase} />
-      <TrackResults result={result} fileBase={fileBase} />
-      <FlowResults result={result} fileBase={fileBase} />
-      <ReplicationResults replications={result.replications} fileBase={fileBase} />
+      <RunResultSections result={result} stepNames={stepNames} fileBase={fileBase} />
       <RunMetadata run={data} />
+      {renderAside?.(data, project.data?.organisationId)}
       <Card aria-labelledby="exports-title" className="flex flex-col gap-3">
         <CardTitle id="exports-title">Exports</CardTitle>
         <p className="text-sm text-ink-soft">Every table above has a CSV button, every chart PNG, SVG and CSV buttons in its corner.</p>

@@ -4,7 +4,7 @@
 // fix the station when the carrier leaves the previous step.
 import { z } from 'zod';
 import { distributionSchema } from './distribution';
-import { distributionMean } from './distribution-moments';
+import { statedMean } from './distribution-parameters';
 import { idSchema, labelSchema, nonNegative, share } from './units';
 
 export const DISPATCH_RULES = ['pooled', 'firstFree', 'shortestQueue', 'roundRobin'] as const;
@@ -19,7 +19,9 @@ export const FAILURE_LIMITS = { meanTimeBetweenFailuresMinSeconds: 1 } as const;
 export const failureSchema = z.object({
   /** Operating (processing) time between the end of one repair and the next failure. */
   timeBetweenFailuresSeconds: distributionSchema.refine(
-    (d) => distributionMean(d) >= FAILURE_LIMITS.meanTimeBetweenFailuresMinSeconds,
+    // The mean as stated (a normal's own mean, before truncation at min lifts it slightly): this guards
+    // against typing minutes or hours where seconds belong.
+    (d) => statedMean(d) >= FAILURE_LIMITS.meanTimeBetweenFailuresMinSeconds,
     `the mean time between failures must be at least ${FAILURE_LIMITS.meanTimeBetweenFailuresMinSeconds} s of work; check that it is in seconds`,
   ),
   timeToRepairSeconds: distributionSchema,

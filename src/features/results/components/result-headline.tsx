@@ -2,7 +2,7 @@
 // target, annual output over the calendar's hours, WIP and lead time.
 import type { ReactNode } from 'react';
 import type { Interval, RunResult } from '../../../../shared/results/run-result';
-import { formatInterval, formatMean1, formatMean2, formatParts, formatPerHour, formatSeconds, formatTakt } from '../../runs/utils/format-run';
+import { formatInterval, formatMean1, formatMean2, formatParts, formatPerHour, formatSeconds, formatTakt } from '../../../lib/format-run';
 import { taktVerdict } from '../utils/takt-verdict';
 
 const VERDICT_TONE = {

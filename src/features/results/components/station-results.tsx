@@ -4,7 +4,7 @@ import { useMemo } from 'react';
 import type { RunResult, StationResult } from '../../../../shared/results/run-result';
 import { StationStateBars } from '../../../components/charts';
 import { Card, CardTitle } from '../../../components/ui/card';
-import { formatMean2, formatPercent, formatTakt } from '../../runs/utils/format-run';
+import { formatMean2, formatPercent, formatTakt } from '../../../lib/format-run';
 import { stationBars } from '../utils/chart-data';
 import { ResultTable, type ResultColumn } from './result-table';
 

@@ -2,7 +2,7 @@
 // lane cannot take, how long the queue in front) and lanes (how full they ran).
 import type { LaneResult, RunResult, TransferResult } from '../../../../shared/results/run-result';
 import { Card, CardTitle } from '../../../components/ui/card';
-import { formatMean2, formatPercent } from '../../runs/utils/format-run';
+import { formatMean2, formatPercent } from '../../../lib/format-run';
 import { ResultTable, type ResultColumn } from './result-table';
 
 const KIND_LABEL: Record<TransferResult['kind'], string> = { elevator: 'elevator', lateral: 'lateral transfer', curve: 'curve' };

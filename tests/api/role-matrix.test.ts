@@ -9,7 +9,7 @@ import { ACTORS, runBody, useOrganisation, type Actor, type Content, type People
 
 const db = useCleanDatabase({ truncate: false });
 
-type Method = 'get' | 'post' | 'patch' | 'delete';
+type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 type Statuses = Record<Actor, number>;
 
 const read: Statuses = { anonymous: 401, outsider: 404, viewer: 200, engineer: 200, owner: 200 };
@@ -59,6 +59,14 @@ const cases: RouteCase[] = [
   { route: 'invitation', method: 'delete', path: (p, c) => apiRoutes.invitation(p.organisationId, c.invitationId), expected: manage },
   { route: 'invitationResend', method: 'post', path: (p, c) => apiRoutes.invitationResend(p.organisationId, c.invitationId), expected: manage },
   { route: 'audit', method: 'get', path: (p) => apiRoutes.audit(p.organisationId), expected: manage },
+  { route: 'priceList', method: 'get', path: (p) => apiRoutes.priceList(p.organisationId), expected: read },
+  {
+    route: 'priceList',
+    method: 'put',
+    path: (p) => apiRoutes.priceList(p.organisationId),
+    body: () => ({ currency: 'EUR', prices: { trackPerMetre: 1000, carrier: 2000, elevator: 30000, lateralTransfer: 20000, curve: 8000, automaticStation: 50000, manualStation: 10000 } }),
+    expected: edit,
+  },
   { route: 'auditCsv', method: 'get', path: (p) => apiRoutes.auditCsv(p.organisationId), expected: manage, contentType: /text\/csv/ },
   { route: 'shares', method: 'get', path: (_, c) => `${apiRoutes.shares}?kind=run&subjectId=${c.runId}`, expected: read },
   { route: 'shares', method: 'post', path: () => apiRoutes.shares, body: (_, c) => ({ kind: 'run', subjectId: c.runId, expiresInDays: 3 }), expected: create },

@@ -3,6 +3,7 @@
 // plus routing tables. Done once per experiment; replications share it.
 import type { Scenario } from '../../../shared/scenario/scenario';
 import { laneLengthMm } from '../../../shared/scenario/track';
+import { asIndexArray, indexArray, NONE, type IndexArray, type LaneIndex, type StationIndex, type StepIndex } from './indexes';
 import { createMotion, type Motion } from './motion';
 import { computeRoutes, type Routes } from './routing';
 
@@ -38,8 +39,8 @@ export type CompiledLine = {
   laneLengthMm: Float64Array;
   connCount: number;
   connKind: Int32Array;
-  connFrom: Int32Array;
-  connTo: Int32Array;
+  connFrom: IndexArray<LaneIndex>;
+  connTo: IndexArray<LaneIndex>;
   /** Transfer index (into scenario.transfers) of a connection, -1 for a direct link. */
   connTransfer: Int32Array;
   /** Seconds from taking a carrier in to being ready to hand it over. */
@@ -47,10 +48,12 @@ export type CompiledLine = {
   /** Seconds an elevator or lateral transfer needs to come back empty after handing over. */
   connReturnSeconds: Float64Array;
   stationCount: number;
-  stationLane: Int32Array;
+  stationLane: IndexArray<LaneIndex>;
   stationPositionMm: Float64Array;
-  stationStep: Int32Array;
+  stationStep: IndexArray<StepIndex>;
   stationPausesForBreaks: Uint8Array;
+  /** Breaks stop the whole line (calendar breakMode 'wholeLine'), not only manual stations. */
+  wholeLineBreaks: boolean;
   stationIds: string[];
   /** Carriers that fit on a station's lane from the lane start up to and including the station: how many a pooled step may send its way. */
   stationRoom: Int32Array;
@@ -59,9 +62,9 @@ export type CompiledLine = {
   stepDispatch: Int32Array;
   stepRejectShare: Float64Array;
   stepReworkShare: Float64Array;
-  stepReworkTarget: Int32Array;
+  stepReworkTarget: IndexArray<StepIndex>;
   /** Station indices of each step. */
-  stepStations: Int32Array[];
+  stepStations: IndexArray<StationIndex>[];
   routes: Routes;
 };
 
@@ -77,35 +80,32 @@ function transferTimes(s: Scenario, t: Scenario['transfers'][number]): [number, 
 }
 
 export function compileLine(s: Scenario, carrierCount = s.carriers.count): CompiledLine {
-  const laneIndex = new Map(s.lanes.map((l, i) => [l.id, i]));
+  const laneIndex = new Map(s.lanes.map((l, i) => [l.id, i as LaneIndex]));
   const laneCount = s.lanes.length;
   const lengths = Float64Array.from(s.lanes, laneLengthMm);
   const connCount = s.links.length + s.transfers.length;
   const connKind = new Int32Array(connCount);
-  const connFrom = new Int32Array(connCount);
-  const connTo = new Int32Array(connCount);
+  const connFrom = indexArray<LaneIndex>(connCount, 0);
+  const connTo = indexArray<LaneIndex>(connCount, 0);
   const connTransfer = new Int32Array(connCount).fill(-1);
   const connCarrySeconds = new Float64Array(connCount);
   const connReturnSeconds = new Float64Array(connCount);
   s.links.forEach((link, i) => {
     connKind[i] = CONN_LINK;
-    connFrom[i] = laneIndex.get(link.fromLaneId) ?? -1;
-    connTo[i] = laneIndex.get(link.toLaneId) ?? -1;
+    connFrom[i] = laneIndex.get(link.fromLaneId) ?? NONE;
+    connTo[i] = laneIndex.get(link.toLaneId) ?? NONE;
   });
   s.transfers.forEach((t, j) => {
     const i = s.links.length + j;
     connKind[i] = CONN_CODES[t.kind];
-    connFrom[i] = laneIndex.get(t.fromLaneId) ?? -1;
-    connTo[i] = laneIndex.get(t.toLaneId) ?? -1;
+    connFrom[i] = laneIndex.get(t.fromLaneId) ?? NONE;
+    connTo[i] = laneIndex.get(t.toLaneId) ?? NONE;
     connTransfer[i] = j;
     [connCarrySeconds[i], connReturnSeconds[i]] = transferTimes(s, t);
   });
   const stations = s.steps.flatMap((step, stepIndex) => step.stations.map((station) => ({ station, stepIndex })));
-  const stepStations: Int32Array[] = s.steps.map(() => new Int32Array(0));
   let next = 0;
-  s.steps.forEach((step, i) => {
-    stepStations[i] = Int32Array.from(step.stations, () => next++);
-  });
+  const stepStations = s.steps.map((step) => asIndexArray<StationIndex>(Int32Array.from(step.stations, () => next++)));
   const stepIndex = new Map(s.steps.map((st, i) => [st.id, i]));
   const motion = createMotion(s);
   const pitchMm = s.conveyor.kind === 'belt' ? s.conveyor.pitchMm : s.carriers.lengthMm + s.carriers.minGapMm;
@@ -127,10 +127,11 @@ export function compileLine(s: Scenario, carrierCount = s.carriers.count): Compi
     connCarrySeconds,
     connReturnSeconds,
     stationCount: stations.length,
-    stationLane: Int32Array.from(stations, (x) => laneIndex.get(x.station.laneId) ?? -1),
+    stationLane: asIndexArray<LaneIndex>(Int32Array.from(stations, (x) => laneIndex.get(x.station.laneId) ?? -1)),
     stationPositionMm: Float64Array.from(stations, (x) => x.station.positionMm),
-    stationStep: Int32Array.from(stations, (x) => x.stepIndex),
+    stationStep: asIndexArray<StepIndex>(Int32Array.from(stations, (x) => x.stepIndex)),
     stationPausesForBreaks: Uint8Array.from(stations, (x) => (x.station.pausesForBreaks ? 1 : 0)),
+    wholeLineBreaks: s.calendar.breakMode === 'wholeLine' && s.calendar.breaks.length > 0,
     stationIds: stations.map((x) => x.station.id),
     stationRoom: Int32Array.from(stations, (x) => Math.max(1, Math.floor((x.station.positionMm - s.carriers.lengthMm) / pitchMm + 1e-9) + 1)),
     stepCount: s.steps.length,
@@ -138,7 +139,7 @@ export function compileLine(s: Scenario, carrierCount = s.carriers.count): Compi
     stepDispatch: Int32Array.from(s.steps, (st) => DISPATCH_CODES[st.dispatch]),
     stepRejectShare: Float64Array.from(s.steps, (st) => (st.kind === 'inspect' ? st.rejectShare : 0)),
     stepReworkShare: Float64Array.from(s.steps, (st) => (st.kind === 'inspect' ? st.reworkShare : 0)),
-    stepReworkTarget: Int32Array.from(s.steps, (st) => (st.kind === 'inspect' && st.reworkStepId !== undefined ? (stepIndex.get(st.reworkStepId) ?? -1) : -1)),
+    stepReworkTarget: asIndexArray<StepIndex>(Int32Array.from(s.steps, (st) => (st.kind === 'inspect' && st.reworkStepId !== undefined ? (stepIndex.get(st.reworkStepId) ?? -1) : -1))),
     stepStations,
     routes: computeRoutes({ laneCount, laneTraverseSeconds, connFrom, connTo, connSeconds: connCarrySeconds }),
   };

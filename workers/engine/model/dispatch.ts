@@ -16,6 +16,7 @@
 import { DISPATCH_FIRST_FREE, DISPATCH_POOLED, DISPATCH_ROUND_ROBIN } from './compile';
 import { wake } from './lanes';
 import type { LineState } from './state';
+import { NONE, type CarrierIndex, type IndexArray, type StationIndex, type StepIndex } from './indexes';
 
 const EPS_MM = 1e-6;
 
@@ -24,14 +25,14 @@ const ANY = 0;
 const REACHABLE = 1;
 const WITH_ROOM = 2;
 
-function leastAssigned(m: LineState, stations: Int32Array): number {
+function leastAssigned(m: LineState, stations: IndexArray<StationIndex>): StationIndex {
   let best = stations[0];
   for (let i = 1; i < stations.length; i++) if (m.sAssigned[stations[i]] < m.sAssigned[best]) best = stations[i];
   return best;
 }
 
 /** Estimated seconds for the carrier to reach a station from where it stands. */
-function travelSeconds(m: LineState, c: number, station: number): number {
+function travelSeconds(m: LineState, c: CarrierIndex, station: StationIndex): number {
   const line = m.line;
   const lane = m.cLane[c];
   const pos = m.cPos[c];
@@ -41,7 +42,7 @@ function travelSeconds(m: LineState, c: number, station: number): number {
   return (line.laneLengthMm[lane] - pos) / v + line.routes.cost[lane * line.laneCount + targetLane] + line.stationPositionMm[station] / v;
 }
 
-function eligible(m: LineState, c: number, s: number, filter: number): boolean {
+function eligible(m: LineState, c: CarrierIndex, s: StationIndex, filter: number): boolean {
   if (filter === ANY) return true;
   const line = m.line;
   // A station behind the carrier on its own lane is a lap away.
@@ -50,11 +51,11 @@ function eligible(m: LineState, c: number, s: number, filter: number): boolean {
 }
 
 /** Shortest queue among the eligible stations, ties by the way ahead; -1 when none is eligible. */
-function shortestQueueOnTheWay(m: LineState, stations: Int32Array, c: number, filter: number): number {
+function shortestQueueOnTheWay(m: LineState, stations: IndexArray<StationIndex>, c: CarrierIndex, filter: number): StationIndex {
   if (m.cLane[c] < 0) return leastAssigned(m, stations);
   let least = Infinity;
   for (let i = 0; i < stations.length; i++) if (eligible(m, c, stations[i], filter) && m.sAssigned[stations[i]] < least) least = m.sAssigned[stations[i]];
-  let nearest = -1;
+  let nearest: StationIndex = NONE;
   let nearestCost = Infinity;
   for (let i = 0; i < stations.length; i++) {
     const s = stations[i];
@@ -65,7 +66,7 @@ function shortestQueueOnTheWay(m: LineState, stations: Int32Array, c: number, fi
       nearestCost = cost;
     }
   }
-  if (nearest < 0) return -1;
+  if (nearest < 0) return NONE;
   const line = m.line;
   const lane = line.stationLane[nearest];
   let chosen = nearest;
@@ -79,7 +80,7 @@ function shortestQueueOnTheWay(m: LineState, stations: Int32Array, c: number, fi
   return chosen;
 }
 
-function assign(m: LineState, c: number, station: number): void {
+function assign(m: LineState, c: CarrierIndex, station: StationIndex): void {
   m.cPending[c] = 0;
   m.cTarget[c] = station;
   m.sAssigned[station]++;
@@ -91,10 +92,10 @@ function assign(m: LineState, c: number, station: number): void {
  * stations leaves the carrier pending, heading along the common route (its first station is the
  * route hint).
  */
-export function chooseStation(m: LineState, step: number, c: number): void {
+export function chooseStation(m: LineState, step: StepIndex, c: CarrierIndex): void {
   const stations = m.line.stepStations[step];
   const rule = m.line.stepDispatch[step];
-  let chosen: number;
+  let chosen: StationIndex;
   if (stations.length === 1) chosen = stations[0];
   else if (rule === DISPATCH_POOLED) {
     m.cPending[c] = 1;
@@ -104,7 +105,7 @@ export function chooseStation(m: LineState, step: number, c: number): void {
     chosen = stations[m.stepRoundRobin[step]];
     m.stepRoundRobin[step] = (m.stepRoundRobin[step] + 1) % stations.length;
   } else if (rule === DISPATCH_FIRST_FREE) {
-    chosen = -1;
+    chosen = NONE;
     for (let i = 0; i < stations.length && chosen < 0; i++) if (m.sAssigned[stations[i]] === 0) chosen = stations[i];
     if (chosen < 0) chosen = leastAssigned(m, stations);
   } else chosen = shortestQueueOnTheWay(m, stations, c, ANY);
@@ -112,7 +113,7 @@ export function chooseStation(m: LineState, step: number, c: number): void {
 }
 
 /** The next hops from the carrier's lane end to the pending step's stations differ: the routes part here. */
-function routesPartAtLaneEnd(m: LineState, c: number, stations: Int32Array): boolean {
+function routesPartAtLaneEnd(m: LineState, c: CarrierIndex, stations: IndexArray<StationIndex>): boolean {
   const line = m.line;
   const from = m.cLane[c] * line.laneCount;
   const first = line.routes.nextHop[from + line.stationLane[stations[0]]];
@@ -125,7 +126,7 @@ function routesPartAtLaneEnd(m: LineState, c: number, stations: Int32Array): boo
  * Decides there if the routes part, and returns false when it must wait for room (it is then woken
  * when a station of the step is released).
  */
-export function decidePending(m: LineState, c: number): boolean {
+export function decidePending(m: LineState, c: CarrierIndex): boolean {
   const step = m.line.stationStep[m.cTarget[c]];
   const stations = m.line.stepStations[step];
   const atLaneEnd = Math.abs(m.cPos[c] - m.line.laneLengthMm[m.cLane[c]]) <= EPS_MM;
@@ -142,7 +143,7 @@ export function decidePending(m: LineState, c: number): boolean {
 }
 
 /** The station's carrier has finished: one fewer in its queue, and carriers waiting for room look again. */
-export function unassign(m: LineState, station: number): void {
+export function unassign(m: LineState, station: StationIndex): void {
   m.sAssigned[station]--;
   m.observer.stationAssigned(station, m.sAssigned[station], m.now);
   const waiting = m.stepWaiting[m.line.stationStep[station]];

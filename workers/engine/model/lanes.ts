@@ -7,12 +7,13 @@
 // platoon (platoons.ts); a platoon moves as one, through its leader.
 import { followerProfile, PROFILE_EMPTY, PROFILE_LOADED } from './motion';
 import { canJoin, join, leaderOf, offsetMm, phaseOf, rearOf, ridersChangePhase } from './platoons';
-import { EV_ARRIVE, EV_LANE_WAKE, PH_EXIT, PH_MOVING, PH_QUEUED, scheduleActive, type LineState } from './state';
+import { EV_ARRIVE, EV_LANE_WAKE, PH_EXIT, PH_MOVING, PH_QUEUED, scheduleActive, scheduleActiveAt, type LineState } from './state';
+import { NONE, type CarrierIndex, type ConnIndex, type LaneIndex } from './indexes';
 
 const EPS_MM = 1e-6;
 
 /** Where the carrier's front is at time t (a rider: its leader's position less its place behind it). */
-export function positionAt(m: LineState, c: number, t: number): number {
+export function positionAt(m: LineState, c: CarrierIndex, t: number): number {
   const leader = leaderOf(m, c);
   const start = m.cPos[leader] - offsetMm(m, c);
   if (m.cPhase[leader] !== PH_MOVING) return start;
@@ -20,7 +21,7 @@ export function positionAt(m: LineState, c: number, t: number): number {
 }
 
 /** Where the carrier will stand when its current move ends (where it stands, when at rest). */
-export function destinationOf(m: LineState, c: number): number {
+export function destinationOf(m: LineState, c: CarrierIndex): number {
   const leader = leaderOf(m, c);
   return (m.cPhase[leader] === PH_MOVING ? m.cDest[leader] : m.cPos[leader]) - offsetMm(m, c);
 }
@@ -30,7 +31,7 @@ export function destinationOf(m: LineState, c: number): number {
  * that has not yet chosen among a pooled step's stations stops at the first of them ahead on its
  * lane, where it decides.
  */
-export function stopPoint(m: LineState, c: number): number {
+export function stopPoint(m: LineState, c: CarrierIndex): number {
   const lane = m.cLane[c];
   const target = m.cTarget[c];
   const line = m.line;
@@ -51,7 +52,7 @@ export function stopPoint(m: LineState, c: number): number {
   return stop;
 }
 
-export function wake(m: LineState, c: number): void {
+export function wake(m: LineState, c: CarrierIndex): void {
   if (c < 0 || m.cWoken[c]) return;
   m.cWoken[c] = 1;
   const ring = m.wakeRing;
@@ -60,8 +61,8 @@ export function wake(m: LineState, c: number): void {
 }
 
 /** Takes the next carrier to retry, or -1. */
-export function nextWoken(m: LineState): number {
-  if (m.wakeCount === 0) return -1;
+export function nextWoken(m: LineState): CarrierIndex {
+  if (m.wakeCount === 0) return NONE;
   const c = m.wakeRing[m.wakeHead];
   m.wakeHead = (m.wakeHead + 1) % m.wakeRing.length;
   m.wakeCount--;
@@ -72,24 +73,24 @@ export function nextWoken(m: LineState): number {
 const isWaiting = (phase: number) => phase === PH_QUEUED || phase === PH_EXIT;
 
 /** The transfer a waiting carrier will leave its lane by, or -1 (bound for a station ahead, or a direct link). */
-function queueTransfer(m: LineState, c: number): number {
+function queueTransfer(m: LineState, c: CarrierIndex): ConnIndex {
   const lane = m.cLane[c];
   const target = m.cTarget[c];
-  if (lane < 0 || target < 0) return -1;
+  if (lane < 0 || target < 0) return NONE;
   const targetLane = m.line.stationLane[target];
-  if (targetLane === lane && m.line.stationPositionMm[target] >= m.cPos[c] - EPS_MM) return -1;
+  if (targetLane === lane && m.line.stationPositionMm[target] >= m.cPos[c] - EPS_MM) return NONE;
   const conn = m.line.routes.nextHop[lane * m.line.laneCount + targetLane];
-  return conn >= 0 && m.line.connTransfer[conn] >= 0 ? conn : -1;
+  return conn >= 0 && m.line.connTransfer[conn] >= 0 ? conn : NONE;
 }
 
-export function setPhase(m: LineState, c: number, phase: number): void {
+export function setPhase(m: LineState, c: CarrierIndex, phase: number): void {
   const old = m.cPhase[c];
   if (old === phase) return;
   m.cPhase[c] = phase;
   m.observer.carrierPhases(old, phase, 1, m.now);
   if (m.cQueueConn[c] >= 0) {
     m.observer.transferQueue(m.cQueueConn[c], -1, m.now);
-    m.cQueueConn[c] = -1;
+    m.cQueueConn[c] = NONE;
   }
   if (isWaiting(phase)) {
     const conn = queueTransfer(m, c);
@@ -102,7 +103,7 @@ export function setPhase(m: LineState, c: number, phase: number): void {
  * Starts the carrier towards its stop point as far as the track allows. Returns 'moved', 'atStop'
  * when it already stands at its stop point, or 'held' when the carrier ahead leaves no room.
  */
-export function advance(m: LineState, c: number): 'moved' | 'atStop' | 'held' {
+export function advance(m: LineState, c: CarrierIndex): 'moved' | 'atStop' | 'held' {
   const pos = m.cPos[c];
   const stop = stopPoint(m, c);
   let target = stop;
@@ -135,21 +136,21 @@ export function advance(m: LineState, c: number): 'moved' | 'atStop' | 'held' {
 }
 
 /** Ends a move: the carrier (and its platoon) stands at its destination. */
-export function completeMove(m: LineState, c: number): void {
+export function completeMove(m: LineState, c: CarrierIndex): void {
   m.cPos[c] = m.cDest[c];
   setPhase(m, c, PH_QUEUED);
   ridersChangePhase(m, c, PH_MOVING, PH_QUEUED);
 }
 
 /** Puts a carrier at the start of a lane, whole carrier on the lane, as its new rear. */
-export function attach(m: LineState, c: number, lane: number, front: number): void {
+export function attach(m: LineState, c: CarrierIndex, lane: LaneIndex, front: number): void {
   const rear = m.laneRear[lane];
   m.cLane[c] = lane;
   m.cSeq[c] = m.laneSeq[lane]++;
   m.cPos[c] = front;
   m.cDest[c] = front;
   m.cAhead[c] = rear;
-  m.cBehind[c] = -1;
+  m.cBehind[c] = NONE;
   if (rear >= 0) m.cBehind[rear] = c;
   else m.laneFront[lane] = c;
   m.laneRear[lane] = c;
@@ -158,47 +159,57 @@ export function attach(m: LineState, c: number, lane: number, front: number): vo
 }
 
 /** Takes the front carrier off its lane; the one behind may close up, the lane may take a new carrier. */
-export function detachFront(m: LineState, c: number): void {
+export function detachFront(m: LineState, c: CarrierIndex): void {
   const lane = m.cLane[c];
   const behind = m.cBehind[c];
   m.laneFront[lane] = behind;
-  if (behind >= 0) m.cAhead[behind] = -1;
-  else m.laneRear[lane] = -1;
-  m.cBehind[c] = -1;
-  m.cLane[c] = -1;
+  if (behind >= 0) m.cAhead[behind] = NONE;
+  else m.laneRear[lane] = NONE;
+  m.cBehind[c] = NONE;
+  m.cLane[c] = NONE;
   m.laneCarriers[lane]--;
   m.observer.laneCarriers(lane, m.laneCarriers[lane], m.now);
   wake(m, behind);
   requestLaneCheck(m, lane);
 }
 
+/**
+ * When the moving rear carrier clears the lane start (aimed half the tolerance past the threshold, so
+ * rounding never lets a carrier in a hair too early), or Infinity when this move stops short of it.
+ * Entry is decided by comparing the clock with this time, never by recomputing a position from the
+ * clock: late in a long run a time difference carries rounding of the clock's magnitude, and a
+ * position recomputed from it could stay a hair short of the threshold at the very event scheduled
+ * for the crossing, so the lane would be woken again and again at the same instant.
+ */
+function clearsEntryAt(m: LineState, rear: CarrierIndex): number {
+  const needed = m.line.carrierLengthMm + m.line.pitchMm;
+  if (destinationOf(m, rear) < needed - EPS_MM) return Infinity;
+  // The rear moves as its leader does, offset behind it.
+  const leader = leaderOf(m, rear);
+  const start = m.cPos[leader];
+  return m.cMoveStart[leader] + m.line.motion.secondsToCover(m.cDest[leader] - start, m.cProfile[leader], needed - EPS_MM / 2 + offsetMm(m, rear) - start);
+}
+
 /** Whether a carrier can be put at the lane start now (the rear carrier has cleared it). */
-export function entryClear(m: LineState, lane: number): boolean {
+export function entryClear(m: LineState, lane: LaneIndex): boolean {
   const rear = m.laneRear[lane];
   if (rear < 0) return true;
+  if (phaseOf(m, rear) === PH_MOVING) return m.now >= clearsEntryAt(m, rear);
   return positionAt(m, rear, m.now) >= m.line.carrierLengthMm + m.line.pitchMm - EPS_MM;
 }
 
-/**
- * Schedules a lane check for the moment the moving rear carrier clears the lane start, found by
- * inverting its motion profile. Nothing to schedule when it stops short of that.
- */
-export function scheduleEntryWake(m: LineState, lane: number): void {
+/** Schedules a lane check for the moment the moving rear carrier clears the lane start. */
+export function scheduleEntryWake(m: LineState, lane: LaneIndex): void {
   const rear = m.laneRear[lane];
   if (rear < 0 || phaseOf(m, rear) !== PH_MOVING || m.laneWakePending[lane]) return;
-  const needed = m.line.carrierLengthMm + m.line.pitchMm;
-  if (destinationOf(m, rear) < needed - EPS_MM) return;
-  // The rear moves as its leader does, offset behind it. Aim half the tolerance past the threshold,
-  // so rounding can never wake the lane a hair too early.
-  const leader = leaderOf(m, rear);
-  const start = m.cPos[leader];
-  const into = m.line.motion.secondsToCover(m.cDest[leader] - start, m.cProfile[leader], needed - EPS_MM / 2 + offsetMm(m, rear) - start);
+  const at = clearsEntryAt(m, rear);
+  if (at === Infinity) return;
   m.laneWakePending[lane] = 1;
-  scheduleActive(m, Math.max(0, m.cMoveStart[leader] + into - m.now), EV_LANE_WAKE, lane);
+  scheduleActiveAt(m, Math.max(m.now, at), EV_LANE_WAKE, lane);
 }
 
 /** Marks a lane whose entry should be re-examined after the current event, if anything waits for it. */
-export function requestLaneCheck(m: LineState, lane: number): void {
+export function requestLaneCheck(m: LineState, lane: LaneIndex): void {
   if (m.laneRequests[lane].length === 0 || m.laneDirty[lane]) return;
   m.laneDirty[lane] = 1;
   m.laneRing.push(lane);

@@ -5,16 +5,17 @@
 import { chooseStation } from './dispatch';
 import { attach, setPhase, wake } from './lanes';
 import { EV_CARRIED, PH_QUEUED, PH_TRANSFER, scheduleActive, TR_CARRYING, type LineState } from './state';
+import type { CarrierIndex, LaneIndex, StepIndex } from './indexes';
 
-function lanesTowardsLoad(m: LineState): number[] {
+function lanesTowardsLoad(m: LineState): LaneIndex[] {
   const line = m.line;
   const loadLane = line.stationLane[line.stepStations[0][0]];
-  const order: number[] = [];
+  const order: LaneIndex[] = [];
   const seen = new Uint8Array(line.laneCount);
   seen[loadLane] = 1;
   const frontier = [loadLane];
   while (frontier.length > 0) {
-    const lane = frontier.shift() as number;
+    const lane = frontier.shift() as LaneIndex;
     for (let k = 0; k < line.connCount; k++) {
       const from = line.connFrom[k];
       if (line.connTo[k] !== lane || seen[from]) continue;
@@ -27,21 +28,21 @@ function lanesTowardsLoad(m: LineState): number[] {
   return order;
 }
 
-function prepare(m: LineState, c: number): void {
-  m.cStep[c] = 0;
-  chooseStation(m, 0, c);
+function prepare(m: LineState, c: CarrierIndex): void {
+  m.cStep[c] = 0 as StepIndex;
+  chooseStation(m, 0 as StepIndex, c);
 }
 
 export function placeCarriers(m: LineState): void {
   const line = m.line;
-  let c = 0;
+  let c = 0 as CarrierIndex;
   for (const lane of lanesTowardsLoad(m)) {
     for (let pos = line.laneLengthMm[lane]; pos >= line.carrierLengthMm - 1e-9 && c < line.carrierCount; pos -= line.pitchMm) {
       prepare(m, c);
       attach(m, c, lane, pos);
       setPhase(m, c, PH_QUEUED);
       wake(m, c);
-      c++;
+      c = (c + 1) as CarrierIndex;
     }
   }
   for (let k = 0; k < line.connCount && c < line.carrierCount; k++) {
@@ -52,7 +53,7 @@ export function placeCarriers(m: LineState): void {
     m.tState[k] = TR_CARRYING;
     m.observer.transferState(k, TR_CARRYING, m.now);
     scheduleActive(m, 0, EV_CARRIED, k);
-    c++;
+    c = (c + 1) as CarrierIndex;
   }
   if (c < line.carrierCount) {
     throw new RangeError(`${line.carrierCount} carriers do not fit on the track reachable from loading; at most ${c} do`);

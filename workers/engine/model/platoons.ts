@@ -13,38 +13,39 @@
 // behind takes over with the motion state made real. Carriers on a lane carry consecutive sequence
 // numbers (they join at the rear and leave at the front), which gives a rider's place in one step.
 import type { LineState } from './state';
-import { PH_MOVING, PH_QUEUED } from './state';
+import { PH_QUEUED } from './state';
+import type { CarrierIndex } from './indexes';
 
 /** The carrier whose motion this carrier follows: its platoon's leader, or itself. */
-export function leaderOf(m: LineState, c: number): number {
+export function leaderOf(m: LineState, c: CarrierIndex): CarrierIndex {
   const p = m.cPlatoon[c];
   return p < 0 ? c : m.pLeader[p];
 }
 
 /** How far behind its leader a carrier stands (0 for a leader or a carrier on its own). */
-export function offsetMm(m: LineState, c: number): number {
+export function offsetMm(m: LineState, c: CarrierIndex): number {
   const p = m.cPlatoon[c];
   return p < 0 ? 0 : (m.cSeq[c] - m.cSeq[m.pLeader[p]]) * m.line.pitchMm;
 }
 
-export function phaseOf(m: LineState, c: number): number {
+export function phaseOf(m: LineState, c: CarrierIndex): number {
   return m.cPhase[leaderOf(m, c)];
 }
 
 /** The last carrier of the carrier's platoon, or itself. */
-export function rearOf(m: LineState, c: number): number {
+export function rearOf(m: LineState, c: CarrierIndex): CarrierIndex {
   const p = m.cPlatoon[c];
   return p < 0 ? c : m.pRear[p];
 }
 
 /** Riders that change phase with their leader. */
-export function ridersOf(m: LineState, c: number): number {
+export function ridersOf(m: LineState, c: CarrierIndex): number {
   const p = m.cPlatoon[c];
   return p < 0 ? 0 : m.pSize[p] - 1;
 }
 
 /** The leader's riders change phase with it: counted at once for the recorder. */
-export function ridersChangePhase(m: LineState, leader: number, from: number, to: number): void {
+export function ridersChangePhase(m: LineState, leader: CarrierIndex, from: number, to: number): void {
   const riders = ridersOf(m, leader);
   if (riders === 0) return;
   m.observer.carrierPhases(from, to, riders, m.now);
@@ -60,7 +61,7 @@ function allocate(m: LineState): number {
  * Carrier c, at rest and held by the carrier right ahead of it (at rest too, exactly one pitch
  * ahead, same stop point, load state and transfer queue), rides with it from now on.
  */
-export function join(m: LineState, c: number, ahead: number): void {
+export function join(m: LineState, c: CarrierIndex, ahead: CarrierIndex): void {
   let p = m.cPlatoon[ahead];
   if (p < 0) {
     p = allocate(m);
@@ -79,7 +80,7 @@ export function join(m: LineState, c: number, ahead: number): void {
  * The leader has reached the platoon's stop point (the platoon stands still): it leaves, and the
  * carrier behind it leads the rest, with its position and phase made real.
  */
-export function leave(m: LineState, leader: number): void {
+export function leave(m: LineState, leader: CarrierIndex): void {
   const p = m.cPlatoon[leader];
   if (p < 0) return;
   m.cPlatoon[leader] = -1;
@@ -95,13 +96,10 @@ export function leave(m: LineState, leader: number): void {
 }
 
 /** Whether c, held at rest right behind ahead, can ride with it. */
-export function canJoin(m: LineState, c: number, ahead: number, stop: number, aheadStop: number): boolean {
+export function canJoin(m: LineState, c: CarrierIndex, ahead: CarrierIndex, stop: number, aheadStop: number): boolean {
   if (ahead < 0 || m.cAtStation[c] >= 0 || m.cAtStation[ahead] >= 0 || phaseOf(m, ahead) !== PH_QUEUED) return false;
   if (m.cLoaded[c] !== m.cLoaded[ahead] || Math.abs(stop - aheadStop) > 1e-6) return false;
   if (m.cQueueConn[c] !== (m.cPlatoon[ahead] >= 0 ? m.pConn[m.cPlatoon[ahead]] : m.cQueueConn[ahead])) return false;
   const gap = m.cPos[leaderOf(m, ahead)] - offsetMm(m, ahead) - m.cPos[c];
   return Math.abs(gap - m.line.pitchMm) <= 1e-6;
 }
-
-/** A moving platoon's riders are moving; anything else about a rider is its leader's. */
-export const isMoving = (m: LineState, c: number) => phaseOf(m, c) === PH_MOVING;

@@ -3,6 +3,8 @@
 // station on lane y leaves by nextHop[x * laneCount + y], the first edge of the quickest route
 // (estimated from lane lengths at top speed and transfer cycle times). Computed once per scenario
 // (Floyd–Warshall, fine for the few hundred lanes a layout has), so the hot path only reads a table.
+import { indexArray, type ConnIndex, type IndexArray } from './indexes';
+
 
 export type TrackGraph = {
   laneCount: number;
@@ -14,7 +16,7 @@ export type TrackGraph = {
 
 export type Routes = {
   /** Connection to leave lane x by to reach lane y, or -1 when y cannot be reached from x's end. */
-  nextHop: Int32Array;
+  nextHop: IndexArray<ConnIndex>;
   /** Estimated seconds from the end of lane x to the start of lane y (Infinity: unreachable). */
   cost: Float64Array;
 };
@@ -39,7 +41,7 @@ export function computeRoutes(g: TrackGraph): Routes {
       }
     }
   }
-  const nextHop = new Int32Array(n * n).fill(-1);
+  const nextHop = indexArray<ConnIndex>(n * n);
   const cost = new Float64Array(n * n).fill(Infinity);
   for (let x = 0; x < n; x++) {
     for (let y = 0; y < n; y++) {
@@ -50,7 +52,7 @@ export function computeRoutes(g: TrackGraph): Routes {
         const v = g.connSeconds[c] + rest;
         if (v < cost[x * n + y]) {
           cost[x * n + y] = v;
-          nextHop[x * n + y] = c;
+          nextHop[x * n + y] = c as ConnIndex;
         }
       }
     }

@@ -3,31 +3,12 @@
 // stations, transfers) read and write it; the observer is told of every state change.
 import type { Sampler } from '../random/sampler';
 import type { EventQueue } from '../kernel/event-queue';
-import type { Observer } from '../observe/observer';
+import { ST_STARVED, type Observer } from '../observe/observer';
 import type { CompiledLine } from './compile';
+import { indexArray, type CarrierIndex, type ConnIndex, type IndexArray, type LaneIndex, type StationIndex, type StepIndex } from './indexes';
 
-/** Carrier phases. */
-export const PH_MOVING = 0;
-/** Stopped, wants to move on: waiting for track ahead. */
-export const PH_QUEUED = 1;
-/** At the station it was sent to, being served (or waiting for the station to come back up). */
-export const PH_STATION = 2;
-/** At a lane end, waiting for its link or transfer. */
-export const PH_EXIT = 3;
-export const PH_TRANSFER = 4;
-
-/** Station states, in the order of STATION_STATES in the run result. */
-export const ST_PROCESSING = 0;
-export const ST_STARVED = 1;
-export const ST_BLOCKED = 2;
-export const ST_DOWN = 3;
-export const ST_BREAK = 4;
-
-/** Transfer states. */
-export const TR_IDLE = 0;
-export const TR_CARRYING = 1;
-export const TR_HOLDING = 2;
-export const TR_RETURNING = 3;
+// The state codes are the observer's vocabulary; re-exported so the model's modules find them here.
+export { PH_EXIT, PH_MOVING, PH_QUEUED, PH_STATION, PH_TRANSFER, ST_BLOCKED, ST_BREAK, ST_DOWN, ST_PROCESSING, ST_STARVED, TR_CARRYING, TR_HOLDING, TR_IDLE, TR_RETURNING } from '../observe/observer';
 
 /** Event kinds. */
 export const EV_ARRIVE = 1;
@@ -52,24 +33,26 @@ export type LineState = {
   /** Pending events that can change the line (EV_ARRIVE … EV_LANE_WAKE), for gridlock detection. */
   activePending: number;
   breakActive: boolean;
+  /** End of the whole-line stop in progress (see line-stop.ts), or -Infinity when the line runs. */
+  stoppedUntil: number;
   // Carriers.
-  cLane: Int32Array;
+  cLane: IndexArray<LaneIndex>;
   cPos: Float64Array;
   cDest: Float64Array;
   cMoveStart: Float64Array;
   cMoveEnd: Float64Array;
   cProfile: Int8Array;
   cPhase: Int8Array;
-  cAhead: Int32Array;
-  cBehind: Int32Array;
-  cStep: Int32Array;
-  cTarget: Int32Array;
+  cAhead: IndexArray<CarrierIndex>;
+  cBehind: IndexArray<CarrierIndex>;
+  cStep: IndexArray<StepIndex>;
+  cTarget: IndexArray<StationIndex>;
   cLoaded: Uint8Array;
-  cAtStation: Int32Array;
+  cAtStation: IndexArray<StationIndex>;
   cLoadTime: Float64Array;
   cLastLoad: Float64Array;
-  cConn: Int32Array;
-  cQueueConn: Int32Array;
+  cConn: IndexArray<ConnIndex>;
+  cQueueConn: IndexArray<ConnIndex>;
   cWoken: Uint8Array;
   /** 1 while the carrier heads for a pooled step without having chosen its station (cTarget is then only a route hint). */
   cPending: Uint8Array;
@@ -77,38 +60,39 @@ export type LineState = {
   cPlatoon: Int32Array;
   /** Order of arrival on its lane: consecutive from the lane's front to its rear. */
   cSeq: Int32Array;
-  pLeader: Int32Array;
-  pRear: Int32Array;
+  pLeader: IndexArray<CarrierIndex>;
+  pRear: IndexArray<CarrierIndex>;
   pSize: Int32Array;
   /** The transfer whose queue the platoon's riders count in while they stand (-1: none). */
-  pConn: Int32Array;
+  pConn: IndexArray<ConnIndex>;
   pFree: Int32Array;
   pFreeTop: number;
-  wakeRing: Int32Array;
+  wakeRing: IndexArray<CarrierIndex>;
   wakeHead: number;
   wakeCount: number;
   // Lanes.
-  laneFront: Int32Array;
-  laneRear: Int32Array;
+  laneFront: IndexArray<CarrierIndex>;
+  laneRear: IndexArray<CarrierIndex>;
   laneCarriers: Int32Array;
   laneSeq: Int32Array;
   laneWakePending: Uint8Array;
   laneDirty: Uint8Array;
   /** Lanes to re-examine after the current event. */
-  laneRing: number[];
+  laneRing: LaneIndex[];
   /** Connections waiting to put a carrier on the lane, in request order. */
-  laneRequests: number[][];
+  laneRequests: ConnIndex[][];
   // Connections (links and transfers).
   tState: Int8Array;
-  tCarrier: Int32Array;
-  tWaiting: Int32Array;
+  tCarrier: IndexArray<CarrierIndex>;
+  tWaiting: IndexArray<CarrierIndex>;
   // Stations.
   sState: Int8Array;
-  sCarrier: Int32Array;
+  sCarrier: IndexArray<CarrierIndex>;
   sDone: Uint8Array;
   sDown: Uint8Array;
   sSegmentActive: Uint8Array;
   sSegmentStart: Float64Array;
+  sSegmentLength: Float64Array;
   sWorkLeft: Float64Array;
   sToFailure: Float64Array;
   sGen: Int32Array;
@@ -116,7 +100,7 @@ export type LineState = {
   samplers: StationSamplers[];
   stepRoundRobin: Int32Array;
   /** Carriers standing at a decision point of a pooled step until one of its stations has room. */
-  stepWaiting: number[][];
+  stepWaiting: CarrierIndex[][];
   wip: number;
 };
 
@@ -131,38 +115,39 @@ export function createState(line: CompiledLine, queue: EventQueue, observer: Obs
     now: 0,
     activePending: 0,
     breakActive: false,
-    cLane: new Int32Array(n).fill(-1),
+    stoppedUntil: -Infinity,
+    cLane: indexArray<LaneIndex>(n),
     cPos: new Float64Array(n),
     cDest: new Float64Array(n),
     cMoveStart: new Float64Array(n),
     cMoveEnd: new Float64Array(n),
     cProfile: new Int8Array(n),
     cPhase: new Int8Array(n).fill(-1),
-    cAhead: new Int32Array(n).fill(-1),
-    cBehind: new Int32Array(n).fill(-1),
-    cStep: new Int32Array(n),
-    cTarget: new Int32Array(n).fill(-1),
+    cAhead: indexArray<CarrierIndex>(n),
+    cBehind: indexArray<CarrierIndex>(n),
+    cStep: indexArray<StepIndex>(n, 0),
+    cTarget: indexArray<StationIndex>(n),
     cLoaded: new Uint8Array(n),
-    cAtStation: new Int32Array(n).fill(-1),
+    cAtStation: indexArray<StationIndex>(n),
     cLoadTime: new Float64Array(n),
     cLastLoad: new Float64Array(n).fill(-1),
-    cConn: new Int32Array(n).fill(-1),
-    cQueueConn: new Int32Array(n).fill(-1),
+    cConn: indexArray<ConnIndex>(n),
+    cQueueConn: indexArray<ConnIndex>(n),
     cWoken: new Uint8Array(n),
     cPending: new Uint8Array(n),
     cPlatoon: new Int32Array(n).fill(-1),
     cSeq: new Int32Array(n),
-    pLeader: new Int32Array(n).fill(-1),
-    pRear: new Int32Array(n).fill(-1),
+    pLeader: indexArray<CarrierIndex>(n),
+    pRear: indexArray<CarrierIndex>(n),
     pSize: new Int32Array(n),
-    pConn: new Int32Array(n).fill(-1),
+    pConn: indexArray<ConnIndex>(n),
     pFree: Int32Array.from({ length: n }, (_, i) => n - 1 - i),
     pFreeTop: n,
-    wakeRing: new Int32Array(n),
+    wakeRing: indexArray<CarrierIndex>(n, 0),
     wakeHead: 0,
     wakeCount: 0,
-    laneFront: new Int32Array(line.laneCount).fill(-1),
-    laneRear: new Int32Array(line.laneCount).fill(-1),
+    laneFront: indexArray<CarrierIndex>(line.laneCount),
+    laneRear: indexArray<CarrierIndex>(line.laneCount),
     laneCarriers: new Int32Array(line.laneCount),
     laneSeq: new Int32Array(line.laneCount),
     laneWakePending: new Uint8Array(line.laneCount),
@@ -170,14 +155,15 @@ export function createState(line: CompiledLine, queue: EventQueue, observer: Obs
     laneRing: [],
     laneRequests: Array.from({ length: line.laneCount }, () => []),
     tState: new Int8Array(c),
-    tCarrier: new Int32Array(c).fill(-1),
-    tWaiting: new Int32Array(c).fill(-1),
+    tCarrier: indexArray<CarrierIndex>(c),
+    tWaiting: indexArray<CarrierIndex>(c),
     sState: new Int8Array(s).fill(ST_STARVED),
-    sCarrier: new Int32Array(s).fill(-1),
+    sCarrier: indexArray<CarrierIndex>(s),
     sDone: new Uint8Array(s),
     sDown: new Uint8Array(s),
     sSegmentActive: new Uint8Array(s),
     sSegmentStart: new Float64Array(s),
+    sSegmentLength: new Float64Array(s),
     sWorkLeft: new Float64Array(s),
     sToFailure: new Float64Array(s).fill(Infinity),
     sGen: new Int32Array(s),
@@ -191,6 +177,11 @@ export function createState(line: CompiledLine, queue: EventQueue, observer: Obs
 
 /** Schedules an event that can change the line (counted for gridlock detection). */
 export function scheduleActive(m: LineState, delay: number, kind: number, a: number, b = 0): void {
+  scheduleActiveAt(m, m.now + delay, kind, a, b);
+}
+
+/** The same at an absolute time (not before now), for times computed from an earlier origin. */
+export function scheduleActiveAt(m: LineState, time: number, kind: number, a: number, b = 0): void {
   m.activePending++;
-  m.queue.push(m.now + delay, 1, kind, a, b);
+  m.queue.push(time, 1, kind, a, b);
 }

@@ -7,13 +7,14 @@
 import { CONN_LINK } from './compile';
 import { attach, detachFront, entryClear, requestLaneCheck, scheduleEntryWake, setPhase, wake } from './lanes';
 import { EV_CARRIED, EV_RETURNED, PH_EXIT, PH_QUEUED, PH_TRANSFER, scheduleActive, TR_CARRYING, TR_HOLDING, TR_IDLE, TR_RETURNING, type LineState } from './state';
+import { NONE, type CarrierIndex, type ConnIndex, type LaneIndex } from './indexes';
 
-function setTransferState(m: LineState, conn: number, state: number): void {
+function setTransferState(m: LineState, conn: ConnIndex, state: number): void {
   m.tState[conn] = state;
   m.observer.transferState(conn, state, m.now);
 }
 
-function take(m: LineState, conn: number, c: number): void {
+function take(m: LineState, conn: ConnIndex, c: CarrierIndex): void {
   detachFront(m, c);
   setPhase(m, c, PH_TRANSFER);
   m.tCarrier[conn] = c;
@@ -23,7 +24,7 @@ function take(m: LineState, conn: number, c: number): void {
 }
 
 /** The carrier stands at its lane end and needs to leave it. */
-export function requestExit(m: LineState, c: number): void {
+export function requestExit(m: LineState, c: CarrierIndex): void {
   const lane = m.cLane[c];
   const conn = m.line.routes.nextHop[lane * m.line.laneCount + m.line.stationLane[m.cTarget[c]]];
   m.cConn[c] = conn;
@@ -36,28 +37,28 @@ export function requestExit(m: LineState, c: number): void {
   else m.tWaiting[conn] = c;
 }
 
-export function onCarried(m: LineState, conn: number): void {
+export function onCarried(m: LineState, conn: ConnIndex): void {
   setTransferState(m, conn, TR_HOLDING);
   m.laneRequests[m.line.connTo[conn]].push(conn);
   requestLaneCheck(m, m.line.connTo[conn]);
 }
 
-export function onReturned(m: LineState, conn: number): void {
+export function onReturned(m: LineState, conn: ConnIndex): void {
   setTransferState(m, conn, TR_IDLE);
   const waiting = m.tWaiting[conn];
   if (waiting >= 0) {
-    m.tWaiting[conn] = -1;
+    m.tWaiting[conn] = NONE;
     take(m, conn, waiting);
   }
 }
 
 /** Moves waiting carriers onto the lane while its start is clear. */
-export function serveLane(m: LineState, lane: number): void {
+export function serveLane(m: LineState, lane: LaneIndex): void {
   const requests = m.laneRequests[lane];
   while (requests.length > 0 && entryClear(m, lane)) {
-    const conn = requests.shift() as number;
+    const conn = requests.shift() as ConnIndex;
     const c = m.tCarrier[conn];
-    m.tCarrier[conn] = -1;
+    m.tCarrier[conn] = NONE;
     if (m.line.connKind[conn] === CONN_LINK) detachFront(m, c);
     attach(m, c, lane, m.line.carrierLengthMm);
     setPhase(m, c, PH_QUEUED);

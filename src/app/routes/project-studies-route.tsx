@@ -10,7 +10,7 @@ import { EmptyState } from '../../components/ui/empty-state';
 import { PageHeader } from '../../components/ui/page-header';
 import { PageSpinner } from '../../components/ui/spinner';
 import { isApiRequestError } from '../../lib/api-client';
-import { useCanEdit } from '../../features/auth/hooks/use-can-edit';
+import { useCanEdit } from '../../lib/session/use-can-edit';
 import { useProject } from '../../features/projects/api/get-project';
 import { useScenarioRevision } from '../../features/scenarios/api/get-revision';
 import { useScenarios } from '../../features/scenarios/api/get-scenarios';

@@ -35,4 +35,4 @@ export function describeProgress(progress: Progress, elapsedMs: number): RunProg
   };
 }
 
-export { formatDuration } from '../../../lib/format';
+export { formatDuration } from '../../../../lib/format';

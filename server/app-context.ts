@@ -1,11 +1,11 @@
 // What every router needs: the data source, the session service and the app's public origin.
 import type { DataSource } from 'typeorm';
 import type { Auth } from './auth/lucia';
-import type { AttemptLimiter } from './auth/rate-limit';
+import type { SignInLimiter } from './auth/rate-limit';
 
 export interface AppContext {
   ds: DataSource;
   auth: Auth;
   publicOrigin?: string;
-  signInLimiter: AttemptLimiter;
+  signInLimiter: SignInLimiter;
 }

@@ -5,10 +5,12 @@ import express from 'express';
 import type { DataSource } from 'typeorm';
 import type { AppContext } from './app-context';
 import { createAuth } from './auth/lucia';
+import type { TrustProxy } from './config';
 import { prepareDecoy } from './auth/password';
-import { createAttemptLimiter } from './auth/rate-limit';
+import { createSignInLimiter } from './auth/rate-limit';
 import { loadSession } from './auth/session-middleware';
 import { errorHandler, sendError, unknownApiRoute } from './http/error-handler';
+import { allowedHostNames, refuseUnknownHosts } from './http/host-check';
 import { HttpError } from './http/http-error';
 import { requireJsonBody } from './http/json-only';
 import { JSON_BODY_LIMIT_BYTES } from './http/limits';
@@ -31,14 +33,21 @@ export interface CreateAppOptions {
   clientDir?: string;
   /** The origin users reach the app at, e.g. https://lanewright.example.test. */
   publicOrigin?: string;
+  /** Express's `trust proxy`: which proxies may tell the client's address (sign-in limits count per address). */
+  trustProxy?: TrustProxy;
+  /** The address the server listens on and extra host names it answers to (besides loopback names). */
+  listenHost?: string;
+  allowedHosts?: readonly string[];
 }
 
 export function createApp(opts: CreateAppOptions): express.Express {
   const publicOrigin = opts.publicOrigin ? new URL(opts.publicOrigin).origin : undefined;
-  const ctx: AppContext = { ds: opts.dataSource, auth: createAuth(opts.dataSource), publicOrigin, signInLimiter: createAttemptLimiter() };
+  const ctx: AppContext = { ds: opts.dataSource, auth: createAuth(opts.dataSource), publicOrigin, signInLimiter: createSignInLimiter(opts.dataSource) };
   void prepareDecoy();
   const app = express();
   app.disable('x-powered-by');
+  app.set('trust proxy', opts.trustProxy ?? false);
+  app.use(refuseUnknownHosts(allowedHostNames({ publicOrigin, listenHost: opts.listenHost, allowedHosts: opts.allowedHosts })));
   app.set('etag', false);
   app.use(securityHeaders(publicOrigin?.startsWith('https:') ?? false));
 

@@ -23,7 +23,14 @@ export async function startServer(opts: StartServerOptions): Promise<RunningServ
   if (!opts.dataSource.isInitialized) await opts.dataSource.initialize();
   // Parsing the whole environment here makes a bad setting stop the start with a readable list.
   const config = loadConfig();
-  const app = createApp({ dataSource: opts.dataSource, clientDir: opts.clientDir, publicOrigin: opts.publicOrigin ?? config.PUBLIC_ORIGIN });
+  const app = createApp({
+    dataSource: opts.dataSource,
+    clientDir: opts.clientDir,
+    publicOrigin: opts.publicOrigin ?? config.PUBLIC_ORIGIN,
+    trustProxy: config.TRUST_PROXY,
+    listenHost: opts.host,
+    allowedHosts: config.ALLOWED_HOSTS,
+  });
   const server = app.listen(opts.port, opts.host);
   await once(server, 'listening');
   const stopSweeping = sweepExpiredSessions(opts.dataSource);

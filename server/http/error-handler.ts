@@ -45,6 +45,7 @@ function toHttpError(err: unknown): HttpError {
 
 export function sendError(res: Parameters<RequestHandler>[1], error: HttpError): void {
   const body: ApiError = { error: { code: error.code, message: error.message, fields: error.fields } };
+  res.set(error.headers);
   res.status(error.status).json(body);
 }
 

@@ -8,7 +8,7 @@ import { recordAudit } from '../audit/record-audit';
 import { hashPassword, verifyAgainstDecoy, verifyPassword } from '../auth/password';
 import { writeSessionCookie } from '../auth/session-cookie';
 import { MembershipEntity, OrganisationEntity, UserEntity } from '../db/entities';
-import { conflict, HttpError, unauthenticated } from '../http/http-error';
+import { conflict, unauthenticated } from '../http/http-error';
 import { currentUser, type SignedInUser } from '../http/request-context';
 import { validate } from '../http/validate';
 import { toMe } from '../mappers/organisations';
@@ -45,19 +45,12 @@ export function authRouter(ctx: AppContext) {
   router.post(
     '/auth/sign-in',
     validate({ body: signInSchema }, async ({ body }, req, res) => {
-      const limitKey = `${body.email}|${req.ip ?? ''}`;
-      const wait = signInLimiter.retryAfter(limitKey);
-      if (wait > 0) {
-        res.set('Retry-After', String(wait));
-        throw new HttpError(429, 'rate_limited', `Too many failed sign-in attempts; try again in ${Math.ceil(wait / 60)} minute(s).`);
-      }
+      const address = req.ip ?? '';
+      await signInLimiter.begin(body.email, address);
       const user = await ds.getRepository(UserEntity).findOneBy({ email: body.email });
       const valid = user ? await verifyPassword(user.passwordHash, body.password) : await verifyAgainstDecoy(body.password);
-      if (!user || !valid) {
-        signInLimiter.fail(limitKey);
-        throw unauthenticated('The e-mail or password is incorrect.');
-      }
-      signInLimiter.reset(limitKey);
+      if (!user || !valid) throw unauthenticated('The e-mail or password is incorrect.');
+      await signInLimiter.succeeded(body.email, address);
       await recordAudit(ds.manager, { organisationId: null, actorId: user.id, action: 'sign-in', entity: 'user', entityId: user.id });
       await startSession(req, res, { id: user.id, email: user.email, name: user.name }, 200);
     }),

@@ -7,6 +7,7 @@ import { RunEntity } from './run.entity';
 import { ScenarioRevisionEntity } from './scenario-revision.entity';
 import { ScenarioEntity } from './scenario.entity';
 import { SessionEntity } from './session.entity';
+import { SignInAttemptEntity } from './sign-in-attempt.entity';
 import { TimeStudyEntity } from './time-study.entity';
 import { UserEntity } from './user.entity';
 
@@ -19,6 +20,7 @@ export {
   ScenarioRevisionEntity,
   ScenarioEntity,
   SessionEntity,
+  SignInAttemptEntity,
   TimeStudyEntity,
   UserEntity,
 };
@@ -34,4 +36,5 @@ export const entities = [
   RunEntity,
   TimeStudyEntity,
   AuditEntryEntity,
+  SignInAttemptEntity,
 ];

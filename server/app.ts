@@ -16,6 +16,7 @@ import { requireJsonBody } from './http/json-only';
 import { JSON_BODY_LIMIT_BYTES } from './http/limits';
 import { refuseCrossOriginMutations } from './http/origin-check';
 import { securityHeaders } from './http/security-headers';
+import { noteSuspectText, refuseUnstorableText } from './http/text-check';
 import { clientRouter } from './http/static-client';
 import { auditRouter } from './routes/audit';
 import { authRouter } from './routes/auth';
@@ -58,7 +59,8 @@ export function createApp(opts: CreateAppOptions): express.Express {
     next();
   });
   api.use(exceptTimeStudyUploads(requireJsonBody));
-  api.use(express.json({ limit: JSON_BODY_LIMIT_BYTES, strict: true }));
+  api.use(express.json({ limit: JSON_BODY_LIMIT_BYTES, strict: true, verify: noteSuspectText }));
+  api.use(refuseUnstorableText);
   api.use(loadSession(ctx.auth, publicOrigin));
   for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, membersRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));
   api.use(unknownApiRoute);

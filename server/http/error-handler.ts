@@ -3,7 +3,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import { toFieldIssues, type ApiError } from '../../shared/api/errors';
-import { isUniqueViolation } from '../db/query-errors';
+import { isDatabaseUnavailable, isRefusedValue, isUniqueViolation } from '../db/query-errors';
 import { HttpError } from './http-error';
 import { JSON_BODY_LIMIT_BYTES } from './limits';
 
@@ -27,17 +27,53 @@ function bodyParserError(err: unknown): HttpError | null {
     case 'stream.encoding.set':
       return new HttpError(400, 'bad_request', 'The request body could not be read completely.');
     default:
-      return null;
+      break;
   }
+  // zlib's errors (Z_DATA_ERROR, Z_BUF_ERROR): a body labelled gzip, deflate or br that is not.
+  const zlibCode = (err as { code?: unknown } | null)?.code;
+  if (typeof zlibCode === 'string' && zlibCode.startsWith('Z_')) {
+    return new HttpError(400, 'bad_request', 'The request body is labelled with a Content-Encoding (such as gzip) but is not data in that encoding; send it uncompressed or compress it as labelled.', [{ path: 'Content-Encoding', message: 'does not match the body' }]);
+  }
+  return null;
 }
 
-function toHttpError(err: unknown): HttpError {
+/** The router failed to decode a percent-encoded part of the address (Express raises a URIError). */
+function badAddress(err: unknown, path: string): HttpError | null {
+  if (!(err instanceof URIError)) return null;
+  const segment = path.split('/').find((part) => {
+    try {
+      decodeURIComponent(part);
+      return false;
+    } catch {
+      return true;
+    }
+  });
+  return new HttpError(400, 'bad_request', `The address has malformed percent-encoding${segment ? ` in "${segment.slice(0, 60)}"` : ''}; ids are plain UUIDs.`, [{ path: 'address', message: 'has malformed percent-encoding' }]);
+}
+
+let lastOutageLog = 0;
+/** One line per outage (at most every 10 s), not a stack trace per request, while the database is away. */
+function logOutage(err: unknown): void {
+  const now = Date.now();
+  if (now - lastOutageLog < 10_000) return;
+  lastOutageLog = now;
+  console.error(`Database unavailable: ${(err instanceof Error ? err.message : String(err)).split('\n')[0].slice(0, 200)}; answering 503 until it is back.`);
+}
+
+function toHttpError(err: unknown, path: string): HttpError {
   if (err instanceof HttpError) return err;
+  const address = badAddress(err, path);
+  if (address) return address;
   if (err instanceof ZodError) return new HttpError(400, 'bad_request', 'Invalid input.', toFieldIssues(err));
   const parsed = bodyParserError(err);
   if (parsed) return parsed;
   // Two requests created the same unique thing at once; the loser hears what a later request would.
   if (isUniqueViolation(err)) return new HttpError(409, 'conflict', 'This already exists; reload and try again.');
+  if (isRefusedValue(err)) return new HttpError(400, 'bad_request', 'A value in the request is outside what can be stored (a number too large, or text that cannot be encoded).');
+  if (isDatabaseUnavailable(err)) {
+    logOutage(err);
+    return new HttpError(503, 'unavailable', 'The database is not reachable right now; nothing was changed. Try again in a moment.', [], { 'Retry-After': '5' });
+  }
   // The stack only: a failed query's error object carries its parameters, which may hold personal data.
   console.error('Unexpected server error:', err instanceof Error ? err.stack : String(err));
   return new HttpError(500, 'internal', 'Something went wrong on the server; the error has been logged.');
@@ -49,9 +85,9 @@ export function sendError(res: Parameters<RequestHandler>[1], error: HttpError):
   res.status(error.status).json(body);
 }
 
-export const errorHandler: ErrorRequestHandler = (err, _req, res, next) => {
+export const errorHandler: ErrorRequestHandler = (err, req, res, next) => {
   if (res.headersSent) return next(err);
-  sendError(res, toHttpError(err));
+  sendError(res, toHttpError(err, req.originalUrl.split('?')[0]));
 };
 
 export const unknownApiRoute: RequestHandler = (req, res) => {

@@ -16,6 +16,7 @@ export const apiErrorCodeSchema = z.enum([
   'payload_too_large',
   'unsupported_media_type',
   'rate_limited',
+  'unavailable',
   'internal',
 ]);
 

@@ -13,7 +13,7 @@ import { errorHandler, sendError, unknownApiRoute } from './http/error-handler';
 import { allowedHostNames, refuseUnknownHosts } from './http/host-check';
 import { HttpError } from './http/http-error';
 import { requireJsonBody } from './http/json-only';
-import { JSON_BODY_LIMIT_BYTES } from './http/limits';
+import { BODY_LIMITS, bodyKindOf } from './http/limits';
 import { refuseCrossOriginMutations } from './http/origin-check';
 import { securityHeaders } from './http/security-headers';
 import { noteSuspectText, refuseUnstorableText } from './http/text-check';
@@ -59,7 +59,8 @@ export function createApp(opts: CreateAppOptions): express.Express {
     next();
   });
   api.use(exceptTimeStudyUploads(requireJsonBody));
-  api.use(express.json({ limit: JSON_BODY_LIMIT_BYTES, strict: true, verify: noteSuspectText }));
+  const parsers = Object.fromEntries(Object.entries(BODY_LIMITS).map(([kind, limit]) => [kind, express.json({ limit, strict: true, verify: noteSuspectText })]));
+  api.use((req, res, next) => parsers[bodyKindOf(req)](req, res, next));
   api.use(refuseUnstorableText);
   api.use(loadSession(ctx.auth, publicOrigin));
   for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, membersRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));

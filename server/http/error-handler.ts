@@ -5,20 +5,23 @@ import { ZodError } from 'zod';
 import { toFieldIssues, type ApiError } from '../../shared/api/errors';
 import { isDatabaseUnavailable, isRefusedValue, isUniqueViolation } from '../db/query-errors';
 import { HttpError } from './http-error';
-import { JSON_BODY_LIMIT_BYTES } from './limits';
+import { formatBytes, JSON_BODY_LIMIT_BYTES } from './limits';
+import { MAX_REPORTED_ISSUES } from './validate';
 
 interface BodyParserError {
   type?: string;
   status?: number;
+  limit?: number;
 }
 
 function bodyParserError(err: unknown): HttpError | null {
   const type = (err as BodyParserError | null)?.type;
+  const limit = (err as BodyParserError | null)?.limit ?? JSON_BODY_LIMIT_BYTES;
   switch (type) {
     case 'entity.parse.failed':
       return new HttpError(400, 'bad_request', 'The request body is not valid JSON; check quotes, commas and brackets.');
     case 'entity.too.large':
-      return new HttpError(413, 'payload_too_large', `The request body is larger than the limit of ${Math.round(JSON_BODY_LIMIT_BYTES / 1048576)} MB.`);
+      return new HttpError(413, 'payload_too_large', `The request body is larger than this route's limit of ${formatBytes(limit)}.`);
     case 'encoding.unsupported':
     case 'charset.unsupported':
       return new HttpError(415, 'unsupported_media_type', 'Send the body as UTF-8 JSON.');
@@ -64,7 +67,7 @@ function toHttpError(err: unknown, path: string): HttpError {
   if (err instanceof HttpError) return err;
   const address = badAddress(err, path);
   if (address) return address;
-  if (err instanceof ZodError) return new HttpError(400, 'bad_request', 'Invalid input.', toFieldIssues(err));
+  if (err instanceof ZodError) return new HttpError(400, 'bad_request', 'Invalid input.', toFieldIssues({ issues: err.issues.slice(0, MAX_REPORTED_ISSUES) }));
   const parsed = bodyParserError(err);
   if (parsed) return parsed;
   // Two requests created the same unique thing at once; the loser hears what a later request would.

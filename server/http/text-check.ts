@@ -6,7 +6,6 @@ import type { RequestHandler } from 'express';
 import { formatPath, type FieldIssue } from '../../shared/api/errors';
 import { badRequest } from './http-error';
 
-// eslint-disable-next-line no-control-regex
 const UNSTORABLE = /\u0000|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;
 const MAX_REPORTED = 5;
 

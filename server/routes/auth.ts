@@ -6,9 +6,10 @@ import { membershipsOf } from '../access/membership';
 import type { AppContext } from '../app-context';
 import { recordAudit } from '../audit/record-audit';
 import { hashPassword, verifyAgainstDecoy, verifyPassword } from '../auth/password';
+import { passwordProblem } from '../auth/password-policy';
 import { writeSessionCookie } from '../auth/session-cookie';
 import { MembershipEntity, OrganisationEntity, UserEntity } from '../db/entities';
-import { conflict, unauthenticated } from '../http/http-error';
+import { badRequest, conflict, unauthenticated } from '../http/http-error';
 import { currentUser, type SignedInUser } from '../http/request-context';
 import { validate } from '../http/validate';
 import { toMe } from '../mappers/organisations';
@@ -28,6 +29,8 @@ export function authRouter(ctx: AppContext) {
   router.post(
     '/auth/sign-up',
     validate({ body: signUpSchema }, async ({ body }, req, res) => {
+      const weak = passwordProblem(body.password, body);
+      if (weak) throw badRequest(`Choose another password: it ${weak.message}.`, [weak]);
       const passwordHash = await hashPassword(body.password);
       const user = await ds.transaction(async (manager) => {
         const taken = await manager.getRepository(UserEntity).existsBy({ email: body.email });

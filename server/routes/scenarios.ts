@@ -7,6 +7,7 @@ import { requireRole } from '../access/require-role';
 import type { AppContext } from '../app-context';
 import { audited } from '../audit/record-audit';
 import { ScenarioEntity } from '../db/entities';
+import { assertRunnable } from '../scenarios/check-document';
 import { createScenarioWithFirstRevision } from '../scenarios/create-scenario';
 import { currentUser, loaded } from '../http/request-context';
 import { validate } from '../http/validate';
@@ -27,6 +28,7 @@ export function scenariosRouter(ctx: AppContext) {
     loadProject(ctx),
     requireRole('engineer'),
     validate({ body: createScenarioSchema }, async ({ body }, req, res) => {
+      assertRunnable(body.document);
       const project = loaded(req, 'project');
       const user = currentUser(req);
       const scenario = await audited(

@@ -37,6 +37,8 @@ export const createScenarioSchema = z.object({
   name: nameSchema,
   description: descriptionSchema.optional(),
   document: scenarioSchema,
+  /** Chosen by the client before the first attempt, so a retried create returns the first scenario (200). */
+  clientId: uuidSchema.optional(),
 });
 
 export const updateScenarioSchema = z

@@ -32,9 +32,10 @@ function bodyParserError(err: unknown): HttpError | null {
     default:
       break;
   }
-  // zlib's errors (Z_DATA_ERROR, Z_BUF_ERROR): a body labelled gzip, deflate or br that is not.
+  // zlib's errors: Z_DATA_ERROR and kin for gzip and deflate, ERR__ERROR_FORMAT_… for brotli; a body
+  // labelled with an encoding it is not in.
   const zlibCode = (err as { code?: unknown } | null)?.code;
-  if (typeof zlibCode === 'string' && zlibCode.startsWith('Z_')) {
+  if (typeof zlibCode === 'string' && (zlibCode.startsWith('Z_') || zlibCode.startsWith('ERR__ERROR_'))) {
     return new HttpError(400, 'bad_request', 'The request body is labelled with a Content-Encoding (such as gzip) but is not data in that encoding; send it uncompressed or compress it as labelled.', [{ path: 'Content-Encoding', message: 'does not match the body' }]);
   }
   return null;

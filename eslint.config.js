@@ -29,6 +29,21 @@ export default tseslint.config(
     },
   },
   {
+    // Environment variables are read through one parsed configuration per program: the server's
+    // (server/config.ts), the set-up scripts' (server/setup/setup-config.ts) and the test run's
+    // (tests/support/test-env.ts). Passing the whole environment on to a child process is fine.
+    ignores: ['server/config.ts', 'server/setup/setup-config.ts', 'tests/support/test-env.ts', 'server/setup/ensure-deps.mjs'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector: "MemberExpression[object.type='MemberExpression'][object.object.name='process'][object.property.name='env']",
+          message: 'Read environment variables through the parsed configuration (server/config.ts, server/setup/setup-config.ts or tests/support/test-env.ts).',
+        },
+      ],
+    },
+  },
+  {
     files: ['workers/engine/**'],
     rules: {
       'no-restricted-globals': ['error', 'window', 'document', 'process', 'Buffer'],

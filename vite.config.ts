@@ -2,8 +2,10 @@
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
+import { loadConfig } from './server/config';
 
-const apiPort = Number(process.env.PORT ?? 3000);
+// The dev server's /api proxy points at the API's port, read through the server's parsed configuration.
+const apiPort = loadConfig().PORT;
 
 export default defineConfig({
   plugins: [react(), tailwindcss()],
@@ -23,6 +25,8 @@ export default defineConfig({
           name: 'unit',
           environment: 'node',
           include: ['tests/engine/**/*.test.ts', 'tests/reference/**/*.test.ts', 'tests/shared/**/*.test.ts'],
+          // Simulation tests take seconds on a loaded 2-core machine; speed is measured by `npm run bench`, not here.
+          testTimeout: 60_000,
         },
       },
       {

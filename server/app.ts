@@ -21,6 +21,7 @@ import { clientRouter } from './http/static-client';
 import { auditRouter } from './routes/audit';
 import { authRouter } from './routes/auth';
 import { membersRouter } from './routes/members';
+import { priceListsRouter } from './routes/price-lists';
 import { projectsRouter } from './routes/projects';
 import { revisionsRouter } from './routes/revisions';
 import { runsRouter } from './routes/runs';
@@ -63,7 +64,7 @@ export function createApp(opts: CreateAppOptions): express.Express {
   api.use((req, res, next) => parsers[bodyKindOf(req)](req, res, next));
   api.use(refuseUnstorableText);
   api.use(loadSession(ctx.auth, publicOrigin));
-  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, membersRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));
+  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, membersRouter, priceListsRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));
   api.use(unknownApiRoute);
   app.use('/api', api);
 

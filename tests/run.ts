@@ -1,5 +1,6 @@
-// `npm test`: PostgreSQL and fresh test databases, Chromium, the client build the browser
-// tests serve, then `vitest run` over every project (extra arguments pass through). The run always ends
+// `npm test`: the type check and the lint (whole runs only), PostgreSQL and fresh test databases,
+// Chromium, the client build the browser tests serve, then `vitest run` over every project (extra
+// arguments pass through and skip the static checks). The run always ends
 // with the plain line `N passed, N failed` from tests/support/plain-summary-reporter.ts, printed here after
 // clean-up so that it stays the last line.
 import { spawn } from 'node:child_process';
@@ -13,6 +14,7 @@ import { createDatabase, dropDatabase, ensureLocalPostgres, type LocalPostgres }
 import { redactUrl, reportFailure, say } from '../server/setup/log';
 import { projectRoot } from '../server/setup/paths';
 import { CHROMIUM_PATH } from './support/chromium-path';
+import { reportStaticChecks, startStaticChecks, type StaticCheckResult } from './support/static-checks';
 import { BROWSER_TEST_DATABASE, TEST_DATABASE } from './support/test-database';
 
 const REPORTER = './tests/support/plain-summary-reporter.ts';
@@ -64,6 +66,11 @@ async function main(): Promise<number> {
   let server: LocalPostgres | undefined;
   let exitCode = 1;
   let setupFailures = 0;
+  const args = process.argv.slice(2);
+  // A filtered run is someone iterating on a few files; the whole-tree checks would double its time.
+  const staticChecks: Promise<StaticCheckResult[]> = args.length === 0 ? startStaticChecks() : Promise.resolve([]);
+  if (args.length > 0) say('filtered run: the type check and lint are skipped (npm run typecheck, npm run lint)');
+  let staticCounts: { passed: number; failed: number } | undefined;
   try {
     server = await ensureLocalPostgres();
     const databaseUrl = server.url(TEST_DATABASE);
@@ -97,8 +104,10 @@ async function main(): Promise<number> {
       LANEWRIGHT_SUMMARY_FILE: summaryFile,
     };
     delete env.FORCE_COLOR;
+    // The checks ran beside the database set-up; their lines come before vitest's output.
+    staticCounts = reportStaticChecks(await staticChecks);
     if (interrupted) throw new Error('interrupted before the tests started');
-    exitCode = await runVitest(process.argv.slice(2), env);
+    exitCode = await runVitest(args, env);
   } catch (error) {
     reportFailure(error);
     setupFailures += 1;
@@ -106,19 +115,22 @@ async function main(): Promise<number> {
     await server?.stop().catch(reportFailure);
     release();
   }
+  // A set-up failure skips vitest, not the checks already running: they still count.
+  staticCounts ??= reportStaticChecks(await staticChecks);
 
   const vitestLine = existsSync(summaryFile) ? readFileSync(summaryFile, 'utf8').trim() : undefined;
   rmSync(workDir, { recursive: true, force: true });
   const [passed, failed, skipped] = (vitestLine?.match(/\d+/g) ?? ['0', '0', '0']).map(Number);
   // A failing exit with nothing counted (no test file matched, a config error) still counts as one failure.
   const unexplained = exitCode !== 0 && setupFailures === 0 && !failed ? 1 : 0;
-  const failures = (failed ?? 0) + setupFailures + unexplained;
+  const failures = (failed ?? 0) + setupFailures + unexplained + staticCounts.failed;
   if (unexplained) {
     const why = interrupted ? 'the run was interrupted' : `vitest exited with code ${exitCode} although no test failed`;
     say(`${why}; counted as one failure`);
   }
   if (setupFailures > 0) say(`${setupFailures} set-up step(s) failed (counted as failures below)`);
-  console.log(`${passed ?? 0} passed, ${failures} failed${skipped ? `, ${skipped} skipped` : ''}`);
+  if (staticCounts.failed > 0) say(`${staticCounts.failed} static check(s) failed (counted as failures below)`);
+  console.log(`${(passed ?? 0) + staticCounts.passed} passed, ${failures} failed${skipped ? `, ${skipped} skipped` : ''}`);
   return failures > 0 ? Math.max(exitCode, 1) : exitCode;
 }
 

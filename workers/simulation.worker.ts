@@ -2,8 +2,16 @@
 // Progress comes back through a proxied callback (Comlink.proxy on the caller's side); cancel() sets
 // a flag the engine checks between slices.
 import * as Comlink from 'comlink';
-import { createWorkerApi } from './engine/worker-api';
+import { createWorkerApi, traceBuffers } from './engine/worker-api';
 
-export type { SimulationWorkerApi, WorkerOutcome } from './engine/worker-api';
+export type { PlaybackOutcome, SimulationWorkerApi, WorkerOutcome } from './engine/worker-api';
 
-Comlink.expose(createWorkerApi(() => performance.now()));
+const api = createWorkerApi(() => performance.now());
+// A playback trace is tens of megabytes at most: its buffers move to the page instead of being copied.
+Comlink.expose({
+  ...api,
+  playback: async (...args: Parameters<typeof api.playback>) => {
+    const outcome = await api.playback(...args);
+    return outcome.ok ? Comlink.transfer(outcome, traceBuffers(outcome.trace)) : outcome;
+  },
+});

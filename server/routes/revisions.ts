@@ -12,6 +12,7 @@ import { currentUser, loaded } from '../http/request-context';
 import { validate } from '../http/validate';
 import { toRevision, toRevisionSummary } from '../mappers/scenarios';
 import { assertRunnable } from '../scenarios/check-document';
+import { touchProject } from '../projects/touch-project';
 import { latestRevisionIdOf } from './scenario-queries';
 
 export function revisionsRouter(ctx: AppContext) {
@@ -57,7 +58,9 @@ export function revisionsRouter(ctx: AppContext) {
           ]);
         }
         const revision = await manager.getRepository(ScenarioRevisionEntity).save({ scenarioId: scenario.id, number: latest.number + 1, document: body.document, message: body.message ?? '', createdById: user.id });
-        await manager.getRepository(ScenarioEntity).update({ id: scenario.id }, { latestRevisionId: revision.id });
+        // The document's name is the scenario's name: saving a new one renames the scenario.
+        await manager.getRepository(ScenarioEntity).update({ id: scenario.id }, { latestRevisionId: revision.id, name: body.document.name });
+        await touchProject(manager, locked.projectId);
         await recordAudit(manager, { organisationId: scenario.project?.organisationId ?? null, actorId: user.id, action: 'create', entity: 'revision', entityId: revision.id, detail: { scenarioId: scenario.id, number: revision.number } });
         return revision.id;
       });

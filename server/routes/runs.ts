@@ -12,6 +12,7 @@ import { isUniqueViolation } from '../db/query-errors';
 import { badRequest, conflict, forbidden } from '../http/http-error';
 import { currentUser, loaded } from '../http/request-context';
 import { validate } from '../http/validate';
+import { touchProject } from '../projects/touch-project';
 import { summariseRun } from '../runs/summarise-run';
 import { listRuns, runDetail, runListItem } from './run-queries';
 
@@ -70,8 +71,9 @@ export function runsRouter(ctx: AppContext) {
       try {
         const run = await audited(
           ds,
-          (manager) =>
-            manager.getRepository(RunEntity).save({
+          async (manager) => {
+            await touchProject(manager, scenario.projectId);
+            return manager.getRepository(RunEntity).save({
               scenarioId: scenario.id,
               revisionId: revision.id,
               clientRunId: body.clientRunId,
@@ -85,7 +87,8 @@ export function runsRouter(ctx: AppContext) {
               summary,
               results: body.results,
               createdById: user.id,
-            }),
+            });
+          },
           (saved) => ({ organisationId: scenario.project?.organisationId ?? null, actorId: user.id, action: 'run', entity: 'run', entityId: saved.id, detail: { scenarioId: scenario.id, revisionNumber: revision.number } }),
         );
         res.status(201).json(await runListItem(ds, run.id));

@@ -9,6 +9,7 @@ import { audited } from '../audit/record-audit';
 import { createOnce } from '../db/create-once';
 import { ScenarioEntity } from '../db/entities';
 import { assertRunnable } from '../scenarios/check-document';
+import { touchProject } from '../projects/touch-project';
 import { createScenarioWithFirstRevision } from '../scenarios/create-scenario';
 import { currentUser, loaded } from '../http/request-context';
 import { validate } from '../http/validate';
@@ -57,7 +58,10 @@ export function scenariosRouter(ctx: AppContext) {
     requireRole('engineer'),
     validate({ body: updateScenarioSchema }, async ({ body }, req, res) => {
       const scenario = loaded(req, 'scenario');
-      await audited(ds, (manager) => manager.getRepository(ScenarioEntity).update({ id: scenario.id }, body), {
+      await audited(ds, async (manager) => {
+        await manager.getRepository(ScenarioEntity).update({ id: scenario.id }, body);
+        await touchProject(manager, scenario.projectId);
+      }, {
         organisationId: scenario.project?.organisationId ?? null,
         actorId: currentUser(req).id,
         action: 'update',
@@ -71,7 +75,10 @@ export function scenariosRouter(ctx: AppContext) {
 
   router.delete('/scenarios/:id', loadScenario(ctx), requireRole('engineer'), async (req, res) => {
     const scenario = loaded(req, 'scenario');
-    await audited(ds, (manager) => manager.getRepository(ScenarioEntity).delete({ id: scenario.id }), {
+    await audited(ds, async (manager) => {
+      await manager.getRepository(ScenarioEntity).delete({ id: scenario.id });
+      await touchProject(manager, scenario.projectId);
+    }, {
       organisationId: scenario.project?.organisationId ?? null,
       actorId: currentUser(req).id,
       action: 'delete',

@@ -1,15 +1,14 @@
 // What `npm start` and `npm run dev` print around the server's own settings (server/config.ts).
+import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../db/seed/demo';
 import { SetupError } from './log';
 
 export const HTTP_HOST = '127.0.0.1';
 
-export const DEMO_ACCOUNTS = ['owner', 'engineer', 'viewer'].map((role) => `${role}@demo.lanewright.test`);
-export const DEMO_PASSWORD = 'demo-password';
 
 export function demoSignInText(): string {
   return [
     `Demo sign-in (password for each: ${DEMO_PASSWORD}):`,
-    ...DEMO_ACCOUNTS.map((email) => `  ${email}`),
+    ...DEMO_ACCOUNTS.map(({ email }) => `  ${email}`),
     'Turn the demo off for a real deployment: LANEWRIGHT_DEMO=off, and delete the demo users.',
   ].join('\n');
 }

@@ -12,10 +12,10 @@ import { projectRoot } from './paths';
 import { requirePgBinaries, type PgBinaries } from './postgres-binaries';
 import { chooseClusterPaths, prepareClusterFolders, type ClusterPaths } from './postgres-folder';
 import { runCommand } from './run-command';
+import { loadSetupConfig } from './setup-config';
 
 export { createDatabase, dropDatabase, databaseName, withDatabase } from './databases';
 
-export const DEFAULT_PG_PORT = 54329;
 const HOST = '127.0.0.1';
 const SUPERUSER = 'postgres';
 
@@ -32,16 +32,6 @@ export interface LocalPostgres {
   external: boolean;
   /** The cluster's folders (undefined for an external server). */
   paths?: ClusterPaths;
-}
-
-function requestedPort(): number {
-  const raw = process.env.LANEWRIGHT_PG_PORT;
-  if (raw === undefined || raw === '') return DEFAULT_PG_PORT;
-  const port = Number(raw);
-  if (!Number.isInteger(port) || port < 1024 || port > 65535) {
-    throw new SetupError(`LANEWRIGHT_PG_PORT must be a whole number from 1024 to 65535, got "${raw}"`);
-  }
-  return port;
 }
 
 function externalServer(url: string): LocalPostgres {
@@ -138,8 +128,9 @@ function clusterMajor(paths: ClusterPaths): number | undefined {
 }
 
 export async function ensureLocalPostgres(): Promise<LocalPostgres> {
-  if (process.env.DATABASE_URL) return externalServer(process.env.DATABASE_URL);
-  const wantedPort = requestedPort();
+  const config = loadSetupConfig();
+  if (config.DATABASE_URL) return externalServer(config.DATABASE_URL);
+  const wantedPort = config.LANEWRIGHT_PG_PORT;
   // First, since installing the package is also what creates the `postgres` user the folders are checked for.
   const newest = requirePgBinaries();
   const paths = chooseClusterPaths(projectRoot);

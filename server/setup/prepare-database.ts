@@ -6,6 +6,7 @@ import { loadConfig } from '../config';
 import { createDataSource } from '../db/data-source';
 import { runMigrations } from '../db/migrate';
 import { seedDemo } from '../db/seed/demo';
+import { seedDemoPrices } from '../db/seed/demo-prices';
 import { createDatabase, ensureLocalPostgres } from './local-postgres';
 import { redactUrl, say, SetupError } from './log';
 import { onCleanup } from './shutdown';
@@ -27,7 +28,7 @@ function connectionHelp(url: string, error: unknown): SetupError {
 export async function prepareDatabase(options: { seed: boolean }): Promise<DataSource> {
   const server = await ensureLocalPostgres();
   onCleanup(() => server.stop());
-  const url = server.external ? process.env.DATABASE_URL! : server.url(APP_DATABASE);
+  const url = server.external ? loadConfig().DATABASE_URL! : server.url(APP_DATABASE);
   if (!server.external && (await createDatabase(url))) say(`created database ${APP_DATABASE}`);
 
   const dataSource = createDataSource(url);
@@ -45,6 +46,7 @@ export async function prepareDatabase(options: { seed: boolean }): Promise<DataS
   if (!options.seed) return dataSource;
   if (demoEnabled()) {
     await seedDemo(dataSource);
+    await seedDemoPrices(dataSource);
     say('demo organisation is in place');
   } else {
     say('LANEWRIGHT_DEMO=off: the demo organisation is not seeded');

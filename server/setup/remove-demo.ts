@@ -2,11 +2,13 @@
 // go with them) and each organisation that only demo users belonged to (with its projects, scenarios and
 // runs). Organisations that real users also joined are kept.
 //   LANEWRIGHT_DEMO=off npx tsx server/setup/remove-demo.ts
+import { loadConfig } from '../config';
+import { DEMO_EMAIL_DOMAIN } from '../db/seed/demo';
 import { say } from './log';
 import { prepareDatabase } from './prepare-database';
 import { cleanUp, failAndExit } from './shutdown';
 
-const DEMO_EMAILS = '%@demo.lanewright.test';
+const DEMO_EMAILS = `%@${DEMO_EMAIL_DOMAIN}`;
 
 async function main(): Promise<void> {
   const dataSource = await prepareDatabase({ seed: false });
@@ -29,7 +31,7 @@ async function main(): Promise<void> {
     );
     say(`removed ${users} demo user(s) and ${organisations} organisation(s) that only demo users belonged to`);
   });
-  if (process.env.LANEWRIGHT_DEMO !== 'off') say('start with LANEWRIGHT_DEMO=off from now on, or the next start seeds the demo again');
+  if (loadConfig().LANEWRIGHT_DEMO !== 'off') say('start with LANEWRIGHT_DEMO=off from now on, or the next start seeds the demo again');
   await cleanUp();
 }
 

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { isoDateSchema, userRefSchema, uuidSchema } from './common';
 
 export const auditActionSchema = z.enum(['create', 'update', 'delete', 'run', 'restore', 'sign-in', 'member-add', 'member-update', 'member-remove']);
-export const auditEntitySchema = z.enum(['organisation', 'member', 'project', 'scenario', 'revision', 'run', 'user']);
+export const auditEntitySchema = z.enum(['organisation', 'member', 'project', 'scenario', 'revision', 'run', 'user', 'price-list']);
 
 export const auditEntrySchema = z.object({
   id: uuidSchema,

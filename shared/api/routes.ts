@@ -19,4 +19,5 @@ export const apiRoutes = {
   members: (organisationId: string) => `/api/organisations/${organisationId}/members`,
   member: (organisationId: string, userId: string) => `/api/organisations/${organisationId}/members/${userId}`,
   audit: (organisationId: string) => `/api/organisations/${organisationId}/audit`,
+  priceList: (organisationId: string) => `/api/organisations/${organisationId}/price-list`,
 } as const;

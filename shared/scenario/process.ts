@@ -1,11 +1,15 @@
 // The process a part goes through, in order: load, process and inspect steps, unload. Each step is
-// served by one or more stations at positions on lanes; a dispatch rule picks among them.
+// served by one or more stations at positions on lanes; a dispatch rule picks among them. "pooled"
+// decides where the routes to the stations part, with the queues as they are then; the other rules
+// fix the station when the carrier leaves the previous step.
 import { z } from 'zod';
 import { distributionSchema } from './distribution';
 import { distributionMean } from './distribution-moments';
 import { idSchema, labelSchema, nonNegative, share } from './units';
 
-export const DISPATCH_RULES = ['firstFree', 'shortestQueue', 'roundRobin'] as const;
+export const DISPATCH_RULES = ['pooled', 'firstFree', 'shortestQueue', 'roundRobin'] as const;
+/** New steps, and documents written before the rule existed that leave it out, pool their stations. */
+export const DEFAULT_DISPATCH = 'pooled' satisfies (typeof DISPATCH_RULES)[number];
 export const STEP_KINDS = ['load', 'process', 'inspect', 'unload'] as const;
 export const STATION_OPERATIONS = ['automatic', 'manual'] as const;
 
@@ -49,7 +53,7 @@ const stepBase = {
   stations: z
     .array(stationSchema, { error: 'stations must be a list' })
     .max(PROCESS_LIMITS.stationsPerStepMax, `a step may have at most ${PROCESS_LIMITS.stationsPerStepMax} stations`),
-  dispatch: z.enum(DISPATCH_RULES, { error: `dispatch must be one of ${DISPATCH_RULES.join(', ')}` }).default('firstFree'),
+  dispatch: z.enum(DISPATCH_RULES, { error: `dispatch must be one of ${DISPATCH_RULES.join(', ')}` }).default(DEFAULT_DISPATCH),
 };
 
 export const loadStepSchema = z.object({ ...stepBase, kind: z.literal('load') });

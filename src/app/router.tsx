@@ -38,6 +38,18 @@ const signedInPages: RouteObject[] = [
     lazy: async () => ({ Component: (await import('../features/runs/routes/project-runs-route')).ProjectRunsRoute }),
   },
   {
+    path: '/projects/:projectId/compare',
+    lazy: async () => ({ Component: (await import('./routes/compare/compare-route')).CompareRoute }),
+  },
+  {
+    path: '/projects/:projectId/compare/report',
+    lazy: async () => ({ Component: (await import('./routes/compare/compare-report-route')).CompareReportRoute }),
+  },
+  {
+    path: '/runs/:runId/playback',
+    lazy: async () => ({ Component: (await import('./routes/playback-route')).PlaybackRoute }),
+  },
+  {
     path: '/runs/:runId',
     lazy: async () => ({ Component: (await import('../features/results/routes/run-route')).RunRoute }),
   },

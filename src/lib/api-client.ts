@@ -104,5 +104,6 @@ export const api = {
   post: <S extends z.ZodType>(path: string, body: unknown, schema: S) => request('POST', path, schema, { body }),
   postForm: <S extends z.ZodType>(path: string, form: FormData, schema: S) => request('POST', path, schema, { form }),
   patch: <S extends z.ZodType>(path: string, body: unknown, schema: S) => request('PATCH', path, schema, { body }),
+  put: <S extends z.ZodType>(path: string, body: unknown, schema: S) => request('PUT', path, schema, { body }),
   delete: <S extends z.ZodType>(path: string, schema: S) => request('DELETE', path, schema),
 };

@@ -1,8 +1,9 @@
 // The demo organisation: seeded once with three roles, one project and two scenarios from the published
 // examples; seeding again changes nothing, not even what users changed in the demo.
 import request from 'supertest';
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { apiRoutes } from '../../shared/api/routes';
+import { loadConfig } from '../../server/config';
 import { DEMO_ACCOUNTS, DEMO_ORGANISATION_ID, DEMO_PASSWORD, seedDemo } from '../../server/db/seed/demo';
 import { OrganisationEntity, ProjectEntity, ScenarioRevisionEntity, UserEntity } from '../../server/db/entities';
 import { useCleanDatabase } from './fixtures/database';
@@ -20,10 +21,6 @@ async function snapshot() {
   );
   return Object.fromEntries(rows);
 }
-
-afterEach(() => {
-  delete process.env.LANEWRIGHT_DEMO;
-});
 
 describe('demo seed', () => {
   it('creates the three demo accounts with their roles and the project with two scenarios at revision 1', async () => {
@@ -58,8 +55,7 @@ describe('demo seed', () => {
   });
 
   it('is skipped when LANEWRIGHT_DEMO=off', async () => {
-    process.env.LANEWRIGHT_DEMO = 'off';
-    await seedDemo(db());
+    await seedDemo(db(), loadConfig({ LANEWRIGHT_DEMO: 'off' }));
     expect(await db().getRepository(OrganisationEntity).count()).toBe(0);
     expect(await db().getRepository(UserEntity).count()).toBe(0);
   });

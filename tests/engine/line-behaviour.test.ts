@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { isSimulationStopped, runExperiment } from '../../workers/engine';
+import { isSimulationStopped, runExperiment, validateScenario } from '../../workers/engine';
 import { serialLine } from '../../workers/engine/testing/line-builder';
 import { checkedRun, exampleFiles, loadExample } from './helpers';
 
@@ -98,7 +98,7 @@ describe('line behaviour', () => {
 });
 
 describe('dispatch', () => {
-  function parallelPositions(dispatch: 'shortestQueue' | 'firstFree') {
+  function parallelPositions(dispatch: 'pooled' | 'shortestQueue' | 'firstFree') {
     const doc = serialLine({ stations: [{ cycle: fixed(1) }, { cycle: fixed(20) }, { cycle: fixed(1), bufferBefore: 2 }], carriers: 6 });
     const step = doc.steps[1];
     step.dispatch = dispatch;
@@ -111,6 +111,19 @@ describe('dispatch', () => {
     // Two 20 s positions side by side on one lane make a part every 10 s.
     expect(r.throughputPerHour.mean).toBeGreaterThan(340);
     for (const s of r.stations.filter((st) => st.stepId === 'step-S2')) expect(s.processing).toBeGreaterThan(0.95);
+  });
+
+  it('pooled decides at the first of two parallel positions on a lane, so both work', async () => {
+    const r = await checkedRun(parallelPositions('pooled'), { hours: 1, warmupMinutes: 10, replications: 1 });
+    expect(r.throughputPerHour.mean).toBeGreaterThan(340);
+    for (const s of r.stations.filter((st) => st.stepId === 'step-S2')) expect(s.processing).toBeGreaterThan(0.95);
+  });
+
+  it('a document without a dispatch rule pools its parallel stations', () => {
+    const doc = parallelPositions('pooled') as { steps: Record<string, unknown>[] };
+    delete doc.steps[1].dispatch;
+    const checked = validateScenario(doc);
+    expect(checked.ok && checked.scenario.steps[1].dispatch).toBe('pooled');
   });
 
   it('first free fills stations in the order listed, even when the first blocks the way to the second', async () => {

@@ -18,6 +18,28 @@ describe('exact Mean Value Analysis (Reiser & Lavenberg, J. ACM 27(2), 1980)', (
     for (let n = 1; n <= 8; n++) expect(x[n - 1]).toBeCloseTo(n / (3 * (n + 1)), 12);
   });
 
+  it('a two-server station and a delay equals the finite-source queue with two servers (machine repair with two repairers; Gross & Harris, "Fundamentals of Queueing Theory", 3rd ed. 1998, §2.8, recalled from memory)', () => {
+    // p_j ∝ N!/(N − j)! · (s/z)^j / β(j), β(j) = j! for j ≤ c and c! c^(j − c) beyond; X = Σ p_j min(j, c) / s.
+    const [s, z, c] = [5, 6, 2];
+    const x = mvaThroughput([s], z, 8, [c]);
+    for (let n = 1; n <= 8; n++) {
+      let term = 1;
+      const weights = [1];
+      for (let j = 1; j <= n; j++) {
+        term *= ((n - j + 1) * (s / z)) / Math.min(j, c);
+        weights.push(term);
+      }
+      const total = weights.reduce((a, b) => a + b, 0);
+      const closedForm = weights.reduce((sum, w, j) => sum + (w / total) * (Math.min(j, c) / s), 0);
+      expect(x[n - 1]).toBeCloseTo(closedForm, 12);
+    }
+  });
+
+  it('as many servers as customers: no one queues, X(n) = n / (Z + Σ s_k)', () => {
+    const x = mvaThroughput([2, 3], 4, 5, [5, 5]);
+    for (let n = 1; n <= 5; n++) expect(x[n - 1]).toBeCloseTo(n / 9, 12);
+  });
+
   it('throughput rises with the population towards the bottleneck rate 1 / max s_k', () => {
     const x = mvaThroughput([2, 4, 3], 6, 60);
     for (let n = 1; n < x.length; n++) expect(x[n]).toBeGreaterThan(x[n - 1]);

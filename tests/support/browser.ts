@@ -12,6 +12,7 @@ import type { DataSource } from 'typeorm';
 import { createDataSource } from '../../server/db/data-source';
 import { runMigrations } from '../../server/db/migrate';
 import { seedDemo } from '../../server/db/seed/demo';
+import { seedDemoPrices } from '../../server/db/seed/demo-prices';
 import { startServer } from '../../server/index';
 import { clientOutDir, projectRoot } from '../../server/setup/paths';
 import { CHROMIUM_PATH } from './chromium-path';
@@ -63,7 +64,9 @@ export async function startTestApp(): Promise<TestApp> {
   await dataSource.initialize();
   try {
     await runMigrations(dataSource);
-    await seedDemo(dataSource);
+    // The browser tests sign in as the demo accounts, whatever LANEWRIGHT_DEMO says.
+    await seedDemo(dataSource, { LANEWRIGHT_DEMO: 'on' });
+    await seedDemoPrices(dataSource);
     const server = await startServer({ dataSource, port: await freePort(), host: HOST, clientDir: clientOutDir });
     return {
       url: server.url,

@@ -1,2 +1,4 @@
 // Debian's Chromium, which the browser tests drive through playwright-core (no browser download).
-export const CHROMIUM_PATH = process.env.LANEWRIGHT_CHROMIUM ?? '/usr/bin/chromium';
+import { testEnv } from './test-env';
+
+export const CHROMIUM_PATH = testEnv().LANEWRIGHT_CHROMIUM;

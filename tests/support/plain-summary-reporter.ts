@@ -4,6 +4,7 @@
 // LANEWRIGHT_SUMMARY_FILE, the line is written there instead, so the runner can print it after its own
 // clean-up and keep it last.
 import { writeFileSync } from 'node:fs';
+import { testEnv } from './test-env';
 import type { Reporter, SerializedError, TestModule, TestSuite } from 'vitest/node';
 
 export interface RunCounts {
@@ -44,7 +45,7 @@ export function summaryLine({ passed, failed, skipped }: RunCounts): string {
 export default class PlainSummaryReporter implements Reporter {
   onTestRunEnd(testModules: ReadonlyArray<TestModule>, unhandledErrors: ReadonlyArray<SerializedError>): void {
     const line = summaryLine(countResults(testModules, unhandledErrors));
-    const target = process.env.LANEWRIGHT_SUMMARY_FILE;
+    const target = testEnv().LANEWRIGHT_SUMMARY_FILE;
     if (target) writeFileSync(target, `${line}\n`);
     else console.log(line);
   }

@@ -6,3 +6,4 @@ export { ksStatistic, ksPValue, kolmogorovSurvival } from './kolmogorov-smirnov'
 export { fitNormal, fitLognormal, fitGamma, type Estimate, type NormalParameters, type LognormalParameters, type GammaParameters } from './maximum-likelihood';
 export { summarise, histogram, quantileSorted, HISTOGRAM_MAX_BINS } from './describe-samples';
 export { lnGamma, digamma, trigamma, regularizedLowerGamma, standardNormalCdf } from './special-functions';
+export { pairedDifference, welchDifference, type MeanDifference, type DifferenceMethod } from './compare-means';

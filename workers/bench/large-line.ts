@@ -2,6 +2,8 @@
 // decks and a return deck of two lanes), elevators between the decks, a lateral transfer on the
 // return deck, 20 stations in 17 steps with every kind of cycle-time distribution, failures on the
 // automatic stations, manual stations that stop for the breaks of one 8-hour shift, and 50 carriers.
+// For measuring how costs grow with the line's size, the work decks can be repeated: each copy adds
+// 12 m to the upper and middle lanes and the 17 stations of their steps (and 50 carriers).
 // An invented line; all numbers are our own choices.
 import type { Distribution } from '../../shared/scenario/distribution';
 import type { ScenarioInput } from '../../shared/scenario/scenario';
@@ -10,11 +12,11 @@ type StationSpec = { id: string; lane: string; at: number; cycle: Distribution; 
 type StepSpec = { id: string; kind: 'load' | 'process' | 'inspect' | 'unload'; stations: StationSpec[]; dispatch?: 'firstFree' | 'shortestQueue' | 'roundRobin' };
 
 const LANE_MM = 12_000;
-const lane = (id: string, deckId: string, x: number, y: number, heading: 'east' | 'west') => ({
+const lane = (id: string, deckId: string, x: number, y: number, heading: 'east' | 'west', copies = 1) => ({
   id,
   name: id,
   deckId,
-  modules: [{ lengthMm: 1_000, count: LANE_MM / 1_000 }],
+  modules: [{ lengthMm: 1_000, count: (copies * LANE_MM) / 1_000 }],
   start: { xMm: x, yMm: y },
   heading,
 });
@@ -49,7 +51,25 @@ const STEPS: StepSpec[] = [
   { id: 'unload', kind: 'unload', stations: [{ id: 'UL', lane: 'low-out', at: 2_400, cycle: { kind: 'fixed', value: 3 } }] },
 ];
 
+/** Steps of the work decks (upper and middle lane), which a larger bench line repeats. */
+const REPEATED = new Set(['top', 'mid']);
+
+/** Copy k of a work-deck step: ids suffixed, positions 12 m further along its lane. */
+function copyOf(s: StepSpec, k: number): StepSpec {
+  if (k === 0) return s;
+  return { ...s, id: `${s.id}-${k}`, stations: s.stations.map((st) => ({ ...st, id: `${st.id}-${k}`, at: st.at + k * LANE_MM })) };
+}
+
+function stepsFor(copies: number): StepSpec[] {
+  const load = STEPS.filter((s) => s.kind === 'load');
+  const onLane = (lane: string) => STEPS.filter((s) => s.kind !== 'load' && s.stations[0].lane === lane);
+  const repeated = (lane: string) => Array.from({ length: copies }, (_, k) => onLane(lane).map((s) => copyOf(s, k))).flat();
+  const rest = STEPS.filter((s) => s.kind !== 'load' && !REPEATED.has(s.stations[0].lane));
+  return [...load, ...repeated('top'), ...repeated('mid'), ...rest];
+}
+
 function step(s: StepSpec, index: number) {
+  const copy = s.id.includes('-') ? s.id.slice(s.id.indexOf('-')) : '';
   const base = {
     id: s.id,
     name: s.id,
@@ -68,15 +88,15 @@ function step(s: StepSpec, index: number) {
         : {}),
     })),
   };
-  if (s.id === 'probe') return { ...base, rejectShare: 0.01, reworkShare: 0.03, reworkStepId: 'glue' };
-  if (s.id === 'leak') return { ...base, rejectShare: 0.015, reworkShare: 0.02, reworkStepId: 'screw' };
-  if (s.id === 'final') return { ...base, rejectShare: 0.005 };
+  if (s.id === `probe${copy}`) return { ...base, rejectShare: 0.01, reworkShare: 0.03, reworkStepId: `glue${copy}` };
+  if (s.id === `leak${copy}`) return { ...base, rejectShare: 0.015, reworkShare: 0.02, reworkStepId: `screw${copy}` };
+  if (s.id === `final${copy}`) return { ...base, rejectShare: 0.005 };
   return base;
 }
 
-export const LARGE_LINE_STATIONS = STEPS.reduce((n, s) => n + s.stations.length, 0);
+export const largeLineStations = (copies = 1) => stepsFor(copies).reduce((n, s) => n + s.stations.length, 0);
 
-export function largeLine(carriers = 50): ScenarioInput {
+export function largeLine(carriers = 50, copies = 1): ScenarioInput {
   return {
     schemaVersion: 1,
     name: 'Bench: three-deck sensor-module line',
@@ -88,8 +108,8 @@ export function largeLine(carriers = 50): ScenarioInput {
       { id: 'lower', name: 'Return deck', elevationMm: 700 },
     ],
     lanes: [
-      lane('top', 'upper', 0, 0, 'east'),
-      lane('mid', 'middle', LANE_MM, 0, 'west'),
+      lane('top', 'upper', 0, 0, 'east', copies),
+      lane('mid', 'middle', copies * LANE_MM, 0, 'west', copies),
       lane('low-out', 'lower', 0, 0, 'east'),
       lane('low-back', 'lower', LANE_MM, 600, 'west'),
     ],
@@ -107,7 +127,7 @@ export function largeLine(carriers = 50): ScenarioInput {
       loaded: { vMaxMmPerS: 2_000, aMaxMmPerS2: 10_000, jMaxMmPerS3: 400_000 },
       empty: { vMaxMmPerS: 2_500, aMaxMmPerS2: 20_000 },
     },
-    steps: STEPS.map(step),
+    steps: stepsFor(copies).map(step),
     calendar: {
       shiftsPerDay: 1,
       hoursPerShift: 8,

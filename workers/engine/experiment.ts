@@ -47,7 +47,7 @@ export class InvalidInputError extends Error {
   }
 }
 
-function prepare(scenarioInput: unknown, settingsInput: unknown): { scenario: Scenario; settings: RunSettings } {
+export function prepare(scenarioInput: unknown, settingsInput: unknown): { scenario: Scenario; settings: RunSettings } {
   const checked = validateScenario(scenarioInput);
   if (!checked.ok) throw new InvalidInputError(checked.issues);
   const parsed = runSettingsSchema.safeParse(settingsInput ?? {});

@@ -2,6 +2,7 @@
 import { AuditEntryEntity } from './audit-entry.entity';
 import { MembershipEntity } from './membership.entity';
 import { OrganisationEntity } from './organisation.entity';
+import { PriceListEntity } from './price-list.entity';
 import { ProjectEntity } from './project.entity';
 import { RunEntity } from './run.entity';
 import { ScenarioRevisionEntity } from './scenario-revision.entity';
@@ -15,6 +16,7 @@ export {
   AuditEntryEntity,
   MembershipEntity,
   OrganisationEntity,
+  PriceListEntity,
   ProjectEntity,
   RunEntity,
   ScenarioRevisionEntity,
@@ -35,6 +37,7 @@ export const entities = [
   ScenarioRevisionEntity,
   RunEntity,
   TimeStudyEntity,
+  PriceListEntity,
   AuditEntryEntity,
   SignInAttemptEntity,
 ];

@@ -8,15 +8,18 @@ import sideBySideLoop from '../../../shared/examples/side-by-side-loop.json';
 import stackedLoop from '../../../shared/examples/stacked-loop.json';
 import { recordAudit } from '../../audit/record-audit';
 import { hashPassword } from '../../auth/password';
+import { loadConfig, type ServerConfig } from '../../config';
 import { createScenarioWithFirstRevision } from '../../scenarios/create-scenario';
 import { MembershipEntity, OrganisationEntity, ProjectEntity, UserEntity } from '../entities';
 
 export const DEMO_ORGANISATION_ID = '5eed0000-0000-4000-8000-000000000001';
 export const DEMO_PASSWORD = 'demo-password';
+/** Every demo account's e-mail ends in this domain, which is how `remove-demo` finds them. */
+export const DEMO_EMAIL_DOMAIN = 'demo.lanewright.test';
 export const DEMO_ACCOUNTS: ReadonlyArray<{ email: string; name: string; role: Role }> = [
-  { email: 'owner@demo.lanewright.test', name: 'Demo Owner', role: 'owner' },
-  { email: 'engineer@demo.lanewright.test', name: 'Demo Engineer', role: 'engineer' },
-  { email: 'viewer@demo.lanewright.test', name: 'Demo Viewer', role: 'viewer' },
+  { email: `owner@${DEMO_EMAIL_DOMAIN}`, name: 'Demo Owner', role: 'owner' },
+  { email: `engineer@${DEMO_EMAIL_DOMAIN}`, name: 'Demo Engineer', role: 'engineer' },
+  { email: `viewer@${DEMO_EMAIL_DOMAIN}`, name: 'Demo Viewer', role: 'viewer' },
 ];
 
 const DEMO_SCENARIOS = [
@@ -33,8 +36,9 @@ function parseExample(name: string, example: unknown) {
   return parsed.data;
 }
 
-export async function seedDemo(ds: DataSource): Promise<void> {
-  if (process.env.LANEWRIGHT_DEMO === 'off') return;
+/** Seeds the demo unless the configuration turns it off (LANEWRIGHT_DEMO=off). */
+export async function seedDemo(ds: DataSource, config: Pick<ServerConfig, 'LANEWRIGHT_DEMO'> = loadConfig()): Promise<void> {
+  if (config.LANEWRIGHT_DEMO === 'off') return;
   if (await ds.getRepository(OrganisationEntity).existsBy({ id: DEMO_ORGANISATION_ID })) return;
   const documents = DEMO_SCENARIOS.map((s) => ({ ...s, document: parseExample(s.name, s.example) }));
   const passwordHash = await hashPassword(DEMO_PASSWORD);

@@ -45,6 +45,7 @@ export function ProjectRoute() {
         actions={
           <>
             <ButtonLink to={`/projects/${projectId}/runs`}>All runs</ButtonLink>
+            {scenarios.data && scenarios.data.length > 1 && <ButtonLink to={`/projects/${projectId}/compare`}>Compare layouts</ButtonLink>}
             {scenarios.data && scenarios.data.length > 0 ? startButton : null}
           </>
         }

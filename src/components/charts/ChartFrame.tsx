@@ -43,11 +43,28 @@ interface ChartFrameProps {
   children: ReactNode;
 }
 
+/** Breaks text into lines that fit `maxWidth` at `fontSize`, so a title is never cut on a phone. */
+function wrapWords(text: string, fontSize: number, maxWidth: number): string[] {
+  const lines: string[] = [];
+  let line = '';
+  for (const word of text.split(' ')) {
+    const next = line ? `${line} ${word}` : word;
+    if (line && estimateTextWidth(next, fontSize) > maxWidth) {
+      lines.push(line);
+      line = word;
+    } else line = next;
+  }
+  return [...lines, line];
+}
+
 export function ChartFrame(props: ChartFrameProps) {
   const { shell, title, subtitle, summary, legend, margin, plotHeight, table, exportName, defs, children } = props;
   const svgRef = useRef<SVGSVGElement | null>(null);
   const width = shell.width;
-  const headerHeight = PAD + TITLE_BLOCK + (subtitle ? SUBTITLE_BLOCK : 0);
+  const titleLines = wrapWords(title, 16, width - 2 * PAD);
+  const subtitleLines = subtitle ? wrapWords(subtitle, 12, width - 2 * PAD) : [];
+  const extraTitle = (titleLines.length - 1) * 20;
+  const headerHeight = PAD + TITLE_BLOCK + extraTitle + subtitleLines.length * SUBTITLE_BLOCK;
   const legendWidth = width - 2 * PAD;
   const legendSpace = legend ? legendHeight(legend, legendWidth) + 8 : 0;
   const plotTop = headerHeight + legendSpace + margin.top;
@@ -73,13 +90,17 @@ export function ChartFrame(props: ChartFrameProps) {
       >
         {defs && <defs>{defs}</defs>}
         <text x={PAD} y={PAD + 16} fontSize={16} fontWeight={600} fill={ink.DEFAULT} data-chart-part="title">
-          {title}
+          {titleLines.map((line, i) => (
+            <tspan key={i} x={PAD} dy={i === 0 ? 0 : 20}>
+              {line}
+            </tspan>
+          ))}
         </text>
-        {subtitle && (
-          <text x={PAD} y={PAD + TITLE_BLOCK + 8} fontSize={12} fill={ink.soft}>
-            {subtitle}
+        {subtitleLines.map((line, i) => (
+          <text key={i} x={PAD} y={PAD + TITLE_BLOCK + extraTitle + 8 + i * SUBTITLE_BLOCK} fontSize={12} fill={ink.soft}>
+            {line}
           </text>
-        )}
+        ))}
         {legend && <Legend spec={legend} x={PAD} y={headerHeight} maxWidth={legendWidth} />}
         <g transform={`translate(${margin.left},${plotTop})`}>{children}</g>
       </svg>
@@ -89,9 +110,15 @@ export function ChartFrame(props: ChartFrameProps) {
   );
 }
 
+/**
+ * The chart's data for screen readers. The box is hidden, not the table: a table ignores the 1 px
+ * size of "sr-only" and, though invisible, would widen the page on a phone and add blank scroll below
+ * the footer.
+ */
 function ScreenReaderTable({ table }: { table: ChartTable }) {
   return (
-    <table className="sr-only">
+    <div className="sr-only" data-chart-table>
+    <table>
       <caption>{table.caption}</caption>
       <thead>
         <tr>
@@ -112,6 +139,7 @@ function ScreenReaderTable({ table }: { table: ChartTable }) {
         ))}
       </tbody>
     </table>
+    </div>
   );
 }
 

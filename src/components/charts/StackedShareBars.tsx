@@ -12,6 +12,8 @@ export interface ShareCategory {
   key: string;
   label: string;
   colour: string;
+  /** Column name stem in the CSV export, when the key is not already one. */
+  csvName?: string;
 }
 
 export interface ShareItem {
@@ -77,7 +79,7 @@ export function StackedShareBars(props: StackedShareBarsProps) {
       }}
       csv={() => ({
         caption: props.tableCaption,
-        columns: ['id', 'name', ...categories.map((category) => `${category.key}_share`), 'note'],
+        columns: ['id', 'name', ...categories.map((category) => `${category.csvName ?? category.key}_share`), 'note'],
         rows: items.map((item) => [item.id, item.label, ...item.shares, item.note?.replace(/^◀\s*/, '') ?? '']),
       })}
       exportName={props.exportName}

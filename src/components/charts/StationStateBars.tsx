@@ -2,7 +2,7 @@
 // text beside its bar so it does not depend on colour.
 import { ChartMessage } from './ChartFrame';
 import { formatShare } from './format';
-import { stateColour, stateLabel, type StationState } from './palette';
+import { stateColour, stateCsvName, stateLabel, type StationState } from './palette';
 import { StackedShareBars, type ShareItem } from './StackedShareBars';
 import { checkNamedShares, type Problem } from './validate';
 
@@ -75,7 +75,7 @@ export function StationStateBars(props: StationStateBarsProps) {
       title={title}
       subtitle={sortBy === 'line-order' ? 'In line order' : `Sorted by ${sortBy === 'name' ? 'name' : `${stateLabel[sortBy]} share`}`}
       summary={`${stations.length} stations. ${bottleneck ? `The bottleneck is ${bottleneck.name}, processing ${formatShare(bottleneck.shares.processing)} of the time. ` : ''}Busiest: ${busiest.name} (${formatShare(busiest.shares.processing)} processing).`}
-      categories={states.map((state) => ({ key: state, label: stateLabel[state], colour: stateColour[state] }))}
+      categories={states.map((state) => ({ key: state, label: stateLabel[state], colour: stateColour[state], csvName: stateCsvName(state) }))}
       items={items}
       axisLabel="Share of simulated time after warm-up (%)"
       tableCaption="Share of time each station spent in each state"

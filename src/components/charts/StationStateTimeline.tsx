@@ -7,7 +7,7 @@ import { ChartFrame, ChartMessage, plotWidthOf, type Margin } from './ChartFrame
 import type { ChartTable } from './chart-table';
 import { estimateTextWidth, formatOne, formatShare } from './format';
 import type { LegendItem } from './Legend';
-import { ink, stateColour, stateLabel, type StationState } from './palette';
+import { ink, stateColour, stateCsvName, stateLabel, type StationState } from './palette';
 import { dominantState, groupSumProblem, statesProblem, type StationRef } from './station-states';
 import { localPoint, useChartShell } from './useChartShell';
 import { checkPositive, firstProblem } from './validate';
@@ -182,7 +182,7 @@ function stateTotalsTable(stations: readonly StationRef[], states: readonly Stat
   };
 }
 
-function timelineCsv(stations: readonly StationRef[], states: readonly StationState[], shares: readonly number[], bins: number, start: number, binMinutes: number): ChartTable {
+export function timelineCsv(stations: readonly StationRef[], states: readonly StationState[], shares: readonly number[], bins: number, start: number, binMinutes: number): ChartTable {
   const rows: (string | number)[][] = [];
   stations.forEach((station, i) => {
     for (let bin = 0; bin < bins; bin++) {
@@ -190,5 +190,5 @@ function timelineCsv(stations: readonly StationRef[], states: readonly StationSt
       rows.push([station.id, station.name, start + bin * binMinutes, ...states.map((_, s) => shares[offset + s])]);
     }
   });
-  return { caption: 'Station states', columns: ['station_id', 'station', 'time_start_min', ...states.map((s) => `${s}_share`)], rows };
+  return { caption: 'Station states', columns: ['station_id', 'station', 'time_start_min', ...states.map((s) => `${stateCsvName(s)}_share`)], rows };
 }

@@ -21,6 +21,9 @@ export const stateLabel: Record<StationState, string> = {
   idle: 'on break',
 };
 
+/** A state's column name in CSV exports: snake case, and the break state under its meaning. */
+export const stateCsvName = (state: string): string => (state === 'idle' ? 'on_break' : state.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`));
+
 /**
  * Series colours for lines and fitted curves: the Okabe–Ito set (Okabe & Ito, "Color Universal
  * Design", 2008), which stays distinguishable for the common forms of colour blindness. Dash patterns

@@ -1,10 +1,10 @@
 // The live drawing of a (draft) layout: key figures, a plan per deck on one shared scale, and a side
 // elevation. Clicking a lane or a station reports it, so the editor can open it.
-import { useMemo } from 'react';
+import { useMemo, type ReactNode } from 'react';
 import { formatCount, formatLengthMm } from '../../lib/format';
-import { planFrame } from './drawing-frame';
-import { ElevationView } from './elevation-view';
-import { layoutModel, type LayoutDraft } from './layout-model';
+import { planFrame, type PlanFrame } from './drawing-frame';
+import { ElevationView, type ElevationFrame } from './elevation-view';
+import { layoutModel, type LayoutDraft, type PlanDeck } from './layout-model';
 import { PlanView } from './plan-view';
 import type { LayoutSelection } from './selection';
 
@@ -12,6 +12,13 @@ export interface LayoutDrawingProps {
   document: LayoutDraft;
   selection?: LayoutSelection;
   onSelect?: (selection: LayoutSelection) => void;
+  /** Drawn over every deck's plan and the side elevation, for a playback. */
+  overlay?: DrawingOverlay;
+}
+
+export interface DrawingOverlay {
+  plan: (deck: PlanDeck, frame: PlanFrame) => ReactNode;
+  elevation: (frame: ElevationFrame) => ReactNode;
 }
 
 const metres = (mm: number) => `${(mm / 1000).toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m`;
@@ -27,7 +34,7 @@ function Fact({ label, value, name }: { label: string; value: string; name: stri
   );
 }
 
-export function LayoutDrawing({ document, selection = null, onSelect }: LayoutDrawingProps) {
+export function LayoutDrawing({ document, selection = null, onSelect, overlay }: LayoutDrawingProps) {
   const model = useMemo(() => layoutModel(document), [document]);
   const frame = model.footprint ? planFrame(model.footprint.box) : null;
   const print = model.footprint;
@@ -45,11 +52,11 @@ export function LayoutDrawing({ document, selection = null, onSelect }: LayoutDr
         </p>
       )}
       {frame ? (
-        model.decks.map((deck) => <PlanView key={deck.id} model={model} deck={deck} frame={frame} selection={selection} onSelect={onSelect} />)
+        model.decks.map((deck) => <PlanView key={deck.id} model={model} deck={deck} frame={frame} selection={selection} onSelect={onSelect} overlay={overlay?.plan} />)
       ) : (
         <p className="rounded-md border border-dashed border-ink-faint p-6 text-center text-ink-soft">Nothing to draw yet: add a lane with modules, a start point and a heading.</p>
       )}
-      <ElevationView model={model} />
+      <ElevationView model={model} overlay={overlay?.elevation} />
       <p className="text-xs text-ink-soft">
         Filled circles are automatic stations, hollow ones manual. Joint ticks mark module ends; chevrons show the direction of travel; squares mark elevator ends and lateral transfers.
       </p>

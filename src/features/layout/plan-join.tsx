@@ -39,23 +39,32 @@ export function PlanJoinShape({ join, frame }: { join: PlanJoin; frame: PlanFram
   );
 }
 
-/** The end of an elevator that lies on this deck: where carriers leave it, or arrive. */
+/** The end of an elevator that lies on this deck, labelled with where a carrier there goes next. */
 export function ElevatorEnd({ join, frame, deckId, decks }: { join: PlanJoin; frame: PlanFrame; deckId: string; decks: readonly PlanDeck[] }) {
   const { colour } = DRAWING;
   const leaving = join.from.deckId === deckId;
   const point = leaving ? join.from.end : join.to.start;
   const otherDeckId = leaving ? join.to.deckId : join.from.deckId;
-  const other = decks.find((d) => d.id === otherDeckId)?.name ?? otherDeckId;
+  const other = decks.find((d) => d.id === otherDeckId);
+  const here = decks.find((d) => d.id === deckId);
+  const otherName = other?.name ?? otherDeckId;
+  // Up or down is read from the deck heights; without them the words alone say it.
+  const rises = other?.elevationMm != null && here?.elevationMm != null ? other.elevationMm > here.elevationMm : null;
+  const way = rises === null ? '' : leaving ? (rises ? 'up ' : 'down ') : rises ? 'down ' : 'up ';
+  const words = leaving ? `lift ${way}to ${otherName}` : `arrives ${way === '' ? '' : `${way}`}from ${otherName}`;
   const x = frame.x(point.x);
   const y = frame.y(point.y);
-  const text = `${join.name}: ${leaving ? 'to' : 'from'} ${other}`;
+  const text = `${join.name}: carriers ${leaving ? `leave this deck ${way}to ${otherName}` : `arrive ${way}from ${otherName}`}`;
+  // The arrow points the way the carrier travels at this end: away from the deck when it leaves, onto it when it arrives.
+  const arrowUp = rises === null ? leaving : leaving ? rises : !rises;
+  const tip = arrowUp ? -6 : 6;
   return (
-    <g data-join="elevator" aria-label={`Elevator ${text}`}>
+    <g data-join="elevator" data-elevator-end={leaving ? 'leave' : 'arrive'} aria-label={`Elevator ${text}`}>
       <title>{`Elevator ${text}`}</title>
       <rect x={x - 9} y={y - 9} width={18} height={18} fill={colour.paper} stroke={colour.join} strokeWidth={2} />
-      <path d={`M${x},${y - 6} L${x},${y + 6} M${x - 3},${y - 3} L${x},${y - 6} L${x + 3},${y - 3} M${x - 3},${y + 3} L${x},${y + 6} L${x + 3},${y + 3}`} stroke={colour.join} fill="none" strokeWidth={1.5} />
+      <path d={`M${x},${y - tip} L${x},${y + tip} M${x - 4},${y + tip / 2} L${x},${y + tip} L${x + 4},${y + tip / 2}`} stroke={colour.join} fill="none" strokeWidth={1.8} />
       <text x={x} y={y + 24} fontSize={10} fill={colour.join} textAnchor={anchorFor(x)}>
-        {leaving ? '↧' : '↥'} {other}
+        {words}
       </text>
     </g>
   );

@@ -1,9 +1,11 @@
 // The plan of one deck: its lanes to scale, joins, elevator ends, stations labelled with their step,
 // and a scale bar. Every deck uses the same frame, so the plans stack into one comparable picture.
+import type { ReactNode } from 'react';
 import { DRAWING, type PlanFrame } from './drawing-frame';
 import type { LayoutModel, PlanDeck, PlanStation } from './layout-model';
 import { PlanLaneShape, selectable } from './plan-lane';
 import { ElevatorEnd, PlanJoinShape } from './plan-join';
+import { OverlayLayer } from './overlay-layer';
 import { ScaleBar } from './scale-bar';
 import { isLaneSelected, isStationSelected, type LayoutSelection } from './selection';
 
@@ -13,6 +15,8 @@ interface PlanViewProps {
   frame: PlanFrame;
   selection: LayoutSelection;
   onSelect?: (selection: LayoutSelection) => void;
+  /** Drawn over the plan (the playback's carriers and station states). */
+  overlay?: (deck: PlanDeck, frame: PlanFrame) => ReactNode;
 }
 
 function StationMarker({ station, frame, selected, labelBelow, onSelect }: { station: PlanStation; frame: PlanFrame; selected: boolean; labelBelow: boolean; onSelect?: () => void }) {
@@ -39,7 +43,7 @@ function StationMarker({ station, frame, selected, labelBelow, onSelect }: { sta
   );
 }
 
-export function PlanView({ model, deck, frame, selection, onSelect }: PlanViewProps) {
+export function PlanView({ model, deck, frame, selection, onSelect, overlay }: PlanViewProps) {
   const lanes = model.lanes.filter((lane) => lane.deckId === deck.id);
   const stations = model.stations.filter((station) => station.deckId === deck.id);
   const onDeck = (laneDeck: string) => laneDeck === deck.id;
@@ -52,6 +56,9 @@ export function PlanView({ model, deck, frame, selection, onSelect }: PlanViewPr
       <figcaption className="text-sm font-semibold text-ink">
         {deck.name} <span className="font-normal text-ink-soft">plan{deck.elevationMm === null ? '' : `, running surface at ${deck.elevationMm} mm`}</span>
       </figcaption>
+      {/* On a phone the drawing keeps a legible size and scrolls sideways inside its own box, not the page. */}
+      <div className="overflow-x-auto" data-drawing-scroll>
+      <div className="relative min-w-[640px]">
       <svg
         viewBox={`0 0 ${DRAWING.widthPx} ${frame.heightPx}`}
         className="h-auto w-full rounded-md border border-paper-sunk bg-white"
@@ -96,6 +103,9 @@ export function PlanView({ model, deck, frame, selection, onSelect }: PlanViewPr
           N ↑
         </text>
       </svg>
+        {overlay && <OverlayLayer widthPx={DRAWING.widthPx} heightPx={frame.heightPx}>{overlay(deck, frame)}</OverlayLayer>}
+      </div>
+      </div>
     </figure>
   );
 }

@@ -33,6 +33,26 @@ describe('scenario editor', () => {
     expect(within(section('Process and stations')).getByLabelText('1 problem')).toBeTruthy();
   });
 
+  it('reads "9,5" as nine and a half, refuses "1,500" with a reason and only cautions about a 0 s cycle time', async () => {
+    const { user } = await openScenarioPage('engineer');
+    await user.click(section('Process and stations'));
+    await user.click(screen.getByRole('button', { name: /^Step 2: Press seat ring/ }));
+    await user.click(screen.getByRole('button', { name: 'Station PR' }));
+    const editor = document.querySelector('[data-distribution$="cycleTimeSeconds"]') as HTMLElement;
+    const value = within(editor).getByLabelText('Value (s)');
+    await user.clear(value);
+    await user.type(value, '9,5');
+    await waitFor(() => expect(errorBeside(value)).toBeFalsy());
+    expect(editor.textContent).toMatch(/9\.5 s/);
+    await user.clear(value);
+    await user.type(value, '1,500');
+    await waitFor(() => expect(errorBeside(value)).toMatch(/"1,500" is ambiguous/));
+    await user.clear(value);
+    await user.type(value, '0');
+    await waitFor(() => expect(editor.querySelector('[data-plausibility-caution]')?.textContent).toMatch(/mean cycle time of 0 s is unusual/));
+    await waitFor(() => expect(errorBeside(value)).toBeFalsy());
+  });
+
   it('selects a station clicked in the drawing and opens it in the editor', async () => {
     const { user } = await openScenarioPage('engineer');
     await user.click(document.querySelector('[data-station-id="FT2"]') as Element);

@@ -1,5 +1,6 @@
 import { screen, waitFor } from '@testing-library/react';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
+import type { OpenSimulationPort } from '../../../src/features/simulation/simulation-port';
 import { apiRoutes } from '../../../shared/api/routes';
 import type { CreateRunInput } from '../../../shared/api/runs';
 import stackedLoop from '../../../shared/examples/stacked-loop.json';
@@ -106,5 +107,26 @@ describe('run panel', () => {
     expect(screen.queryByRole('button', { name: 'Run simulation' })).toBeNull();
     expect(screen.queryByRole('form', { name: 'Run settings' })).toBeNull();
     expect(screen.queryByText(/Run revision/)).toBeNull();
+  });
+
+  it('asks before leaving the page while a run is in progress, and stays when the answer is no', async () => {
+    mockApi({ [`GET ${apiRoutes.me}`]: { status: 200, body: me('engineer') } });
+    // A run that never finishes, so the page stays in the running state.
+    const hanging: OpenSimulationPort = () => ({ run: () => new Promise(() => undefined), terminate: () => undefined });
+    const { user, router, path } = renderWithSession(panel(), hanging);
+    await user.click(await screen.findByRole('button', { name: 'Run simulation' }));
+    await screen.findByRole('button', { name: 'Cancel run' });
+
+    const unload = new Event('beforeunload', { cancelable: true });
+    window.dispatchEvent(unload);
+    expect(unload.defaultPrevented).toBe(true);
+
+    // happy-dom has no dialogs: stand in for the user's "Cancel".
+    const confirm = vi.fn(() => false);
+    vi.stubGlobal('confirm', confirm);
+    await router.navigate('/runs/elsewhere');
+    await waitFor(() => expect(confirm).toHaveBeenCalledWith(expect.stringMatching(/Leaving stops it and nothing is saved/)));
+    expect(path()).toBe('/under-test');
+    vi.unstubAllGlobals();
   });
 });

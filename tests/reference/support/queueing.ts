@@ -2,19 +2,33 @@
 // the engine against. Written here from the published derivations, independently of the engine.
 
 /**
- * Exact Mean Value Analysis of a closed single-class network of FCFS single-server stations with
- * exponential service and one infinite-server (pure delay) node, for populations 1..maxN.
- * Reiser & Lavenberg, "Mean-value analysis of closed multichain queuing networks", J. ACM 27(2),
- * 1980, §3 (single chain): R_k(n) = s_k (1 + Q_k(n − 1)), X(n) = n / (Z + Σ R_k(n)),
- * Q_k(n) = X(n) R_k(n). Returns X(n) per second, index n − 1.
+ * Exact Mean Value Analysis of a closed single-class network of FCFS stations with exponential
+ * service and one infinite-server (pure delay) node, for populations 1..maxN. Station k has
+ * servers[k] identical servers (1 when not given), so its service rate with j carriers present is
+ * min(j, servers[k]) / s_k: a load-dependent station. Reiser & Lavenberg, "Mean-value analysis of
+ * closed multichain queuing networks", J. ACM 27(2), 1980 (single chain; the load-dependent case
+ * with marginal queue-length probabilities): with α_k(j) = min(j, c_k),
+ *   R_k(n) = Σ_{j=1..n} j s_k / α_k(j) · p_k(j − 1 | n − 1),   X(n) = n / (Z + Σ R_k(n)),
+ *   p_k(j | n) = X(n) s_k / α_k(j) · p_k(j − 1 | n − 1) for j ≥ 1,   p_k(0 | n) = 1 − Σ_{j≥1} p_k(j | n).
+ * With one server this is R_k(n) = s_k (1 + Q_k(n − 1)). Returns X(n) per second, index n − 1.
  */
-export function mvaThroughput(serviceMeansSeconds: readonly number[], delaySeconds: number, maxN: number): number[] {
-  const queue = serviceMeansSeconds.map(() => 0);
+export function mvaThroughput(serviceMeansSeconds: readonly number[], delaySeconds: number, maxN: number, servers: readonly number[] = serviceMeansSeconds.map(() => 1)): number[] {
+  // p[k][j]: probability of j carriers at station k with the previous population.
+  let p = serviceMeansSeconds.map(() => [1]);
   const out: number[] = [];
   for (let n = 1; n <= maxN; n++) {
-    const residence = serviceMeansSeconds.map((s, k) => s * (1 + queue[k]));
+    const residence = serviceMeansSeconds.map((s, k) => {
+      let r = 0;
+      for (let j = 1; j <= n; j++) r += ((j * s) / Math.min(j, servers[k])) * (p[k][j - 1] ?? 0);
+      return r;
+    });
     const x = n / (delaySeconds + residence.reduce((a, b) => a + b, 0));
-    residence.forEach((r, k) => (queue[k] = x * r));
+    p = serviceMeansSeconds.map((s, k) => {
+      const next = [0];
+      for (let j = 1; j <= n; j++) next.push(((x * s) / Math.min(j, servers[k])) * (p[k][j - 1] ?? 0));
+      next[0] = 1 - next.slice(1).reduce((a, b) => a + b, 0);
+      return next;
+    });
     out.push(x);
   }
   return out;

@@ -58,7 +58,7 @@ const raw: fc.Arbitrary<Raw> = fc.record({
     fc.record({
       kind: fc.constantFrom('process' as const, 'inspect' as const),
       stations: fc.integer({ min: 1, max: 3 }),
-      dispatch: fc.integer({ min: 0, max: 2 }),
+      dispatch: fc.integer({ min: 0, max: 3 }),
       reject: time(0, 0.2),
       rework: time(0, 0.2),
       reworkTo: fc.nat(),
@@ -81,7 +81,7 @@ const raw: fc.Arbitrary<Raw> = fc.record({
   breaks: fc.boolean(),
 });
 
-const DISPATCH = ['firstFree', 'shortestQueue', 'roundRobin'] as const;
+const DISPATCH = ['pooled', 'firstFree', 'shortestQueue', 'roundRobin'] as const;
 
 /** Places stations on free slots of the pitch grid, so no two on a lane are closer than one pitch. */
 function place(r: Raw, laneLengths: number[], pitch: number, wanted: number) {

@@ -19,9 +19,10 @@ export const STEP_UNLOAD = 3;
 export const DISPATCH_FIRST_FREE = 0;
 export const DISPATCH_SHORTEST_QUEUE = 1;
 export const DISPATCH_ROUND_ROBIN = 2;
+export const DISPATCH_POOLED = 3;
 
 const STEP_CODES = { load: STEP_LOAD, process: STEP_PROCESS, inspect: STEP_INSPECT, unload: STEP_UNLOAD } as const;
-const DISPATCH_CODES = { firstFree: DISPATCH_FIRST_FREE, shortestQueue: DISPATCH_SHORTEST_QUEUE, roundRobin: DISPATCH_ROUND_ROBIN } as const;
+const DISPATCH_CODES = { pooled: DISPATCH_POOLED, firstFree: DISPATCH_FIRST_FREE, shortestQueue: DISPATCH_SHORTEST_QUEUE, roundRobin: DISPATCH_ROUND_ROBIN } as const;
 const CONN_CODES = { elevator: CONN_ELEVATOR, lateral: CONN_LATERAL, curve: CONN_CURVE } as const;
 
 export type CompiledLine = {
@@ -51,6 +52,8 @@ export type CompiledLine = {
   stationStep: Int32Array;
   stationPausesForBreaks: Uint8Array;
   stationIds: string[];
+  /** Carriers that fit on a station's lane from the lane start up to and including the station: how many a pooled step may send its way. */
+  stationRoom: Int32Array;
   stepCount: number;
   stepKind: Int32Array;
   stepDispatch: Int32Array;
@@ -129,6 +132,7 @@ export function compileLine(s: Scenario, carrierCount = s.carriers.count): Compi
     stationStep: Int32Array.from(stations, (x) => x.stepIndex),
     stationPausesForBreaks: Uint8Array.from(stations, (x) => (x.station.pausesForBreaks ? 1 : 0)),
     stationIds: stations.map((x) => x.station.id),
+    stationRoom: Int32Array.from(stations, (x) => Math.max(1, Math.floor((x.station.positionMm - s.carriers.lengthMm) / pitchMm + 1e-9) + 1)),
     stepCount: s.steps.length,
     stepKind: Int32Array.from(s.steps, (st) => STEP_CODES[st.kind]),
     stepDispatch: Int32Array.from(s.steps, (st) => DISPATCH_CODES[st.dispatch]),

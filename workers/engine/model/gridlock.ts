@@ -1,6 +1,8 @@
 // Describes a line that can no longer move: every carrier, where it stands and what it waits for,
 // in words a planner can act on (which lane start, transfer or carrier holds it up).
 import type { GridlockEntry } from '../kernel/stop';
+import { positionAt } from './lanes';
+import { phaseOf } from './platoons';
 import { PH_EXIT, PH_STATION, PH_TRANSFER, TR_HOLDING, type LineState } from './state';
 
 function laneId(m: LineState, lane: number): string {
@@ -14,24 +16,27 @@ function connName(m: LineState, conn: number): string {
 }
 
 function where(m: LineState, c: number): string {
-  if (m.cPhase[c] === PH_TRANSFER) {
+  if (phaseOf(m, c) === PH_TRANSFER) {
     for (let k = 0; k < m.line.connCount; k++) if (m.tCarrier[k] === c) return connName(m, k);
     return 'a transfer';
   }
   const atStation = m.cAtStation[c] >= 0 ? ` (station "${m.line.stationIds[m.cAtStation[c]]}")` : '';
-  return `lane "${laneId(m, m.cLane[c])}" at ${m.cPos[c].toFixed(0)} mm${atStation}`;
+  return `lane "${laneId(m, m.cLane[c])}" at ${positionAt(m, c, m.now).toFixed(0)} mm${atStation}`;
 }
 
 function waitingFor(m: LineState, c: number): string {
-  const target = m.cTarget[c] >= 0 ? `station "${m.line.stationIds[m.cTarget[c]]}"` : 'nothing';
-  if (m.cPhase[c] === PH_TRANSFER) {
+  const step = m.cTarget[c] >= 0 ? m.line.stationStep[m.cTarget[c]] : -1;
+  const target = step < 0 ? 'nothing' : m.cPending[c] ? `a station of step "${m.line.scenario.steps[step].id}"` : `station "${m.line.stationIds[m.cTarget[c]]}"`;
+  if (step >= 0 && m.stepWaiting[step].includes(c)) return `room on the way to ${target}: every station's lane is full`;
+  const phase = phaseOf(m, c);
+  if (phase === PH_TRANSFER) {
     for (let k = 0; k < m.line.connCount; k++) {
       if (m.tCarrier[k] === c && m.tState[k] === TR_HOLDING) return `room at the start of lane "${laneId(m, m.line.connTo[k])}" (heading for ${target})`;
     }
     return `its transfer (heading for ${target})`;
   }
-  if (m.cPhase[c] === PH_STATION) return `work at ${target}`;
-  if (m.cPhase[c] === PH_EXIT) {
+  if (phase === PH_STATION) return `work at ${target}`;
+  if (phase === PH_EXIT) {
     const conn = m.cConn[c];
     if (m.line.connKind[conn] === 0) return `room at the start of lane "${laneId(m, m.line.connTo[conn])}" (heading for ${target})`;
     return `${connName(m, conn)} to become free (heading for ${target})`;

@@ -1,13 +1,15 @@
 // Self-checks of the line model, switched on in tests: carriers never overlap or leave their lane,
 // no carrier is lost or duplicated, and WIP equals the carriers holding a part.
 import { positionAt } from './lanes';
+import { leaderOf, phaseOf } from './platoons';
 import { PH_MOVING, PH_TRANSFER, type LineState } from './state';
 
 const EPS_MM = 1e-6;
 
 /** Moves are never re-planned before they end, so the pair's future positions up to the first arrival are known. */
 function checkPair(m: LineState, ahead: number, behind: number, lane: number): void {
-  const until = Math.min(m.cPhase[ahead] === PH_MOVING ? m.cMoveEnd[ahead] : Infinity, m.cPhase[behind] === PH_MOVING ? m.cMoveEnd[behind] : Infinity);
+  const moveEnd = (c: number) => (phaseOf(m, c) === PH_MOVING ? m.cMoveEnd[leaderOf(m, c)] : Infinity);
+  const until = Math.min(moveEnd(ahead), moveEnd(behind));
   const horizon = Number.isFinite(until) ? until - m.now : 0;
   for (let k = 0; k <= 4; k++) {
     const t = m.now + (horizon * k) / 4;
@@ -39,7 +41,7 @@ export function checkInvariants(m: LineState): void {
     onLanes += count;
   }
   let inTransfers = 0;
-  for (let c = 0; c < line.carrierCount; c++) if (m.cPhase[c] === PH_TRANSFER) inTransfers++;
+  for (let c = 0; c < line.carrierCount; c++) if (phaseOf(m, c) === PH_TRANSFER) inTransfers++;
   if (onLanes + inTransfers !== line.carrierCount) {
     throw new Error(`invariant: ${onLanes} carriers on lanes and ${inTransfers} in transfers, but the line has ${line.carrierCount}`);
   }

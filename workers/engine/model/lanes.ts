@@ -3,28 +3,52 @@
 // the carrier ahead (that carrier's destination when it is moving, with the slower of the two
 // profiles). It never starts a move into track another carrier holds, so carriers cannot overlap.
 // Carriers that may be able to move are put on a wake ring and retried after the current event, so
-// no handler re-enters another.
+// no handler re-enters another. A carrier held right behind another at rest may join it in a
+// platoon (platoons.ts); a platoon moves as one, through its leader.
 import { followerProfile, PROFILE_EMPTY, PROFILE_LOADED } from './motion';
+import { canJoin, join, leaderOf, offsetMm, phaseOf, rearOf, ridersChangePhase } from './platoons';
 import { EV_ARRIVE, EV_LANE_WAKE, PH_EXIT, PH_MOVING, PH_QUEUED, scheduleActive, type LineState } from './state';
 
 const EPS_MM = 1e-6;
 
-/** Where the carrier's front is at time t. */
+/** Where the carrier's front is at time t (a rider: its leader's position less its place behind it). */
 export function positionAt(m: LineState, c: number, t: number): number {
-  if (m.cPhase[c] !== PH_MOVING) return m.cPos[c];
-  const start = m.cPos[c];
-  return start + m.line.motion.travelledMm(m.cDest[c] - start, m.cProfile[c], t - m.cMoveStart[c]);
+  const leader = leaderOf(m, c);
+  const start = m.cPos[leader] - offsetMm(m, c);
+  if (m.cPhase[leader] !== PH_MOVING) return start;
+  return start + m.line.motion.travelledMm(m.cDest[leader] - m.cPos[leader], m.cProfile[leader], t - m.cMoveStart[leader]);
 }
 
-/** The point on its lane the carrier is heading for: its station there, else the lane end. */
+/** Where the carrier will stand when its current move ends (where it stands, when at rest). */
+export function destinationOf(m: LineState, c: number): number {
+  const leader = leaderOf(m, c);
+  return (m.cPhase[leader] === PH_MOVING ? m.cDest[leader] : m.cPos[leader]) - offsetMm(m, c);
+}
+
+/**
+ * The point on its lane the carrier is heading for: its station there, else the lane end. A carrier
+ * that has not yet chosen among a pooled step's stations stops at the first of them ahead on its
+ * lane, where it decides.
+ */
 export function stopPoint(m: LineState, c: number): number {
   const lane = m.cLane[c];
   const target = m.cTarget[c];
-  if (target >= 0 && m.line.stationLane[target] === lane) {
-    const p = m.line.stationPositionMm[target];
+  const line = m.line;
+  let stop = line.laneLengthMm[lane];
+  if (target < 0) return stop;
+  if (m.cPending[c]) {
+    const stations = line.stepStations[line.stationStep[target]];
+    for (let i = 0; i < stations.length; i++) {
+      const p = line.stationPositionMm[stations[i]];
+      if (line.stationLane[stations[i]] === lane && p >= m.cPos[c] - EPS_MM && p < stop) stop = p;
+    }
+    return stop;
+  }
+  if (line.stationLane[target] === lane) {
+    const p = line.stationPositionMm[target];
     if (p >= m.cPos[c] - EPS_MM) return p;
   }
-  return m.line.laneLengthMm[lane];
+  return stop;
 }
 
 export function wake(m: LineState, c: number): void {
@@ -62,7 +86,7 @@ export function setPhase(m: LineState, c: number, phase: number): void {
   const old = m.cPhase[c];
   if (old === phase) return;
   m.cPhase[c] = phase;
-  m.observer.carrierPhase(c, phase, m.now);
+  m.observer.carrierPhases(old, phase, 1, m.now);
   if (m.cQueueConn[c] >= 0) {
     m.observer.transferQueue(m.cQueueConn[c], -1, m.now);
     m.cQueueConn[c] = -1;
@@ -86,34 +110,42 @@ export function advance(m: LineState, c: number): 'moved' | 'atStop' | 'held' {
   let profile = own;
   const ahead = m.cAhead[c];
   if (ahead >= 0) {
-    const moving = m.cPhase[ahead] === PH_MOVING;
-    const limit = (moving ? m.cDest[ahead] : m.cPos[ahead]) - m.line.pitchMm;
+    const moving = phaseOf(m, ahead) === PH_MOVING;
+    const limit = destinationOf(m, ahead) - m.line.pitchMm;
     if (limit < target) target = limit;
-    if (moving) profile = followerProfile(own, m.cProfile[ahead]);
+    if (moving) profile = followerProfile(own, m.cProfile[leaderOf(m, ahead)]);
   }
-  if (target <= pos + EPS_MM) return Math.abs(stop - pos) <= EPS_MM ? 'atStop' : 'held';
+  if (target <= pos + EPS_MM) {
+    if (Math.abs(stop - pos) <= EPS_MM) return 'atStop';
+    if (m.cPlatoon[c] < 0 && canJoin(m, c, ahead, stop, stopPoint(m, leaderOf(m, ahead)))) join(m, c, ahead);
+    return 'held';
+  }
   const duration = m.line.motion.moveSeconds(target - pos, profile);
   m.cDest[c] = target;
   m.cMoveStart[c] = m.now;
   m.cMoveEnd[c] = m.now + duration;
   m.cProfile[c] = profile;
   setPhase(m, c, PH_MOVING);
+  ridersChangePhase(m, c, PH_QUEUED, PH_MOVING);
   scheduleActive(m, duration, EV_ARRIVE, c);
-  wake(m, m.cBehind[c]);
-  if (m.laneRear[m.cLane[c]] === c) requestLaneCheck(m, m.cLane[c]);
+  const rear = rearOf(m, c);
+  wake(m, m.cBehind[rear]);
+  if (m.laneRear[m.cLane[c]] === rear) requestLaneCheck(m, m.cLane[c]);
   return 'moved';
 }
 
-/** Ends a move: the carrier stands at its destination. */
+/** Ends a move: the carrier (and its platoon) stands at its destination. */
 export function completeMove(m: LineState, c: number): void {
   m.cPos[c] = m.cDest[c];
   setPhase(m, c, PH_QUEUED);
+  ridersChangePhase(m, c, PH_MOVING, PH_QUEUED);
 }
 
 /** Puts a carrier at the start of a lane, whole carrier on the lane, as its new rear. */
 export function attach(m: LineState, c: number, lane: number, front: number): void {
   const rear = m.laneRear[lane];
   m.cLane[c] = lane;
+  m.cSeq[c] = m.laneSeq[lane]++;
   m.cPos[c] = front;
   m.cDest[c] = front;
   m.cAhead[c] = rear;
@@ -153,14 +185,16 @@ export function entryClear(m: LineState, lane: number): boolean {
  */
 export function scheduleEntryWake(m: LineState, lane: number): void {
   const rear = m.laneRear[lane];
-  if (rear < 0 || m.cPhase[rear] !== PH_MOVING || m.laneWakePending[lane]) return;
+  if (rear < 0 || phaseOf(m, rear) !== PH_MOVING || m.laneWakePending[lane]) return;
   const needed = m.line.carrierLengthMm + m.line.pitchMm;
-  if (m.cDest[rear] < needed - EPS_MM) return;
-  // Aim half the tolerance past the threshold, so rounding can never wake the lane a hair too early.
-  const start = m.cPos[rear];
-  const into = m.line.motion.secondsToCover(m.cDest[rear] - start, m.cProfile[rear], needed - EPS_MM / 2 - start);
+  if (destinationOf(m, rear) < needed - EPS_MM) return;
+  // The rear moves as its leader does, offset behind it. Aim half the tolerance past the threshold,
+  // so rounding can never wake the lane a hair too early.
+  const leader = leaderOf(m, rear);
+  const start = m.cPos[leader];
+  const into = m.line.motion.secondsToCover(m.cDest[leader] - start, m.cProfile[leader], needed - EPS_MM / 2 + offsetMm(m, rear) - start);
   m.laneWakePending[lane] = 1;
-  scheduleActive(m, Math.max(0, m.cMoveStart[rear] + into - m.now), EV_LANE_WAKE, lane);
+  scheduleActive(m, Math.max(0, m.cMoveStart[leader] + into - m.now), EV_LANE_WAKE, lane);
 }
 
 /** Marks a lane whose entry should be re-examined after the current event, if anything waits for it. */

@@ -29,7 +29,7 @@ function lanesTowardsLoad(m: LineState): number[] {
 
 function prepare(m: LineState, c: number): void {
   m.cStep[c] = 0;
-  m.cTarget[c] = chooseStation(m, 0, c);
+  chooseStation(m, 0, c);
 }
 
 export function placeCarriers(m: LineState): void {

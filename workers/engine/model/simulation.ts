@@ -11,9 +11,11 @@ import type { StreamFactory } from '../random/streams';
 import { inBreak, nextBreakEdge } from './breaks';
 import type { CompiledLine } from './compile';
 import { gridlockReport } from './gridlock';
+import { decidePending } from './dispatch';
 import { checkInvariants } from './invariants';
 import { advance, completeMove, nextWoken, positionAt, wake } from './lanes';
 import { placeCarriers } from './placement';
+import { leaderOf, leave } from './platoons';
 import {
   createState,
   EV_ARRIVE,
@@ -71,15 +73,21 @@ function settle(m: LineState): void {
     }
     const c = nextWoken(m);
     if (c < 0) return;
-    if (m.cPhase[c] !== PH_QUEUED) continue;
+    // Riders move only with their leader.
+    if (m.cPhase[c] !== PH_QUEUED || leaderOf(m, c) !== c) continue;
     const outcome = advance(m, c);
     if (outcome === 'moved') {
       if (m.cAtStation[c] >= 0) releaseStation(m, c);
     } else if (outcome === 'atStop') {
+      leave(m, c);
       if (m.cAtStation[c] >= 0) releaseStation(m, c);
+      if (m.cPending[c] && !decidePending(m, c)) continue;
       const target = m.cTarget[c];
-      const atTarget = m.line.stationLane[target] === m.cLane[c] && Math.abs(m.line.stationPositionMm[target] - m.cPos[c]) < 1e-6;
-      if (atTarget) arriveAtStation(m, c, target);
+      const onLane = m.line.stationLane[target] === m.cLane[c];
+      const offset = m.line.stationPositionMm[target] - m.cPos[c];
+      if (onLane && Math.abs(offset) < 1e-6) arriveAtStation(m, c, target);
+      // Chose a station further along this lane: run on to it.
+      else if (onLane && offset > 0 && !m.cPending[c]) wake(m, c);
       else requestExit(m, c);
     }
   }

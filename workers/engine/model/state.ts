@@ -71,6 +71,19 @@ export type LineState = {
   cConn: Int32Array;
   cQueueConn: Int32Array;
   cWoken: Uint8Array;
+  /** 1 while the carrier heads for a pooled step without having chosen its station (cTarget is then only a route hint). */
+  cPending: Uint8Array;
+  /** Platoon a carrier rides in or leads (-1: on its own); see platoons.ts. */
+  cPlatoon: Int32Array;
+  /** Order of arrival on its lane: consecutive from the lane's front to its rear. */
+  cSeq: Int32Array;
+  pLeader: Int32Array;
+  pRear: Int32Array;
+  pSize: Int32Array;
+  /** The transfer whose queue the platoon's riders count in while they stand (-1: none). */
+  pConn: Int32Array;
+  pFree: Int32Array;
+  pFreeTop: number;
   wakeRing: Int32Array;
   wakeHead: number;
   wakeCount: number;
@@ -78,6 +91,7 @@ export type LineState = {
   laneFront: Int32Array;
   laneRear: Int32Array;
   laneCarriers: Int32Array;
+  laneSeq: Int32Array;
   laneWakePending: Uint8Array;
   laneDirty: Uint8Array;
   /** Lanes to re-examine after the current event. */
@@ -101,6 +115,8 @@ export type LineState = {
   sAssigned: Int32Array;
   samplers: StationSamplers[];
   stepRoundRobin: Int32Array;
+  /** Carriers standing at a decision point of a pooled step until one of its stations has room. */
+  stepWaiting: number[][];
   wip: number;
 };
 
@@ -133,12 +149,22 @@ export function createState(line: CompiledLine, queue: EventQueue, observer: Obs
     cConn: new Int32Array(n).fill(-1),
     cQueueConn: new Int32Array(n).fill(-1),
     cWoken: new Uint8Array(n),
+    cPending: new Uint8Array(n),
+    cPlatoon: new Int32Array(n).fill(-1),
+    cSeq: new Int32Array(n),
+    pLeader: new Int32Array(n).fill(-1),
+    pRear: new Int32Array(n).fill(-1),
+    pSize: new Int32Array(n),
+    pConn: new Int32Array(n).fill(-1),
+    pFree: Int32Array.from({ length: n }, (_, i) => n - 1 - i),
+    pFreeTop: n,
     wakeRing: new Int32Array(n),
     wakeHead: 0,
     wakeCount: 0,
     laneFront: new Int32Array(line.laneCount).fill(-1),
     laneRear: new Int32Array(line.laneCount).fill(-1),
     laneCarriers: new Int32Array(line.laneCount),
+    laneSeq: new Int32Array(line.laneCount),
     laneWakePending: new Uint8Array(line.laneCount),
     laneDirty: new Uint8Array(line.laneCount),
     laneRing: [],
@@ -158,6 +184,7 @@ export function createState(line: CompiledLine, queue: EventQueue, observer: Obs
     sAssigned: new Int32Array(s),
     samplers,
     stepRoundRobin: new Int32Array(line.stepCount),
+    stepWaiting: Array.from({ length: line.stepCount }, () => []),
     wip: 0,
   };
 }

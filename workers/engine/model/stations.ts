@@ -141,7 +141,7 @@ function finishWork(m: LineState, s: number): void {
     }
   }
   m.cStep[c] = next;
-  m.cTarget[c] = chooseStation(m, next, c);
+  chooseStation(m, next, c);
   setPhase(m, c, PH_QUEUED);
   wake(m, c);
 }

@@ -10,11 +10,15 @@
 // it, every period is complete), so memory holds only the periods since then. Should that list pass
 // MAX_PENDING (one station active for very long while others cycle), running periods are treated as
 // ending now; this bounds memory at a small cost in accuracy.
+//
+// The work per report does not grow with the number of stations: stations that went inactive wait
+// in a first-in first-out list (they go inactive in time order) until their bridge runs out, and the
+// sweep keeps the periods covering the current instant in a heap ordered by length.
 import type { ObservationWindow } from './window';
 
 const MAX_PENDING = 2_000;
-/** Completed periods collected before the timeline is resolved. */
-const MIN_BATCH = 64;
+/** Completed periods collected before the timeline is resolved (larger batches sort less often; memory stays under MAX_PENDING). */
+const MIN_BATCH = 256;
 
 type Segment = { station: number; periodStart: number; periodEnd: number; from: number; to: number };
 
@@ -22,16 +26,23 @@ export class BottleneckTracker {
   private readonly activeSince: Float64Array;
   /** When a station still in an active period went inactive (-1: it has not). */
   private readonly idleSince: Float64Array;
-  private pStation: number[] = [];
-  private pStart: number[] = [];
-  private pEnd: number[] = [];
+  /** Completed periods not yet resolved: station, start, end; the first pCount entries are used. */
+  private pStation = new Int32Array(256);
+  private pStart = new Float64Array(256);
+  private pEnd = new Float64Array(256);
+  private pCount = 0;
   private settled: number;
   private cuts = new Float64Array(64);
   private resolveAt = MIN_BATCH;
-  /** No station has been idle since before this (Infinity: none is idle); skips needless scans. */
-  private oldestIdle = Infinity;
-  private nextSame = new Int32Array(32);
-  private readonly covering: Int32Array;
+  /** Stations in the order they went inactive, with the time they did; entries of stations active again are skipped. */
+  private idleStation = new Int32Array(64);
+  private idleTime = new Float64Array(64);
+  private idleHead = 0;
+  private idleCount = 0;
+  /** Pending periods in order of their start, and a max-heap of those covering the sweep's instant. */
+  private byStart = new Int32Array(32);
+  private heap = new Int32Array(32);
+  private heapSize = 0;
   private held: Segment | null = null;
   /** Start and end of the overlap between the held segment's period and its predecessor's. */
   private heldOverlapFrom = 0;
@@ -45,13 +56,12 @@ export class BottleneckTracker {
    * hand the bottleneck to whichever station happens to be working at that moment.
    */
   constructor(
-    private readonly window: ObservationWindow,
+    readonly window: ObservationWindow,
     stationCount: number,
-    private readonly bridgeSeconds = 0,
+    readonly bridgeSeconds = 0,
   ) {
     this.activeSince = new Float64Array(stationCount).fill(-1);
     this.idleSince = new Float64Array(stationCount).fill(-1);
-    this.covering = new Int32Array(stationCount);
     this.sole = new Float64Array(stationCount);
     this.shifting = new Float64Array(stationCount);
     this.settled = 0;
@@ -63,7 +73,7 @@ export class BottleneckTracker {
     if (active === isActive) return;
     if (!active) {
       this.idleSince[station] = t;
-      if (t < this.oldestIdle) this.oldestIdle = t;
+      this.pushIdle(station, t);
       return;
     }
     if (this.idleSince[station] >= 0) {
@@ -83,28 +93,62 @@ export class BottleneckTracker {
     this.activeSince[station] = -1;
     this.idleSince[station] = -1;
     if (end > start) {
-      this.pStation.push(station);
-      this.pStart.push(start);
-      this.pEnd.push(end);
+      this.addPeriod(station, start, end);
     }
   }
 
-  private closeStale(t: number): void {
-    if (!(t - this.oldestIdle > this.bridgeSeconds)) return;
-    let closed = false;
-    let oldest = Infinity;
-    for (let s = 0; s < this.idleSince.length; s++) {
-      const idle = this.idleSince[s];
-      if (idle < 0) continue;
-      if (t - idle > this.bridgeSeconds) {
-        this.close(s);
-        closed = true;
-      } else if (idle < oldest) oldest = idle;
+  private addPeriod(station: number, start: number, end: number): void {
+    if (this.pCount === this.pStation.length) {
+      const n = 2 * this.pCount;
+      const stations = new Int32Array(n);
+      stations.set(this.pStation);
+      const starts = new Float64Array(n);
+      starts.set(this.pStart);
+      const ends = new Float64Array(n);
+      ends.set(this.pEnd);
+      this.pStation = stations;
+      this.pStart = starts;
+      this.pEnd = ends;
     }
-    this.oldestIdle = oldest;
+    this.pStation[this.pCount] = station;
+    this.pStart[this.pCount] = start;
+    this.pEnd[this.pCount++] = end;
+  }
+
+  private pushIdle(station: number, t: number): void {
+    const capacity = this.idleStation.length;
+    if (this.idleCount === capacity) {
+      const stations = new Int32Array(2 * capacity);
+      const times = new Float64Array(2 * capacity);
+      for (let i = 0; i < capacity; i++) {
+        stations[i] = this.idleStation[(this.idleHead + i) % capacity];
+        times[i] = this.idleTime[(this.idleHead + i) % capacity];
+      }
+      this.idleStation = stations;
+      this.idleTime = times;
+      this.idleHead = 0;
+    }
+    const at = (this.idleHead + this.idleCount++) % this.idleStation.length;
+    this.idleStation[at] = station;
+    this.idleTime[at] = t;
+  }
+
+  /** Ends the periods of stations inactive for longer than the bridge, oldest first. */
+  private closeStale(t: number): void {
+    let closed = false;
+    while (this.idleCount > 0) {
+      const since = this.idleTime[this.idleHead];
+      if (!(t - since > this.bridgeSeconds)) break;
+      const station = this.idleStation[this.idleHead];
+      this.idleHead = (this.idleHead + 1) % this.idleStation.length;
+      this.idleCount--;
+      if (this.idleSince[station] !== since) continue;
+      this.close(station);
+      closed = true;
+    }
     if (!closed) return;
-    if (this.pStation.length > MAX_PENDING) this.resolve(t, true);
-    else if (this.pStation.length > this.resolveAt) this.resolve(t, false);
+    if (this.pCount > MAX_PENDING) this.resolve(t, true);
+    else if (this.pCount > this.resolveAt) this.resolve(t, false);
   }
 
   /** Resolves the timeline up to t (forced: running periods end at t). */
@@ -118,9 +162,7 @@ export class BottleneckTracker {
         }
         const since = this.activeSince[s];
         if (since >= 0 && t > since) {
-          this.pStation.push(s);
-          this.pStart.push(since);
-          this.pEnd.push(t);
+          this.addPeriod(s, since, t);
           this.activeSince[s] = t;
         }
       }
@@ -131,19 +173,17 @@ export class BottleneckTracker {
     this.sweep(boundary);
     this.settled = boundary;
     let kept = 0;
-    for (let i = 0; i < this.pStation.length; i++) {
+    for (let i = 0; i < this.pCount; i++) {
       if (this.pEnd[i] <= boundary) continue;
       this.pStation[kept] = this.pStation[i];
       this.pStart[kept] = this.pStart[i];
       this.pEnd[kept] = this.pEnd[i];
       kept++;
     }
-    this.pStation.length = kept;
-    this.pStart.length = kept;
-    this.pEnd.length = kept;
+    this.pCount = kept;
     // Periods that stay pending (behind a long-running one) are re-read by each sweep; growing the
-    // trigger with them keeps the work per period constant.
-    this.resolveAt = Math.max(MIN_BATCH, 2 * kept);
+    // trigger with them (four times their number) keeps the work per period constant and small.
+    this.resolveAt = Math.max(MIN_BATCH, 4 * kept);
   }
 
   /** Closes every running period at the end of the run and attributes the last segment. */
@@ -154,52 +194,78 @@ export class BottleneckTracker {
   }
 
   /**
-   * Walks the cut points (period starts and ends) between the settled time and the boundary. A
-   * station's periods are disjoint and close in order, so each station keeps a pointer to its first
-   * period not yet over; at most one period per station covers any instant.
+   * Walks the cut points (period starts and ends) between the settled time and the boundary. At each
+   * instant the momentary bottleneck is the longest period covering it (ties to the lower station
+   * index); periods join the heap as the sweep passes their start and leave it once over.
    */
   private sweep(boundary: number): void {
-    const n = this.pStation.length;
+    const n = this.pCount;
     if (this.cuts.length < 2 * n + 2) {
       this.cuts = new Float64Array(4 * n + 4);
-      this.nextSame = new Int32Array(2 * n + 2);
+      this.byStart = new Int32Array(2 * n + 2);
+      this.heap = new Int32Array(2 * n + 2);
     }
     const cuts = this.cuts;
+    const starts = this.pStart;
+    const ends = this.pEnd;
     let count = 0;
     cuts[count++] = this.settled;
     cuts[count++] = boundary;
     for (let i = 0; i < n; i++) {
-      if (this.pStart[i] > this.settled && this.pStart[i] < boundary) cuts[count++] = this.pStart[i];
-      if (this.pEnd[i] > this.settled && this.pEnd[i] < boundary) cuts[count++] = this.pEnd[i];
+      if (starts[i] > this.settled && starts[i] < boundary) cuts[count++] = starts[i];
+      if (ends[i] > this.settled && ends[i] < boundary) cuts[count++] = ends[i];
     }
     const points = cuts.subarray(0, count).sort();
-    const pointer = this.covering.fill(-1);
-    for (let i = n - 1; i >= 0; i--) {
-      const st = this.pStation[i];
-      this.nextSame[i] = pointer[st];
-      pointer[st] = i;
-    }
-    const starts = this.pStart;
-    const ends = this.pEnd;
+    const order = this.byStart.subarray(0, n);
+    for (let i = 0; i < n; i++) order[i] = i;
+    // A comparator returning -1, 0 or 1 (small integers) keeps the sort free of allocations.
+    order.sort((x, y) => (starts[x] < starts[y] ? -1 : starts[x] > starts[y] ? 1 : 0));
+    this.heapSize = 0;
+    let next = 0;
     for (let k = 0; k + 1 < count; k++) {
       const a = points[k];
       const b = points[k + 1];
       if (b <= a) continue;
-      let best = -1;
-      let bestLen = -1;
-      for (let st = 0; st < pointer.length; st++) {
-        let i = pointer[st];
-        while (i >= 0 && ends[i] <= a) i = this.nextSame[i];
-        pointer[st] = i;
-        if (i < 0 || starts[i] > a) continue;
-        const len = ends[i] - starts[i];
-        if (len > bestLen) {
-          best = i;
-          bestLen = len;
-        }
-      }
-      if (best >= 0) this.extend(this.pStation[best], starts[best], ends[best], a, b);
+      while (next < n && starts[order[next]] <= a) this.heapPush(order[next++]);
+      while (this.heapSize > 0 && ends[this.heap[0]] <= a) this.heapPop();
+      if (this.heapSize === 0) continue;
+      const best = this.heap[0];
+      this.extend(this.pStation[best], starts[best], ends[best], a, b);
     }
+  }
+
+  /** Period i outranks period j: longer, or as long and of a lower station index. */
+  private outranks(i: number, j: number): boolean {
+    const li = this.pEnd[i] - this.pStart[i];
+    const lj = this.pEnd[j] - this.pStart[j];
+    return li > lj || (li === lj && this.pStation[i] < this.pStation[j]);
+  }
+
+  private heapPush(i: number): void {
+    const heap = this.heap;
+    let at = this.heapSize++;
+    while (at > 0) {
+      const parent = (at - 1) >> 1;
+      if (!this.outranks(i, heap[parent])) break;
+      heap[at] = heap[parent];
+      at = parent;
+    }
+    heap[at] = i;
+  }
+
+  private heapPop(): void {
+    const heap = this.heap;
+    const last = heap[--this.heapSize];
+    let at = 0;
+    for (;;) {
+      let child = 2 * at + 1;
+      if (child >= this.heapSize) break;
+      if (child + 1 < this.heapSize && this.outranks(heap[child + 1], heap[child])) child++;
+      if (!this.outranks(heap[child], last)) break;
+      heap[at] = heap[child];
+      at = child;
+    }
+    heap[at] = last;
   }
 
   private extend(station: number, periodStart: number, periodEnd: number, from: number, to: number): void {

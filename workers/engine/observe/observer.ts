@@ -2,7 +2,8 @@
 // recorder turns them into time shares, counts and bounded-size series. Times are simulation seconds.
 export type Observer = {
   stationState(station: number, state: number, t: number): void;
-  carrierPhase(carrier: number, phase: number, t: number): void;
+  /** count carriers went from one phase to another (from -1: placed on the line). */
+  carrierPhases(from: number, to: number, count: number, t: number): void;
   transferState(conn: number, state: number, t: number): void;
   /** A carrier joined (+1) or left (-1) the queue in front of a transfer. */
   transferQueue(conn: number, delta: number, t: number): void;

@@ -51,8 +51,9 @@ export class Recorder implements Observer {
   reworkedCount = 0;
   private readonly sState: Int8Array;
   private readonly sSince: Float64Array;
-  private readonly cShare: Int8Array;
-  private readonly cSince: Float64Array;
+  /** Carriers in each share now, and since when. */
+  private readonly shareCount = new Float64Array(CARRIER_SHARES);
+  private readonly shareSince = new Float64Array(CARRIER_SHARES);
   private readonly tState: Int8Array;
   private readonly tSince: Float64Array;
 
@@ -77,8 +78,6 @@ export class Recorder implements Observer {
     this.stationAssignedLevels = new Levels(w, s);
     this.sState = new Int8Array(s).fill(ST_STARVED);
     this.sSince = new Float64Array(s);
-    this.cShare = new Int8Array(line.carrierCount).fill(-1);
-    this.cSince = new Float64Array(line.carrierCount);
     this.transferTime = new Float64Array(line.connCount * TRANSFER_STATES);
     this.transferMoves = new Float64Array(line.connCount);
     this.transferQueueLevels = new Levels(w, line.connCount);
@@ -102,11 +101,15 @@ export class Recorder implements Observer {
     this.bottleneck.setActive(station, state !== ST_STARVED && state !== ST_BLOCKED, t);
   }
 
-  carrierPhase(carrier: number, phase: number, t: number): void {
-    const old = this.cShare[carrier];
-    if (old >= 0) this.carrierTime[old] += this.window.overlap(this.cSince[carrier], t);
-    this.cShare[carrier] = carrierShare(phase);
-    this.cSince[carrier] = t;
+  carrierPhases(from: number, to: number, count: number, t: number): void {
+    if (from >= 0) this.shareChange(carrierShare(from), -count, t);
+    this.shareChange(carrierShare(to), count, t);
+  }
+
+  private shareChange(share: number, delta: number, t: number): void {
+    this.carrierTime[share] += this.shareCount[share] * this.window.overlap(this.shareSince[share], t);
+    this.shareCount[share] += delta;
+    this.shareSince[share] = t;
   }
 
   transferState(conn: number, state: number, t: number): void {
@@ -192,10 +195,7 @@ export class Recorder implements Observer {
   finish(): void {
     const end = this.window.end;
     for (let s = 0; s < this.sState.length; s++) this.stationState(s, this.sState[s], end);
-    for (let c = 0; c < this.cShare.length; c++) {
-      if (this.cShare[c] >= 0) this.carrierTime[this.cShare[c]] += this.window.overlap(this.cSince[c], end);
-      this.cSince[c] = end;
-    }
+    for (let share = 0; share < CARRIER_SHARES; share++) this.shareChange(share, 0, end);
     for (let k = 0; k < this.tState.length; k++) this.transferState(k, this.tState[k], end);
     this.wip(this.wipLevel.current(0), end);
     this.bottleneck.finish(end);

@@ -53,7 +53,22 @@ function Summary({ value, label }: { value: unknown; label: string }) {
   );
 }
 
-export function DistributionEditor({ name, label }: { name: string; label: string }) {
+/** A range outside which a mean is probably a typing slip, for a caution that does not refuse the value. */
+export interface PlausibleRange {
+  minSeconds: number;
+  maxSeconds: number;
+}
+
+function plausibilityCaution(value: unknown, range: PlausibleRange | undefined, label: string): string | null {
+  if (!range) return null;
+  const parsed = distributionSchema.safeParse(value);
+  if (!parsed.success) return null;
+  const mean = distributionMean(parsed.data);
+  if (mean >= range.minSeconds && mean <= range.maxSeconds) return null;
+  return `A mean ${label.toLowerCase()} of ${mean.toLocaleString('en-GB', { maximumSignificantDigits: 4 })} s is unusual (most lie between ${range.minSeconds} s and ${range.maxSeconds.toLocaleString('en-GB')} s); check the value and that it is in seconds. It is kept as typed.`;
+}
+
+export function DistributionEditor({ name, label, plausible }: { name: string; label: string; plausible?: PlausibleRange }) {
   const id = useId();
   const { control, setValue } = useFormContext<ScenarioForm>();
   const { readOnly, clearExternal } = useEditor();
@@ -83,6 +98,11 @@ export function DistributionEditor({ name, label }: { name: string; label: strin
         </div>
         <Summary value={value} label={label} />
       </div>
+      {plausibilityCaution(value, plausible, label) && (
+        <p className="rounded bg-caution-soft px-2 py-1 text-xs text-caution" data-plausibility-caution>
+          {plausibilityCaution(value, plausible, label)}
+        </p>
+      )}
       <div key={kind} className="grid grid-cols-3 gap-3">
         {PARAMETERS[kind].map((p) => (
           <NumberField key={p.key} name={`${name}.${p.key}`} label={p.label} step={p.step} />

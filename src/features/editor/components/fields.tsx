@@ -1,8 +1,9 @@
 // Compact fields for the scenario editor, bound to the form by dotted path. Each shows the schema's
 // message (or the server's or engine's) directly under itself, worded with the field's label.
 import { useId, type ReactNode } from 'react';
-import { useFormContext, useFormState, type FieldPath } from 'react-hook-form';
+import { useFormContext, useFormState, useWatch, type FieldPath } from 'react-hook-form';
 import { useEditor, type ScenarioForm } from '../editor-context';
+import { decimalProblem, parseDecimal } from '../utils/decimal-input';
 import { fieldMessage } from '../utils/messages';
 import { errorAt } from '../utils/paths';
 
@@ -26,11 +27,14 @@ interface FrameProps {
   label: string;
   hint?: string;
   className?: string;
+  /** Said instead of the schema's message (what the field made of the typed text). */
+  problem?: string | null;
   children: (describedBy: string | undefined, invalid: boolean) => ReactNode;
 }
 
-export function FieldFrame({ id, name, label, hint, className = '', children }: FrameProps) {
-  const issue = useFieldIssue(name);
+export function FieldFrame({ id, name, label, hint, className = '', problem, children }: FrameProps) {
+  const schemaIssue = useFieldIssue(name);
+  const issue = schemaIssue && problem ? problem : schemaIssue;
   const errorId = `${id}-error`;
   const hintId = hint ? `${id}-hint` : undefined;
   const describedBy = [hintId, issue ? errorId : undefined].filter(Boolean).join(' ') || undefined;
@@ -47,7 +51,7 @@ export function FieldFrame({ id, name, label, hint, className = '', children }: 
       )}
       {issue && (
         <p id={errorId} className="text-xs font-medium text-danger" data-field-error={name}>
-          {fieldMessage(label, name, issue)}
+          {issue === problem ? `${label.replace(/\s*\([^)]*\)$/, '')}: ${problem}` : fieldMessage(label, name, issue)}
         </p>
       )}
     </div>
@@ -56,8 +60,11 @@ export function FieldFrame({ id, name, label, hint, className = '', children }: 
 
 const border = (invalid: boolean) => (invalid ? 'border-danger' : 'border-ink-faint');
 
-/** Empty means "not given", so optional numbers can be cleared and required ones say they are required. */
-export const numberFromInput = (value: unknown) => (value === '' || value === null || value === undefined ? undefined : typeof value === 'number' ? value : Number(value));
+/**
+ * Empty means "not given", so optional numbers can be cleared and required ones say they are
+ * required; either decimal separator is accepted, and anything ambiguous is left for the schema to refuse.
+ */
+export const numberFromInput = parseDecimal;
 
 interface FieldProps {
   name: Name;
@@ -86,11 +93,16 @@ function useBoundControl(name: Name, setValueAs?: (value: unknown) => unknown) {
   return { id, bind };
 }
 
-export function NumberField({ name, label, hint, className, step = 'any', min }: FieldProps & { step?: string; min?: number }) {
+/**
+ * A text box, not type="number": a number input in an English-language browser reads "9,5" as 95,
+ * and hides what was typed from the page; here the page reads it and says what it made of it.
+ */
+export function NumberField({ name, label, hint, className }: FieldProps & { step?: string; min?: number }) {
   const { id, bind } = useBoundControl(name, numberFromInput);
+  const typed: unknown = useWatch<ScenarioForm>({ name: asPath(name) });
   return (
-    <FieldFrame id={id} name={name} label={label} hint={hint} className={className}>
-      {(describedBy, invalid) => <input type="number" inputMode="decimal" step={step} min={min} {...bind(describedBy, invalid)} />}
+    <FieldFrame id={id} name={name} label={label} hint={hint} className={className} problem={decimalProblem(typed)}>
+      {(describedBy, invalid) => <input type="text" inputMode="decimal" autoComplete="off" {...bind(describedBy, invalid)} />}
     </FieldFrame>
   );
 }

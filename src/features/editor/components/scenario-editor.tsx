@@ -37,16 +37,17 @@ function Count({ roots }: { roots: string[] }) {
 export function ScenarioEditor({ section, onSection }: { section: SectionId; onSection: (id: SectionId) => void }) {
   const open = SECTIONS.find((s) => s.id === section) ?? SECTIONS[0];
   return (
-    <div className="grid grid-cols-[10.5rem_1fr] gap-4">
+    <div className="grid grid-cols-1 gap-4 sm:grid-cols-[10.5rem_1fr]">
       <nav aria-label="Scenario sections">
-        <ul className="flex flex-col gap-0.5">
+        {/* A row of section buttons above the section on a phone; a side menu from small tablets up. */}
+        <ul className="flex flex-wrap gap-1 sm:flex-col sm:flex-nowrap sm:gap-0.5">
           {SECTIONS.map((s) => (
             <li key={s.id}>
               <button
                 type="button"
                 onClick={() => onSection(s.id)}
                 aria-current={s.id === open.id ? 'true' : undefined}
-                className={`flex w-full items-center gap-2 rounded px-2 py-1.5 text-left text-sm ${s.id === open.id ? 'bg-ink font-semibold text-white' : 'text-ink hover:bg-paper-sunk'}`}
+                className={`flex items-center gap-2 rounded px-2 py-1.5 sm:w-full text-left text-sm ${s.id === open.id ? 'bg-ink font-semibold text-white' : 'text-ink border border-paper-sunk hover:bg-paper-sunk sm:border-transparent'}`}
               >
                 {s.label}
                 <Count roots={s.roots} />

@@ -74,13 +74,13 @@ export function StationResults({ result, stepNames, fileBase }: StationResultsPr
       <p className="max-w-prose text-ink" data-testid="bottleneck-sentence">
         {bottleneckSentence(result)}
       </p>
-      <StationStateBars stations={stationBars(result)} bottleneckId={result.bottleneckStationId} bottleneckShare={bottleneck?.bottleneckShare} exportName={`${fileBase}-station-states`} />
+      <StationStateBars stations={stationBars(result)} bottleneckId={result.bottleneckStationId} bottleneckShare={bottleneck?.bottleneckShare} exportName={`${fileBase}-station-states-chart`} />
       <ResultTable
         caption="Station time shares and bottleneck"
         rows={rows}
         columns={stateColumns}
         rowKey={(s) => s.id}
-        fileBase={`${fileBase}-station-states`}
+        fileBase={`${fileBase}-station-shares-table`}
         emphasise={emphasise}
       />
       <ResultTable

@@ -5,6 +5,7 @@ import { useMemo } from 'react';
 import { useNavigate, useParams } from 'react-router-dom';
 import { LoadError } from '../../../components/load-error';
 import { NotFoundMessage } from '../../../components/not-found-message';
+import { ButtonLink } from '../../../components/ui/button';
 import { Card, CardTitle } from '../../../components/ui/card';
 import { Breadcrumbs } from '../../../components/ui/breadcrumbs';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -64,7 +65,12 @@ export function RunRoute() {
         }
         description={`Revision ${data.revisionNumber}, seed ${data.seed}: ${data.settings.replications} replication${data.settings.replications === 1 ? '' : 's'} of ${data.settings.hours} h after ${data.settings.warmupMinutes} min warm-up.`}
         actions={
-          <RunRowActions run={data} mayRerun={false} mayDelete={mayChange(data)} onDeleted={() => navigate(`/scenarios/${data.scenarioId}`, { replace: true })} />
+          <>
+            <ButtonLink variant="secondary" to={`/runs/${data.id}/playback`} data-watch-run>
+              Watch the line run
+            </ButtonLink>
+            <RunRowActions run={data} mayRerun={false} mayDelete={mayChange(data)} onDeleted={() => navigate(`/scenarios/${data.scenarioId}`, { replace: true })} />
+          </>
         }
       />
       <SafetyCaution />

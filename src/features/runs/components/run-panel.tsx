@@ -10,6 +10,7 @@ import { Card, CardTitle } from '../../../components/ui/card';
 import { useCanEdit } from '../../auth/hooks/use-can-edit';
 import { SimulationProblem } from '../../simulation/components/simulation-problem';
 import { SimulationProgress } from '../../simulation/components/simulation-progress';
+import { useLeaveWarning } from '../../simulation/hooks/use-leave-warning';
 import { useRunAndSave } from '../hooks/use-run-and-save';
 import { splitSettingsIssues } from '../utils/settings-form';
 import { RunSettingsForm } from './run-settings-form';
@@ -33,6 +34,7 @@ export function RunPanel({ scenarioId, organisationId, revision, onScenarioIssue
   const outcome = simulation.outcome;
   const issues = useMemo(() => splitSettingsIssues(outcome?.status === 'invalid' ? outcome.issues : []), [outcome]);
 
+  useLeaveWarning(simulation.status === 'running');
   if (!mayRun) return null;
 
   const onRun = async (settings: RunSettings) => {

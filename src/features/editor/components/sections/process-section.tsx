@@ -2,6 +2,7 @@
 // step shows its stations, and a station picked in the drawing opens here.
 import { useState } from 'react';
 import { useFieldArray, useFormContext, useWatch } from 'react-hook-form';
+import { DEFAULT_DISPATCH } from '../../../../../shared/scenario/process';
 import { useEditor, type ScenarioForm } from '../../editor-context';
 import { useIssueCount } from '../../hooks/use-has-issues';
 import { freeId } from '../../utils/defaults';
@@ -42,7 +43,7 @@ export function ProcessSection() {
     const id = freeId('step', (getValues('steps') ?? []).map((s) => s.id));
     // New work goes before unload, which must stay last.
     const at = Math.max(count - 1, 0);
-    steps.insert(at, { id, name: 'New step', kind: 'process', dispatch: 'firstFree', stations: [] });
+    steps.insert(at, { id, name: 'New step', kind: 'process', dispatch: DEFAULT_DISPATCH, stations: [] });
     open(at);
   };
   const remove = (index: number) => {

@@ -4,6 +4,12 @@ import { STATION_OPERATIONS } from '../../../../../shared/scenario/process';
 import { TimeStudyPanel } from '../../../time-studies';
 import { useEditor, type ScenarioForm } from '../../editor-context';
 import { DistributionEditor } from '../distribution-editor';
+
+/**
+ * Station cycle times on carrier lines run from a fraction of a second (a pick or a press stroke) to
+ * several minutes (a manual fitting or a leak test): common trade practice, not a standard.
+ */
+const CYCLE_TIME_RANGE = { minSeconds: 0.2, maxSeconds: 3600 };
 import { CheckField, NumberField, SelectField, TextField } from '../fields';
 
 const DEFAULT_FAILURES = {
@@ -32,7 +38,7 @@ export function StationDetails({ stepIndex, stationIndex }: { stepIndex: number;
           <CheckField name={`${base}.pausesForBreaks`} label="Pauses for breaks" />
         </div>
       </div>
-      <DistributionEditor name={`${base}.cycleTimeSeconds`} label="Cycle time" />
+      <DistributionEditor name={`${base}.cycleTimeSeconds`} label="Cycle time" plausible={CYCLE_TIME_RANGE} />
       {scenarioId && (
         <TimeStudyPanel
           scenarioId={scenarioId}

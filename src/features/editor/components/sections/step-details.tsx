@@ -1,6 +1,6 @@
 // One process step: its kind and dispatch rule, inspection shares, and the stations serving it.
 import { useFieldArray, useFormContext, useWatch } from 'react-hook-form';
-import { DISPATCH_RULES, STEP_KINDS, type Step, type StepKind } from '../../../../../shared/scenario/process';
+import { DEFAULT_DISPATCH, DISPATCH_RULES, STEP_KINDS, type Step, type StepKind } from '../../../../../shared/scenario/process';
 import { distributionSchema } from '../../../../../shared/scenario/distribution';
 import { distributionMean } from '../../../../../shared/scenario/distribution-moments';
 import { useEditor, type ScenarioForm } from '../../editor-context';
@@ -10,7 +10,12 @@ import { ListIssue, NumberField, SelectField, TextField } from '../fields';
 import { PickRow, SectionHeading, SmallButton } from '../row-actions';
 import { StationDetails } from './station-details';
 
-const DISPATCH_LABELS: Record<(typeof DISPATCH_RULES)[number], string> = { firstFree: 'First free', shortestQueue: 'Shortest queue', roundRobin: 'Round robin' };
+const DISPATCH_LABELS: Record<(typeof DISPATCH_RULES)[number], string> = {
+  pooled: 'Pooled: decided where the routes part',
+  firstFree: 'First free, fixed at the previous step',
+  shortestQueue: 'Shortest queue, fixed at the previous step',
+  roundRobin: 'In turn, fixed at the previous step',
+};
 
 type DraftStation = NonNullable<NonNullable<ScenarioForm['steps']>[number]['stations']>[number];
 
@@ -40,7 +45,7 @@ export function StepDetails({ stepIndex }: { stepIndex: number }) {
 
   const changeKind = (next: StepKind) => {
     const current = getValues(base);
-    if (current) setValue(base, stepOfKind(next, { ...current, stations: (current.stations ?? []) as Step['stations'], dispatch: current.dispatch ?? 'firstFree' }), { shouldDirty: true, shouldValidate: true });
+    if (current) setValue(base, stepOfKind(next, { ...current, stations: (current.stations ?? []) as Step['stations'], dispatch: current.dispatch ?? DEFAULT_DISPATCH }), { shouldDirty: true, shouldValidate: true });
   };
   const addStation = (copyOf?: number) => {
     const all = (getValues('steps') ?? []).flatMap((s) => s.stations ?? []);

@@ -2,8 +2,8 @@
 // time-study analysis computed once at upload.
 import type { MigrationInterface, QueryRunner } from 'typeorm';
 
-export class StoredChecks1796200000001 implements MigrationInterface {
-  name = 'StoredChecks1796200000001';
+export class StoredChecks1796210000001 implements MigrationInterface {
+  name = 'StoredChecks1796210000001';
 
   public async up(queryRunner: QueryRunner): Promise<void> {
     await queryRunner.query(`ALTER TABLE "projects" ADD "client_id" uuid`);

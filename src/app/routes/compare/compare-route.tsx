@@ -1,0 +1,84 @@
+// /projects/:projectId/compare?runs=a,b : two to four layouts side by side. Scenarios are run here
+// with one seed and stored, then compared as runs; stored runs can be picked directly.
+import { useCallback } from 'react';
+import { useNavigate, useParams, useSearchParams } from 'react-router-dom';
+import { LoadError } from '../../../components/load-error';
+import { ButtonLink } from '../../../components/ui/button';
+import { Breadcrumbs } from '../../../components/ui/breadcrumbs';
+import { PageHeader } from '../../../components/ui/page-header';
+import { PageSpinner } from '../../../components/ui/spinner';
+import { useCanEdit } from '../../../features/auth/hooks/use-can-edit';
+import { CompareSetup } from '../../../features/compare/components/compare-setup';
+import { CompareView } from '../../../features/compare/components/compare-view';
+import { COMPARE_LIMITS } from '../../../features/compare/utils/comparison';
+import { useRuns } from '../../../features/runs/api/get-runs';
+import { useScenarios } from '../../../features/scenarios/api/get-scenarios';
+import { CostSection } from './cost-section';
+import { COMPARE_QUESTION } from './question';
+import { parseRunIds, useComparisonData } from './use-comparison-data';
+import { useScenarioRuns } from './use-scenario-runs';
+
+export function CompareRoute() {
+  const { projectId = '' } = useParams();
+  const [search] = useSearchParams();
+  const navigate = useNavigate();
+  const askedFor = parseRunIds(search.get('runs'));
+  const runIds = askedFor.slice(0, COMPARE_LIMITS.max);
+  const data = useComparisonData(projectId, runIds);
+  const scenarios = useScenarios(projectId);
+  const runs = useRuns({ projectId });
+  const organisationId = data.project.data?.organisationId;
+  const mayEdit = useCanEdit(organisationId);
+  const showRuns = useCallback((ids: string[]) => navigate(`/projects/${projectId}/compare?runs=${ids.join(',')}`), [navigate, projectId]);
+  const scenarioRuns = useScenarioRuns(showRuns);
+
+  if (data.project.isPending) return <PageSpinner label="Loading the project…" />;
+  if (data.project.isError) return <LoadError what="the project" error={data.project.error} onRetry={() => void data.project.refetch()} />;
+  const comparing = runIds.length >= COMPARE_LIMITS.min;
+
+  return (
+    <div className="flex flex-col gap-8 overflow-x-clip">
+      <PageHeader
+        title="Compare layouts"
+        trail={
+          <Breadcrumbs
+            items={[
+              { label: 'Projects', to: '/' },
+              { label: data.project.data.name, to: `/projects/${projectId}` },
+              { label: 'Compare' },
+            ]}
+          />
+        }
+        description="Throughput, takt, output, WIP and lead time of two to four layouts with 95 % intervals on their differences, what each costs and how much floor it takes."
+        actions={comparing && data.items ? <ButtonLink to={`/projects/${projectId}/compare/report?runs=${runIds.join(',')}`}>Printable report</ButtonLink> : undefined}
+      />
+      <CompareSetup
+        runs={runs.data ?? []}
+        scenarios={(scenarios.data ?? []).map((s) => ({ id: s.id, name: s.name, latestRevisionNumber: s.latestRevision.number }))}
+        selectedRunIds={runIds}
+        mayRun={mayEdit}
+        progress={scenarioRuns.progress}
+        problem={scenarioRuns.problem}
+        onCompareRuns={showRuns}
+        onRunScenarios={(ids, settings) => void scenarioRuns.start((scenarios.data ?? []).filter((s) => ids.includes(s.id)).map((s) => ({ id: s.id, name: s.name, latestRevisionNumber: s.latestRevision.number })), settings)}
+        onCancel={scenarioRuns.cancel}
+      />
+      {askedFor.length > COMPARE_LIMITS.max && (
+        <p className="text-sm font-medium text-caution">
+          The address names {askedFor.length} runs; a comparison holds at most {COMPARE_LIMITS.max}, so the first {COMPARE_LIMITS.max} are shown.
+        </p>
+      )}
+      {comparing && data.failed && <LoadError what="a run of the comparison" error={data.failed} />}
+      {comparing && !data.failed && !data.items && <PageSpinner label="Loading the runs…" />}
+      {comparing && data.items && organisationId && (
+        <CompareView
+          items={data.items}
+          stepNames={data.stepNames}
+          costs={data.pricing.costs}
+          question={COMPARE_QUESTION}
+          costSection={<CostSection organisationId={organisationId} priceList={data.priceList} scenarios={data.pricing.scenarios} mayEdit={mayEdit} />}
+        />
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,34 @@
+// The page `npm run bench:playback` opens: the triple-deck example with 50 carriers, a 30-minute
+// window recorded by the real engine in this page, and the real player. The driver
+// (playback-bench.ts) times the page's animation frames from outside, and calls benchPaint to time
+// the painter alone (script and style work per frame, without the browser's own drawing).
+import '../index.css';
+import { createRoot } from 'react-dom/client';
+import tripleDeck from '../../shared/examples/triple-deck.json';
+import { recordPlayback } from '../../workers/engine';
+import { planFrame } from '../features/layout/drawing-frame';
+import { elevationFrame } from '../features/layout/elevation-view';
+import { layoutModel, type LayoutDraft } from '../features/layout/layout-model';
+import { createPainter } from '../features/layout/playback/painter';
+import { PlaybackPlayer } from '../features/layout/playback/playback-player';
+import { indexTrace } from '../features/layout/playback/trace-index';
+
+const CARRIERS = 50;
+
+const trace = await recordPlayback(tripleDeck, { hours: 1, warmupMinutes: 10, replications: 1, seed: 1, carriers: CARRIERS }, { startMinutes: 10, windowMinutes: 30 });
+createRoot(document.getElementById('root') as HTMLElement).render(<PlaybackPlayer document={tripleDeck as LayoutDraft} trace={trace} />);
+
+/** Milliseconds per painted frame over `frames` frames one simulated second apart, style recalculated each time. */
+Object.assign(window, {
+  benchPaint(frames: number): number {
+    const root = document.querySelector<HTMLElement>('[data-playback]') as HTMLElement;
+    const model = layoutModel(tripleDeck as LayoutDraft);
+    const painter = createPainter(root, model, indexTrace(trace), model.footprint ? planFrame(model.footprint.box) : null, elevationFrame(model));
+    const started = performance.now();
+    for (let i = 0; i < frames; i++) {
+      painter.paint(trace.startSeconds + i);
+      root.getBoundingClientRect();
+    }
+    return (performance.now() - started) / frames;
+  },
+});

@@ -1,0 +1,107 @@
+// The demo engineer runs a short experiment, opens its playback from the result page, records a
+// window, plays it, pauses and scrubs: carriers move on the decks and in the side elevation, the
+// clock follows. Screenshots go to test-artifacts/screenshots/playback-*.png.
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser, screenshot, startTestApp, type TestApp, type TestBrowser } from '../support/browser';
+
+const RUN_TIMEOUT = 90_000;
+
+let app: TestApp;
+let browser: TestBrowser;
+let page: Page;
+
+beforeAll(async () => {
+  app = await startTestApp();
+  browser = await launchBrowser();
+  page = browser.page;
+  await page.setViewportSize({ width: 1280, height: 900 });
+});
+
+afterAll(async () => {
+  await browser?.close();
+  await app?.close();
+});
+
+/** Where every carrier shown on a deck's plan is drawn, keyed by deck and carrier. */
+async function placements(): Promise<Map<string, string>> {
+  const marks = await page
+    .locator('[data-pb-carrier][visibility="visible"]:not([data-pb-view="@elevation"])')
+    .evaluateAll((els) => els.map((el) => [`${el.getAttribute('data-pb-view')}/${el.getAttribute('data-pb-carrier')}`, el.getAttribute('transform') ?? ''] as const));
+  return new Map(marks);
+}
+
+const clock = () => page.locator('[data-playback-clock]').textContent();
+const seconds = (hms: string | null) => (hms ?? '').split(':').reduce((sum, part) => sum * 60 + Number(part), 0);
+
+describe('playback of a stored run', () => {
+  it('records a window of the run from the result page', async () => {
+    await page.goto(`${app.url}/sign-in`);
+    await page.getByLabel('E-mail').fill('engineer@demo.lanewright.test');
+    await page.getByLabel('Password').fill('demo-password');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('link', { name: /Cartridge line layout study/ }).click();
+    await page.getByRole('link', { name: /Stacked loop/ }).first().click();
+    const form = page.getByRole('form', { name: 'Run settings' });
+    await form.getByLabel('Hours simulated', { exact: true }).fill('1');
+    await form.getByLabel('Warm-up (minutes)', { exact: true }).fill('10');
+    await form.getByLabel('Replications', { exact: true }).fill('2');
+    await page.getByRole('button', { name: 'Run simulation' }).click();
+    await page.getByRole('link', { name: 'Open the results' }).click({ timeout: RUN_TIMEOUT });
+    await page.getByRole('link', { name: 'Watch the line run' }).click();
+    await page.getByRole('heading', { level: 1, name: /^Playback of / }).waitFor();
+
+    await page.getByLabel('Replication', { exact: true }).fill('3');
+    await page.getByRole('button', { name: 'Record window' }).click();
+    await page.getByText('Replication must be from 1 to 2').waitFor();
+
+    await page.getByLabel('Replication', { exact: true }).fill('2');
+    await page.getByLabel('Start (minutes)').fill('12,5');
+    await page.getByLabel('Length (minutes)').fill('20');
+    await page.getByRole('button', { name: 'Record window' }).click();
+    await page.locator('[data-playback]').waitFor({ timeout: RUN_TIMEOUT });
+    expect(await clock()).toBe('0:12:30');
+    const shown = await placements();
+    expect(shown.size).toBeGreaterThan(0);
+    // Carriers are drawn on more than one deck of the stacked loop.
+    expect(new Set([...shown.keys()].map((k) => k.split('/')[0])).size).toBeGreaterThan(1);
+    // Every carrier of the scenario appears once in the side elevation.
+    expect(await page.locator('[data-pb-carriers="@elevation"] [visibility="visible"]').count()).toBe(await page.locator('[data-pb-carriers="@elevation"] [data-pb-carrier]').count());
+    expect(await page.locator('[data-pb-station][stroke^="#"]').count()).toBeGreaterThan(0);
+    await screenshot(page, 'playback-00-recorded');
+  });
+
+  it('plays: the clock runs and carriers move, then pauses', async () => {
+    const before = await placements();
+    const started = seconds(await clock());
+    await page.locator('[data-playback-speed]').selectOption('100');
+    await page.getByRole('button', { name: 'Play' }).click();
+    await page.waitForTimeout(1500);
+    await screenshot(page, 'playback-01-playing');
+    await page.getByRole('button', { name: 'Pause' }).click();
+    const paused = seconds(await clock());
+    expect(paused - started).toBeGreaterThan(60);
+    const after = await placements();
+    const moved = [...after].filter(([c, place]) => before.has(c) && before.get(c) !== place);
+    expect(moved.length).toBeGreaterThan(0);
+    await page.waitForTimeout(400);
+    expect(seconds(await clock())).toBe(paused);
+  });
+
+  it('scrubs to any moment of the window and back to its start', async () => {
+    const scrubber = page.locator('[data-playback-scrubber]');
+    const start = Number(await scrubber.getAttribute('min'));
+    const end = Number(await scrubber.getAttribute('max'));
+    expect(end - start).toBe(20 * 60);
+    const atStart = async () => {
+      await scrubber.fill(String(start));
+      return placements();
+    };
+    const first = await atStart();
+    await scrubber.fill(String(end - 60));
+    expect(seconds(await clock())).toBe(end - 60);
+    await screenshot(page, 'playback-02-scrubbed');
+    expect(await atStart()).toEqual(first);
+    expect(browser.pageErrors).toEqual([]);
+  });
+});

@@ -18,7 +18,12 @@ import { refuseCrossOriginMutations } from './http/origin-check';
 import { securityHeaders } from './http/security-headers';
 import { noteSuspectText, refuseUnstorableText } from './http/text-check';
 import { clientRouter } from './http/static-client';
+import type { CaughtMailbox } from './mail/mailbox';
+import type { Mailer } from './mail/mailer';
+import { accountRouter } from './routes/account';
 import { auditRouter } from './routes/audit';
+import { invitationsRouter } from './routes/invitations';
+import { mailboxRouter } from './routes/mailbox';
 import { authRouter } from './routes/auth';
 import { membersRouter } from './routes/members';
 import { priceListsRouter } from './routes/price-lists';
@@ -26,6 +31,7 @@ import { projectsRouter } from './routes/projects';
 import { revisionsRouter } from './routes/revisions';
 import { runsRouter } from './routes/runs';
 import { scenariosRouter } from './routes/scenarios';
+import { sharesRouter } from './routes/shares';
 import { timeStudiesRouter } from './routes/time-studies';
 import { exceptTimeStudyUploads } from './time-studies/upload-route';
 
@@ -40,11 +46,26 @@ export interface CreateAppOptions {
   /** The address the server listens on and extra host names it answers to (besides loopback names). */
   listenHost?: string;
   allowedHosts?: readonly string[];
+  /** How mail leaves; without it every send fails with a logged line (apps that never mail, like some tests). */
+  mailer?: Mailer;
+  /** The fake SMTP server's catch; mounts the development mailbox routes when given. */
+  mailbox?: CaughtMailbox;
 }
+
+const noMailer: Mailer = {
+  send: () => Promise.reject(new Error('this app was started without a mailer')),
+};
 
 export function createApp(opts: CreateAppOptions): express.Express {
   const publicOrigin = opts.publicOrigin ? new URL(opts.publicOrigin).origin : undefined;
-  const ctx: AppContext = { ds: opts.dataSource, auth: createAuth(opts.dataSource), publicOrigin, signInLimiter: createSignInLimiter(opts.dataSource) };
+  const ctx: AppContext = {
+    ds: opts.dataSource,
+    auth: createAuth(opts.dataSource),
+    publicOrigin,
+    signInLimiter: createSignInLimiter(opts.dataSource),
+    mailer: opts.mailer ?? noMailer,
+    mailbox: opts.mailbox,
+  };
   void prepareDecoy();
   const app = express();
   app.disable('x-powered-by');
@@ -64,7 +85,8 @@ export function createApp(opts: CreateAppOptions): express.Express {
   api.use((req, res, next) => parsers[bodyKindOf(req)](req, res, next));
   api.use(refuseUnstorableText);
   api.use(loadSession(ctx.auth, publicOrigin));
-  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, membersRouter, priceListsRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));
+  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, membersRouter, invitationsRouter, accountRouter, sharesRouter, priceListsRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));
+  if (ctx.mailbox) api.use(mailboxRouter(ctx.mailbox));
   api.use(unknownApiRoute);
   app.use('/api', api);
 

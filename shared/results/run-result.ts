@@ -2,6 +2,7 @@
 // of run settings). The engine produces it, the client draws it, the server stores it. Arrays of
 // numbers rather than objects per bin keep a stored result small whatever the run length.
 import { z } from 'zod';
+import { BREAK_MODES } from '../scenario/calendar';
 import { PROCESS_LIMITS } from '../scenario/process';
 import { RUN_LIMITS, runSettingsSchema } from '../scenario/run-settings';
 import { TRACK_LIMITS } from '../scenario/track';
@@ -53,10 +54,22 @@ export const transferResultSchema = z.object({
   id: text(),
   name: text(),
   kind: z.enum(['elevator', 'lateral', 'curve']),
-  /** Share of time carrying, holding a carrier it cannot deliver, or returning empty. */
+  /** Share of time not idle: carrying, blocked or returning. Not a measure of work: see `busy`. */
   utilisation: z.number(),
   /** Share of time holding a carrier the destination lane has no room for. */
   blocked: z.number(),
+  // The next four shares (with `blocked` they add up to 1) and the bottleneck share came with engine
+  // 1.2.0; results stored before it lack them, and transferShares() derives what it can.
+  /** Share of time carrying a carrier, from taking it in until it could be handed over. */
+  carrying: z.number().optional(),
+  /** Share of time travelling back empty after handing over (elevators and lateral transfers). */
+  returning: z.number().optional(),
+  /** Share of time waiting for a carrier. */
+  idle: z.number().optional(),
+  /** carrying + returning: the share of time the transfer works. */
+  busy: z.number().optional(),
+  /** Share of time this transfer was the momentary bottleneck (active-period method, as for stations). */
+  bottleneckShare: z.number().optional(),
   /** Time-average number of carriers waiting on the feeding lane whose next hop is this transfer. */
   meanQueue: z.number(),
   movesPerHour: z.number(),
@@ -152,6 +165,15 @@ export const runResultSchema = z.object({
   stations: listOf(stationResultSchema, PROCESS_LIMITS.stationsMax),
   transfers: listOf(transferResultSchema, TRACK_LIMITS.transfersMax),
   lanes: listOf(laneResultSchema, TRACK_LIMITS.lanesMax),
+  /**
+   * A transfer that held the line more often than any station (busy most of the time and rarely
+   * blocked), or null when a station did. Absent in results stored before engine 1.2.0.
+   */
+  bottleneckTransferId: z.string().nullable().default(null),
+  /** How the calendar's breaks applied (see calendarSchema.breakMode). Absent before engine 1.2.0. */
+  breakMode: z.enum(BREAK_MODES).default('manualStations'),
+  /** Minutes of breaks in each shift (0: none). Absent before engine 1.2.0. */
+  breakMinutesPerShift: z.number().optional(),
   carriers: carrierResultSchema,
   /** Load completion to unload, over output parts only; scrapped parts are not in it. */
   leadTimeSeconds: summaryQuantilesSchema.extend({ histogram: histogramSchema }),
@@ -181,3 +203,15 @@ export type LaneResult = z.infer<typeof laneResultSchema>;
 export type CarrierResult = z.infer<typeof carrierResultSchema>;
 export type ReplicationResult = z.infer<typeof replicationResultSchema>;
 export type RunResult = z.infer<typeof runResultSchema>;
+
+export type TransferShares = { carrying: number | null; returning: number | null; blocked: number; idle: number; busy: number };
+
+/**
+ * The four time shares of a transfer and its busy share. Results stored before engine 1.2.0 recorded
+ * only utilisation (not idle) and blocked: idle and busy follow from those, carrying and returning
+ * apart do not (null).
+ */
+export function transferShares(t: TransferResult): TransferShares {
+  const idle = t.idle ?? 1 - t.utilisation;
+  return { carrying: t.carrying ?? null, returning: t.returning ?? null, blocked: t.blocked, idle, busy: t.busy ?? t.utilisation - t.blocked };
+}

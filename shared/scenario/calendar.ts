@@ -16,6 +16,15 @@ const wholeBetween = (name: string, min: number, max: number) =>
     .refine(Number.isInteger, `${name} must be a whole number`)
     .refine((v) => v >= min && v <= max, `${name} must be from ${min} to ${max}`);
 
+/**
+ * What the calendar's breaks stop. manualStations: only manual stations that pause for breaks stop;
+ * automatic stations and carriers run on (and fill or drain around them). wholeLine: a planned stop of
+ * the whole line: carriers halt where they are, no station works, transfers finish nothing new; the
+ * line resumes as it stood when the break ends.
+ */
+export const BREAK_MODES = ['manualStations', 'wholeLine'] as const;
+export type BreakMode = (typeof BREAK_MODES)[number];
+
 export const breakSchema = z.object(
   {
     /** Minutes after the start of the shift. */
@@ -31,9 +40,10 @@ export const calendarSchema = z
     hoursPerShift: finiteNumber('hoursPerShift').refine((v) => v > 0, 'hoursPerShift must be above zero'),
     /** The same breaks apply to every shift. */
     breaks: z.array(breakSchema, { error: 'breaks must be a list' }).max(CALENDAR_LIMITS.breaksPerShiftMax, `at most ${CALENDAR_LIMITS.breaksPerShiftMax} breaks per shift`).default([]),
+    breakMode: z.enum(BREAK_MODES, { error: 'breakMode must be "manualStations" (only manual stations pause) or "wholeLine" (the whole line stops)' }).default('manualStations'),
     daysPerWeek: wholeBetween('daysPerWeek', 1, CALENDAR_LIMITS.daysPerWeekMax),
     weeksPerYear: wholeBetween('weeksPerYear', 1, CALENDAR_LIMITS.weeksPerYearMax),
-  }, { error: 'calendar must be an object with shiftsPerDay, hoursPerShift, breaks, daysPerWeek and weeksPerYear' })
+  }, { error: 'calendar must be an object with shiftsPerDay, hoursPerShift, breaks, breakMode, daysPerWeek and weeksPerYear' })
   .superRefine((c, ctx) => {
     if (c.shiftsPerDay * c.hoursPerShift > CALENDAR_LIMITS.hoursPerDay) {
       ctx.addIssue({

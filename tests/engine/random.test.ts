@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import type { Distribution } from '../../shared/scenario/distribution';
 import { createSampler } from '../../workers/engine/random/sampler';
 import { createStreamFactory, streamSeed } from '../../workers/engine/random/streams';
 
@@ -71,16 +72,52 @@ describe('samplers', () => {
     expect(first).toEqual(second);
   });
 
-  it('a truncated normal whose uniforms always fall below the cut returns the cut after bounded tries', () => {
+  it('a truncated normal maps u = 0 to its cut and never draws below it, however low the cut sits', () => {
+    for (const min of [11, 0, 11.999]) {
+      const d = { kind: 'normal', mean: 12, sd: 1, min } as const;
+      expect(createSampler(d, () => 0)()).toBeCloseTo(min, 9);
+      expect(createSampler(d, () => 1 - 2 ** -32)()).toBeGreaterThan(12);
+    }
+  });
+
+  const everyKind: Distribution[] = [
+    { kind: 'fixed', value: 4 },
+    { kind: 'uniform', min: 2, max: 6 },
+    { kind: 'triangular', min: 8, mode: 9, max: 15 },
+    { kind: 'normal', mean: 12, sd: 3, min: 10 },
+    { kind: 'lognormal', mean: 9, cv: 0.3 },
+    { kind: 'exponential', mean: 600 },
+    { kind: 'erlang', mean: 12, k: 3 },
+    { kind: 'gamma', mean: 4, cv: 0.25 },
+    { kind: 'gamma', mean: 4, cv: 4 },
+    { kind: 'empirical', samples: [7.9, 8.4, 9.1] },
+  ];
+
+  it.each(everyKind)('$kind takes exactly one uniform per draw, whatever the uniforms are', (d) => {
+    const stream = createStreamFactory('one-each', 0)('k');
     let calls = 0;
-    const alwaysLow = () => {
+    const counted = () => {
       calls++;
-      // Box–Muller at radius √(−2 ln 0.001) ≈ 3.7 and angle 225°: both variates of each pair are ≈ −2.6.
-      return calls % 2 === 1 ? 0.999 : 0.625;
+      return stream();
     };
-    const sample = createSampler({ kind: 'normal', mean: 12, sd: 1, min: 11 }, alwaysLow);
-    expect(sample()).toBe(11);
-    expect(calls).toBeLessThan(100);
+    const sample = createSampler(d, counted);
+    for (let i = 1; i <= 20_000; i++) {
+      sample();
+      expect(calls).toBe(i);
+    }
+  });
+
+  it.each(everyKind.filter((d) => d.kind !== 'fixed' && d.kind !== 'empirical'))('$kind draws grow with the uniform (inverse transform)', (d) => {
+    let u = 0;
+    const sample = createSampler(d, () => u);
+    let previous = -Infinity;
+    for (let k = 0; k <= 1000; k++) {
+      u = Math.min(k / 1000, 1 - 2 ** -32);
+      const x = sample();
+      expect(Number.isFinite(x)).toBe(true);
+      expect(x).toBeGreaterThanOrEqual(previous);
+      previous = x;
+    }
   });
 
   it('the triangular inverse CDF hits min, mode and max at u = 0, the mode quantile, and u → 1', () => {

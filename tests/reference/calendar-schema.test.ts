@@ -10,9 +10,16 @@ function problems(input: unknown): string[] {
 }
 
 describe('calendar schema', () => {
-  it('accepts a plain two-shift calendar and defaults breaks to none', () => {
+  it('accepts a plain two-shift calendar and defaults breaks to none, stopping manual stations only', () => {
     const { breaks: _breaks, ...withoutBreaks } = base;
-    expect(calendarSchema.parse(withoutBreaks)).toEqual(base);
+    expect(calendarSchema.parse(withoutBreaks)).toEqual({ ...base, breakMode: 'manualStations' });
+  });
+
+  it('accepts breaks that stop the whole line, and refuses any other break mode at its field', () => {
+    expect(calendarSchema.parse({ ...base, breakMode: 'wholeLine' }).breakMode).toBe('wholeLine');
+    expect(problems({ ...base, breakMode: 'sometimes' })).toEqual([
+      'breakMode: breakMode must be "manualStations" (only manual stations pause) or "wholeLine" (the whole line stops)',
+    ]);
   });
 
   it.each([

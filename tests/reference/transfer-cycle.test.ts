@@ -9,6 +9,7 @@ import { describe, expect, it } from 'vitest';
 import { DECK_DROP_MM, loopScenario, type LoopJoin, type LoopLine } from './support/loop-line';
 import { trapezoidMoveSeconds } from './support/queueing';
 import { simulate } from './support/run';
+import { transferShares } from '../../shared/results/run-result';
 
 const CARRIERS = { count: 12, lengthMm: 160, minGapMm: 40, vMaxMmPerS: 2_000, aMaxMmPerS2: 10_000 };
 const FAST_RETURN: LoopJoin = { kind: 'curve', lengthMm: 300, speedLimitMmPerS: 1_000 };
@@ -49,5 +50,38 @@ describe('a transfer that paces the line sets its throughput (common trade pract
     expect(trapezoidMoveSeconds(200, 2_000, 10_000)).toBeLessThan(3);
     const th = await throughput(line([{ kind: 'curve', lengthMm: 1_500, speedLimitMmPerS: 500 }, FAST_RETURN]));
     expect(Math.abs(th / (3600 / 3) - 1)).toBeLessThan(0.005);
+  }, 60_000);
+});
+
+describe('what a transfer reports: carrying, returning empty, blocked, idle', () => {
+  const SLOW: LoopJoin = { kind: 'elevator', handlingSeconds: 2, liftSpeedMmPerS: 200 };
+  const QUICK: LoopJoin = { kind: 'elevator', handlingSeconds: 0.5, liftSpeedMmPerS: 2_000 };
+
+  it('a pacing elevator carries (2 s + 2 s lift) / 6 s of the time, returns 2 s / 6 s, and holds the line', async () => {
+    const r = await simulate(loopScenario(line([SLOW, QUICK])), { hours: 2, warmupMinutes: 15, replications: 1, seed: 'transfer' });
+    const pacing = transferShares(r.transfers[0]);
+    expect(pacing.carrying).toBeCloseTo(4 / 6, 2);
+    expect(pacing.returning).toBeCloseTo(2 / 6, 2);
+    expect(pacing.blocked).toBeLessThan(0.01);
+    expect(pacing.busy).toBeCloseTo((pacing.carrying ?? 0) + (pacing.returning ?? 0), 12);
+    expect((pacing.carrying ?? 0) + (pacing.returning ?? 0) + pacing.blocked + pacing.idle).toBeCloseTo(1, 9);
+    expect(r.bottleneckTransferId).toBe('join-0');
+    expect(r.transfers[0].bottleneckShare ?? 0).toBeGreaterThan(Math.max(...r.stations.map((st) => st.bottleneckShare)));
+  }, 60_000);
+
+  it('an elevator kept waiting by a slow station is blocked, and the station, not the elevator, holds the line', async () => {
+    const spec = line([QUICK, QUICK]);
+    spec.stations = [
+      { id: 'LD', lane: 0, positionMm: 400, cycle: { kind: 'fixed', value: 1 } },
+      { id: 'PR', lane: 0, positionMm: 800, cycle: { kind: 'fixed', value: 12 } },
+      { id: 'UL', lane: 0, positionMm: 3_000, cycle: { kind: 'fixed', value: 1 } },
+    ];
+    const r = await simulate(loopScenario(spec), { hours: 2, warmupMinutes: 15, replications: 1, seed: 'transfer' });
+    const feeding = transferShares(r.transfers[1]);
+    expect(feeding.blocked).toBeGreaterThan(0.5);
+    expect(feeding.busy).toBeLessThan(0.3);
+    expect(r.transfers[1].utilisation).toBeGreaterThan(0.8);
+    expect(r.bottleneckTransferId).toBeNull();
+    expect(r.bottleneckStationId).toBe('PR');
   }, 60_000);
 });

@@ -1,6 +1,8 @@
 // Every entity class, listed once for the data source (no globs: tsx and vitest resolve no patterns).
 import { AuditEntryEntity } from './audit-entry.entity';
+import { InvitationEntity } from './invitation.entity';
 import { MembershipEntity } from './membership.entity';
+import { OneTimeTokenEntity } from './one-time-token.entity';
 import { OrganisationEntity } from './organisation.entity';
 import { PriceListEntity } from './price-list.entity';
 import { ProjectEntity } from './project.entity';
@@ -9,12 +11,15 @@ import { ScenarioRevisionEntity } from './scenario-revision.entity';
 import { ScenarioEntity } from './scenario.entity';
 import { SessionEntity } from './session.entity';
 import { SignInAttemptEntity } from './sign-in-attempt.entity';
+import { ShareLinkEntity } from './share-link.entity';
 import { TimeStudyEntity } from './time-study.entity';
 import { UserEntity } from './user.entity';
 
 export {
   AuditEntryEntity,
+  InvitationEntity,
   MembershipEntity,
+  OneTimeTokenEntity,
   OrganisationEntity,
   PriceListEntity,
   ProjectEntity,
@@ -23,6 +28,7 @@ export {
   ScenarioEntity,
   SessionEntity,
   SignInAttemptEntity,
+  ShareLinkEntity,
   TimeStudyEntity,
   UserEntity,
 };
@@ -40,4 +46,7 @@ export const entities = [
   PriceListEntity,
   AuditEntryEntity,
   SignInAttemptEntity,
+  InvitationEntity,
+  OneTimeTokenEntity,
+  ShareLinkEntity,
 ];

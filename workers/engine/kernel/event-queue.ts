@@ -72,6 +72,18 @@ export class EventQueue {
     return true;
   }
 
+  /**
+   * Moves every pending event of kind at most maxKind later by delta (a whole-line stop); the others
+   * keep their times. Rare (a few times a shift), so the heap is simply rebuilt.
+   */
+  postpone(delta: number, maxKind: number): void {
+    for (let i = 0; i < this.size; i++) {
+      const slot = this.heap[i];
+      if (this.kind[slot] <= maxKind) this.time[slot] += delta;
+    }
+    for (let i = (this.size >> 1) - 1; i >= 0; i--) this.siftDown(i);
+  }
+
   private before(x: number, y: number): boolean {
     const tx = this.time[x];
     const ty = this.time[y];

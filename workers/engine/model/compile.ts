@@ -51,6 +51,8 @@ export type CompiledLine = {
   stationPositionMm: Float64Array;
   stationStep: Int32Array;
   stationPausesForBreaks: Uint8Array;
+  /** Breaks stop the whole line (calendar breakMode 'wholeLine'), not only manual stations. */
+  wholeLineBreaks: boolean;
   stationIds: string[];
   /** Carriers that fit on a station's lane from the lane start up to and including the station: how many a pooled step may send its way. */
   stationRoom: Int32Array;
@@ -131,6 +133,7 @@ export function compileLine(s: Scenario, carrierCount = s.carriers.count): Compi
     stationPositionMm: Float64Array.from(stations, (x) => x.station.positionMm),
     stationStep: Int32Array.from(stations, (x) => x.stepIndex),
     stationPausesForBreaks: Uint8Array.from(stations, (x) => (x.station.pausesForBreaks ? 1 : 0)),
+    wholeLineBreaks: s.calendar.breakMode === 'wholeLine' && s.calendar.breaks.length > 0,
     stationIds: stations.map((x) => x.station.id),
     stationRoom: Int32Array.from(stations, (x) => Math.max(1, Math.floor((x.station.positionMm - s.carriers.lengthMm) / pitchMm + 1e-9) + 1)),
     stepCount: s.steps.length,

@@ -1,6 +1,9 @@
 // Describes a line that can no longer move: every carrier, where it stands and what it waits for,
-// in words a planner can act on (which lane start, transfer or carrier holds it up).
+// in words a planner can act on (which lane start, transfer or carrier holds it up), and, when
+// simulated time stops passing, which zero times of the scenario can cause that.
+import type { Distribution } from '../../../shared/scenario/distribution';
 import type { GridlockEntry } from '../kernel/stop';
+import type { CompiledLine } from './compile';
 import { positionAt } from './lanes';
 import { phaseOf } from './platoons';
 import { PH_EXIT, PH_STATION, PH_TRANSFER, TR_HOLDING, type LineState } from './state';
@@ -49,4 +52,22 @@ export function gridlockReport(m: LineState): GridlockEntry[] {
   const out: GridlockEntry[] = [];
   for (let c = 0; c < m.line.carrierCount; c++) out.push({ carrier: c, at: where(m, c), waitingFor: waitingFor(m, c) });
   return out;
+}
+
+const canBeZero = (d: Distribution) => (d.kind === 'fixed' && d.value === 0) || (d.kind === 'empirical' && d.samples.includes(0));
+
+/** Stations and transfers that can take no time at all: the only way a valid scenario stops the clock. */
+export function zeroTimes(line: CompiledLine): string[] {
+  const s = line.scenario;
+  const stations = s.steps.flatMap((step) => step.stations.filter((st) => canBeZero(st.cycleTimeSeconds)).map((st) => `station "${st.id}" (cycle time)`));
+  const transfers = s.transfers.filter((_, j) => line.connCarrySeconds[s.links.length + j] === 0).map((t) => `transfer "${t.id}" (handling and travel)`);
+  return [...stations, ...transfers];
+}
+
+/** Why simulated time stopped passing, blaming the scenario's zero times only when it has some. */
+export function stallMessage(line: CompiledLine, events: number, t: number): string {
+  const where = `no simulated time passed in ${events} events at t=${t.toFixed(3)} s`;
+  const zeros = zeroTimes(line);
+  if (zeros.length > 0) return `${where}: carriers are cycling in zero time; give these a time above zero: ${zeros.join(', ')}`;
+  return `${where}, although every cycle and transfer time of this scenario is above zero: this is a fault of the engine, not of the scenario; please report it with the scenario file and run settings`;
 }

@@ -7,7 +7,7 @@
 // platoon (platoons.ts); a platoon moves as one, through its leader.
 import { followerProfile, PROFILE_EMPTY, PROFILE_LOADED } from './motion';
 import { canJoin, join, leaderOf, offsetMm, phaseOf, rearOf, ridersChangePhase } from './platoons';
-import { EV_ARRIVE, EV_LANE_WAKE, PH_EXIT, PH_MOVING, PH_QUEUED, scheduleActive, type LineState } from './state';
+import { EV_ARRIVE, EV_LANE_WAKE, PH_EXIT, PH_MOVING, PH_QUEUED, scheduleActive, scheduleActiveAt, type LineState } from './state';
 
 const EPS_MM = 1e-6;
 
@@ -172,29 +172,39 @@ export function detachFront(m: LineState, c: number): void {
   requestLaneCheck(m, lane);
 }
 
+/**
+ * When the moving rear carrier clears the lane start (aimed half the tolerance past the threshold, so
+ * rounding never lets a carrier in a hair too early), or Infinity when this move stops short of it.
+ * Entry is decided by comparing the clock with this time, never by recomputing a position from the
+ * clock: late in a long run a time difference carries rounding of the clock's magnitude, and a
+ * position recomputed from it could stay a hair short of the threshold at the very event scheduled
+ * for the crossing, so the lane would be woken again and again at the same instant.
+ */
+function clearsEntryAt(m: LineState, rear: number): number {
+  const needed = m.line.carrierLengthMm + m.line.pitchMm;
+  if (destinationOf(m, rear) < needed - EPS_MM) return Infinity;
+  // The rear moves as its leader does, offset behind it.
+  const leader = leaderOf(m, rear);
+  const start = m.cPos[leader];
+  return m.cMoveStart[leader] + m.line.motion.secondsToCover(m.cDest[leader] - start, m.cProfile[leader], needed - EPS_MM / 2 + offsetMm(m, rear) - start);
+}
+
 /** Whether a carrier can be put at the lane start now (the rear carrier has cleared it). */
 export function entryClear(m: LineState, lane: number): boolean {
   const rear = m.laneRear[lane];
   if (rear < 0) return true;
+  if (phaseOf(m, rear) === PH_MOVING) return m.now >= clearsEntryAt(m, rear);
   return positionAt(m, rear, m.now) >= m.line.carrierLengthMm + m.line.pitchMm - EPS_MM;
 }
 
-/**
- * Schedules a lane check for the moment the moving rear carrier clears the lane start, found by
- * inverting its motion profile. Nothing to schedule when it stops short of that.
- */
+/** Schedules a lane check for the moment the moving rear carrier clears the lane start. */
 export function scheduleEntryWake(m: LineState, lane: number): void {
   const rear = m.laneRear[lane];
   if (rear < 0 || phaseOf(m, rear) !== PH_MOVING || m.laneWakePending[lane]) return;
-  const needed = m.line.carrierLengthMm + m.line.pitchMm;
-  if (destinationOf(m, rear) < needed - EPS_MM) return;
-  // The rear moves as its leader does, offset behind it. Aim half the tolerance past the threshold,
-  // so rounding can never wake the lane a hair too early.
-  const leader = leaderOf(m, rear);
-  const start = m.cPos[leader];
-  const into = m.line.motion.secondsToCover(m.cDest[leader] - start, m.cProfile[leader], needed - EPS_MM / 2 + offsetMm(m, rear) - start);
+  const at = clearsEntryAt(m, rear);
+  if (at === Infinity) return;
   m.laneWakePending[lane] = 1;
-  scheduleActive(m, Math.max(0, m.cMoveStart[leader] + into - m.now), EV_LANE_WAKE, lane);
+  scheduleActiveAt(m, Math.max(m.now, at), EV_LANE_WAKE, lane);
 }
 
 /** Marks a lane whose entry should be re-examined after the current event, if anything waits for it. */

@@ -10,10 +10,12 @@ import { createSampler } from '../random/sampler';
 import type { StreamFactory } from '../random/streams';
 import { inBreak, nextBreakEdge } from './breaks';
 import type { CompiledLine } from './compile';
-import { gridlockReport } from './gridlock';
 import { decidePending } from './dispatch';
+import { gridlockReport, stallMessage } from './gridlock';
 import { checkInvariants } from './invariants';
 import { advance, completeMove, nextWoken, positionAt, wake } from './lanes';
+import { PROFILE_EMPTY, PROFILE_LOADED } from './motion';
+import { positionClock, restartLine, stopLine } from './line-stop';
 import { placeCarriers } from './placement';
 import { leaderOf, leave } from './platoons';
 import {
@@ -44,6 +46,11 @@ export type ReplicationConfig = {
   eventBudget: number;
   /** Check overlap and conservation after every event (tests). */
   checkInvariants?: boolean;
+  /**
+   * Simulation time at which the replication starts (default 0); warmupSeconds and endSeconds are on
+   * the same clock. Tests start late to show that results do not depend on the clock's magnitude.
+   */
+  originSeconds?: number;
 };
 
 /** Events in a row without simulated time passing before the run counts as stuck. */
@@ -106,21 +113,36 @@ export class Replication {
     streams: StreamFactory,
     private readonly config: ReplicationConfig,
   ) {
-    this.recorder = new Recorder(line, config.warmupSeconds, config.endSeconds, config.timeBins, config.positionBins);
+    // The bottleneck analysis bridges the in-feed gap of a queued carrier, with half again for margin.
+    const inFeed = Math.max(line.motion.moveSeconds(line.pitchMm, PROFILE_LOADED), line.motion.moveSeconds(line.pitchMm, PROFILE_EMPTY));
+    this.recorder = new Recorder(line, config.warmupSeconds, config.endSeconds, config.timeBins, config.positionBins, 1.5 * inFeed);
     const m = createState(line, new EventQueue(), this.recorder, makeSamplers(line, streams));
     this.state = m;
+    const origin = config.originSeconds ?? 0;
+    m.now = origin;
     const calendar = line.scenario.calendar;
-    this.breaksApply = calendar.breaks.length > 0 && line.stationPausesForBreaks.some((p) => p === 1);
+    this.breaksApply = calendar.breaks.length > 0 && (line.wholeLineBreaks || line.stationPausesForBreaks.some((p) => p === 1));
     startFailureClocks(m);
-    for (let s = 0; s < line.stationCount; s++) m.observer.stationState(s, m.sState[s], 0);
+    for (let s = 0; s < line.stationCount; s++) m.observer.stationState(s, m.sState[s], origin);
     placeCarriers(m);
-    if (this.breaksApply) {
-      if (inBreak(calendar, 0)) setBreak(m, true);
-      this.scheduleBreak(0);
-    }
     m.queue.push(config.warmupSeconds + this.sampleInterval() / 2, 2, EV_SAMPLE, 0, 0);
     m.queue.push(config.endSeconds, 3, EV_END, 0, 0);
+    // The first moves are planned before a break in progress at the start can stop them.
     settle(m);
+    if (this.breaksApply) {
+      if (inBreak(calendar, origin)) this.setBreak(true);
+      this.scheduleBreak(origin);
+    }
+  }
+
+  /** Starts or ends a break; in whole-line mode the line stops until the break's end. */
+  private setBreak(starting: boolean): void {
+    const m = this.state;
+    if (this.line.wholeLineBreaks) {
+      if (starting) stopLine(m, nextBreakEdge(this.line.scenario.calendar, m.now)?.time ?? m.now);
+      else restartLine(m);
+    }
+    setBreak(m, starting);
   }
 
   private sampleInterval(): number {
@@ -137,7 +159,7 @@ export class Replication {
     for (let c = 0; c < this.line.carrierCount; c++) {
       const lane = m.cLane[c];
       if (lane < 0) continue;
-      const head = positionAt(m, c, t);
+      const head = positionAt(m, c, positionClock(m, t));
       this.recorder.sampleCarrier(lane, head - this.line.carrierLengthMm, head, t);
     }
     const next = t + this.sampleInterval();
@@ -168,7 +190,7 @@ export class Replication {
         serveLane(m, a);
         break;
       case EV_BREAK:
-        setBreak(m, a === 1);
+        this.setBreak(a === 1);
         this.scheduleBreak(m.now);
         break;
       case EV_SAMPLE:
@@ -199,7 +221,7 @@ export class Replication {
         m.now = t;
         this.stalled = 0;
       } else if (++this.stalled > STALL_LIMIT) {
-        throw new SimulationStoppedError('gridlock', `no simulated time passed in ${STALL_LIMIT} events at t=${t.toFixed(3)} s: carriers are moving in zero time (check zero cycle and transfer times)`, gridlockReport(m));
+        throw new SimulationStoppedError('gridlock', stallMessage(this.line, STALL_LIMIT, t), gridlockReport(m));
       }
       if (kind <= EV_LAST_ACTIVE) m.activePending--;
       this.events++;

@@ -3,31 +3,11 @@
 // stations, transfers) read and write it; the observer is told of every state change.
 import type { Sampler } from '../random/sampler';
 import type { EventQueue } from '../kernel/event-queue';
-import type { Observer } from '../observe/observer';
+import { ST_STARVED, type Observer } from '../observe/observer';
 import type { CompiledLine } from './compile';
 
-/** Carrier phases. */
-export const PH_MOVING = 0;
-/** Stopped, wants to move on: waiting for track ahead. */
-export const PH_QUEUED = 1;
-/** At the station it was sent to, being served (or waiting for the station to come back up). */
-export const PH_STATION = 2;
-/** At a lane end, waiting for its link or transfer. */
-export const PH_EXIT = 3;
-export const PH_TRANSFER = 4;
-
-/** Station states, in the order of STATION_STATES in the run result. */
-export const ST_PROCESSING = 0;
-export const ST_STARVED = 1;
-export const ST_BLOCKED = 2;
-export const ST_DOWN = 3;
-export const ST_BREAK = 4;
-
-/** Transfer states. */
-export const TR_IDLE = 0;
-export const TR_CARRYING = 1;
-export const TR_HOLDING = 2;
-export const TR_RETURNING = 3;
+// The state codes are the observer's vocabulary; re-exported so the model's modules find them here.
+export { PH_EXIT, PH_MOVING, PH_QUEUED, PH_STATION, PH_TRANSFER, ST_BLOCKED, ST_BREAK, ST_DOWN, ST_PROCESSING, ST_STARVED, TR_CARRYING, TR_HOLDING, TR_IDLE, TR_RETURNING } from '../observe/observer';
 
 /** Event kinds. */
 export const EV_ARRIVE = 1;
@@ -52,6 +32,8 @@ export type LineState = {
   /** Pending events that can change the line (EV_ARRIVE … EV_LANE_WAKE), for gridlock detection. */
   activePending: number;
   breakActive: boolean;
+  /** End of the whole-line stop in progress (see line-stop.ts), or -Infinity when the line runs. */
+  stoppedUntil: number;
   // Carriers.
   cLane: Int32Array;
   cPos: Float64Array;
@@ -109,6 +91,7 @@ export type LineState = {
   sDown: Uint8Array;
   sSegmentActive: Uint8Array;
   sSegmentStart: Float64Array;
+  sSegmentLength: Float64Array;
   sWorkLeft: Float64Array;
   sToFailure: Float64Array;
   sGen: Int32Array;
@@ -131,6 +114,7 @@ export function createState(line: CompiledLine, queue: EventQueue, observer: Obs
     now: 0,
     activePending: 0,
     breakActive: false,
+    stoppedUntil: -Infinity,
     cLane: new Int32Array(n).fill(-1),
     cPos: new Float64Array(n),
     cDest: new Float64Array(n),
@@ -178,6 +162,7 @@ export function createState(line: CompiledLine, queue: EventQueue, observer: Obs
     sDown: new Uint8Array(s),
     sSegmentActive: new Uint8Array(s),
     sSegmentStart: new Float64Array(s),
+    sSegmentLength: new Float64Array(s),
     sWorkLeft: new Float64Array(s),
     sToFailure: new Float64Array(s).fill(Infinity),
     sGen: new Int32Array(s),
@@ -191,6 +176,11 @@ export function createState(line: CompiledLine, queue: EventQueue, observer: Obs
 
 /** Schedules an event that can change the line (counted for gridlock detection). */
 export function scheduleActive(m: LineState, delay: number, kind: number, a: number, b = 0): void {
+  scheduleActiveAt(m, m.now + delay, kind, a, b);
+}
+
+/** The same at an absolute time (not before now), for times computed from an earlier origin. */
+export function scheduleActiveAt(m: LineState, time: number, kind: number, a: number, b = 0): void {
   m.activePending++;
-  m.queue.push(m.now + delay, 1, kind, a, b);
+  m.queue.push(time, 1, kind, a, b);
 }

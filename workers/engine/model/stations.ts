@@ -2,6 +2,8 @@
 // done in segments that end at completion or at the next failure, whichever comes first; time to
 // failure counts operating (processing) time only, so a starved or blocked station does not fail.
 // A failure or a break pauses the work, which resumes where it stopped. Repairs run in elapsed time.
+// A segment that runs to its scheduled end takes off exactly its planned length, so the work or the
+// time to failure that ended it reaches zero exactly, however large the clock: no tolerance on times.
 import { STEP_INSPECT, STEP_LOAD, STEP_UNLOAD } from './compile';
 import { chooseStation, unassign } from './dispatch';
 import { setPhase, wake } from './lanes';
@@ -19,10 +21,8 @@ import {
   type LineState,
 } from './state';
 
-const EPS_S = 1e-9;
-
 function onBreak(m: LineState, s: number): boolean {
-  return m.breakActive && m.line.stationPausesForBreaks[s] === 1;
+  return m.breakActive && (m.line.wholeLineBreaks || m.line.stationPausesForBreaks[s] === 1);
 }
 
 export function updateStationState(m: LineState, s: number): void {
@@ -41,13 +41,14 @@ function resume(m: LineState, s: number): void {
   const segment = Math.min(m.sWorkLeft[s], m.sToFailure[s]);
   m.sSegmentActive[s] = 1;
   m.sSegmentStart[s] = m.now;
+  m.sSegmentLength[s] = segment;
   m.sGen[s]++;
   scheduleActive(m, segment, EV_SEGMENT_END, s, m.sGen[s]);
 }
 
-function pause(m: LineState, s: number): void {
+/** Stops the running segment; elapsed is its whole planned length when it ran to its end. */
+function pause(m: LineState, s: number, elapsed = Math.min(Math.max(0, m.now - m.sSegmentStart[s]), m.sSegmentLength[s])): void {
   if (!m.sSegmentActive[s]) return;
-  const elapsed = m.now - m.sSegmentStart[s];
   m.sWorkLeft[s] -= elapsed;
   m.sToFailure[s] -= elapsed;
   m.sSegmentActive[s] = 0;
@@ -83,9 +84,9 @@ function fail(m: LineState, s: number): void {
 
 export function onSegmentEnd(m: LineState, s: number, generation: number): void {
   if (generation !== m.sGen[s] || !m.sSegmentActive[s]) return;
-  pause(m, s);
-  if (m.sWorkLeft[s] <= EPS_S) finishWork(m, s);
-  if (m.sToFailure[s] <= EPS_S) fail(m, s);
+  pause(m, s, m.sSegmentLength[s]);
+  if (m.sWorkLeft[s] <= 0) finishWork(m, s);
+  if (m.sToFailure[s] <= 0) fail(m, s);
   else resume(m, s);
   updateStationState(m, s);
 }
@@ -97,12 +98,19 @@ export function onRepairEnd(m: LineState, s: number): void {
   updateStationState(m, s);
 }
 
+/**
+ * Starts or ends a break. Manual stations that pause for breaks stop their work and resume it; in a
+ * whole-line stop every station reports the break, and its work waits with the rest of the line
+ * (line-stop.ts postpones it), so nothing is paused here.
+ */
 export function setBreak(m: LineState, active: boolean): void {
   m.breakActive = active;
   for (let s = 0; s < m.line.stationCount; s++) {
-    if (!m.line.stationPausesForBreaks[s]) continue;
-    if (active) pause(m, s);
-    else resume(m, s);
+    if (!m.line.wholeLineBreaks) {
+      if (!m.line.stationPausesForBreaks[s]) continue;
+      if (active) pause(m, s);
+      else resume(m, s);
+    }
     updateStationState(m, s);
   }
 }

@@ -6,6 +6,7 @@ import type { RunSettings } from '../../../shared/scenario/run-settings';
 import { productiveHoursPerYear } from '../calendar/annual';
 import type { CompiledLine } from '../model/compile';
 import { studentT95 } from '../stats/student-t';
+import { TR_CARRYING, TR_HOLDING, TR_IDLE, TR_RETURNING, TRANSFER_STATE_COUNT } from './observer';
 import type { ReplicationSummary } from './replication-summary';
 
 const round = (x: number, digits = 4) => {
@@ -97,16 +98,35 @@ export function combineReplications({ line, settings, engineVersion, reps, event
   }
   const transfers = s.transfers.map((t, j) => {
     const k = s.links.length + j;
+    const share = (state: number) => meanOf(reps, (r) => r.transferShares[k * TRANSFER_STATE_COUNT + state]);
+    const carrying = share(TR_CARRYING);
+    const returning = share(TR_RETURNING);
+    const idle = share(TR_IDLE);
+    const sole = meanOf(reps, (r) => r.transferSole[k]);
+    const shifting = meanOf(reps, (r) => r.transferShifting[k]);
     return {
       id: t.id,
       name: t.name,
       kind: t.kind,
-      utilisation: meanOf(reps, (r) => r.transferBusy[k]),
-      blocked: meanOf(reps, (r) => r.transferBlocked[k]),
+      utilisation: 1 - idle,
+      blocked: share(TR_HOLDING),
+      carrying,
+      returning,
+      idle,
+      busy: carrying + returning,
+      bottleneckShare: sole + shifting,
       meanQueue: meanOf(reps, (r) => r.transferQueue[k]),
       movesPerHour: meanOf(reps, (r) => r.transferMovesPerHour[k]),
     };
   });
+  // A transfer holds the line when it is the momentary bottleneck more often than any station.
+  let bottleneckTransfer: string | null = null;
+  for (const t of transfers) {
+    if (t.bottleneckShare > best) {
+      best = t.bottleneckShare;
+      bottleneckTransfer = t.id;
+    }
+  }
   const throughput = reps.map((r) => r.throughputPerHour);
   return {
     engineVersion,
@@ -121,6 +141,9 @@ export function combineReplications({ line, settings, engineVersion, reps, event
     targetTaktSeconds: s.targetTaktSeconds ?? null,
     hoursPerYear,
     bottleneckStationId: bottleneck,
+    bottleneckTransferId: bottleneckTransfer,
+    breakMode: s.calendar.breakMode,
+    breakMinutesPerShift: s.calendar.breaks.reduce((sum, b) => sum + b.minutes, 0),
     stations: stationResults,
     transfers,
     lanes: s.lanes.map((lane, l) => ({

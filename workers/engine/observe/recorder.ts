@@ -2,17 +2,28 @@
 // carrier and transfer, counts, lead times (output parts), times in line (every part that leaves),
 // loop times, WIP, and the binned series behind the heatmaps.
 // Memory is fixed at construction (entities × bins); nothing grows with the run length.
+//
+// Transfers take part in the bottleneck analysis beside the stations: a transfer is active while
+// carrying or returning empty, inactive while idle (starved) or holding a carrier it cannot hand over
+// (blocked), exactly as a station is. So a transfer that is busy most of the time and rarely blocked
+// has the longest active periods and is found as the bottleneck; one that is mostly blocked is not.
 import { StreamingHistogram } from '../stats/histogram';
-import type { CompiledLine } from '../model/compile';
-import { PROFILE_EMPTY, PROFILE_LOADED } from '../model/motion';
-import { PH_EXIT, PH_MOVING, PH_QUEUED, PH_STATION, ST_BLOCKED, ST_STARVED, TR_IDLE } from '../model/state';
 import { BottleneckTracker } from './bottleneck';
-import type { Observer } from './observer';
+import { PH_EXIT, PH_MOVING, PH_QUEUED, PH_STATION, ST_BLOCKED, ST_STARVED, TR_CARRYING, TR_IDLE, TR_RETURNING, TRANSFER_STATE_COUNT, type Observer } from './observer';
 import { Levels, ObservationWindow } from './window';
 
 export const STATE_COUNT = 5;
 export const CARRIER_SHARES = 4;
-export const TRANSFER_STATES = 4;
+export const TRANSFER_STATES = TRANSFER_STATE_COUNT;
+
+/** What the recorder needs to know of the line: how many of each entity, and lane lengths. */
+export type RecordedLine = {
+  stationCount: number;
+  carrierCount: number;
+  connCount: number;
+  laneCount: number;
+  laneLengthMm: ArrayLike<number>;
+};
 
 /** Carrier phase to the shares reported: moving, waiting, working, in transfer. */
 function carrierShare(phase: number): number {
@@ -57,12 +68,17 @@ export class Recorder implements Observer {
   private readonly tState: Int8Array;
   private readonly tSince: Float64Array;
 
+  /**
+   * @param bridgeSeconds inactive gaps up to this long do not end an active period in the bottleneck
+   * analysis: the time a queued carrier needs to move in (see BottleneckTracker).
+   */
   constructor(
-    private readonly line: CompiledLine,
+    private readonly line: RecordedLine,
     warmupSeconds: number,
     endSeconds: number,
     timeBins: number,
     readonly positionBins: number,
+    bridgeSeconds: number,
     samplesPerBin = 8,
   ) {
     const w = new ObservationWindow(warmupSeconds, endSeconds, timeBins);
@@ -87,8 +103,7 @@ export class Recorder implements Observer {
     this.wipLevel = new Levels(w, 1);
     this.wipSeries = new Float64Array(timeBins);
     this.laneHeat = Array.from({ length: line.laneCount }, () => new Float64Array(timeBins * positionBins));
-    const inFeed = Math.max(line.motion.moveSeconds(line.pitchMm, PROFILE_LOADED), line.motion.moveSeconds(line.pitchMm, PROFILE_EMPTY));
-    this.bottleneck = new BottleneckTracker(w, s, 1.5 * inFeed);
+    this.bottleneck = new BottleneckTracker(w, s + line.connCount, bridgeSeconds);
   }
 
   stationState(station: number, state: number, t: number): void {
@@ -116,6 +131,7 @@ export class Recorder implements Observer {
     this.transferTime[conn * TRANSFER_STATES + this.tState[conn]] += this.window.overlap(this.tSince[conn], t);
     this.tState[conn] = state;
     this.tSince[conn] = t;
+    this.bottleneck.setActive(this.line.stationCount + conn, state === TR_CARRYING || state === TR_RETURNING, t);
   }
 
   transferQueue(conn: number, delta: number, t: number): void {

@@ -2,7 +2,7 @@
 // averaged across replications. Shares are of the observation window (warm-up excluded).
 import type { CompiledLine } from '../model/compile';
 import type { StreamingHistogram } from '../stats/histogram';
-import { CARRIER_SHARES, TRANSFER_STATES, type Recorder } from './recorder';
+import { CARRIER_SHARES, type Recorder } from './recorder';
 
 export type ReplicationSummary = {
   output: number;
@@ -20,8 +20,10 @@ export type ReplicationSummary = {
   operationsPerHour: Float64Array;
   failuresPerHour: Float64Array;
   stationQueue: Float64Array;
-  transferBusy: Float64Array;
-  transferBlocked: Float64Array;
+  /** Per connection, shares of time in each transfer state (TR_* order), connection-major. */
+  transferShares: Float64Array;
+  transferSole: Float64Array;
+  transferShifting: Float64Array;
   transferQueue: Float64Array;
   transferMovesPerHour: Float64Array;
   laneMean: Float64Array;
@@ -47,8 +49,6 @@ export function summarizeReplication(line: CompiledLine, r: Recorder): Replicati
   const C = line.connCount;
   const perHour = (x: number) => x / hours;
   const stationShares = r.stationTime.map((x) => x / seconds);
-  const transfers = (state: number) => Float64Array.from({ length: C }, (_, k) => r.transferTime[k * TRANSFER_STATES + state] / seconds);
-  const idle = transfers(0);
   const carrierTotal = seconds * line.carrierCount;
   const timeline = r.stationTimeline.map((x) => x / w.binSeconds);
   return {
@@ -60,14 +60,15 @@ export function summarizeReplication(line: CompiledLine, r: Recorder): Replicati
     departuresPerHour: perHour(r.outputCount + r.scrappedCount),
     taktSeconds: r.outputCount > 0 ? seconds / r.outputCount : seconds,
     stationShares,
-    sole: r.bottleneck.sole.map((x) => x / seconds),
-    shifting: r.bottleneck.shifting.map((x) => x / seconds),
+    sole: r.bottleneck.sole.slice(0, S).map((x) => x / seconds),
+    shifting: r.bottleneck.shifting.slice(0, S).map((x) => x / seconds),
     meanCycle: Float64Array.from({ length: S }, (_, s) => (r.cycleCount[s] > 0 ? r.cycleSum[s] / r.cycleCount[s] : 0)),
     operationsPerHour: r.operations.map(perHour),
     failuresPerHour: r.failures.map(perHour),
     stationQueue: Float64Array.from({ length: S }, (_, s) => r.stationAssignedLevels.mean(s)),
-    transferBusy: idle.map((x) => 1 - x),
-    transferBlocked: transfers(2),
+    transferShares: r.transferTime.map((x) => x / seconds),
+    transferSole: r.bottleneck.sole.slice(S, S + C).map((x) => x / seconds),
+    transferShifting: r.bottleneck.shifting.slice(S, S + C).map((x) => x / seconds),
     transferQueue: Float64Array.from({ length: C }, (_, k) => r.transferQueueLevels.mean(k)),
     transferMovesPerHour: r.transferMoves.map(perHour),
     laneMean: Float64Array.from({ length: line.laneCount }, (_, l) => r.laneLevels.mean(l)),

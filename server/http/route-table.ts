@@ -38,5 +38,5 @@ export function matchesPattern(pattern: string, path: string): boolean {
     .split('/')
     .map((part) => (part.startsWith(':') ? '[^/]+' : part.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')))
     .join('/');
-  return new RegExp(`^${source}$`).test(path);
+  return new RegExp(`^${source}$`).test(path.split('?')[0]);
 }

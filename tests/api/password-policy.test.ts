@@ -32,7 +32,7 @@ describe('password policy', () => {
   });
 
   it('accepts an unrelated phrase', async () => {
-    expect((await signUpWith(PASSWORD)).status).toBe(201);
+    expect((await signUpWith(PASSWORD)).status).toBe(202);
   });
 
   it('the demo accounts keep their known password: seeding does not go through the sign-up check', async () => {

@@ -87,6 +87,17 @@ const coveredElsewhere: Record<string, string> = {
   'GET /api/scenarios/:id/time-studies': 'every actor in time-studies.test.ts',
   'GET /api/time-studies/:id': 'every actor in time-studies.test.ts',
   'DELETE /api/time-studies/:id': 'every actor in time-studies.test.ts',
+  // Links opened from a mail or a share (tokens) and the account's own password and sessions answer anyone
+  // by design; each is covered in its own file.
+  'POST /api/auth/sign-up/confirm': 'token from a mail: team.test.ts',
+  'POST /api/auth/password-reset/request': 'public, same answer for any address: team.test.ts',
+  'POST /api/auth/password-reset': 'token from a mail: team.test.ts',
+  'POST /api/account/password': 'the signed-in user’s own account: account.test.ts',
+  'DELETE /api/account/other-sessions': 'the signed-in user’s own account: account.test.ts',
+  'POST /api/invitations/preview': 'token from a mail: team.test.ts',
+  'POST /api/invitations/accept': 'token from a mail: team.test.ts',
+  'POST /api/shared/view': 'share token: sharing.test.ts',
+  'GET /api/dev/mailbox': 'development mailbox, only with the fake SMTP server: mail tests',
 };
 
 describe('role matrix', () => {

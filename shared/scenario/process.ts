@@ -14,6 +14,15 @@ export const STEP_KINDS = ['load', 'process', 'inspect', 'unload'] as const;
 export const STATION_OPERATIONS = ['automatic', 'manual'] as const;
 
 /** A station that fails after less than this much work on average is a typing mistake (our choice). */
+export const PROCESS_LIMITS = {
+  stepsMax: 200,
+  stationsPerStepMax: 100,
+  /** Stations of the whole line, all steps together. */
+  stationsMax: 500,
+  /** Measured times in empirical distributions of the whole line, all stations together. */
+  empiricalSamplesTotalMax: 200_000,
+} as const;
+
 export const FAILURE_LIMITS = { meanTimeBetweenFailuresMinSeconds: 1 } as const;
 
 export const failureSchema = z.object({
@@ -43,7 +52,9 @@ export const stationSchema = z.object({
 const stepBase = {
   id: idSchema,
   name: labelSchema,
-  stations: z.array(stationSchema, { error: 'stations must be a list' }),
+  stations: z
+    .array(stationSchema, { error: 'stations must be a list' })
+    .max(PROCESS_LIMITS.stationsPerStepMax, `a step may have at most ${PROCESS_LIMITS.stationsPerStepMax} stations`),
   dispatch: z.enum(DISPATCH_RULES, { error: `dispatch must be one of ${DISPATCH_RULES.join(', ')}` }).default(DEFAULT_DISPATCH),
 };
 

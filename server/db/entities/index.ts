@@ -10,6 +10,7 @@ import { RunEntity } from './run.entity';
 import { ScenarioRevisionEntity } from './scenario-revision.entity';
 import { ScenarioEntity } from './scenario.entity';
 import { SessionEntity } from './session.entity';
+import { SignInAttemptEntity } from './sign-in-attempt.entity';
 import { ShareLinkEntity } from './share-link.entity';
 import { StudyJobResultEntity } from './study-job-result.entity';
 import { StudyPointEntity } from './study-point.entity';
@@ -29,6 +30,7 @@ export {
   ScenarioRevisionEntity,
   ScenarioEntity,
   SessionEntity,
+  SignInAttemptEntity,
   ShareLinkEntity,
   StudyEntity,
   StudyJobResultEntity,
@@ -52,6 +54,7 @@ export const entities = [
   StudyPointEntity,
   StudyJobResultEntity,
   AuditEntryEntity,
+  SignInAttemptEntity,
   InvitationEntity,
   OneTimeTokenEntity,
   ShareLinkEntity,

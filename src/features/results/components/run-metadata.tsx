@@ -15,6 +15,13 @@ function Item({ term, children }: { term: string; children: ReactNode }) {
   );
 }
 
+/** Which calendar choice the run used for breaks; results stored before it was recorded say so. */
+function breakText(results: RunDetail['results']): string {
+  if (results.breakMinutesPerShift === 0) return 'none in the calendar';
+  const minutes = results.breakMinutesPerShift === undefined ? '' : `${results.breakMinutesPerShift} min per shift; `;
+  return results.breakMode === 'wholeLine' ? `${minutes}stop the whole line (carriers halt, no station works)` : `${minutes}only manual stations that pause for breaks stop`;
+}
+
 export function RunMetadata({ run }: { run: RunDetail }) {
   const { settings } = run;
   return (
@@ -38,6 +45,7 @@ export function RunMetadata({ run }: { run: RunDetail }) {
         </Item>
         <Item term="Carriers">{settings.carriers === undefined ? `${run.results.carriers.count} (as in the scenario)` : `${settings.carriers} (override)`}</Item>
         <Item term="Conveyor">{run.results.conveyor === 'belt' ? 'belt or chain conveyor (baseline)' : 'independent carriers'}</Item>
+        <Item term="Breaks">{breakText(run.results)}</Item>
         <Item term="Events simulated">{run.results.events.toLocaleString('en-GB')}</Item>
       </dl>
       <p className="text-sm text-ink-soft">

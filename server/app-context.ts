@@ -1,11 +1,16 @@
-// What every router needs: the data source, the session service and the app's public origin.
+// What every router needs: the data source, the session service, the app's public origin and the mailer.
 import type { DataSource } from 'typeorm';
 import type { Auth } from './auth/lucia';
 import type { AttemptLimiter } from './auth/rate-limit';
+import type { CaughtMailbox } from './mail/mailbox';
+import type { Mailer } from './mail/mailer';
 
 export interface AppContext {
   ds: DataSource;
   auth: Auth;
   publicOrigin?: string;
   signInLimiter: AttemptLimiter;
+  mailer: Mailer;
+  /** Only while mail goes to the loopback fake: what it caught, for the development mailbox page. */
+  mailbox?: CaughtMailbox;
 }

@@ -15,7 +15,12 @@ import { JSON_BODY_LIMIT_BYTES } from './http/limits';
 import { refuseCrossOriginMutations } from './http/origin-check';
 import { securityHeaders } from './http/security-headers';
 import { clientRouter } from './http/static-client';
+import type { CaughtMailbox } from './mail/mailbox';
+import type { Mailer } from './mail/mailer';
+import { accountRouter } from './routes/account';
 import { auditRouter } from './routes/audit';
+import { invitationsRouter } from './routes/invitations';
+import { mailboxRouter } from './routes/mailbox';
 import { authRouter } from './routes/auth';
 import { membersRouter } from './routes/members';
 import { priceListsRouter } from './routes/price-lists';
@@ -23,6 +28,7 @@ import { projectsRouter } from './routes/projects';
 import { revisionsRouter } from './routes/revisions';
 import { runsRouter } from './routes/runs';
 import { scenariosRouter } from './routes/scenarios';
+import { sharesRouter } from './routes/shares';
 import { timeStudiesRouter } from './routes/time-studies';
 import { exceptTimeStudyUploads } from './time-studies/upload-route';
 
@@ -32,11 +38,26 @@ export interface CreateAppOptions {
   clientDir?: string;
   /** The origin users reach the app at, e.g. https://lanewright.example.test. */
   publicOrigin?: string;
+  /** How mail leaves; without it every send fails with a logged line (apps that never mail, like some tests). */
+  mailer?: Mailer;
+  /** The fake SMTP server's catch; mounts the development mailbox routes when given. */
+  mailbox?: CaughtMailbox;
 }
+
+const noMailer: Mailer = {
+  send: () => Promise.reject(new Error('this app was started without a mailer')),
+};
 
 export function createApp(opts: CreateAppOptions): express.Express {
   const publicOrigin = opts.publicOrigin ? new URL(opts.publicOrigin).origin : undefined;
-  const ctx: AppContext = { ds: opts.dataSource, auth: createAuth(opts.dataSource), publicOrigin, signInLimiter: createAttemptLimiter() };
+  const ctx: AppContext = {
+    ds: opts.dataSource,
+    auth: createAuth(opts.dataSource),
+    publicOrigin,
+    signInLimiter: createAttemptLimiter(),
+    mailer: opts.mailer ?? noMailer,
+    mailbox: opts.mailbox,
+  };
   void prepareDecoy();
   const app = express();
   app.disable('x-powered-by');
@@ -52,7 +73,8 @@ export function createApp(opts: CreateAppOptions): express.Express {
   api.use(exceptTimeStudyUploads(requireJsonBody));
   api.use(express.json({ limit: JSON_BODY_LIMIT_BYTES, strict: true }));
   api.use(loadSession(ctx.auth, publicOrigin));
-  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, membersRouter, priceListsRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));
+  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, membersRouter, invitationsRouter, accountRouter, sharesRouter, priceListsRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));
+  if (ctx.mailbox) api.use(mailboxRouter(ctx.mailbox));
   api.use(unknownApiRoute);
   app.use('/api', api);
 

@@ -23,6 +23,20 @@ export const configSchema = z.object({
     .optional(),
   LANEWRIGHT_DEMO: z.enum(['on', 'off'], { message: 'must be "on" or "off"' }).default('on'),
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  /** A real SMTP relay for invitations and password resets; unset means the loopback fake mailbox. */
+  SMTP_HOST: z.string().min(1).optional(),
+  SMTP_PORT: portSchema.default(587),
+  SMTP_SECURE: z.enum(['on', 'off'], { message: 'must be "on" (TLS from the start, usually port 465) or "off" (STARTTLS)' }).default('off'),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  MAIL_FROM: z.string().min(3).default('Lanewright <no-reply@lanewright.localhost>'),
+  /** Where the fake SMTP server listens when SMTP_HOST is unset; 0 picks any free port. */
+  LANEWRIGHT_FAKE_SMTP_PORT: z.coerce
+    .number({ message: 'must be a number' })
+    .int({ message: 'must be a whole number' })
+    .min(0, { message: 'must be between 0 and 65535' })
+    .max(65535, { message: 'must be between 0 and 65535' })
+    .default(2525),
 });
 
 export type ServerConfig = z.infer<typeof configSchema>;

@@ -5,6 +5,8 @@ import type { DataSource } from 'typeorm';
 import { createApp } from './app';
 import { sweepExpiredSessions } from './auth/session-sweeper';
 import { loadConfig } from './config';
+import type { CaughtMailbox } from './mail/mailbox';
+import { setUpMail } from './mail/mail-setup';
 
 export interface StartServerOptions {
   dataSource: DataSource;
@@ -12,10 +14,16 @@ export interface StartServerOptions {
   host: string;
   clientDir?: string;
   publicOrigin?: string;
+  /** Overrides LANEWRIGHT_FAKE_SMTP_PORT (tests pass 0 for any free port). */
+  fakeSmtpPort?: number;
 }
 
 export interface RunningServer {
   url: string;
+  /** Present while mail goes to the loopback fake. */
+  mailbox?: CaughtMailbox;
+  /** One line on where mail goes, for the start-up log. */
+  mailNote: string;
   close(): Promise<void>;
 }
 
@@ -23,19 +31,35 @@ export async function startServer(opts: StartServerOptions): Promise<RunningServ
   if (!opts.dataSource.isInitialized) await opts.dataSource.initialize();
   // Parsing the whole environment here makes a bad setting stop the start with a readable list.
   const config = loadConfig();
-  const app = createApp({ dataSource: opts.dataSource, clientDir: opts.clientDir, publicOrigin: opts.publicOrigin ?? config.PUBLIC_ORIGIN });
+  const mail = await setUpMail({ ...config, LANEWRIGHT_FAKE_SMTP_PORT: opts.fakeSmtpPort ?? config.LANEWRIGHT_FAKE_SMTP_PORT });
+  const app = createApp({
+    dataSource: opts.dataSource,
+    clientDir: opts.clientDir,
+    publicOrigin: opts.publicOrigin ?? config.PUBLIC_ORIGIN,
+    mailer: mail.mailer,
+    mailbox: mail.mailbox,
+  });
   const server = app.listen(opts.port, opts.host);
-  await once(server, 'listening');
+  try {
+    await once(server, 'listening');
+  } catch (error) {
+    await mail.close();
+    throw error;
+  }
   const stopSweeping = sweepExpiredSessions(opts.dataSource);
   const { port } = server.address() as AddressInfo;
   const host = opts.host.includes(':') ? `[${opts.host}]` : opts.host;
   return {
     url: `http://${host}:${port}`,
-    close: () =>
-      new Promise<void>((resolve, reject) => {
-        stopSweeping();
+    mailbox: mail.mailbox,
+    mailNote: mail.describe,
+    close: async () => {
+      stopSweeping();
+      await new Promise<void>((resolve, reject) => {
         server.close((error) => (error ? reject(error) : resolve()));
         server.closeAllConnections();
-      }),
+      });
+      await mail.close();
+    },
   };
 }

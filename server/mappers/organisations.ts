@@ -14,6 +14,7 @@ export function toMember(membership: MembershipEntity): Member {
     email: membership.user?.email ?? '',
     role: membership.role,
     joinedAt: iso(membership.createdAt),
+    lastSignInAt: membership.user?.lastSignInAt ? iso(membership.user.lastSignInAt) : null,
   };
 }
 

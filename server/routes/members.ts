@@ -1,14 +1,15 @@
-// Organisation members. Every member may see the list; owners add, re-role and remove members. An
-// organisation always keeps at least one owner, so it can never be left unmanageable.
+// Organisation members. Every member may see the list; owners re-role and remove members (people join
+// through invitations); anyone may leave. An organisation always keeps at least one owner, so it can never
+// be left unmanageable.
 import express, { type Request, type RequestHandler } from 'express';
 import type { EntityManager } from 'typeorm';
-import { addMemberSchema, memberParamsSchema, updateMemberSchema } from '../../shared/api/members';
+import { memberParamsSchema, updateMemberSchema } from '../../shared/api/members';
 import { loadOrganisation } from '../access/loaders';
 import { requireRole } from '../access/require-role';
 import type { AppContext } from '../app-context';
 import { audited, type AuditInput } from '../audit/record-audit';
-import { MembershipEntity, UserEntity } from '../db/entities';
-import { conflict, HttpError, notFound } from '../http/http-error';
+import { MembershipEntity } from '../db/entities';
+import { conflict, notFound } from '../http/http-error';
 import { currentUser, loaded } from '../http/request-context';
 import { parseInput, validate } from '../http/validate';
 import { toMember } from '../mappers/organisations';
@@ -21,7 +22,7 @@ async function assertAnotherOwnerRemains(manager: EntityManager, { organisationI
   }
 }
 
-function memberAudit(req: Request, membership: MembershipEntity, action: 'member-update' | 'member-remove', detail: Record<string, unknown>): AuditInput {
+function memberAudit(req: Request, membership: MembershipEntity, action: 'member-update' | 'member-remove' | 'member-leave', detail: Record<string, unknown>): AuditInput {
   return { organisationId: membership.organisationId, actorId: currentUser(req).id, action, entity: 'member', entityId: membership.userId, detail };
 }
 
@@ -42,29 +43,6 @@ export function membersRouter(ctx: AppContext) {
     const members = await ds.getRepository(MembershipEntity).find({ where: { organisationId: loaded(req, 'organisation').id }, relations: { user: true }, order: { createdAt: 'ASC' } });
     res.json(members.map(toMember));
   });
-
-  router.post(
-    '/organisations/:id/members',
-    loadOrganisation(ctx),
-    requireRole('owner'),
-    validate({ body: addMemberSchema }, async ({ body }, req, res) => {
-      const organisation = loaded(req, 'organisation');
-      const user = await ds.getRepository(UserEntity).findOneBy({ email: body.email });
-      if (!user) throw new HttpError(404, 'not_found', 'No Lanewright account uses this e-mail; ask them to sign up first.', [{ path: 'email', message: 'has no account' }]);
-      const exists = await ds.getRepository(MembershipEntity).existsBy({ organisationId: organisation.id, userId: user.id });
-      if (exists) throw conflict(`${user.email} is already a member; change their role instead.`, [{ path: 'email', message: 'is already a member' }]);
-      await audited(ds, (manager) => manager.getRepository(MembershipEntity).insert({ organisationId: organisation.id, userId: user.id, role: body.role }), {
-        organisationId: organisation.id,
-        actorId: currentUser(req).id,
-        action: 'member-add',
-        entity: 'member',
-        entityId: user.id,
-        detail: { email: user.email, role: body.role },
-      });
-      const created = await ds.getRepository(MembershipEntity).findOneOrFail({ where: { organisationId: organisation.id, userId: user.id }, relations: { user: true } });
-      res.status(201).json(toMember(created));
-    }),
-  );
 
   router.patch(
     '/organisations/:id/members/:userId',
@@ -95,6 +73,19 @@ export function membersRouter(ctx: AppContext) {
         await manager.getRepository(MembershipEntity).delete({ organisationId: membership.organisationId, userId: membership.userId });
       },
       memberAudit(req, membership, 'member-remove', { email: membership.user?.email, role: membership.role }),
+    );
+    res.json({ ok: true });
+  });
+
+  router.delete('/organisations/:id/membership', loadOrganisation(ctx), async (req, res) => {
+    const membership = await ds.getRepository(MembershipEntity).findOneOrFail({ where: { organisationId: loaded(req, 'organisation').id, userId: currentUser(req).id }, relations: { user: true } });
+    await audited(
+      ds,
+      async (manager) => {
+        if (membership.role === 'owner') await assertAnotherOwnerRemains(manager, membership);
+        await manager.getRepository(MembershipEntity).delete({ organisationId: membership.organisationId, userId: membership.userId });
+      },
+      memberAudit(req, membership, 'member-leave', { email: membership.user?.email, role: membership.role }),
     );
     res.json({ ok: true });
   });

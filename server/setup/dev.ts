@@ -46,6 +46,7 @@ async function main(): Promise<void> {
   });
   onCleanup(() => api.close());
   say(`API listening at ${api.url}`);
+  say(api.mailNote);
   startVite(port);
   say(`open http://${HTTP_HOST}:${VITE_PORT}/ (Vite dev server with hot reload; /api goes to ${api.url})`);
   if (demoEnabled()) console.log(demoSignInText());

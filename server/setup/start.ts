@@ -20,6 +20,7 @@ async function main(): Promise<void> {
   });
   onCleanup(() => server.close());
   say(`Lanewright is running at ${server.url}`);
+  say(server.mailNote);
   if (demoEnabled()) console.log(demoSignInText());
   say('press Ctrl-C to stop');
 }

@@ -5,6 +5,9 @@
 import type { RouteObject } from 'react-router-dom';
 import { PageSpinner } from '../components/ui/spinner';
 import { RequireAuth } from '../features/auth/components/require-auth';
+import { FinishSignUpRoute } from '../features/auth/routes/finish-sign-up-route';
+import { ForgotPasswordRoute } from '../features/auth/routes/forgot-password-route';
+import { ResetPasswordRoute } from '../features/auth/routes/reset-password-route';
 import { SignInRoute } from '../features/auth/routes/sign-in-route';
 import { SignUpRoute } from '../features/auth/routes/sign-up-route';
 import { ProjectsRoute } from '../features/projects/routes/projects-route';
@@ -16,6 +19,12 @@ import { RouteError } from './routes/route-error';
 const publicPages: RouteObject[] = [
   { path: '/sign-in', element: <SignInRoute /> },
   { path: '/sign-up', element: <SignUpRoute /> },
+  { path: '/sign-up/finish', element: <FinishSignUpRoute /> },
+  { path: '/forgot-password', element: <ForgotPasswordRoute /> },
+  { path: '/reset-password', element: <ResetPasswordRoute /> },
+  { path: '/invitations/accept', lazy: async () => ({ Component: (await import('./routes/accept-invitation-route')).AcceptInvitationRoute }) },
+  { path: '/shared', lazy: async () => ({ Component: (await import('./routes/shared-route')).SharedRoute }) },
+  { path: '/dev/mailbox', lazy: async () => ({ Component: (await import('../features/mailbox/routes/mailbox-route')).MailboxRoute }) },
 ];
 
 /** Pages behind sign-in; RequireAuth sends visitors to sign-in and back. */
@@ -51,8 +60,11 @@ const signedInPages: RouteObject[] = [
   },
   {
     path: '/runs/:runId',
-    lazy: async () => ({ Component: (await import('../features/results/routes/run-route')).RunRoute }),
+    lazy: async () => ({ Component: (await import('./routes/run-page-route')).RunPageRoute }),
   },
+  { path: '/account', lazy: async () => ({ Component: (await import('../features/auth/routes/account-route')).AccountRoute }) },
+  { path: '/organisations/:organisationId/members', lazy: async () => ({ Component: (await import('./routes/members-route')).MembersRoute }) },
+  { path: '/organisations/:organisationId/audit', lazy: async () => ({ Component: (await import('./routes/audit-route')).AuditRoute }) },
 ];
 
 export const appRoutes: RouteObject[] = [

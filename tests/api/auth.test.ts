@@ -1,9 +1,12 @@
 // Sign-up, sign-in, sign-out and session lifetime against the real database.
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
-import { SessionEntity, UserEntity } from '../../server/db/entities';
+import type { Express } from 'express';
+import { hashLinkToken } from '../../server/auth/link-tokens';
+import { OneTimeTokenEntity, SessionEntity, UserEntity } from '../../server/db/entities';
 import { useCleanDatabase } from './fixtures/database';
 import { appFor, PASSWORD, signUp, uniqueEmail } from './fixtures/app';
+import { mailTo, tokenIn } from './fixtures/mail';
 
 const db = useCleanDatabase();
 
@@ -14,11 +17,19 @@ function sessionCookie(res: request.Response): string {
   return cookie;
 }
 
+/** Asks to sign up, then opens the e-mailed link; returns the answer to the link (session cookie and all). */
+async function finishedSignUp(app: Express, email: string, name = 'Ada Founder', organisationName = 'Founder Works'): Promise<request.Response> {
+  const since = Date.now();
+  const asked = await request(app).post('/api/auth/sign-up').send({ email, password: PASSWORD, name, organisationName });
+  expect(asked.status, JSON.stringify(asked.body)).toBe(202);
+  return request(app).post('/api/auth/sign-up/confirm').send({ token: tokenIn(await mailTo(email.toLowerCase(), /Finish creating/, since)) });
+}
+
 describe('sign-up', () => {
-  it('creates the user, an organisation they own, and a session', async () => {
+  it('finishes from the e-mailed link with the user, an organisation they own, and a session', async () => {
     const app = appFor(db());
     const email = uniqueEmail('Founder').toUpperCase();
-    const res = await request(app).post('/api/auth/sign-up').send({ email, password: PASSWORD, name: 'Ada Founder', organisationName: 'Founder Works' });
+    const res = await finishedSignUp(app, email);
     expect(res.status).toBe(201);
     expect(res.body.user.email).toBe(email.toLowerCase());
     expect(res.body.memberships).toEqual([{ organisationId: expect.any(String), organisationName: 'Founder Works', role: 'owner' }]);
@@ -31,6 +42,22 @@ describe('sign-up', () => {
     expect(me.body.user.email).toBe(email.toLowerCase());
   });
 
+  it('makes no account before the link is opened, and the link works once', async () => {
+    const app = appFor(db());
+    const email = uniqueEmail('once');
+    const since = Date.now();
+    await request(app).post('/api/auth/sign-up').send({ email, password: PASSWORD, name: 'Once', organisationName: 'Once' });
+    const token = tokenIn(await mailTo(email, /Finish creating/, since));
+    expect(await db().getRepository(UserEntity).existsBy({ email })).toBe(false);
+    const stored = await db().getRepository(OneTimeTokenEntity).findOneByOrFail({ email, purpose: 'sign-up' });
+    expect(stored.tokenHash).toBe(hashLinkToken(token));
+    expect(JSON.stringify(stored)).not.toContain(token);
+    expect((await request(app).post('/api/auth/sign-up/confirm').send({ token })).status).toBe(201);
+    const again = await request(app).post('/api/auth/sign-up/confirm').send({ token });
+    expect(again.status).toBe(400);
+    expect(again.body.error.fields).toEqual([{ path: 'token', message: 'is no longer valid' }]);
+  });
+
   it('stores an argon2id hash, never the password', async () => {
     const app = appFor(db());
     const { email } = await signUp(app, 'hashcheck');
@@ -39,17 +66,25 @@ describe('sign-up', () => {
     expect(user.passwordHash).not.toContain(PASSWORD);
   });
 
-  it('refuses a second account with the same e-mail in any letter case', async () => {
+  it('answers a registered address exactly like a new one, and mails its owner instead', async () => {
     const app = appFor(db());
-    const { email } = await signUp(app, 'twice');
-    const res = await request(app).post('/api/auth/sign-up').send({ email: email.toUpperCase(), password: PASSWORD, name: 'Again', organisationName: 'Again' });
-    expect(res.status).toBe(409);
-    expect(res.body.error.fields).toEqual([{ path: 'email', message: 'is already registered' }]);
+    const { email, id } = await signUp(app, 'twice');
+    const since = Date.now();
+    const taken = await request(app).post('/api/auth/sign-up').send({ email: email.toUpperCase(), password: PASSWORD, name: 'Again', organisationName: 'Again' });
+    const fresh = await request(app).post('/api/auth/sign-up').send({ email: uniqueEmail('fresh'), password: PASSWORD, name: 'Again', organisationName: 'Again' });
+    expect(taken.status).toBe(202);
+    expect(fresh.status).toBe(202);
+    expect(taken.body).toEqual(fresh.body);
+    expect(taken.headers['set-cookie']).toBeUndefined();
+    const notice = await mailTo(email, /already have a Lanewright account/, since);
+    expect(notice.links.some((link) => link.includes('#'))).toBe(false);
+    expect(await db().getRepository(UserEntity).countBy({ email })).toBe(1);
+    expect((await db().getRepository(UserEntity).findOneByOrFail({ email })).id).toBe(id);
   });
 
   it('marks the cookie Secure when the app is served over https', async () => {
     const app = appFor(db(), 'https://lanewright.example.test');
-    const res = await request(app).post('/api/auth/sign-up').send({ email: uniqueEmail('secure'), password: PASSWORD, name: 'S', organisationName: 'S' });
+    const res = await finishedSignUp(app, uniqueEmail('secure'));
     expect(res.status).toBe(201);
     expect(sessionCookie(res)).toMatch(/Secure/);
   });
@@ -94,7 +129,7 @@ describe('sign-in', () => {
 describe('sessions', () => {
   it('sign-out invalidates the session on the server, so the old cookie no longer works', async () => {
     const app = appFor(db());
-    const res = await request(app).post('/api/auth/sign-up').send({ email: uniqueEmail('leaver'), password: PASSWORD, name: 'L', organisationName: 'L' });
+    const res = await finishedSignUp(app, uniqueEmail('leaver'));
     const cookie = sessionCookie(res).split(';')[0];
     const out = await request(app).post('/api/auth/sign-out').set('Cookie', cookie);
     expect(out.status).toBe(200);
@@ -106,7 +141,7 @@ describe('sessions', () => {
 
   it('signing in again replaces the session the browser already had', async () => {
     const app = appFor(db());
-    const res = await request(app).post('/api/auth/sign-up').send({ email: uniqueEmail('again'), password: PASSWORD, name: 'A', organisationName: 'A' });
+    const res = await finishedSignUp(app, uniqueEmail('again'));
     const before = sessionCookie(res).split(';')[0];
     const again = await request(app).post('/api/auth/sign-in').set('Cookie', before).send({ email: res.body.user.email, password: PASSWORD });
     expect(again.status).toBe(200);
@@ -118,7 +153,7 @@ describe('sessions', () => {
 
   it('answers 401 once the session has expired in the database', async () => {
     const app = appFor(db());
-    const res = await request(app).post('/api/auth/sign-up').send({ email: uniqueEmail('expiring'), password: PASSWORD, name: 'E', organisationName: 'E' });
+    const res = await finishedSignUp(app, uniqueEmail('expiring'));
     const cookie = sessionCookie(res).split(';')[0];
     await db().getRepository(SessionEntity).update({ userId: res.body.user.id }, { expiresAt: new Date(Date.now() - 1000) });
     const me = await request(app).get('/api/me').set('Cookie', cookie);
@@ -128,7 +163,7 @@ describe('sessions', () => {
 
   it('extends a session that is past half its life and re-sends the cookie', async () => {
     const app = appFor(db());
-    const res = await request(app).post('/api/auth/sign-up').send({ email: uniqueEmail('sliding'), password: PASSWORD, name: 'S', organisationName: 'S' });
+    const res = await finishedSignUp(app, uniqueEmail('sliding'));
     const cookie = sessionCookie(res).split(';')[0];
     const soon = new Date(Date.now() + 24 * 3600 * 1000);
     await db().getRepository(SessionEntity).update({ userId: res.body.user.id }, { expiresAt: soon });

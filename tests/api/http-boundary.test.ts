@@ -90,7 +90,7 @@ describe('serving the client', () => {
 
 describe('startServer', () => {
   it('listens on the given host and port 0, answers, and closes', async () => {
-    const server = await startServer({ dataSource: db(), port: 0, host: '127.0.0.1' });
+    const server = await startServer({ dataSource: db(), port: 0, host: '127.0.0.1', fakeSmtpPort: 0 });
     try {
       expect(server.url).toMatch(/^http:\/\/127\.0\.0\.1:\d+$/);
       const res = await fetch(`${server.url}${apiRoutes.me}`);

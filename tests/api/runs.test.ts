@@ -123,7 +123,7 @@ describe('cascades', () => {
   it('deleting a user keeps their audit rows with no actor, and their work with no author', async () => {
     const app = appFor(db());
     const leaver = await signUp(app, 'leaver');
-    await addMember(org.people.owner.agent, org.people.organisationId, leaver.email, 'engineer');
+    await addMember(org.people.owner.agent, org.people.organisationId, leaver, 'engineer');
     const renamed = await leaver.agent.patch(apiRoutes.project(org.content.projectId)).send({ description: 'Checked by the leaver' });
     expect(renamed.status).toBe(200);
     await db().getRepository(UserEntity).delete({ id: leaver.id });
@@ -131,6 +131,6 @@ describe('cascades', () => {
     expect(rows).toHaveLength(1);
     expect(rows[0].actorId).toBeNull();
     const audit = await org.people.owner.agent.get(apiRoutes.audit(org.people.organisationId));
-    expect(audit.body.find((e: { entityId: string; action: string }) => e.entityId === org.content.projectId && e.action === 'update').actor).toBeNull();
+    expect(audit.body.entries.find((e: { entityId: string; action: string }) => e.entityId === org.content.projectId && e.action === 'update').actor).toBeNull();
   });
 });

@@ -104,4 +104,25 @@ describe('playback of a stored run', () => {
     expect(await atStart()).toEqual(first);
     expect(browser.pageErrors).toEqual([]);
   });
+
+  it('on a 390 px phone: no page scrolls sideways, and the drawings keep a legible size in their own scrolling box', async () => {
+    const playbackPath = new URL(page.url()).pathname;
+    const runPath = playbackPath.replace(/\/playback$/, '');
+    const scenarioPath = await page.getByRole('link', { name: 'Stacked loop' }).first().getAttribute('href');
+    await page.setViewportSize({ width: 390, height: 844 });
+    for (const [name, path] of [['scenario', scenarioPath ?? ''], ['result', runPath], ['playback', playbackPath]] as const) {
+      await page.goto(`${app.url}${path}`);
+      await page.locator('main h1').waitFor();
+      await page.waitForTimeout(1500);
+      expect(await page.evaluate(() => document.documentElement.scrollWidth), name).toBeLessThanOrEqual(390);
+      await screenshot(page, `playback-phone-${name}`);
+    }
+    await page.goto(`${app.url}${scenarioPath}`);
+    const plan = page.locator('[data-drawing-scroll] svg').first();
+    expect((await plan.boundingBox())?.width ?? 0).toBeGreaterThanOrEqual(640);
+    // The editor's sections sit in a row above the section, not in a side column.
+    const nav = await page.getByRole('navigation', { name: 'Scenario sections' }).boundingBox();
+    const region = await page.getByRole('region', { name: 'General' }).boundingBox();
+    expect(region?.y ?? 0).toBeGreaterThan((nav?.y ?? 0) + (nav?.height ?? 0) - 1);
+  });
 });

@@ -9,11 +9,13 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import type { DataSource } from 'typeorm';
+import { afterAll, beforeAll } from 'vitest';
 import { createDataSource } from '../../server/db/data-source';
 import { runMigrations } from '../../server/db/migrate';
 import { seedDemo } from '../../server/db/seed/demo';
 import { seedDemoPrices } from '../../server/db/seed/demo-prices';
 import { startServer } from '../../server/index';
+import type { CaughtMailbox } from '../../server/mail/mailbox';
 import { clientOutDir, projectRoot } from '../../server/setup/paths';
 import { CHROMIUM_PATH } from './chromium-path';
 import { browserDatabaseUrl } from './test-database';
@@ -32,6 +34,8 @@ const CHROMIUM_ARGS = [
 
 export interface TestApp {
   url: string;
+  /** The fake SMTP server's catch (the app's /dev/mailbox page shows the same). */
+  mailbox: CaughtMailbox;
   dataSource: DataSource;
   close(): Promise<void>;
 }
@@ -67,9 +71,11 @@ export async function startTestApp(): Promise<TestApp> {
     // The browser tests sign in as the demo accounts, whatever LANEWRIGHT_DEMO says.
     await seedDemo(dataSource, { LANEWRIGHT_DEMO: 'on' });
     await seedDemoPrices(dataSource);
-    const server = await startServer({ dataSource, port: await freePort(), host: HOST, clientDir: clientOutDir });
+    const server = await startServer({ dataSource, port: await freePort(), host: HOST, clientDir: clientOutDir, fakeSmtpPort: 0 });
+    if (!server.mailbox) throw new Error('the browser tests need the fake mailbox: unset SMTP_HOST');
     return {
       url: server.url,
+      mailbox: server.mailbox,
       dataSource,
       close: async () => {
         await server.close();
@@ -114,4 +120,38 @@ export async function screenshot(page: Page, name: string): Promise<string> {
   const path = join(SCREENSHOT_DIR, `${safeName}.png`);
   await page.screenshot({ path, fullPage: true });
   return path;
+}
+
+/**
+ * The usual set-up of a browser test file: the app and Chromium before the first test (a desktop-sized
+ * tab), both closed after the last. `prepare` runs against the app before the browser starts.
+ */
+export function useAppInBrowser(prepare?: (app: TestApp) => Promise<void>) {
+  let app: TestApp | undefined;
+  let browser: TestBrowser | undefined;
+  beforeAll(async () => {
+    app = await startTestApp();
+    await prepare?.(app);
+    browser = await launchBrowser();
+    await browser.page.setViewportSize({ width: 1280, height: 800 });
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await app?.close();
+  });
+  const need = <T>(value: T | undefined): T => {
+    if (!value) throw new Error('useAppInBrowser(): the app and browser exist only inside tests');
+    return value;
+  };
+  return {
+    get app(): TestApp {
+      return need(app);
+    },
+    get browser(): TestBrowser {
+      return need(browser);
+    },
+    get page(): Page {
+      return need(browser).page;
+    },
+  };
 }

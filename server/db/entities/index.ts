@@ -1,6 +1,8 @@
 // Every entity class, listed once for the data source (no globs: tsx and vitest resolve no patterns).
 import { AuditEntryEntity } from './audit-entry.entity';
+import { InvitationEntity } from './invitation.entity';
 import { MembershipEntity } from './membership.entity';
+import { OneTimeTokenEntity } from './one-time-token.entity';
 import { OrganisationEntity } from './organisation.entity';
 import { PriceListEntity } from './price-list.entity';
 import { ProjectEntity } from './project.entity';
@@ -8,12 +10,15 @@ import { RunEntity } from './run.entity';
 import { ScenarioRevisionEntity } from './scenario-revision.entity';
 import { ScenarioEntity } from './scenario.entity';
 import { SessionEntity } from './session.entity';
+import { ShareLinkEntity } from './share-link.entity';
 import { TimeStudyEntity } from './time-study.entity';
 import { UserEntity } from './user.entity';
 
 export {
   AuditEntryEntity,
+  InvitationEntity,
   MembershipEntity,
+  OneTimeTokenEntity,
   OrganisationEntity,
   PriceListEntity,
   ProjectEntity,
@@ -21,6 +26,7 @@ export {
   ScenarioRevisionEntity,
   ScenarioEntity,
   SessionEntity,
+  ShareLinkEntity,
   TimeStudyEntity,
   UserEntity,
 };
@@ -37,4 +43,7 @@ export const entities = [
   TimeStudyEntity,
   PriceListEntity,
   AuditEntryEntity,
+  InvitationEntity,
+  OneTimeTokenEntity,
+  ShareLinkEntity,
 ];

@@ -16,6 +16,9 @@ export class UserEntity {
   @Column({ type: 'text', name: 'password_hash' })
   passwordHash!: string;
 
+  @Column({ type: 'timestamptz', name: 'last_sign_in_at', nullable: true })
+  lastSignInAt!: Date | null;
+
   @CreateDateColumn({ type: 'timestamptz', name: 'created_at' })
   createdAt!: Date;
 

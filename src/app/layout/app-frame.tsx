@@ -4,6 +4,7 @@ import { Outlet } from 'react-router-dom';
 import { UserMenu } from '../../features/auth/components/user-menu';
 import { useOptionalSession } from '../../features/auth/hooks/session-context';
 import { SafetyNote } from './safety-note';
+import { TeamNav } from './team-nav';
 import { Wordmark } from './wordmark';
 
 export function AppFrame() {
@@ -19,6 +20,7 @@ export function AppFrame() {
       <header className="bg-ink text-paper print:hidden">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-x-6 gap-y-3 px-4 py-3 sm:px-6">
           <Wordmark />
+          <TeamNav session={session} />
           {session && <UserMenu session={session} />}
         </div>
       </header>

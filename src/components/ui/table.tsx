@@ -3,7 +3,8 @@ import type { ComponentProps } from 'react';
 
 export function Table({ caption, className = '', children, ...rest }: ComponentProps<'table'> & { caption: string }) {
   return (
-    <div className="overflow-x-auto">
+    // Relative, so screen-reader-only text in cells is positioned inside the scrolling box, not the page.
+    <div className="relative overflow-x-auto">
       <table className={`w-full border-collapse text-left text-sm ${className}`} {...rest}>
         <caption className="sr-only">{caption}</caption>
         {children}

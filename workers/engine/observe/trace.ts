@@ -6,6 +6,7 @@
 import { PLAYBACK_LIMITS, TRACE_LOADED, type PlaybackTrace } from '../../../shared/results/playback';
 import type { CompiledLine } from '../model/compile';
 import type { LineState } from '../model/state';
+import { leaderOf, offsetMm } from '../model/platoons';
 import { PH_MOVING, PH_TRANSFER } from '../model/state';
 import type { Observer } from './observer';
 
@@ -92,7 +93,7 @@ export class TraceRecorder {
   attach(m: LineState): void {
     this.m = m;
     for (let s = 0; s < this.line.stationCount; s++) this.station(s, m.sState[s], 0);
-    for (let c = 0; c < this.line.carrierCount; c++) this.carrier(c, 0);
+    this.scan(0);
   }
 
   /** Wraps an observer so every call reaches it first and the trace second. */
@@ -106,9 +107,11 @@ export class TraceRecorder {
       }
     }
     const observer = tee as unknown as Observer;
-    observer.carrierPhase = (c, phase, t) => {
-      base.carrierPhase(c, phase, t);
-      this.carrier(c, t);
+    // Phase changes come counted, not per carrier (a platoon moves as one), so each one is followed
+    // by a look at every carrier: cheap for the replay's tens of carriers, and exact.
+    observer.carrierPhases = (from, to, count, t) => {
+      base.carrierPhases(from, to, count, t);
+      this.scan(t);
     };
     observer.stationState = (s, state, t) => {
       base.stationState(s, state, t);
@@ -129,28 +132,33 @@ export class TraceRecorder {
     }
   }
 
-  private carrier(c: number, t: number): void {
+  /** Records every carrier whose place, move or load differs from what was last recorded for it. */
+  private scan(t: number): void {
     const m = this.m;
     if (!m || t > this.endSeconds) return;
-    const phase = m.cPhase[c];
-    const inTransfer = phase === PH_TRANSFER;
-    const where = inTransfer ? -1 - m.cConn[c] : m.cLane[c];
-    const pos = inTransfer ? 0 : m.cPos[c];
-    const moving = phase === PH_MOVING;
-    const dest = inTransfer ? 1 : moving ? m.cDest[c] : pos;
-    const end = inTransfer ? t + this.line.connCarrySeconds[m.cConn[c]] : moving ? m.cMoveEnd[c] : t;
-    const flags = m.cLoaded[c] ? TRACE_LOADED : 0;
-    if (t < this.startSeconds) {
+    for (let c = 0; c < this.line.carrierCount; c++) {
+      const leader = leaderOf(m, c);
+      const offset = offsetMm(m, c);
+      const phase = m.cPhase[leader];
+      const inTransfer = phase === PH_TRANSFER;
+      const where = inTransfer ? -1 - m.cConn[c] : m.cLane[c];
+      const pos = inTransfer ? 0 : m.cPos[leader] - offset;
+      const moving = phase === PH_MOVING;
+      const dest = inTransfer ? 1 : moving ? m.cDest[leader] - offset : pos;
+      const flags = m.cLoaded[c] ? TRACE_LOADED : 0;
+      const same = this.lastT[c] >= 0 && this.lastWhere[c] === where && this.lastPos[c] === Math.fround(pos) && this.lastDest[c] === Math.fround(dest) && this.lastFlags[c] === flags;
+      if (same && (moving || inTransfer) === (this.lastEnd[c] > this.lastT[c])) continue;
+      const end = inTransfer ? t + this.line.connCarrySeconds[m.cConn[c]] : moving ? m.cMoveEnd[leader] : t;
+      // The window opens with where everything was just before it, then this change.
+      if (t >= this.startSeconds && !this.opened) this.open();
       this.lastT[c] = t;
       this.lastWhere[c] = where;
       this.lastPos[c] = pos;
       this.lastDest[c] = dest;
       this.lastEnd[c] = end;
       this.lastFlags[c] = flags;
-      return;
+      if (t >= this.startSeconds) this.pushCarrier(c, t, where, pos, dest, end, flags);
     }
-    if (!this.opened) this.open();
-    this.pushCarrier(c, t, where, pos, dest, end, flags);
   }
 
   private station(s: number, state: number, t: number): void {

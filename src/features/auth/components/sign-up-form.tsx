@@ -10,7 +10,7 @@ import { useSignUp } from '../api/sign-up';
 
 const FIELDS = ['name', 'organisationName', 'email', 'password'] as const;
 
-export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
+export function SignUpForm({ onAsked }: { onAsked: (message: string) => void }) {
   const form = useForm({
     resolver: zodResolver(signUpSchema),
     defaultValues: { name: '', organisationName: '', email: '', password: '' },
@@ -18,8 +18,8 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
   const { errors } = form.formState;
   const signUp = useSignUp();
   const { onSubmit, failure } = useApiFormSubmit(form, FIELDS, async (values) => {
-    await signUp.mutateAsync(values);
-    onSignedUp();
+    const answer = await signUp.mutateAsync(values);
+    onAsked(answer.message);
   });
 
   return (

@@ -36,6 +36,11 @@ export function SignInRoute() {
       }
     >
       <SignInForm onSignedIn={() => navigate(returnTo, { replace: true })} />
+      <p className="mt-4 text-sm">
+        <Link className="font-semibold text-accent-strong underline underline-offset-4" to="/forgot-password">
+          Forgot password?
+        </Link>
+      </p>
     </AuthPanel>
   );
 }

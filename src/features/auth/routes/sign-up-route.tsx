@@ -1,21 +1,24 @@
-// /sign-up: a new account with its own organisation.
-import { Link, Navigate, useLocation, useNavigate } from 'react-router-dom';
+// /sign-up: asks for a new account with its own organisation. The e-mailed link finishes it
+// (/sign-up/finish), so this page never tells whether the address already has an account.
+import { useState } from 'react';
+import { Link, Navigate, useLocation } from 'react-router-dom';
 import { useMe } from '../api/get-me';
 import { AuthPanel } from '../components/auth-panel';
+import { MailSentNotice } from '../components/mail-sent-notice';
 import { SignUpForm } from '../components/sign-up-form';
 import { safeReturnTo, withSameReturn } from '../utils/return-to';
 
 export function SignUpRoute() {
   const location = useLocation();
-  const navigate = useNavigate();
   const me = useMe();
+  const [sent, setSent] = useState<string | null>(null);
   const returnTo = safeReturnTo(location.search);
   if (me.data) return <Navigate to={returnTo} replace />;
 
   return (
     <AuthPanel
       title="Create your Lanewright account"
-      intro="You get an organisation of your own; invite engineers and viewers to it later."
+      intro="You get an organisation of your own and can invite engineers and viewers to it. We mail you a link to finish."
       footer={
         <>
           Already have an account?{' '}
@@ -25,7 +28,7 @@ export function SignUpRoute() {
         </>
       }
     >
-      <SignUpForm onSignedUp={() => navigate(returnTo, { replace: true })} />
+      {sent ? <MailSentNotice message={sent} /> : <SignUpForm onAsked={setSent} />}
     </AuthPanel>
   );
 }

@@ -22,23 +22,29 @@ function breakText(results: RunDetail['results']): string {
   return results.breakMode === 'wholeLine' ? `${minutes}stop the whole line (carriers halt, no station works)` : `${minutes}only manual stations that pause for breaks stop`;
 }
 
-export function RunMetadata({ run }: { run: RunDetail }) {
+/** `readOnlyView`: for a shared page, whose reader has no scenario to open and needs no names of the team. */
+export function RunMetadata({ run, readOnlyView = false }: { run: RunDetail; readOnlyView?: boolean }) {
   const { settings } = run;
   return (
     <Card aria-labelledby="metadata-title" className="flex flex-col gap-4">
       <CardTitle id="metadata-title">About this run</CardTitle>
       <dl className="grid grid-cols-1 gap-4 sm:grid-cols-2 lg:grid-cols-4">
         <Item term="Scenario revision">
-          <Link className="text-accent-strong underline underline-offset-4" to={`/scenarios/${run.scenarioId}`}>
-            {run.scenarioName}, revision {run.revisionNumber}
-          </Link>
+          {readOnlyView ? (
+            `${run.scenarioName}, revision ${run.revisionNumber}`
+          ) : (
+            <Link className="text-accent-strong underline underline-offset-4" to={`/scenarios/${run.scenarioId}`}>
+              {run.scenarioName}, revision {run.revisionNumber}
+            </Link>
+          )}
         </Item>
         <Item term="Seed">
           <code className="font-mono">{run.seed}</code>
         </Item>
         <Item term="Engine version">{run.engineVersion}</Item>
-        <Item term="Run by">
-          {formatPerson(run.createdBy)}, <time dateTime={run.createdAt}>{formatDateTime(run.createdAt)}</time>
+        <Item term={readOnlyView ? 'Run on' : 'Run by'}>
+          {readOnlyView ? '' : `${formatPerson(run.createdBy)}, `}
+          <time dateTime={run.createdAt}>{formatDateTime(run.createdAt)}</time>
         </Item>
         <Item term="Simulated">
           {settings.replications} replication{settings.replications === 1 ? '' : 's'} × {settings.hours} h after {settings.warmupMinutes} min warm-up

@@ -1,7 +1,8 @@
 // /runs/:runId : one stored run's results, exactly as the engine produced them, with the revision,
 // seed and settings that repeat it, and exports for every table and chart.
 import { useQuery } from '@tanstack/react-query';
-import { useMemo } from 'react';
+import { useMemo, type ReactNode } from 'react';
+import type { RunDetail } from '../../../../shared/api/runs';
 import { useNavigate, useParams } from 'react-router-dom';
 import { LoadError } from '../../../components/load-error';
 import { NotFoundMessage } from '../../../components/not-found-message';
@@ -18,16 +19,15 @@ import { RunRowActions } from '../../runs/components/run-row-actions';
 import { useRunPermissions } from '../../runs/hooks/use-run-permissions';
 import { scenarioQueryOptions } from '../../scenarios/api/get-scenario';
 import { ControlsExport } from '../components/controls-export';
-import { FlowResults } from '../components/flow-results';
-import { HeatmapResults } from '../components/heatmap-results';
-import { ReplicationResults } from '../components/replication-results';
-import { ResultHeadline } from '../components/result-headline';
 import { RunMetadata } from '../components/run-metadata';
-import { SafetyCaution } from '../components/safety-caution';
-import { StationResults } from '../components/station-results';
-import { TrackResults } from '../components/track-results';
+import { RunResultSections } from '../components/run-result-sections';
 
-export function RunRoute() {
+interface RunRouteProps {
+  /** Extra panels below the run's description, composed by the app (sharing, for one). */
+  renderAside?: (run: RunDetail, organisationId: string | undefined) => ReactNode;
+}
+
+export function RunRoute({ renderAside }: RunRouteProps = {}) {
   const { runId = '' } = useParams();
   const navigate = useNavigate();
   const run = useRun(runId);
@@ -73,14 +73,9 @@ export function RunRoute() {
           </>
         }
       />
-      <SafetyCaution />
-      <ResultHeadline result={result} />
-      <HeatmapResults result={result} fileBase={fileBase} />
-      <StationResults result={result} stepNames={stepNames} fileBase={fileBase} />
-      <TrackResults result={result} fileBase={fileBase} />
-      <FlowResults result={result} fileBase={fileBase} />
-      <ReplicationResults replications={result.replications} fileBase={fileBase} />
+      <RunResultSections result={result} stepNames={stepNames} fileBase={fileBase} />
       <RunMetadata run={data} />
+      {renderAside?.(data, project.data?.organisationId)}
       <Card aria-labelledby="exports-title" className="flex flex-col gap-3">
         <CardTitle id="exports-title">Exports</CardTitle>
         <p className="text-sm text-ink-soft">Every table above has a CSV button, every chart PNG, SVG and CSV buttons in its corner.</p>

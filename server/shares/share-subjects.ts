@@ -1,0 +1,29 @@
+// What each kind of share link points at: how to find the organisation that owns the subject (for the
+// role check) and what an anonymous holder of the link receives. A further kind is one more entry here,
+// one more value in ShareKind and the table's check constraint.
+import type { DataSource } from 'typeorm';
+import type { ShareKind, SharedView } from '../../shared/api/shares';
+import { RunEntity } from '../db/entities';
+import { runDetail } from '../routes/run-queries';
+
+interface ShareSubject {
+  what: string;
+  /** The owning organisation, or null when the subject does not exist. */
+  organisationOf(ds: DataSource, subjectId: string): Promise<string | null>;
+  view(ds: DataSource, subjectId: string, base: { expiresAt: string; organisationName: string }): Promise<SharedView>;
+}
+
+export const shareSubjects: Record<ShareKind, ShareSubject> = {
+  run: {
+    what: 'The run',
+    async organisationOf(ds, subjectId) {
+      const run = await ds.getRepository(RunEntity).findOne({ where: { id: subjectId }, relations: { scenario: { project: true } } });
+      return run?.scenario?.project?.organisationId ?? null;
+    },
+    async view(ds, subjectId, base) {
+      const run = await runDetail(ds, subjectId);
+      // The holder of the link sees the result, not who in the organisation made it.
+      return { kind: 'run', ...base, run: { ...run, createdBy: null } };
+    },
+  },
+};

@@ -1,0 +1,4 @@
+// Query keys of the development mailbox.
+export const mailboxKeys = {
+  all: ['mailbox'] as const,
+};

@@ -1,7 +1,12 @@
 // Shifts, breaks and working days: they turn hourly throughput into annual output.
 import { useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import type { ScenarioForm } from '../../editor-context';
-import { ListIssue, NumberField } from '../fields';
+import { ListIssue, NumberField, SelectField } from '../fields';
+
+const BREAK_MODE_OPTIONS = [
+  { value: 'manualStations', label: 'Only manual stations set to pause stop; the rest of the line runs on' },
+  { value: 'wholeLine', label: 'Breaks stop the whole line: carriers halt, no station works' },
+] as const;
 import { RemoveCell, SectionHeading, SmallButton } from '../row-actions';
 
 function WorkingHours() {
@@ -24,7 +29,7 @@ export function CalendarSection() {
   const breaks = useFieldArray({ control, name: 'calendar.breaks' });
   return (
     <div className="flex flex-col gap-5">
-      <SectionHeading title="Calendar" description="Every shift of a day has the same length and breaks. Manual stations set to pause for breaks stop during them." />
+      <SectionHeading title="Calendar" description="Every shift of a day has the same length and breaks. Choose below whether breaks stop only the manual stations set to pause, or the whole line." />
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
         <NumberField name="calendar.shiftsPerDay" label="Shifts per day" step="1" />
         <NumberField name="calendar.hoursPerShift" label="Hours per shift" />
@@ -35,6 +40,7 @@ export function CalendarSection() {
       <SectionHeading title="Breaks" description="Minutes after the start of each shift.">
         <SmallButton onClick={() => breaks.append({ startMinute: 0, minutes: 15 })}>Add break</SmallButton>
       </SectionHeading>
+      <SelectField name="calendar.breakMode" label="During breaks" options={BREAK_MODE_OPTIONS} />
       <ListIssue name="calendar.breaks" />
       {breaks.fields.length === 0 && <p className="text-sm text-ink-soft">No breaks: the line works the whole shift.</p>}
       <ol className="flex flex-col gap-2">

@@ -1,7 +1,20 @@
 // Lint rules that hold the architecture: dependencies point one way
-// (shared <- workers <- server/src), and no import cycles.
+// (shared <- workers <- server/src), features stay apart, and no import cycles.
+import { readdirSync } from 'node:fs';
 import tseslint from 'typescript-eslint';
 import importX, { createNodeResolver } from 'eslint-plugin-import-x';
+
+// Every folder under src/features is a feature: it may import shared pieces (components, lib, shared,
+// workers) but no other feature. Pages that compose several features live in src/app/routes.
+const features = readdirSync(new URL('./src/features', import.meta.url), { withFileTypes: true })
+  .filter((entry) => entry.isDirectory())
+  .map((entry) => entry.name);
+const featureZones = features.map((feature) => ({
+  target: `./src/features/${feature}`,
+  from: './src/features',
+  except: [`./${feature}`],
+  message: 'Features do not import one another: compose them in src/app/routes, or move the shared piece to src/lib or src/components.',
+}));
 
 export default tseslint.config(
   { ignores: ['dist/**', 'node_modules/**', '.data/**', 'test-artifacts/**'] },
@@ -23,6 +36,7 @@ export default tseslint.config(
             { target: './src/components', from: ['./src/features', './src/app'], message: 'Shared UI pieces know no feature or route.' },
             { target: './src/lib', from: ['./src/features', './src/app'], message: 'Client libraries know no feature or route.' },
             { target: './src/features', from: './src/app', message: 'Features are composed by app/, never the other way round.' },
+            ...featureZones,
           ],
         },
       ],
@@ -44,9 +58,18 @@ export default tseslint.config(
     },
   },
   {
+    files: ['shared/**'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        { patterns: [{ regex: '^(?!zod$)[^.]', message: 'shared/ imports only zod (and its own files).' }] },
+      ],
+    },
+  },
+  {
     files: ['workers/engine/**'],
     rules: {
-      'no-restricted-globals': ['error', 'window', 'document', 'process', 'Buffer'],
+      'no-restricted-globals': ['error', 'window', 'document', 'navigator', 'localStorage', 'sessionStorage', 'fetch', 'XMLHttpRequest', 'process', 'Buffer'],
       'no-restricted-imports': ['error', { patterns: ['node:*', 'react', 'react-dom', 'express', 'typeorm', 'pg'] }],
     },
   },

@@ -20,7 +20,7 @@ export default {
           starved: '#e69f00',
           blocked: '#cc79a7',
           down: '#d55e00',
-          idle: '#bbbbbb',
+          onBreak: '#bbbbbb',
         },
       },
     },

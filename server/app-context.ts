@@ -1,7 +1,7 @@
 // What every router needs: the data source, the session service, the app's public origin and the mailer.
 import type { DataSource } from 'typeorm';
 import type { Auth } from './auth/lucia';
-import type { AttemptLimiter } from './auth/rate-limit';
+import type { SignInLimiter } from './auth/rate-limit';
 import type { CaughtMailbox } from './mail/mailbox';
 import type { Mailer } from './mail/mailer';
 
@@ -9,7 +9,7 @@ export interface AppContext {
   ds: DataSource;
   auth: Auth;
   publicOrigin?: string;
-  signInLimiter: AttemptLimiter;
+  signInLimiter: SignInLimiter;
   mailer: Mailer;
   /** Only while mail goes to the loopback fake: what it caught, for the development mailbox page. */
   mailbox?: CaughtMailbox;

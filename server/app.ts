@@ -5,15 +5,18 @@ import express from 'express';
 import type { DataSource } from 'typeorm';
 import type { AppContext } from './app-context';
 import { createAuth } from './auth/lucia';
+import type { TrustProxy } from './config';
 import { prepareDecoy } from './auth/password';
-import { createAttemptLimiter } from './auth/rate-limit';
+import { createSignInLimiter } from './auth/rate-limit';
 import { loadSession } from './auth/session-middleware';
 import { errorHandler, sendError, unknownApiRoute } from './http/error-handler';
+import { allowedHostNames, refuseUnknownHosts } from './http/host-check';
 import { HttpError } from './http/http-error';
 import { requireJsonBody } from './http/json-only';
-import { JSON_BODY_LIMIT_BYTES } from './http/limits';
+import { BODY_LIMITS, bodyKindOf } from './http/limits';
 import { refuseCrossOriginMutations } from './http/origin-check';
 import { securityHeaders } from './http/security-headers';
+import { noteSuspectText, refuseUnstorableText } from './http/text-check';
 import { clientRouter } from './http/static-client';
 import type { CaughtMailbox } from './mail/mailbox';
 import type { Mailer } from './mail/mailer';
@@ -28,6 +31,7 @@ import { projectsRouter } from './routes/projects';
 import { revisionsRouter } from './routes/revisions';
 import { runsRouter } from './routes/runs';
 import { scenariosRouter } from './routes/scenarios';
+import { studiesRouter } from './routes/studies';
 import { sharesRouter } from './routes/shares';
 import { timeStudiesRouter } from './routes/time-studies';
 import { exceptTimeStudyUploads } from './time-studies/upload-route';
@@ -38,6 +42,11 @@ export interface CreateAppOptions {
   clientDir?: string;
   /** The origin users reach the app at, e.g. https://lanewright.example.test. */
   publicOrigin?: string;
+  /** Express's `trust proxy`: which proxies may tell the client's address (sign-in limits count per address). */
+  trustProxy?: TrustProxy;
+  /** The address the server listens on and extra host names it answers to (besides loopback names). */
+  listenHost?: string;
+  allowedHosts?: readonly string[];
   /** How mail leaves; without it every send fails with a logged line (apps that never mail, like some tests). */
   mailer?: Mailer;
   /** The fake SMTP server's catch; mounts the development mailbox routes when given. */
@@ -54,13 +63,15 @@ export function createApp(opts: CreateAppOptions): express.Express {
     ds: opts.dataSource,
     auth: createAuth(opts.dataSource),
     publicOrigin,
-    signInLimiter: createAttemptLimiter(),
+    signInLimiter: createSignInLimiter(opts.dataSource),
     mailer: opts.mailer ?? noMailer,
     mailbox: opts.mailbox,
   };
   void prepareDecoy();
   const app = express();
   app.disable('x-powered-by');
+  app.set('trust proxy', opts.trustProxy ?? false);
+  app.use(refuseUnknownHosts(allowedHostNames({ publicOrigin, listenHost: opts.listenHost, allowedHosts: opts.allowedHosts })));
   app.set('etag', false);
   app.use(securityHeaders(publicOrigin?.startsWith('https:') ?? false));
 
@@ -71,9 +82,11 @@ export function createApp(opts: CreateAppOptions): express.Express {
     next();
   });
   api.use(exceptTimeStudyUploads(requireJsonBody));
-  api.use(express.json({ limit: JSON_BODY_LIMIT_BYTES, strict: true }));
+  const parsers = Object.fromEntries(Object.entries(BODY_LIMITS).map(([kind, limit]) => [kind, express.json({ limit, strict: true, verify: noteSuspectText })]));
+  api.use((req, res, next) => parsers[bodyKindOf(req)](req, res, next));
+  api.use(refuseUnstorableText);
   api.use(loadSession(ctx.auth, publicOrigin));
-  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, membersRouter, invitationsRouter, accountRouter, sharesRouter, priceListsRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));
+  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, studiesRouter, membersRouter, invitationsRouter, accountRouter, sharesRouter, priceListsRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));
   if (ctx.mailbox) api.use(mailboxRouter(ctx.mailbox));
   api.use(unknownApiRoute);
   app.use('/api', api);

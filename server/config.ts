@@ -21,6 +21,24 @@ export const configSchema = z.object({
     .url({ message: 'must be an origin such as https://lanewright.example.test' })
     .transform((value) => new URL(value).origin)
     .optional(),
+  /**
+   * Which proxies in front of the server to believe about the client's address (X-Forwarded-For), which the
+   * sign-in limits count per address: "off" (the default: no proxy), a number of hops, or a comma-separated
+   * list of addresses/subnets such as "loopback" or "10.0.0.0/8".
+   */
+  TRUST_PROXY: z
+    .string()
+    .regex(/^(off|\d{1,2}|[\w.:/]+(\s*,\s*[\w.:/]+)*)$/, { message: 'must be "off", a number of proxy hops, or a comma-separated list of addresses or subnets' })
+    .default('off')
+    .transform((value): TrustProxy => (value === 'off' ? false : /^\d+$/.test(value) ? Number(value) : value.split(',').map((part) => part.trim()))),
+  /**
+   * Host names the server answers to besides localhost, 127.0.0.1, ::1 and the host of PUBLIC_ORIGIN
+   * (comma-separated). Any other Host header is refused, which defeats DNS rebinding.
+   */
+  ALLOWED_HOSTS: z
+    .string()
+    .default('')
+    .transform((value) => value.split(',').map((part) => part.trim().toLowerCase()).filter((part) => part !== '')),
   LANEWRIGHT_DEMO: z.enum(['on', 'off'], { message: 'must be "on" or "off"' }).default('on'),
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   /** A real SMTP relay for invitations and password resets; unset means the loopback fake mailbox. */
@@ -38,6 +56,9 @@ export const configSchema = z.object({
     .max(65535, { message: 'must be between 0 and 65535' })
     .default(2525),
 });
+
+/** Express's `trust proxy` setting: off, a hop count, or trusted addresses. */
+export type TrustProxy = false | number | string[];
 
 export type ServerConfig = z.infer<typeof configSchema>;
 

@@ -36,6 +36,9 @@ export async function startServer(opts: StartServerOptions): Promise<RunningServ
     dataSource: opts.dataSource,
     clientDir: opts.clientDir,
     publicOrigin: opts.publicOrigin ?? config.PUBLIC_ORIGIN,
+    trustProxy: config.TRUST_PROXY,
+    listenHost: opts.host,
+    allowedHosts: config.ALLOWED_HOSTS,
     mailer: mail.mailer,
     mailbox: mail.mailbox,
   });

@@ -4,7 +4,8 @@
 import * as Comlink from 'comlink';
 import { createWorkerApi, traceBuffers } from './engine/worker-api';
 
-export type { PlaybackOutcome, SimulationWorkerApi, WorkerOutcome } from './engine/worker-api';
+export type { PlaybackOutcome, RangeOutcome, SimulationWorkerApi, WorkerOutcome } from './engine/worker-api';
+export type { StudyJobOutcome } from './studies/run-study-job';
 
 const api = createWorkerApi(() => performance.now());
 // A playback trace is tens of megabytes at most: its buffers move to the page instead of being copied.

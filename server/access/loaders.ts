@@ -4,7 +4,7 @@
 import type { Request, RequestHandler } from 'express';
 import { idParamsSchema } from '../../shared/api/common';
 import type { AppContext } from '../app-context';
-import { OrganisationEntity, ProjectEntity, RunEntity, ScenarioEntity } from '../db/entities';
+import { OrganisationEntity, ProjectEntity, RunEntity, ScenarioEntity, StudyEntity } from '../db/entities';
 import { notFound } from '../http/http-error';
 import { currentUser } from '../http/request-context';
 import { parseInput } from '../http/validate';
@@ -45,4 +45,9 @@ export const loadRun = loader('The run', async ({ ds }, id) => {
   const run = await ds.getRepository(RunEntity).findOne({ where: { id }, relations: { scenario: { project: true } } });
   const organisationId = run?.scenario?.project?.organisationId;
   return run && organisationId ? { organisationId, attach: (req) => (req.run = run) } : null;
+});
+
+export const loadStudy = loader('The study', async ({ ds }, id) => {
+  const study = await ds.getRepository(StudyEntity).findOne({ where: { id }, relations: { project: true } });
+  return study?.project ? { organisationId: study.project.organisationId, attach: (req) => (req.study = study) } : null;
 });

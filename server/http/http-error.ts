@@ -7,6 +7,8 @@ export class HttpError extends Error {
     readonly code: ApiErrorCode,
     message: string,
     readonly fields: FieldIssue[] = [],
+    /** Response headers that belong to this answer, such as Retry-After. */
+    readonly headers: Record<string, string> = {},
   ) {
     super(message);
     this.name = 'HttpError';

@@ -2,7 +2,7 @@
 // the loaded entity. Accessors throw when a route forgot the middleware, rather than returning undefined.
 import type { Request } from 'express';
 import type { Role } from '../../shared/api/roles';
-import type { OrganisationEntity, ProjectEntity, RunEntity, ScenarioEntity } from '../db/entities';
+import type { OrganisationEntity, ProjectEntity, RunEntity, ScenarioEntity, StudyEntity } from '../db/entities';
 import { HttpError, unauthenticated } from './http-error';
 
 export interface SignedInUser {
@@ -23,6 +23,7 @@ declare global {
       project?: ProjectEntity;
       scenario?: ScenarioEntity;
       run?: RunEntity;
+      study?: StudyEntity;
     }
   }
 }
@@ -32,7 +33,7 @@ export function currentUser(req: Request): SignedInUser {
   return req.user;
 }
 
-export function loaded<K extends 'organisation' | 'project' | 'scenario' | 'run' | 'role'>(req: Request, key: K): NonNullable<Request[K]> {
+export function loaded<K extends 'organisation' | 'project' | 'scenario' | 'run' | 'study' | 'role'>(req: Request, key: K): NonNullable<Request[K]> {
   const value = req[key];
   if (value === undefined || value === null) throw new HttpError(500, 'internal', `route is missing its ${key} loader`);
   return value as NonNullable<Request[K]>;

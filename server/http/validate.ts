@@ -8,6 +8,9 @@ import { badRequest } from './http-error';
 type Schemas = { params?: z.ZodType; query?: z.ZodType; body?: z.ZodType };
 type Parsed<S extends Schemas> = { [K in keyof S]: S[K] extends z.ZodType ? z.output<S[K]> : never };
 
+/** A request with a million wrong items gets the first few problems, not a million-line answer. */
+export const MAX_REPORTED_ISSUES = 20;
+
 const where = { params: 'in the address', query: 'in the query string', body: 'in the request body' } as const;
 
 function valueAt(value: unknown, path: readonly PropertyKey[]): unknown {
@@ -25,13 +28,15 @@ export function parseInput<S extends z.ZodType>(schema: S, value: unknown, part:
   }
   const result = schema.safeParse(value ?? {});
   if (result.success) return result.data;
-  const fields = toFieldIssues(result.error).map((field, i) => {
-    const issue = result.error.issues[i];
+  const issues = result.error.issues.slice(0, MAX_REPORTED_ISSUES);
+  const fields = toFieldIssues({ issues }).map((field, i) => {
+    const issue = issues[i];
     // Schemas give one message per type check ("must be text"); a field that is absent is better told so.
     const absent = ['invalid_type', 'invalid_value', 'invalid_union'].includes(issue.code) && valueAt(value, issue.path) === undefined;
     return absent ? { ...field, message: 'is required' } : field;
   });
-  const summary = fields.map((f) => (f.path ? `${f.path} ${f.message}` : f.message)).join('; ');
+  const more = result.error.issues.length - issues.length;
+  const summary = fields.map((f) => (f.path ? `${f.path} ${f.message}` : f.message)).join('; ') + (more > 0 ? `; and ${more} more problem(s) not listed` : '');
   throw badRequest(`Invalid input ${where[part]}: ${summary}`, fields);
 }
 

@@ -16,6 +16,7 @@ export function toRunListItem(run: RunEntity): RunListItem {
     engineVersion: run.engineVersion,
     settings: run.settings,
     summary: run.summary,
+    serverChecked: run.serverChecked,
     createdBy: toUserRef(run.createdBy),
     createdAt: iso(run.createdAt),
   };

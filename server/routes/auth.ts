@@ -10,12 +10,13 @@ import type { AppContext } from '../app-context';
 import { recordAudit } from '../audit/record-audit';
 import { issueToken, invalidLink, mayMailAnotherLink, spendToken } from '../auth/one-time-tokens';
 import { hashPassword, verifyAgainstDecoy, verifyPassword } from '../auth/password';
+import { passwordProblem } from '../auth/password-policy';
 import { writeSessionCookie } from '../auth/session-cookie';
 import { startSession } from '../auth/start-session';
 import { MembershipEntity, OrganisationEntity, UserEntity } from '../db/entities';
 import { alreadyRegisteredMail, signUpMail } from '../mail/messages';
 import { sendInBackground } from '../mail/mailer';
-import { HttpError, unauthenticated } from '../http/http-error';
+import { badRequest, HttpError, unauthenticated } from '../http/http-error';
 import { publicLink } from '../http/public-link';
 import { currentUser } from '../http/request-context';
 import { validate } from '../http/validate';
@@ -32,6 +33,8 @@ export function authRouter(ctx: AppContext) {
   router.post(
     '/auth/sign-up',
     validate({ body: signUpSchema }, async ({ body }, req, res) => {
+      const weak = passwordProblem(body.password, body);
+      if (weak) throw badRequest(`Choose another password: it ${weak.message}.`, [weak]);
       const existing = await ds.getRepository(UserEntity).findOneBy({ email: body.email });
       const mayMail = await mayMailAnotherLink(ds, 'sign-up', body.email);
       if (existing) {
@@ -74,21 +77,16 @@ export function authRouter(ctx: AppContext) {
   router.post(
     '/auth/sign-in',
     validate({ body: signInSchema }, async ({ body }, req, res) => {
-      const limitKey = `${body.email}|${req.ip ?? ''}`;
-      const wait = signInLimiter.retryAfter(limitKey);
-      if (wait > 0) {
-        res.set('Retry-After', String(wait));
-        throw new HttpError(429, 'rate_limited', `Too many failed sign-in attempts; try again in ${Math.ceil(wait / 60)} minute(s).`);
-      }
+      const address = req.ip ?? '';
+      await signInLimiter.begin(body.email, address);
       const user = await ds.getRepository(UserEntity).findOneBy({ email: body.email });
       const valid = user ? await verifyPassword(user.passwordHash, body.password) : await verifyAgainstDecoy(body.password);
       if (!user || !valid) {
-        signInLimiter.fail(limitKey);
         // Kept for the audit page: against a known account its id, so that account's organisations see it.
         await recordAudit(ds.manager, { organisationId: null, actorId: null, action: 'sign-in-failed', entity: 'user', entityId: user?.id ?? body.email, detail: { email: body.email, address: req.ip ?? '' } });
         throw unauthenticated('The e-mail or password is incorrect.');
       }
-      signInLimiter.reset(limitKey);
+      await signInLimiter.succeeded(body.email, address);
       await recordAudit(ds.manager, { organisationId: null, actorId: user.id, action: 'sign-in', entity: 'user', entityId: user.id });
       await startSession(ctx, req, res, { id: user.id, email: user.email, name: user.name }, 200);
     }),

@@ -8,6 +8,7 @@ import { membershipsOf, roleIn } from '../access/membership';
 import { requireRole, requireSignedIn } from '../access/require-role';
 import type { AppContext } from '../app-context';
 import { audited } from '../audit/record-audit';
+import { createOnce } from '../db/create-once';
 import { ProjectEntity, ScenarioEntity } from '../db/entities';
 import { forbidden, notFound } from '../http/http-error';
 import { currentUser, loaded } from '../http/request-context';
@@ -70,12 +71,17 @@ export function projectsRouter(ctx: AppContext) {
         if (!organisationId) throw forbidden('You are not an engineer or owner in any organisation, so you cannot create projects.');
       }
       const orgId = organisationId;
-      const project = await audited(
-        ds,
-        (manager) => manager.getRepository(ProjectEntity).save({ organisationId: orgId, name: body.name, description: body.description ?? '', createdById: user.id }),
-        (saved) => ({ organisationId: orgId, actorId: user.id, action: 'create', entity: 'project', entityId: saved.id, detail: { name: saved.name } }),
+      const { clientId } = body;
+      const { value: project, created } = await createOnce(
+        () => (clientId ? projects().findOne({ where: { organisationId: orgId, clientId }, select: { id: true } }) : Promise.resolve(null)),
+        () =>
+          audited(
+            ds,
+            (manager) => manager.getRepository(ProjectEntity).save({ organisationId: orgId, name: body.name, description: body.description ?? '', clientId: clientId ?? null, createdById: user.id }),
+            (saved) => ({ organisationId: orgId, actorId: user.id, action: 'create', entity: 'project', entityId: saved.id, detail: { name: saved.name } }),
+          ),
       );
-      res.status(201).json(await projectView(ds, project.id));
+      res.status(created ? 201 : 200).json(await projectView(ds, project.id));
     }),
   );
 

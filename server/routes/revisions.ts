@@ -11,6 +11,7 @@ import { conflict, notFound } from '../http/http-error';
 import { currentUser, loaded } from '../http/request-context';
 import { validate } from '../http/validate';
 import { toRevision, toRevisionSummary } from '../mappers/scenarios';
+import { assertRunnable } from '../scenarios/check-document';
 import { touchProject } from '../projects/touch-project';
 import { latestRevisionIdOf } from './scenario-queries';
 
@@ -44,6 +45,7 @@ export function revisionsRouter(ctx: AppContext) {
     loadScenario(ctx),
     requireRole('engineer'),
     validate({ body: createRevisionSchema }, async ({ body }, req, res) => {
+      assertRunnable(body.document);
       const scenario = loaded(req, 'scenario');
       const user = currentUser(req);
       const revisionId = await ds.transaction(async (manager) => {

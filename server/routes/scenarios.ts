@@ -6,7 +6,9 @@ import { loadProject, loadScenario } from '../access/loaders';
 import { requireRole } from '../access/require-role';
 import type { AppContext } from '../app-context';
 import { audited } from '../audit/record-audit';
+import { createOnce } from '../db/create-once';
 import { ScenarioEntity } from '../db/entities';
+import { assertRunnable } from '../scenarios/check-document';
 import { touchProject } from '../projects/touch-project';
 import { createScenarioWithFirstRevision } from '../scenarios/create-scenario';
 import { currentUser, loaded } from '../http/request-context';
@@ -28,14 +30,21 @@ export function scenariosRouter(ctx: AppContext) {
     loadProject(ctx),
     requireRole('engineer'),
     validate({ body: createScenarioSchema }, async ({ body }, req, res) => {
+      assertRunnable(body.document);
       const project = loaded(req, 'project');
       const user = currentUser(req);
-      const scenario = await audited(
-        ds,
-        (manager) => createScenarioWithFirstRevision(manager, { projectId: project.id, name: body.name, description: body.description ?? '', document: body.document, message: 'Created', createdById: user.id }),
-        (created) => ({ organisationId: project.organisationId, actorId: user.id, action: 'create', entity: 'scenario', entityId: created.id, detail: { name: created.name, projectId: project.id } }),
+      const { clientId } = body;
+      const { value: scenario, created } = await createOnce(
+        () => (clientId ? ds.getRepository(ScenarioEntity).findOne({ where: { projectId: project.id, clientId }, select: { id: true } }) : Promise.resolve(null)),
+        () =>
+          audited(
+            ds,
+            (manager) =>
+              createScenarioWithFirstRevision(manager, { projectId: project.id, name: body.name, description: body.description ?? '', document: body.document, message: 'Created', createdById: user.id, clientId: clientId ?? null }),
+            (saved) => ({ organisationId: project.organisationId, actorId: user.id, action: 'create', entity: 'scenario', entityId: saved.id, detail: { name: saved.name, projectId: project.id } }),
+          ),
       );
-      res.status(201).json(await scenarioDetail(ds, scenario.id));
+      res.status(created ? 201 : 200).json(await scenarioDetail(ds, scenario.id));
     }),
   );
 

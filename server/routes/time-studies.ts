@@ -16,6 +16,7 @@ import { loadedTimeStudy, loadTimeStudy } from '../time-studies/load-time-study'
 import { readCycleTimes } from '../time-studies/read-cycle-times';
 import { receiveTimeStudyUpload } from '../time-studies/receive-upload';
 import { listTimeStudies, timeStudyDetail } from '../time-studies/time-study-queries';
+import { analyseTimeStudy } from '../../workers/analysis';
 import { mean, sumOfSquares } from '../../workers/analysis/describe-samples';
 
 /** The file's name without its extension, as the study's name when none is given. */
@@ -59,6 +60,7 @@ export function timeStudiesRouter(ctx: AppContext) {
           mean: m,
           sd: samples.length > 1 ? Math.sqrt(sumOfSquares(samples, m) / (samples.length - 1)) : 0,
           samples,
+          analysis: analyseTimeStudy(samples),
           createdById: currentUser(req).id,
         }),
       (saved) => studyAudit(req, saved, 'time study added', scenario.project?.organisationId ?? null),

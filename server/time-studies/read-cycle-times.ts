@@ -90,6 +90,7 @@ function cellProblem(cell: string, value: number | null): string | null {
   if (cell.trim() === '') return 'the cell is empty';
   if (value === null) return `"${cell.trim().slice(0, 40)}" is not a number`;
   if (value < 0) return `${cell.trim()} is below zero; a cycle time cannot be negative`;
+  if (value > TIME_STUDY_LIMITS.maxSeconds) return `${cell.trim().slice(0, 40)} s is more than ${TIME_STUDY_LIMITS.maxSeconds.toLocaleString('en')} s (one day); times are in seconds, so check the unit`;
   return null;
 }
 

@@ -1,5 +1,5 @@
 // Time-study reads and their API shapes. Lists never select the samples; the detail adds them and the
-// analysis, which is computed from them on every read so it always follows the current analysis code.
+// analysis, computed once when the study is stored (studies stored before that get theirs on first read).
 import type { DataSource, SelectQueryBuilder } from 'typeorm';
 import type { TimeStudyDetail, TimeStudyListItem } from '../../shared/api/time-studies';
 import { analyseTimeStudy } from '../../workers/analysis';
@@ -33,6 +33,11 @@ export async function listTimeStudies(ds: DataSource, scenarioId: string, statio
 }
 
 export async function timeStudyDetail(ds: DataSource, id: string): Promise<TimeStudyDetail> {
-  const study = await studiesQuery(ds).addSelect('study.samples').where('study.id = :id', { id }).getOneOrFail();
-  return { ...toTimeStudyListItem(study), samples: study.samples, analysis: analyseTimeStudy(study.samples) };
+  const study = await studiesQuery(ds).addSelect(['study.samples', 'study.analysis']).where('study.id = :id', { id }).getOneOrFail();
+  let analysis = study.analysis;
+  if (analysis === null) {
+    analysis = analyseTimeStudy(study.samples);
+    await ds.getRepository(TimeStudyEntity).update({ id }, { analysis });
+  }
+  return { ...toTimeStudyListItem(study), samples: study.samples, analysis };
 }

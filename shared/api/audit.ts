@@ -22,7 +22,7 @@ export const auditActionSchema = z.enum([
   'share',
   'share-revoke',
 ]);
-export const auditEntitySchema = z.enum(['organisation', 'member', 'invitation', 'project', 'scenario', 'revision', 'run', 'time-study', 'share', 'user', 'price-list']);
+export const auditEntitySchema = z.enum(['organisation', 'member', 'invitation', 'project', 'scenario', 'revision', 'run', 'study', 'time-study', 'share', 'user', 'price-list']);
 
 export const auditEntrySchema = z.object({
   id: uuidSchema,

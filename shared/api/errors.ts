@@ -16,6 +16,7 @@ export const apiErrorCodeSchema = z.enum([
   'payload_too_large',
   'unsupported_media_type',
   'rate_limited',
+  'unavailable',
   'internal',
 ]);
 
@@ -32,7 +33,7 @@ export type ApiErrorCode = z.infer<typeof apiErrorCodeSchema>;
 export type ApiError = z.infer<typeof apiErrorSchema>;
 
 /** Turns zod issues into the `fields` list: dotted paths with numeric indices in brackets. */
-export function toFieldIssues(error: z.ZodError): FieldIssue[] {
+export function toFieldIssues(error: Pick<z.ZodError, 'issues'>): FieldIssue[] {
   return error.issues.map((issue) => ({
     path: formatPath(issue.path),
     message: issue.message,

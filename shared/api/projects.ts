@@ -18,6 +18,8 @@ export const createProjectSchema = z.object({
   description: descriptionSchema.optional(),
   /** Defaults to the caller's first organisation where they may edit. */
   organisationId: uuidSchema.optional(),
+  /** Chosen by the client before the first attempt, so a retried create returns the first project (200). */
+  clientId: uuidSchema.optional(),
 });
 
 export const updateProjectSchema = z

@@ -38,6 +38,8 @@ export const runListItemSchema = z.object({
   engineVersion: z.string(),
   settings: runSettingsSchema,
   summary: runSummarySchema,
+  /** True when the server computed the result itself; false for results a browser posted. */
+  serverChecked: z.boolean(),
   createdBy: userRefSchema.nullable(),
   createdAt: isoDateSchema,
 });

@@ -37,6 +37,8 @@ export const createScenarioSchema = z.object({
   name: nameSchema,
   description: descriptionSchema.optional(),
   document: scenarioSchema,
+  /** Chosen by the client before the first attempt, so a retried create returns the first scenario (200). */
+  clientId: uuidSchema.optional(),
 });
 
 export const updateScenarioSchema = z
@@ -46,16 +48,23 @@ export const updateScenarioSchema = z
 
 export const REVISION_MESSAGE_MAX = 500;
 
+/** Revision numbers are stored as PostgreSQL integers, so the largest is 2^31 - 1. */
+export const revisionNumberSchema = z
+  .number({ message: 'must be a revision number' })
+  .int({ message: 'must be a whole number' })
+  .positive({ message: 'must be 1 or more' })
+  .max(2_147_483_647, { message: 'must be at most 2147483647' });
+
 export const createRevisionSchema = z.object({
   document: scenarioSchema,
   message: z.string().max(REVISION_MESSAGE_MAX, { message: `must be at most ${REVISION_MESSAGE_MAX} characters` }).optional(),
   /** The revision number the editor started from; a mismatch answers 409 so no edit is silently lost. */
-  baseRevisionNumber: z.number().int().positive().optional(),
+  baseRevisionNumber: revisionNumberSchema.optional(),
 });
 
 export const revisionParamsSchema = z.object({
   id: uuidSchema,
-  number: z.coerce.number({ message: 'must be a revision number' }).int().positive(),
+  number: z.coerce.number({ message: 'must be a revision number' }).pipe(revisionNumberSchema),
 });
 
 export type RevisionSummary = z.infer<typeof revisionSummarySchema>;

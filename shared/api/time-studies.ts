@@ -10,6 +10,11 @@ export const TIME_STUDY_LIMITS = {
   /** A 100,000-row file of times with a few columns fits comfortably below this. */
   fileBytes: 1024 * 1024,
   rows: 100_000,
+  /**
+   * The longest cycle time a study may hold: one day. A longer "cycle" is a unit mistake (minutes or
+   * milliseconds read as seconds) or a corrupt cell, and values like 1e308 overflow every sum taken of them.
+   */
+  maxSeconds: 86_400,
   extensions: ['.csv', '.txt'],
 } as const;
 

@@ -3,7 +3,23 @@
 // numbers rather than objects per bin keep a stored result small whatever the run length.
 import { z } from 'zod';
 import { BREAK_MODES } from '../scenario/calendar';
-import { runSettingsSchema } from '../scenario/run-settings';
+import { PROCESS_LIMITS } from '../scenario/process';
+import { RUN_LIMITS, runSettingsSchema } from '../scenario/run-settings';
+import { TRACK_LIMITS } from '../scenario/track';
+
+/**
+ * Sizes a stored result may have, so a posted result cannot be made arbitrarily large. The engine writes
+ * 96 time bins × 48 position bins per lane heatmap and fewer numbers everywhere else.
+ */
+export const RESULT_LIMITS = {
+  textMax: 200,
+  engineVersionMax: 40,
+  numbersPerSeriesMax: 50_000,
+} as const;
+
+const text = () => z.string().max(RESULT_LIMITS.textMax, `must be at most ${RESULT_LIMITS.textMax} characters`);
+const series = () => z.array(z.number()).max(RESULT_LIMITS.numbersPerSeriesMax, `may hold at most ${RESULT_LIMITS.numbersPerSeriesMax} numbers`);
+const listOf = <T extends z.ZodType>(item: T, max: number) => z.array(item).max(max, `may hold at most ${max} entries`);
 
 /** Mean across replications with its two-sided 95 % Student t interval. */
 export const intervalSchema = z.object({ mean: z.number(), ciLow: z.number(), ciHigh: z.number() });
@@ -11,10 +27,10 @@ export const intervalSchema = z.object({ mean: z.number(), ciLow: z.number(), ci
 export const STATION_STATES = ['processing', 'starved', 'blocked', 'down', 'onBreak'] as const;
 
 export const stationResultSchema = z.object({
-  id: z.string(),
-  name: z.string(),
-  stepId: z.string(),
-  laneId: z.string(),
+  id: text(),
+  name: text(),
+  stepId: text(),
+  laneId: text(),
   /** Shares of observed time; the five add up to 1. */
   processing: z.number(),
   starved: z.number(),
@@ -35,8 +51,8 @@ export const stationResultSchema = z.object({
 });
 
 export const transferResultSchema = z.object({
-  id: z.string(),
-  name: z.string(),
+  id: text(),
+  name: text(),
   kind: z.enum(['elevator', 'lateral', 'curve']),
   /** Share of time not idle: carrying, blocked or returning. Not a measure of work: see `busy`. */
   utilisation: z.number(),
@@ -60,8 +76,8 @@ export const transferResultSchema = z.object({
 });
 
 export const laneResultSchema = z.object({
-  id: z.string(),
-  name: z.string(),
+  id: text(),
+  name: text(),
   lengthMm: z.number(),
   /** Carriers it holds when full (accumulated at length plus gap). */
   capacity: z.number(),
@@ -73,36 +89,36 @@ export const summaryQuantilesSchema = z.object({ mean: z.number(), p50: z.number
 export const histogramSchema = z.object({
   /** Bin i covers [i × binWidthSeconds, (i + 1) × binWidthSeconds). */
   binWidthSeconds: z.number(),
-  counts: z.array(z.number()),
+  counts: series(),
 });
 
 export const timeSeriesSchema = z.object({
   startSeconds: z.number(),
   binSeconds: z.number(),
   /** Mean over each time bin. */
-  values: z.array(z.number()),
+  values: series(),
 });
 
 export const laneHeatmapSchema = z.object({
-  laneId: z.string(),
+  laneId: text(),
   positionBins: z.number().int(),
   /** Time bin major: occupancy[t * positionBins + p] is the share of the bin's length covered by carriers. */
-  occupancy: z.array(z.number()),
+  occupancy: series(),
 });
 
 export const stationTimelineSchema = z.object({
-  stationId: z.string(),
+  stationId: text(),
   /** Time bin major: shares[t * STATION_STATES.length + s] is the share of bin t spent in state s. */
-  shares: z.array(z.number()),
+  shares: series(),
 });
 
 export const heatmapsSchema = z.object({
   startSeconds: z.number(),
   binSeconds: z.number(),
   timeBins: z.number().int(),
-  lanes: z.array(laneHeatmapSchema),
-  stationStates: z.array(z.enum(STATION_STATES)),
-  stations: z.array(stationTimelineSchema),
+  lanes: listOf(laneHeatmapSchema, TRACK_LIMITS.lanesMax),
+  stationStates: listOf(z.enum(STATION_STATES), STATION_STATES.length),
+  stations: listOf(stationTimelineSchema, PROCESS_LIMITS.stationsMax),
 });
 
 export const carrierResultSchema = z.object({
@@ -133,10 +149,10 @@ export const replicationResultSchema = z.object({
 });
 
 export const runResultSchema = z.object({
-  engineVersion: z.string(),
-  seed: z.string(),
+  engineVersion: z.string().max(RESULT_LIMITS.engineVersionMax, `must be at most ${RESULT_LIMITS.engineVersionMax} characters`),
+  seed: z.string().max(RUN_LIMITS.seedMaxLength, `must be at most ${RUN_LIMITS.seedMaxLength} characters`),
   settings: runSettingsSchema,
-  scenarioName: z.string(),
+  scenarioName: text(),
   conveyor: z.enum(['carriers', 'belt']),
   observedHours: z.number(),
   throughputPerHour: intervalSchema,
@@ -145,7 +161,10 @@ export const runResultSchema = z.object({
   targetTaktSeconds: z.number().nullable(),
   /** Scheduled working hours per year the annual output is based on. */
   hoursPerYear: z.number(),
-  bottleneckStationId: z.string().nullable(),
+  bottleneckStationId: text().nullable(),
+  stations: listOf(stationResultSchema, PROCESS_LIMITS.stationsMax),
+  transfers: listOf(transferResultSchema, TRACK_LIMITS.transfersMax),
+  lanes: listOf(laneResultSchema, TRACK_LIMITS.lanesMax),
   /**
    * A transfer that held the line more often than any station (busy most of the time and rarely
    * blocked), or null when a station did. Absent in results stored before engine 1.2.0.
@@ -155,9 +174,6 @@ export const runResultSchema = z.object({
   breakMode: z.enum(BREAK_MODES).default('manualStations'),
   /** Minutes of breaks in each shift (0: none). Absent before engine 1.2.0. */
   breakMinutesPerShift: z.number().optional(),
-  stations: z.array(stationResultSchema),
-  transfers: z.array(transferResultSchema),
-  lanes: z.array(laneResultSchema),
   carriers: carrierResultSchema,
   /** Load completion to unload, over output parts only; scrapped parts are not in it. */
   leadTimeSeconds: summaryQuantilesSchema.extend({ histogram: histogramSchema }),
@@ -176,7 +192,7 @@ export const runResultSchema = z.object({
   heatmaps: heatmapsSchema,
   /** Events processed, all replications together. */
   events: z.number(),
-  replications: z.array(replicationResultSchema),
+  replications: listOf(replicationResultSchema, RUN_LIMITS.replicationsMax),
 });
 
 export type Interval = z.infer<typeof intervalSchema>;

@@ -8,6 +8,7 @@ export const CALENDAR_LIMITS = {
   hoursPerDay: 24,
   daysPerWeekMax: 7,
   weeksPerYearMax: 53,
+  breaksPerShiftMax: 20,
 } as const;
 
 const wholeBetween = (name: string, min: number, max: number) =>
@@ -38,7 +39,7 @@ export const calendarSchema = z
     shiftsPerDay: wholeBetween('shiftsPerDay', 1, CALENDAR_LIMITS.shiftsPerDayMax),
     hoursPerShift: finiteNumber('hoursPerShift').refine((v) => v > 0, 'hoursPerShift must be above zero'),
     /** The same breaks apply to every shift. */
-    breaks: z.array(breakSchema, { error: 'breaks must be a list' }).default([]),
+    breaks: z.array(breakSchema, { error: 'breaks must be a list' }).max(CALENDAR_LIMITS.breaksPerShiftMax, `at most ${CALENDAR_LIMITS.breaksPerShiftMax} breaks per shift`).default([]),
     breakMode: z.enum(BREAK_MODES, { error: 'breakMode must be "manualStations" (only manual stations pause) or "wholeLine" (the whole line stops)' }).default('manualStations'),
     daysPerWeek: wholeBetween('daysPerWeek', 1, CALENDAR_LIMITS.daysPerWeekMax),
     weeksPerYear: wholeBetween('weeksPerYear', 1, CALENDAR_LIMITS.weeksPerYearMax),

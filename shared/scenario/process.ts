@@ -4,7 +4,7 @@
 // fix the station when the carrier leaves the previous step.
 import { z } from 'zod';
 import { distributionSchema } from './distribution';
-import { distributionMean } from './distribution-moments';
+import { statedMean } from './distribution-parameters';
 import { idSchema, labelSchema, nonNegative, share } from './units';
 
 export const DISPATCH_RULES = ['pooled', 'firstFree', 'shortestQueue', 'roundRobin'] as const;
@@ -14,12 +14,23 @@ export const STEP_KINDS = ['load', 'process', 'inspect', 'unload'] as const;
 export const STATION_OPERATIONS = ['automatic', 'manual'] as const;
 
 /** A station that fails after less than this much work on average is a typing mistake (our choice). */
+export const PROCESS_LIMITS = {
+  stepsMax: 200,
+  stationsPerStepMax: 100,
+  /** Stations of the whole line, all steps together. */
+  stationsMax: 500,
+  /** Measured times in empirical distributions of the whole line, all stations together. */
+  empiricalSamplesTotalMax: 200_000,
+} as const;
+
 export const FAILURE_LIMITS = { meanTimeBetweenFailuresMinSeconds: 1 } as const;
 
 export const failureSchema = z.object({
   /** Operating (processing) time between the end of one repair and the next failure. */
   timeBetweenFailuresSeconds: distributionSchema.refine(
-    (d) => distributionMean(d) >= FAILURE_LIMITS.meanTimeBetweenFailuresMinSeconds,
+    // The mean as stated (a normal's own mean, before truncation at min lifts it slightly): this guards
+    // against typing minutes or hours where seconds belong.
+    (d) => statedMean(d) >= FAILURE_LIMITS.meanTimeBetweenFailuresMinSeconds,
     `the mean time between failures must be at least ${FAILURE_LIMITS.meanTimeBetweenFailuresMinSeconds} s of work; check that it is in seconds`,
   ),
   timeToRepairSeconds: distributionSchema,
@@ -41,7 +52,9 @@ export const stationSchema = z.object({
 const stepBase = {
   id: idSchema,
   name: labelSchema,
-  stations: z.array(stationSchema, { error: 'stations must be a list' }),
+  stations: z
+    .array(stationSchema, { error: 'stations must be a list' })
+    .max(PROCESS_LIMITS.stationsPerStepMax, `a step may have at most ${PROCESS_LIMITS.stationsPerStepMax} stations`),
   dispatch: z.enum(DISPATCH_RULES, { error: `dispatch must be one of ${DISPATCH_RULES.join(', ')}` }).default(DEFAULT_DISPATCH),
 };
 

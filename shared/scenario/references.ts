@@ -2,6 +2,8 @@
 // reference pointing at something that exists, geometry that fits. Each issue names the exact path.
 import type { z } from 'zod';
 import type { ScenarioShape } from './scenario-shape';
+import type { Distribution } from './distribution';
+import { PROCESS_LIMITS } from './process';
 import { laneLengthMm } from './track';
 
 type Ctx = z.core.$RefinementCtx<ScenarioShape>;
@@ -78,15 +80,34 @@ function checkStations(s: ScenarioShape, ctx: Ctx, laneIds: Map<string, number>)
         return;
       }
       const list = byLane.get(station.laneId) ?? [];
-      for (const other of list) {
-        if (Math.abs(other.position - station.positionMm) < pitch) {
-          ctx.addIssue({ code: 'custom', path: [...path, 'positionMm'], message: `is closer than ${spacing} to the station at ${other.position} mm on lane "${station.laneId}"` });
-        }
-      }
       list.push({ position: station.positionMm, path });
       byLane.set(station.laneId, list);
     }),
   );
+  // Sorted by position, a station too close to any other is too close to its neighbour: n log n, not n².
+  for (const [laneId, list] of byLane) {
+    list.sort((a, b) => a.position - b.position);
+    for (let k = 1; k < list.length; k += 1) {
+      if (list[k].position - list[k - 1].position < pitch) {
+        ctx.addIssue({ code: 'custom', path: [...list[k].path, 'positionMm'], message: `is closer than ${spacing} to the station at ${list[k - 1].position} mm on lane "${laneId}"` });
+      }
+    }
+  }
+}
+
+function empiricalSamples(d: Distribution): number {
+  return d.kind === 'empirical' ? d.samples.length : 0;
+}
+
+function checkTotals(s: ScenarioShape, ctx: Ctx): void {
+  const stations = s.steps.flatMap((step) => step.stations);
+  if (stations.length > PROCESS_LIMITS.stationsMax) {
+    ctx.addIssue({ code: 'custom', path: ['steps'], message: `the line has ${stations.length} stations; at most ${PROCESS_LIMITS.stationsMax} are allowed` });
+  }
+  const samples = stations.reduce((sum, st) => sum + empiricalSamples(st.cycleTimeSeconds) + (st.failures ? empiricalSamples(st.failures.timeBetweenFailuresSeconds) + empiricalSamples(st.failures.timeToRepairSeconds) : 0), 0);
+  if (samples > PROCESS_LIMITS.empiricalSamplesTotalMax) {
+    ctx.addIssue({ code: 'custom', path: ['steps'], message: `empirical distributions hold ${samples} measured times in all; at most ${PROCESS_LIMITS.empiricalSamplesTotalMax} are allowed: thin the time studies or fit distributions` });
+  }
 }
 
 function checkSteps(s: ScenarioShape, ctx: Ctx, stepIds: Map<string, number>): void {
@@ -121,6 +142,7 @@ export function checkReferences(s: ScenarioShape, ctx: Ctx): void {
   checkTrack(s, ctx, deckIds, laneIds);
   checkStations(s, ctx, laneIds);
   checkSteps(s, ctx, stepIds);
+  checkTotals(s, ctx);
   if (s.conveyor.kind === 'belt' && s.conveyor.pitchMm < s.carriers.lengthMm) {
     ctx.addIssue({ code: 'custom', path: ['conveyor', 'pitchMm'], message: `must be at least the carrier length, ${s.carriers.lengthMm} mm` });
   }

@@ -2,7 +2,7 @@
 import { z } from 'zod';
 import { calendarSchema } from './calendar';
 import { carriersSchema, conveyorSchema } from './carriers';
-import { stepSchema } from './process';
+import { PROCESS_LIMITS, stepSchema } from './process';
 import { deckSchema, laneSchema, linkSchema, TRACK_LIMITS, trackSchema, transferSchema } from './track';
 import { positive } from './units';
 
@@ -19,7 +19,7 @@ export const scenarioShapeSchema = z.object({
   transfers: z.array(transferSchema, { error: 'transfers must be a list' }).max(TRACK_LIMITS.transfersMax).default([]),
   carriers: carriersSchema,
   /** In order; the first is the load step, the last the unload step. */
-  steps: z.array(stepSchema, { error: 'steps must be a list' }).min(2, 'at least a load and an unload step are needed').max(200),
+  steps: z.array(stepSchema, { error: 'steps must be a list' }).min(2, 'at least a load and an unload step are needed').max(PROCESS_LIMITS.stepsMax, `at most ${PROCESS_LIMITS.stepsMax} steps`),
   calendar: calendarSchema,
   /** The takt the sales plan needs, for comparison with the achieved takt. */
   targetTaktSeconds: positive('targetTaktSeconds').optional(),

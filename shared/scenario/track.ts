@@ -7,6 +7,10 @@ import { between, idSchema, labelSchema, nonNegative, positive, wholeBetween } f
 export const TRACK_LIMITS = {
   moduleLengthMaxMm: 20_000,
   modulesPerLaneMax: 1_000,
+  /** Entries in a lane's module list (each entry repeats one module `count` times). */
+  moduleRunsPerLaneMax: 100,
+  /** Standard module lengths a track may offer. */
+  moduleLengthsMax: 20,
   lanesMax: 200,
   decksMax: 20,
   transfersMax: 400,
@@ -18,7 +22,8 @@ export const trackSchema = z.object({
   /** The standard module lengths a lane may be assembled from. */
   moduleLengthsMm: z
     .array(between('each module length (mm)', 1, TRACK_LIMITS.moduleLengthMaxMm), { error: 'moduleLengthsMm must be a list' })
-    .min(1, 'moduleLengthsMm must list at least one standard module length'),
+    .min(1, 'moduleLengthsMm must list at least one standard module length')
+    .max(TRACK_LIMITS.moduleLengthsMax, `moduleLengthsMm may list at most ${TRACK_LIMITS.moduleLengthsMax} standard lengths`),
   /** Width of a track lane in plan, used for drawing and footprint. */
   widthMm: positive('widthMm'),
 });
@@ -48,7 +53,10 @@ export const laneSchema = z.object({
   name: labelSchema,
   deckId: idSchema,
   /** Modules in the order carriers travel over them; the lane's length is their sum. */
-  modules: z.array(laneModuleSchema, { error: 'modules must be a list' }).min(1, 'a lane needs at least one module'),
+  modules: z
+    .array(laneModuleSchema, { error: 'modules must be a list' })
+    .min(1, 'a lane needs at least one module')
+    .max(TRACK_LIMITS.moduleRunsPerLaneMax, `a lane may list at most ${TRACK_LIMITS.moduleRunsPerLaneMax} module entries; give repeated modules a count`),
   /** Where the lane starts (its entry) in plan, and which way carriers travel from there. */
   start: planPointSchema,
   heading: z.enum(HEADINGS, { error: `heading must be one of ${HEADINGS.join(', ')}` }),

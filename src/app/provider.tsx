@@ -4,6 +4,8 @@ import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
 import { forgetSession } from '../features/auth/api/forget-session';
 import { SessionProvider } from '../features/auth/components/session-provider';
+import { RevisionSourceContext, type LoadRevision } from '../features/runs/hooks/revision-source';
+import { scenarioRevisionQueryOptions } from '../features/scenarios/api/get-revision';
 import { createQueryClient } from '../lib/query-client';
 
 export function createAppQueryClient(): QueryClient {
@@ -14,9 +16,16 @@ export function createAppQueryClient(): QueryClient {
 
 export function AppProvider({ children, queryClient }: { children: ReactNode; queryClient?: QueryClient }) {
   const [client] = useState(() => queryClient ?? createAppQueryClient());
+  // Runs are repeated from the scenario revision they were computed from, read through the cache.
+  const [loadRevision] = useState(() => {
+    const load: LoadRevision = (scenarioId, number) => client.fetchQuery(scenarioRevisionQueryOptions(scenarioId, number));
+    return load;
+  });
   return (
     <QueryClientProvider client={client}>
-      <SessionProvider>{children}</SessionProvider>
+      <RevisionSourceContext.Provider value={loadRevision}>
+        <SessionProvider>{children}</SessionProvider>
+      </RevisionSourceContext.Provider>
     </QueryClientProvider>
   );
 }

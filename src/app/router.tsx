@@ -36,15 +36,23 @@ const signedInPages: RouteObject[] = [
   },
   {
     path: '/scenarios/:scenarioId',
-    lazy: async () => ({ Component: (await import('../features/scenarios/routes/scenario-route')).ScenarioRoute }),
+    lazy: async () => ({ Component: (await import('./routes/scenario-route')).ScenarioRoute }),
   },
   {
     path: '/scenarios/:scenarioId/revisions/:number',
-    lazy: async () => ({ Component: (await import('../features/editor/routes/revision-route')).RevisionRoute }),
+    lazy: async () => ({ Component: (await import('./routes/revision-route')).RevisionRoute }),
   },
   {
     path: '/projects/:projectId/runs',
-    lazy: async () => ({ Component: (await import('../features/runs/routes/project-runs-route')).ProjectRunsRoute }),
+    lazy: async () => ({ Component: (await import('./routes/project-runs-route')).ProjectRunsRoute }),
+  },
+  {
+    path: '/projects/:projectId/studies',
+    lazy: async () => ({ Component: (await import('./routes/project-studies-route')).ProjectStudiesRoute }),
+  },
+  {
+    path: '/studies/:studyId',
+    lazy: async () => ({ Component: (await import('./routes/study-route')).StudyRoute }),
   },
   {
     path: '/projects/:projectId/compare',

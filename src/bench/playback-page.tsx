@@ -6,12 +6,12 @@ import '../index.css';
 import { createRoot } from 'react-dom/client';
 import tripleDeck from '../../shared/examples/triple-deck.json';
 import { recordPlayback } from '../../workers/engine';
-import { planFrame } from '../features/layout/drawing-frame';
-import { elevationFrame } from '../features/layout/elevation-view';
-import { layoutModel, type LayoutDraft } from '../features/layout/layout-model';
-import { createPainter } from '../features/layout/playback/painter';
-import { PlaybackPlayer } from '../features/layout/playback/playback-player';
-import { indexTrace } from '../features/layout/playback/trace-index';
+import { planFrame } from '../components/layout/drawing-frame';
+import { elevationFrame } from '../components/layout/elevation-view';
+import { layoutModel, type LayoutDraft } from '../components/layout/layout-model';
+import { createPainter } from '../components/layout/playback/painter';
+import { PlaybackPlayer } from '../components/layout/playback/playback-player';
+import { indexTrace } from '../components/layout/playback/trace-index';
 
 const CARRIERS = 50;
 

@@ -38,3 +38,11 @@ export function formatCount(count: number, singular: string, plural = `${singula
 export function formatPerson(user: UserRef | null): string {
   return user ? user.name : 'a former member';
 }
+
+/** "2 h 05 min", "4 min 10 s", "12 s": short enough for a progress line. */
+export function formatDuration(seconds: number): string {
+  const s = Math.max(0, Math.round(seconds));
+  if (s < 60) return `${s} s`;
+  if (s < 3600) return `${Math.floor(s / 60)} min ${String(s % 60).padStart(2, '0')} s`;
+  return `${Math.floor(s / 3600)} h ${String(Math.floor((s % 3600) / 60)).padStart(2, '0')} min`;
+}

@@ -47,7 +47,7 @@ const bodyRoutes: BodyRoute[] = [
   { name: 'save revision', method: 'post', path: () => apiRoutes.scenarioRevisions(org.content.scenarioId), wrong: () => ({ document: { ...stackedLoop(), schemaVersion: 99 }, baseRevisionNumber: 'one' }), wrongFields: ['document.schemaVersion', 'baseRevisionNumber'], emptyFields: ['document'] },
   { name: 'save run', method: 'post', path: () => apiRoutes.scenarioRuns(org.content.scenarioId), wrong: () => ({ clientRunId: 'x', revisionId: 7, settings: { hours: -1 }, results: { engineVersion: 1 } }), wrongFields: ['clientRunId', 'revisionId', 'settings.hours', 'results.engineVersion'], emptyFields: ['clientRunId', 'revisionId', 'settings', 'results'] },
   { name: 'rename run', method: 'patch', path: () => apiRoutes.run(org.content.runId), wrong: () => ({ name: 12 }), wrongFields: ['name'], emptyFields: ['name'] },
-  { name: 'add member', method: 'post', path: () => apiRoutes.members(org.people.organisationId), wrong: () => ({ email: 'not-an-email', role: 'boss' }), wrongFields: ['email', 'role'], emptyFields: ['email', 'role'] },
+  { name: 'invite member', method: 'post', path: () => apiRoutes.invitations(org.people.organisationId), wrong: () => ({ email: 'not-an-email', role: 'boss' }), wrongFields: ['email', 'role'], emptyFields: ['email', 'role'] },
   { name: 'change member', method: 'patch', path: () => apiRoutes.member(org.people.organisationId, org.people.viewer.id), wrong: () => ({ role: 'admin' }), wrongFields: ['role'], emptyFields: ['role'] },
 ];
 
@@ -125,7 +125,7 @@ describe('route parameters and query strings', () => {
     ['run', 'patch', apiRoutes.run(notUuid)],
     ['run', 'delete', apiRoutes.run(notUuid)],
     ['members', 'get', apiRoutes.members(notUuid)],
-    ['members', 'post', apiRoutes.members(notUuid)],
+    ['invitations', 'post', apiRoutes.invitations(notUuid)],
     ['member', 'patch', apiRoutes.member(notUuid, notUuid)],
     ['member', 'delete', apiRoutes.member(notUuid, notUuid)],
     ['audit', 'get', apiRoutes.audit(notUuid)],
@@ -149,8 +149,8 @@ describe('route parameters and query strings', () => {
     ['project filter that is not an id', () => `${apiRoutes.projects}?organisationId=abc`, ['organisationId']],
     ['run filters that are not ids', () => `${apiRoutes.scenarioRuns(org.content.scenarioId)}?revisionId=abc&createdBy=def`, ['revisionId', 'createdBy']],
     ['project run filter that is not an id', () => `${apiRoutes.projectRuns(org.content.projectId)}?revisionId=1`, ['revisionId']],
-    ['audit page size out of range', () => `${apiRoutes.audit(org.people.organisationId)}?limit=0`, ['limit']],
-    ['audit cursor that is not a date', () => `${apiRoutes.audit(org.people.organisationId)}?before=yesterday`, ['before']],
+    ['audit page size out of range', () => `${apiRoutes.audit(org.people.organisationId)}?pageSize=0`, ['pageSize']],
+    ['audit date that is not a date', () => `${apiRoutes.audit(org.people.organisationId)}?from=yesterday`, ['from']],
   ] as const)('a %s answers 400 naming the field', async (_name, path, fields) => {
     const res = await org.people.owner.agent.get(path());
     expectError(res, 400, 'bad_request');

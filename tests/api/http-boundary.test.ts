@@ -9,6 +9,7 @@ import { createApp } from '../../server/app';
 import { ConfigError, loadConfig } from '../../server/config';
 import { startServer } from '../../server/index';
 import { useCleanDatabase } from './fixtures/database';
+import { mailTo, tokenIn } from './fixtures/mail';
 import { appFor, signUp, uniqueEmail } from './fixtures/app';
 
 const db = useCleanDatabase();
@@ -36,7 +37,9 @@ describe('cross-origin requests', () => {
 
   it('allows the app’s own origin, the public origin, and requests without Origin', async () => {
     const app = appFor(db(), 'https://lanewright.example.test');
-    const signedUp = await request(app).post(apiRoutes.signUp).send({ email: uniqueEmail('sameorigin'), password: 'long enough password', name: 'S', organisationName: 'S' });
+    const email = uniqueEmail('sameorigin');
+    await request(app).post(apiRoutes.signUp).send({ email, password: 'long enough password', name: 'S', organisationName: 'S' });
+    const signedUp = await request(app).post(apiRoutes.signUpConfirm).send({ token: tokenIn(await mailTo(email, /Finish creating/)) });
     // The cookie is Secure (https public origin), so supertest's plain-http agent would not send it.
     const cookie = String(signedUp.headers['set-cookie']).split(';')[0];
     const post = (origin: string | null, name: string) => {

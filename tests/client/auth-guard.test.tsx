@@ -5,7 +5,7 @@ import { notifyManager } from '@tanstack/react-query';
 import { screen, waitFor } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { apiRoutes } from '../../shared/api/routes';
-import { authKeys } from '../../src/features/auth/api/keys';
+import { authKeys } from '../../src/lib/query-keys/auth';
 import { mockApi } from './support/fetch-mock';
 import { me, project } from './support/fixtures';
 import { renderApp } from './support/render-app';

@@ -13,7 +13,7 @@ vi.setConfig({ testTimeout: 20_000 });
 
 // The pages load on demand; importing them once up front keeps that first import out of the tests' waits.
 beforeAll(async () => {
-  await Promise.all([import('../../src/features/scenarios/routes/scenario-route'), import('../../src/app/routes/project-route')]);
+  await Promise.all([import('../../src/app/routes/scenario-route'), import('../../src/app/routes/project-route')]);
 }, 60_000);
 
 const projectRoutes = (role: 'engineer' | 'viewer', scenarios = [scenarioSummary()]) => ({

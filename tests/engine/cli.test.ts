@@ -60,4 +60,16 @@ describe('simulate command line', () => {
     const schema = JSON.parse(r.stdout) as { properties: Record<string, unknown> };
     expect(Object.keys(schema.properties)).toEqual(expect.arrayContaining(['schemaVersion', 'lanes', 'transfers', 'steps', 'carriers', 'calendar']));
   }, 60_000);
+  it('prints a readable table with the four transfer shares, aligned under their headings', () => {
+    const r = simulate('--scenario', join(EXAMPLES_DIR, 'stacked-loop.json'), '--replications', '1', '--hours', '0.25', '--warmup-minutes', '2');
+    expect(r.status).toBe(0);
+    const lines = r.stdout.split('\n');
+    const header = lines.findIndex((l) => l.startsWith('transfer'));
+    expect(lines[header]).toMatch(/^transfer\s+carry\s+return\s+blocked\s+idle\s+busy\s+queue$/);
+    const row = lines[header + 1].trim().split(/\s+/);
+    const [carry, ret, blocked, idle, busy] = row.slice(1, 6).map((x) => Number.parseFloat(x));
+    expect(carry + ret + blocked + idle).toBeCloseTo(100, 0);
+    expect(busy).toBeCloseTo(carry + ret, 0);
+    expect(r.stdout).toMatch(/^breaks\s+stop manual stations only$/m);
+  });
 });

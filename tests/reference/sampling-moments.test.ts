@@ -3,7 +3,7 @@
 import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
 import type { Distribution } from '../../shared/scenario/distribution';
-import { distributionMean, distributionVariance } from '../../shared/scenario/distribution-moments';
+import { distributionMean, distributionVariance } from '../../workers/engine/stats/distribution-moments';
 
 type Moments = { mean: (...p: number[]) => number; variance: (...p: number[]) => number };
 type JStatMoments = Record<'lognormal' | 'gamma' | 'triangular' | 'uniform' | 'exponential', Moments> & {

@@ -3,7 +3,7 @@
 import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
 import type { Distribution } from '../../shared/scenario/distribution';
-import { distributionMean, distributionVariance } from '../../shared/scenario/distribution-moments';
+import { distributionMean, distributionVariance } from '../../workers/engine/stats/distribution-moments';
 import { createSampler } from '../../workers/engine/random/sampler';
 import { createStreamFactory } from '../../workers/engine/random/streams';
 

@@ -60,11 +60,11 @@ function freePort(): Promise<number> {
   });
 }
 
-export async function startTestApp(): Promise<TestApp> {
+export async function startTestApp(databaseUrl: string = browserDatabaseUrl()): Promise<TestApp> {
   if (!existsSync(join(clientOutDir, 'index.html'))) {
     throw new Error(`${clientOutDir} holds no client build: run the tests with \`npm test\` (it builds it) or \`npm run build\` first`);
   }
-  const dataSource = createDataSource(browserDatabaseUrl());
+  const dataSource = createDataSource(databaseUrl);
   await dataSource.initialize();
   try {
     await runMigrations(dataSource);

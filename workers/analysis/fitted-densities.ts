@@ -1,9 +1,7 @@
 // Density and distribution functions of the three candidate families, in the parameters the fits
 // produce. The Kolmogorov–Smirnov check uses the CDFs; the client draws the densities over the histogram.
 import type { FittedCandidate } from '../../shared/api/time-studies';
-import { lnGamma, regularizedLowerGamma, standardNormalCdf } from './special-functions';
-
-const LN_SQRT_2PI = 0.5 * Math.log(2 * Math.PI);
+import { lnGamma, regularizedLowerGamma, standardNormalCdf, standardNormalPdf } from '../engine/stats/special-functions';
 
 export interface FittedLaw {
   pdf: (x: number) => number;
@@ -12,7 +10,7 @@ export interface FittedLaw {
 
 export function normalLaw(mean: number, sd: number): FittedLaw {
   return {
-    pdf: (x) => Math.exp(-0.5 * ((x - mean) / sd) ** 2 - LN_SQRT_2PI) / sd,
+    pdf: (x) => standardNormalPdf((x - mean) / sd) / sd,
     cdf: (x) => standardNormalCdf((x - mean) / sd),
   };
 }
@@ -20,7 +18,7 @@ export function normalLaw(mean: number, sd: number): FittedLaw {
 /** ln X ~ N(mu, sigma²). */
 export function lognormalLaw(mu: number, sigma: number): FittedLaw {
   return {
-    pdf: (x) => (x > 0 ? Math.exp(-0.5 * ((Math.log(x) - mu) / sigma) ** 2 - LN_SQRT_2PI) / (sigma * x) : 0),
+    pdf: (x) => (x > 0 ? standardNormalPdf((Math.log(x) - mu) / sigma) / (sigma * x) : 0),
     cdf: (x) => (x > 0 ? standardNormalCdf((Math.log(x) - mu) / sigma) : 0),
   };
 }

@@ -4,6 +4,5 @@ export { analyseTimeStudy, rankCandidates } from './analyse-time-study';
 export { lawOf, normalLaw, lognormalLaw, gammaLaw, type FittedLaw } from './fitted-densities';
 export { ksStatistic, ksPValue, kolmogorovSurvival } from './kolmogorov-smirnov';
 export { fitNormal, fitLognormal, fitGamma, type Estimate, type NormalParameters, type LognormalParameters, type GammaParameters } from './maximum-likelihood';
-export { summarise, histogram, quantileSorted, HISTOGRAM_MAX_BINS } from './describe-samples';
-export { lnGamma, digamma, trigamma, regularizedLowerGamma, standardNormalCdf } from './special-functions';
+export { summarise, histogram, histogramRule, HISTOGRAM_MAX_BINS } from './describe-samples';
 export { pairedDifference, welchDifference, type MeanDifference, type DifferenceMethod } from './compare-means';

@@ -1,6 +1,7 @@
 // Maximum-likelihood estimates of the three candidate families from a time study's samples. Each returns
 // its parameters, or a refusal that says why the family cannot describe these samples.
-import { digamma, trigamma } from './special-functions';
+import { lognormalMeanCv } from '../../shared/scenario/distribution-parameters';
+import { digamma, trigamma } from '../engine/stats/special-functions';
 import { mean, sumOfSquares } from './describe-samples';
 
 export type Estimate<P> = { ok: true; parameters: P } | { ok: false; reason: string };
@@ -59,7 +60,7 @@ export function fitLognormal(samples: readonly number[]): Estimate<LognormalPara
   const logs = samples.map(Math.log);
   const mu = mean(logs);
   const sigma = Math.sqrt(sumOfSquares(logs, mu) / logs.length);
-  return { ok: true, parameters: { mu, sigma, mean: Math.exp(mu + (sigma * sigma) / 2), cv: Math.sqrt(Math.expm1(sigma * sigma)) } };
+  return { ok: true, parameters: { mu, sigma, ...lognormalMeanCv(mu, sigma) } };
 }
 
 const NEWTON_MAX_STEPS = 100;

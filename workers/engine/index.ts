@@ -4,5 +4,6 @@ export { validateScenario, trackCapacity, type ValidationIssue, type ValidationO
 export { runExperiment, runReplicationRange, combineBlocks, InvalidInputError, type ReplicationBlock, type ReplicationRange, RESULT_POSITION_BINS, RESULT_TIME_BINS, type Progress, type RunHooks } from './experiment';
 export { SimulationStoppedError, isSimulationStopped, type GridlockEntry, type StopReason } from './kernel/stop';
 export { ENGINE_VERSION } from './version';
+export { toSummaryJson, fromSummaryJson, blockToJson, blockFromJson, type ReplicationBlockJson } from './observe/summary-json';
 export { recordPlayback } from './record-playback';
 export { TraceLimitError } from './observe/trace';

@@ -1,15 +1,23 @@
 // What the simulation worker offers over comlink, built as a plain object so it can be exercised
-// over any message port (tests use a MessageChannel). run() resolves to an outcome object rather than
+// over any message port (tests use a MessageChannel). Calls resolve to outcome objects rather than
 // rejecting, because an error crossing comlink keeps only its name and message, and the caller needs
-// the field paths or the stop reason.
+// the field paths or the stop reason. One worker runs one call at a time; a pool of workers spreads
+// the replications of a run, or the jobs of a study, over the cores.
 import type { PlaybackTrace } from '../../shared/results/playback';
 import type { RunResult } from '../../shared/results/run-result';
-import { ENGINE_VERSION, InvalidInputError, isSimulationStopped, recordPlayback, runExperiment, TraceLimitError, validateScenario, type GridlockEntry, type Progress, type StopReason, type ValidationIssue } from './index';
+import { runStudyJob, type StudyJobInput, type StudyJobOutcome } from '../studies/run-study-job';
+import { combineBlocks, ENGINE_VERSION, InvalidInputError, isSimulationStopped, recordPlayback, runExperiment, runReplicationRange, TraceLimitError, validateScenario, type GridlockEntry, type Progress, type ReplicationBlock, type ReplicationRange, type RunHooks, type StopReason, type ValidationIssue } from './index';
 
-export type WorkerOutcome =
-  | { ok: true; result: RunResult }
-  | { ok: false; kind: 'invalid'; message: string; issues: ValidationIssue[] }
-  | { ok: false; kind: 'stopped'; reason: StopReason; message: string; gridlock: GridlockEntry[] };
+type Failure = { ok: false; kind: 'invalid'; message: string; issues: ValidationIssue[] } | { ok: false; kind: 'stopped'; reason: StopReason; message: string; gridlock: GridlockEntry[] };
+
+export type WorkerOutcome = { ok: true; result: RunResult } | Failure;
+export type RangeOutcome = { ok: true; block: ReplicationBlock } | Failure;
+
+function asFailure(e: unknown): Failure {
+  if (e instanceof InvalidInputError) return { ok: false, kind: 'invalid', message: e.message, issues: e.issues };
+  if (isSimulationStopped(e)) return { ok: false, kind: 'stopped', reason: e.reason, message: e.message, gridlock: e.gridlock };
+  throw e;
+}
 
 export type PlaybackOutcome =
   | { ok: true; trace: PlaybackTrace }
@@ -25,23 +33,37 @@ export function traceBuffers(trace: PlaybackTrace): ArrayBuffer[] {
 
 export function createWorkerApi(now: () => number) {
   let cancelled = false;
+  const hooks = (onProgress?: (p: Progress) => unknown): RunHooks => {
+    cancelled = false;
+    return { onProgress: onProgress ? (p) => void onProgress(p) : undefined, isCancelled: () => cancelled, now };
+  };
   return {
     engineVersion: () => ENGINE_VERSION,
     validateScenario: (doc: unknown) => validateScenario(doc),
     async run(scenario: unknown, settings: unknown, onProgress?: (p: Progress) => unknown): Promise<WorkerOutcome> {
-      cancelled = false;
       try {
-        const result = await runExperiment(scenario, settings, {
-          onProgress: onProgress ? (p) => void onProgress(p) : undefined,
-          isCancelled: () => cancelled,
-          now,
-        });
-        return { ok: true, result };
+        return { ok: true, result: await runExperiment(scenario, settings, hooks(onProgress)) };
       } catch (e) {
-        if (e instanceof InvalidInputError) return { ok: false, kind: 'invalid', message: e.message, issues: e.issues };
-        if (isSimulationStopped(e)) return { ok: false, kind: 'stopped', reason: e.reason, message: e.message, gridlock: e.gridlock };
-        throw e;
+        return asFailure(e);
       }
+    },
+    /** One block of an experiment's replications; typed arrays travel by structured clone. */
+    async runRange(scenario: unknown, settings: unknown, range: ReplicationRange, onProgress?: (p: Progress) => unknown): Promise<RangeOutcome> {
+      try {
+        return { ok: true, block: await runReplicationRange(scenario, settings, range, hooks(onProgress)) };
+      } catch (e) {
+        return asFailure(e);
+      }
+    },
+    combine(scenario: unknown, settings: unknown, blocks: ReplicationBlock[]): WorkerOutcome {
+      try {
+        return { ok: true, result: combineBlocks(scenario, settings, blocks) };
+      } catch (e) {
+        return asFailure(e);
+      }
+    },
+    runStudyJob(document: unknown, job: StudyJobInput, onProgress?: (p: Progress) => unknown): Promise<StudyJobOutcome> {
+      return runStudyJob(document, job, hooks(onProgress));
     },
     /** Replays one replication of a run and records a window of it for the player. */
     async playback(scenario: unknown, settings: unknown, request: unknown, onProgress?: (p: Progress) => unknown): Promise<PlaybackOutcome> {
@@ -60,7 +82,7 @@ export function createWorkerApi(now: () => number) {
         throw e;
       }
     },
-    /** Stops the run in progress at its next slice (within about 50 ms). */
+    /** Stops the call in progress at its next slice (within about 50 ms). */
     cancel() {
       cancelled = true;
     },

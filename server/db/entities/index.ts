@@ -10,7 +10,11 @@ import { RunEntity } from './run.entity';
 import { ScenarioRevisionEntity } from './scenario-revision.entity';
 import { ScenarioEntity } from './scenario.entity';
 import { SessionEntity } from './session.entity';
+import { SignInAttemptEntity } from './sign-in-attempt.entity';
 import { ShareLinkEntity } from './share-link.entity';
+import { StudyJobResultEntity } from './study-job-result.entity';
+import { StudyPointEntity } from './study-point.entity';
+import { StudyEntity } from './study.entity';
 import { TimeStudyEntity } from './time-study.entity';
 import { UserEntity } from './user.entity';
 
@@ -26,7 +30,11 @@ export {
   ScenarioRevisionEntity,
   ScenarioEntity,
   SessionEntity,
+  SignInAttemptEntity,
   ShareLinkEntity,
+  StudyEntity,
+  StudyJobResultEntity,
+  StudyPointEntity,
   TimeStudyEntity,
   UserEntity,
 };
@@ -42,7 +50,11 @@ export const entities = [
   RunEntity,
   TimeStudyEntity,
   PriceListEntity,
+  StudyEntity,
+  StudyPointEntity,
+  StudyJobResultEntity,
   AuditEntryEntity,
+  SignInAttemptEntity,
   InvitationEntity,
   OneTimeTokenEntity,
   ShareLinkEntity,

@@ -58,4 +58,11 @@ export class RunEntity extends EditableRecord {
 
   @Column({ type: 'jsonb', select: false })
   results!: RunResult;
+
+  /**
+   * Whether the server recomputed this result itself. Results posted by a browser are stored as sent
+   * (false); runs the server simulates set it.
+   */
+  @Column({ type: 'boolean', name: 'server_checked', default: false })
+  serverChecked!: boolean;
 }

@@ -2,6 +2,7 @@
 // in a float array that list queries never select; count, mean and sd are copied into plain columns so
 // lists show them without reading every sample.
 import { Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
+import type { TimeStudyAnalysis } from '../../../shared/api/time-studies';
 import { AuthoredRecord } from './authored';
 import { ScenarioEntity } from './scenario.entity';
 
@@ -41,4 +42,8 @@ export class TimeStudyEntity extends AuthoredRecord {
   /** Seconds, in file order. */
   @Column({ type: 'double precision', array: true, select: false })
   samples!: number[];
+
+  /** The analysis of the samples, computed once when the study is stored (null for studies stored before). */
+  @Column({ type: 'jsonb', nullable: true, select: false })
+  analysis!: TimeStudyAnalysis | null;
 }

@@ -3,12 +3,18 @@ import { InitialSchema1796189683213 } from './1796189683213-InitialSchema';
 import { RevisionImmutability1796189683214 } from './1796189683214-RevisionImmutability';
 import { TeamAndSharing1796216390870 } from './1796216390870-TeamAndSharing';
 import { TimeStudies1796193256066 } from './1796193256066-TimeStudies';
+import { Studies1796216413737 } from './1796216413737-Studies';
 import { PriceLists1796205600000 } from './1796205600000-PriceLists';
+import { SignInAttempts1796210000000 } from './1796210000000-SignInAttempts';
+import { StoredChecks1796210000001 } from './1796210000001-StoredChecks';
 
 export const migrations = [
   InitialSchema1796189683213,
   RevisionImmutability1796189683214,
   TimeStudies1796193256066,
   PriceLists1796205600000,
+  SignInAttempts1796210000000,
+  StoredChecks1796210000001,
   TeamAndSharing1796216390870,
+  Studies1796216413737,
 ];

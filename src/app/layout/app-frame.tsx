@@ -2,7 +2,7 @@
 // Signed-in visitors see who they are and where they work in the header.
 import { Outlet } from 'react-router-dom';
 import { UserMenu } from '../../features/auth/components/user-menu';
-import { useOptionalSession } from '../../features/auth/hooks/session-context';
+import { useOptionalSession } from '../../lib/session/session-context';
 import { SafetyNote } from './safety-note';
 import { TeamNav } from './team-nav';
 import { Wordmark } from './wordmark';

@@ -1,7 +1,7 @@
 // Header links to the team pages of the organisation being worked in (members for everyone, the audit
 // trail for owners), the account page, and the development mailbox while mail goes to the local fake.
 import { NavLink } from 'react-router-dom';
-import type { Session } from '../../features/auth/hooks/session-context';
+import type { Session } from '../../lib/session/session-context';
 import { MailboxLink } from '../../features/mailbox/components/mailbox-link';
 
 const linkClass = ({ isActive }: { isActive: boolean }) => `rounded px-1 text-paper underline-offset-4 hover:underline ${isActive ? 'underline' : ''}`;

@@ -5,7 +5,7 @@ import { useLocation, useNavigate } from 'react-router-dom';
 import { meQueryOptions, useMe } from '../../features/auth/api/get-me';
 import { removeUserData } from '../../features/auth/api/forget-session';
 import { AuthPanel } from '../../features/auth/components/auth-panel';
-import { useOptionalSession } from '../../features/auth/hooks/session-context';
+import { useOptionalSession } from '../../lib/session/session-context';
 import { signInPath } from '../../features/auth/utils/return-to';
 import { AcceptInvitation } from '../../features/members/components/accept-invitation';
 import { useLinkToken } from '../../lib/use-link-token';

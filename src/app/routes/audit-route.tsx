@@ -3,7 +3,7 @@ import { useParams } from 'react-router-dom';
 import { EmptyState } from '../../components/ui/empty-state';
 import { NotFoundMessage } from '../../components/not-found-message';
 import { AuditPage } from '../../features/audit/components/audit-page';
-import { useSession } from '../../features/auth/hooks/session-context';
+import { useSession } from '../../lib/session/session-context';
 import { useMembers } from '../../features/members/api/members';
 
 function OwnersAudit({ organisationId, organisationName }: { organisationId: string; organisationName: string }) {

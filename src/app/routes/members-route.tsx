@@ -2,8 +2,8 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useNavigate, useParams } from 'react-router-dom';
 import { NotFoundMessage } from '../../components/not-found-message';
-import { authKeys } from '../../features/auth/api/keys';
-import { useSession } from '../../features/auth/hooks/session-context';
+import { authKeys } from '../../lib/query-keys/auth';
+import { useSession } from '../../lib/session/session-context';
 import { MembersPage } from '../../features/members/components/members-page';
 
 export function MembersRoute() {

@@ -12,10 +12,10 @@ import { Card, CardTitle } from '../../components/ui/card';
 import { TextField } from '../../components/ui/field';
 import { PageHeader } from '../../components/ui/page-header';
 import { PageSpinner } from '../../components/ui/spinner';
-import { PlaybackPlayer } from '../../features/layout/playback/playback-player';
-import { useRevision } from '../../features/runs/api/get-revision';
+import { PlaybackPlayer } from '../../components/layout/playback/playback-player';
+import { useScenarioRevision } from '../../features/scenarios/api/get-revision';
 import { useRun } from '../../features/runs/api/get-run';
-import { usePlaybackRecording } from '../../features/simulation/hooks/use-playback-recording';
+import { usePlaybackRecording } from '../../features/runs/simulation/hooks/use-playback-recording';
 
 type FieldErrors = Partial<Record<'replication' | 'startMinutes' | 'windowMinutes', string>>;
 
@@ -25,7 +25,7 @@ const typed = (value: FormDataEntryValue | null) => (typeof value === 'string' &
 export function PlaybackRoute() {
   const { runId = '' } = useParams();
   const run = useRun(runId);
-  const revision = useRevision(run.data?.scenarioId ?? '', run.data?.revisionNumber);
+  const revision = useScenarioRevision(run.data?.scenarioId ?? '', run.data?.revisionNumber);
   const { state, record, cancel } = usePlaybackRecording();
   const [errors, setErrors] = useState<FieldErrors>({});
 

@@ -10,7 +10,7 @@ import { EmptyState } from '../../components/ui/empty-state';
 import { PageHeader } from '../../components/ui/page-header';
 import { PageSpinner } from '../../components/ui/spinner';
 import { isApiRequestError } from '../../lib/api-client';
-import { useCanEdit } from '../../features/auth/hooks/use-can-edit';
+import { useCanEdit } from '../../lib/session/use-can-edit';
 import { useProject } from '../../features/projects/api/get-project';
 import { useScenarios } from '../../features/scenarios/api/get-scenarios';
 import { CreateScenarioForm } from '../../features/scenarios/components/create-scenario-form';
@@ -45,6 +45,7 @@ export function ProjectRoute() {
         actions={
           <>
             <ButtonLink to={`/projects/${projectId}/runs`}>All runs</ButtonLink>
+            <ButtonLink to={`/projects/${projectId}/studies`}>Studies</ButtonLink>
             {scenarios.data && scenarios.data.length > 1 && <ButtonLink to={`/projects/${projectId}/compare`}>Compare layouts</ButtonLink>}
             {scenarios.data && scenarios.data.length > 0 ? startButton : null}
           </>

@@ -1,7 +1,7 @@
 // /runs/:runId : the results page with the sharing panel below it. Composed here because results and
 // sharing are separate features.
-import { useCanEdit } from '../../features/auth/hooks/use-can-edit';
-import { RunRoute } from '../../features/results/routes/run-route';
+import { useCanEdit } from '../../lib/session/use-can-edit';
+import { RunRoute } from './run-route';
 import { SharePanel } from '../../features/sharing/components/share-panel';
 
 function RunSharing({ runId, organisationId }: { runId: string; organisationId: string | undefined }) {

@@ -13,8 +13,6 @@ import {
   gallerySweep,
   galleryTimeline,
   galleryWip,
-  lognormalPdf,
-  normalPdf,
 } from './gallery-data';
 import { Histogram } from './Histogram';
 import { LineBalanceChart } from './LineBalanceChart';
@@ -23,6 +21,7 @@ import { SpaceTimeHeatmap } from './SpaceTimeHeatmap';
 import { StationStateBars, type StationSortKey } from './StationStateBars';
 import { StationStateTimeline } from './StationStateTimeline';
 import { TimeSeriesChart } from './TimeSeriesChart';
+import { lognormalLaw, normalLaw } from '../../../workers/analysis/fitted-densities';
 
 const lanes = galleryLanes();
 const timeline = galleryTimeline();
@@ -68,8 +67,8 @@ export function ChartGallery() {
             quantity="Lead time"
             unit="min"
             fits={[
-              { label: 'lognormal fit', pdf: lognormalPdf(Math.log(6), 0.25) },
-              { label: 'normal fit', pdf: normalPdf(6.2, 1.55) },
+              { label: 'lognormal fit', pdf: lognormalLaw(Math.log(6), 0.25).pdf },
+              { label: 'normal fit', pdf: normalLaw(6.2, 1.55).pdf },
             ]}
           />
         </Panel>
@@ -115,7 +114,7 @@ export function ChartGallery() {
                   {step.meanCycleSeconds} ± {step.sdCycleSeconds} s
                 </td>
                 <td>
-                  <DistributionPreview label={`Cycle time of ${step.name}`} density={normalPdf(step.meanCycleSeconds, step.sdCycleSeconds)} domain={[step.meanCycleSeconds - 4 * step.sdCycleSeconds, step.meanCycleSeconds + 4 * step.sdCycleSeconds]} />
+                  <DistributionPreview label={`Cycle time of ${step.name}`} density={normalLaw(step.meanCycleSeconds, step.sdCycleSeconds).pdf} domain={[step.meanCycleSeconds - 4 * step.sdCycleSeconds, step.meanCycleSeconds + 4 * step.sdCycleSeconds]} />
                 </td>
               </tr>
             ))}

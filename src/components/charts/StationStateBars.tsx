@@ -53,7 +53,7 @@ function barsProblem(stations: readonly StationStateBarsStation[], states: reado
 
 export function StationStateBars(props: StationStateBarsProps) {
   const { stations, bottleneckId, bottleneckShare, sortBy = 'line-order', title = 'Where each station spends its time' } = props;
-  const states: StationState[] = stations.some((s) => (s.shares.idle ?? 0) > 0) ? [...BASE_STATES, 'idle'] : [...BASE_STATES];
+  const states: StationState[] = stations.some((s) => (s.shares.onBreak ?? 0) > 0) ? [...BASE_STATES, 'onBreak'] : [...BASE_STATES];
   const problem = barsProblem(stations, states);
   if (problem) return <ChartMessage title={title} tone="problem" message={`These bars cannot be drawn: ${problem}.`} />;
   if (stations.length === 0) return <ChartMessage title={title} tone="empty" message="No station states to show: the line has no stations yet." />;

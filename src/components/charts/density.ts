@@ -1,5 +1,8 @@
-// Shape estimates for samples: histogram bins of equal width and a Gaussian kernel density.
+// Shape estimates for samples: histogram bins of equal width and a Gaussian kernel density (the kernel
+// density estimate itself is simple-statistics'; the bandwidth rule is Silverman's, below).
 import { bin, deviation, extent, quantileSorted, scaleLinear } from 'd3';
+import { kernelDensityEstimation } from 'simple-statistics';
+import { histogramRule } from '../../../workers/analysis/describe-samples';
 
 export interface Bin {
   x0: number;
@@ -8,17 +11,14 @@ export interface Bin {
 }
 
 /**
- * Equal-width bins on a rounded range. The default count follows Freedman & Diaconis (1981,
- * "On the histogram as a density estimator"), kept between 5 and 60 so a screen can show it.
+ * Equal-width bins on a rounded range. The default count is the time-study rule (Freedman & Diaconis,
+ * Sturges where the IQR is zero: histogramRule), kept between 5 and 60 so a screen can show it.
  */
 export function histogramBins(values: readonly number[], binCount?: number): Bin[] {
   if (values.length === 0) return [];
   let [lo, hi] = extent(values) as [number, number];
   if (lo === hi) [lo, hi] = [lo - 0.5, hi + 0.5];
-  const sorted = [...values].sort((a, b) => a - b);
-  const iqr = (quantileSorted(sorted, 0.75) ?? 0) - (quantileSorted(sorted, 0.25) ?? 0);
-  const fd = iqr > 0 ? Math.ceil(((hi - lo) * Math.cbrt(values.length)) / (2 * iqr)) : Math.ceil(Math.log2(values.length) + 1);
-  const wanted = binCount ?? Math.min(60, Math.max(5, fd));
+  const wanted = binCount ?? Math.min(60, Math.max(5, histogramRule([...values].sort((a, b) => a - b)).binCount));
   const scale = scaleLinear().domain([lo, hi]).nice(wanted);
   const thresholds = scale.ticks(wanted);
   const [d0, d1] = scale.domain();
@@ -43,18 +43,9 @@ export function silvermanBandwidth(samples: readonly number[]): number {
   return spread > 0 ? 0.9 * spread * n ** -0.2 : 1;
 }
 
-const INV_SQRT_2PI = 1 / Math.sqrt(2 * Math.PI);
-
+/** The Gaussian kernel density of the samples at Silverman's bandwidth unless one is given. */
 export function gaussianKde(samples: readonly number[], bandwidth = silvermanBandwidth(samples)): (x: number) => number {
-  const n = samples.length;
-  return (x) => {
-    let sum = 0;
-    for (const sample of samples) {
-      const u = (x - sample) / bandwidth;
-      sum += Math.exp(-0.5 * u * u);
-    }
-    return (sum * INV_SQRT_2PI) / (n * bandwidth);
-  };
+  return kernelDensityEstimation([...samples], 'gaussian', bandwidth);
 }
 
 /** Evenly spaced points of a density over a range, ready for a line or an area. */

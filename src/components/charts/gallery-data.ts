@@ -91,11 +91,6 @@ export function galleryLeadTimes(n = 600): number[] {
   });
 }
 
-export const lognormalPdf = (mu: number, sigma: number) => (x: number) =>
-  x <= 0 ? 0 : Math.exp(-((Math.log(x) - mu) ** 2) / (2 * sigma * sigma)) / (x * sigma * Math.sqrt(2 * Math.PI));
-
-export const normalPdf = (mean: number, sd: number) => (x: number) => Math.exp(-((x - mean) ** 2) / (2 * sd * sd)) / (sd * Math.sqrt(2 * Math.PI));
-
 export function galleryWip(points = 97) {
   const random = seeded(5);
   const times = Array.from({ length: points }, (_, i) => i * 5);

@@ -1,5 +1,6 @@
 // Chart colours. SVG marks carry their colours as attributes (not CSS classes) so an exported SVG or
 // PNG keeps them; the values come from the Tailwind palette so the app and the charts never drift.
+import { STATION_STATES, type StationState } from '../../../shared/results/run-result';
 import tailwindConfig from '../../../tailwind.config';
 
 const colours = tailwindConfig.theme.extend.colors;
@@ -8,8 +9,8 @@ export const ink = colours.ink;
 export const paper = colours.paper;
 export const accent = colours.accent;
 
-export const STATION_STATES = ['processing', 'starved', 'blocked', 'down', 'idle'] as const;
-export type StationState = (typeof STATION_STATES)[number];
+/** The station states are the result's own (shared/results/run-result.ts); the charts only colour and name them. */
+export { STATION_STATES, type StationState };
 
 export const stateColour: Record<StationState, string> = colours.state;
 
@@ -18,7 +19,7 @@ export const stateLabel: Record<StationState, string> = {
   starved: 'starved',
   blocked: 'blocked',
   down: 'down',
-  idle: 'on break',
+  onBreak: 'on break',
 };
 
 /** A state's column name in CSV exports: snake case, and the break state under its meaning. */

@@ -76,12 +76,3 @@ export function pngDataUrl(png: Uint8Array): string {
   for (let i = 0; i < png.length; i += 0x8000) binary += String.fromCharCode(...png.subarray(i, i + 0x8000));
   return `data:image/png;base64,${btoa(binary)}`;
 }
-
-/** Parses "#rrggbb" or "rgb(r, g, b)", the two forms d3's colour interpolators return. */
-export function rgbBytes(colour: string): [number, number, number] {
-  const hex = /^#([0-9a-f]{2})([0-9a-f]{2})([0-9a-f]{2})$/i.exec(colour);
-  if (hex) return [parseInt(hex[1], 16), parseInt(hex[2], 16), parseInt(hex[3], 16)];
-  const fn = /^rgb\((\d+),\s*(\d+),\s*(\d+)\)$/.exec(colour);
-  if (fn) return [Number(fn[1]), Number(fn[2]), Number(fn[3])];
-  throw new Error(`raster: cannot read colour ${colour}`);
-}

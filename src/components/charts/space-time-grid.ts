@@ -1,7 +1,7 @@
 // The geometry of a space-time heatmap: bins per lane, merging of time bins that would be narrower
 // than a screen pixel, and the raster image for one lane.
-import { interpolateYlGnBu } from 'd3';
-import { encodePng, pngDataUrl, rgbBytes } from './raster';
+import { interpolateYlGnBu, rgb } from 'd3';
+import { encodePng, pngDataUrl } from './raster';
 import { checkPositive, checkShares, firstProblem, type Problem } from './validate';
 
 export interface SpaceTimeLane {
@@ -74,7 +74,10 @@ export function laneGrid(lane: SpaceTimeLane, maxColumns: number): LaneGrid {
 }
 
 /** 256 steps are finer than the eye can tell apart on this ramp and spare a colour parse per cell. */
-const COLOUR_STEPS = Array.from({ length: 256 }, (_, i) => rgbBytes(occupancyColour(i / 255)));
+const COLOUR_STEPS = Array.from({ length: 256 }, (_, i) => {
+  const { r, g, b } = rgb(occupancyColour(i / 255));
+  return [r, g, b] as const;
+});
 
 /** One pixel per cell; the top image row is the far end of the lane so position rises upwards. */
 export function laneImage(grid: LaneGrid): string {

@@ -44,7 +44,7 @@ describe('StationStateBars', () => {
   });
 
   it('adds on break only when a station reports it', () => {
-    const withIdle = [...stations, { id: 'man', name: 'Manual', shares: { processing: 0.5, starved: 0.1, blocked: 0, down: 0, idle: 0.4 } }];
+    const withIdle = [...stations, { id: 'man', name: 'Manual', shares: { processing: 0.5, starved: 0.1, blocked: 0, down: 0, onBreak: 0.4 } }];
     const { container } = render(<StationStateBars stations={withIdle} width={WIDTH} />);
     expect(legendLabels(container)).toContain('on break');
     expect(within(screen.getByRole('table')).getAllByRole('columnheader').map((th) => th.textContent)).toContain('on break');

@@ -1,6 +1,6 @@
 // Numbers typed with either decimal separator mean the same; ambiguous text is refused with a reason.
 import { describe, expect, it } from 'vitest';
-import { decimalProblem, parseDecimal } from '../../../src/features/editor/utils/decimal-input';
+import { decimalProblem, parseDecimal } from '../../../src/features/scenarios/editor/utils/decimal-input';
 
 describe('typed decimals', () => {
   it('reads a comma and a point alike', () => {

@@ -10,7 +10,7 @@ import { errorBeside, openScenarioPage, SCENARIO_ID } from './workspace-fixtures
 vi.setConfig({ testTimeout: 30_000 });
 
 beforeAll(async () => {
-  await import('../../../src/features/scenarios/routes/scenario-route');
+  await import('../../../src/app/routes/scenario-route');
 }, 60_000);
 
 // Drafts live in sessionStorage; each test starts without one.

@@ -11,7 +11,7 @@ import { openScenarioPage, SCENARIO_ID } from './workspace-fixtures';
 vi.setConfig({ testTimeout: 30_000 });
 
 beforeAll(async () => {
-  await import('../../../src/features/scenarios/routes/scenario-route');
+  await import('../../../src/app/routes/scenario-route');
 }, 60_000);
 
 afterEach(() => window.sessionStorage.clear());

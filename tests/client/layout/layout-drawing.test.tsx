@@ -3,8 +3,8 @@ import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
 import stackedLoop from '../../../shared/examples/stacked-loop.json';
 import { scenarioSchema } from '../../../shared/scenario/scenario';
-import { LayoutDrawing } from '../../../src/features/layout/layout-drawing';
-import { layoutModel } from '../../../src/features/layout/layout-model';
+import { LayoutDrawing } from '../../../src/components/layout/layout-drawing';
+import { layoutModel } from '../../../src/components/layout/layout-model';
 
 const stacked = () => scenarioSchema.parse(stackedLoop);
 

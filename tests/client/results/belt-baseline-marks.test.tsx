@@ -4,7 +4,7 @@ import beltBaseline from '../../../shared/examples/belt-baseline.json';
 import stackedLoop from '../../../shared/examples/stacked-loop.json';
 import type { RunResult } from '../../../shared/results/run-result';
 import { scenarioSchema } from '../../../shared/scenario/scenario';
-import { LayoutDrawing } from '../../../src/features/layout/layout-drawing';
+import { LayoutDrawing } from '../../../src/components/layout/layout-drawing';
 import { ResultHeadline } from '../../../src/features/results/components/result-headline';
 import { StationResults } from '../../../src/features/results/components/station-results';
 import { runExperiment } from '../../../workers/engine';

@@ -1,6 +1,6 @@
 import { screen, waitFor } from '@testing-library/react';
 import { describe, expect, it, vi } from 'vitest';
-import type { OpenSimulationPort } from '../../../src/features/simulation/simulation-port';
+import type { OpenSimulationPort } from '../../../src/features/runs/simulation/simulation-port';
 import { apiRoutes } from '../../../shared/api/routes';
 import type { CreateRunInput } from '../../../shared/api/runs';
 import stackedLoop from '../../../shared/examples/stacked-loop.json';

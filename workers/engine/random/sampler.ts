@@ -7,6 +7,7 @@
 // Inputs are trusted: distributionSchema has already refused anything these formulas cannot take.
 import type { Distribution } from '../../../shared/scenario/distribution';
 import { inverseRegularizedLowerGamma, lnGamma, normalQuantileFast, standardNormalCdf } from '../stats/special-functions';
+import { gammaFromMeanCv, lognormalFromMeanCv } from '../../../shared/scenario/distribution-parameters';
 import type { UniformStream } from './streams';
 
 export type Sampler = () => number;
@@ -62,8 +63,7 @@ export function createSampler(d: Distribution, u: UniformStream): Sampler {
       return truncatedNormal(d.mean, d.sd, d.min, u);
     case 'lognormal': {
       // Underlying normal chosen so the lognormal has the given mean and coefficient of variation.
-      const sigma = Math.sqrt(Math.log(1 + d.cv * d.cv));
-      const mu = Math.log(d.mean) - (sigma * sigma) / 2;
+      const { mu, sigma } = lognormalFromMeanCv(d.mean, d.cv);
       return () => Math.exp(mu + sigma * normalQuantileFast(u() + HALF_STEP));
     }
     case 'exponential': {
@@ -73,8 +73,8 @@ export function createSampler(d: Distribution, u: UniformStream): Sampler {
     case 'erlang':
       return gamma(d.k, d.mean / d.k, u);
     case 'gamma': {
-      const shape = 1 / (d.cv * d.cv);
-      return gamma(shape, d.mean / shape, u);
+      const { shape, scale } = gammaFromMeanCv(d.mean, d.cv);
+      return gamma(shape, scale, u);
     }
     case 'empirical': {
       const samples = Float64Array.from(d.samples);

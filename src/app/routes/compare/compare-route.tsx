@@ -7,7 +7,7 @@ import { ButtonLink } from '../../../components/ui/button';
 import { Breadcrumbs } from '../../../components/ui/breadcrumbs';
 import { PageHeader } from '../../../components/ui/page-header';
 import { PageSpinner } from '../../../components/ui/spinner';
-import { useCanEdit } from '../../../features/auth/hooks/use-can-edit';
+import { useCanEdit } from '../../../lib/session/use-can-edit';
 import { CompareSetup } from '../../../features/compare/components/compare-setup';
 import { CompareView } from '../../../features/compare/components/compare-view';
 import { COMPARE_LIMITS } from '../../../features/compare/utils/comparison';

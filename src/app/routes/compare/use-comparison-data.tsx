@@ -11,10 +11,10 @@ import type { CompareItem } from '../../../features/compare/components/compare-v
 import type { RunCost } from '../../../features/compare/utils/answer';
 import type { PricedScenario } from '../../../features/costs/components/bill-of-materials-table';
 import { usePriceList } from '../../../features/costs/api/get-price-list';
-import { balanceSteps } from '../../../features/editor/utils/line-balance';
-import { LayoutDrawing } from '../../../features/layout/layout-drawing';
+import { balanceSteps } from '../../../features/scenarios/editor/utils/line-balance';
+import { LayoutDrawing } from '../../../components/layout/layout-drawing';
 import { useProject } from '../../../features/projects/api/get-project';
-import { revisionQueryOptions } from '../../../features/runs/api/get-revision';
+import { scenarioRevisionQueryOptions } from '../../../features/scenarios/api/get-revision';
 import { runQueryOptions } from '../../../features/runs/api/get-run';
 
 export function parseRunIds(text: string | null): string[] {
@@ -47,7 +47,7 @@ export function useComparisonData(projectId: string, runIds: readonly string[]) 
   const project = useProject(projectId);
   const runs = useQueries({ queries: runIds.map((id) => runQueryOptions(id)) });
   const revisions = useQueries({
-    queries: runs.map((run) => ({ ...revisionQueryOptions(run.data?.scenarioId ?? '', run.data?.revisionNumber ?? 0), enabled: Boolean(run.data) })),
+    queries: runs.map((run) => ({ ...scenarioRevisionQueryOptions(run.data?.scenarioId ?? '', run.data?.revisionNumber ?? 0), enabled: Boolean(run.data) })),
   });
   const priceList = usePriceList(project.data?.organisationId);
 

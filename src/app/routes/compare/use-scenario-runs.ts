@@ -6,7 +6,7 @@ import type { RunSettings } from '../../../../shared/scenario/run-settings';
 import type { ScenarioChoice, ScenarioRunProgress } from '../../../features/compare/components/compare-setup';
 import { useCreateRun } from '../../../features/runs/api/create-run';
 import { scenarioRevisionQueryOptions } from '../../../features/scenarios/api/get-revision';
-import { useSimulation } from '../../../features/simulation/hooks/use-simulation';
+import { useSimulation } from '../../../features/runs/simulation/hooks/use-simulation';
 
 export function useScenarioRuns(onDone: (runIds: string[]) => void) {
   const simulation = useSimulation();

@@ -2,7 +2,7 @@
 // signed in". The me query is kept and set to null rather than removed, so
 // components already watching it (header, guards) see the change at once.
 import type { QueryClient } from '@tanstack/react-query';
-import { authKeys } from './keys';
+import { authKeys } from '../../../lib/query-keys/auth';
 
 export function removeUserData(queryClient: QueryClient): void {
   queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== authKeys.all[0] });

@@ -4,7 +4,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { meSchema, type Me } from '../../../../shared/api/auth';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { api, isApiRequestError } from '../../../lib/api-client';
-import { authKeys } from './keys';
+import { authKeys } from '../../../lib/query-keys/auth';
 
 export async function getMe(signal?: AbortSignal): Promise<Me | null> {
   try {

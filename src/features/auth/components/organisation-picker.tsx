@@ -1,6 +1,6 @@
 // Shows the organisation being worked in, and lets members of several switch.
 import { useId } from 'react';
-import type { Session } from '../hooks/session-context';
+import type { Session } from '../../../lib/session/session-context';
 
 export function OrganisationPicker({ session }: { session: Session }) {
   const id = useId();

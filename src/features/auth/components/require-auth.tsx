@@ -4,7 +4,7 @@ import { Navigate, Outlet, useLocation } from 'react-router-dom';
 import { LoadError } from '../../../components/load-error';
 import { PageSpinner } from '../../../components/ui/spinner';
 import { useMe } from '../api/get-me';
-import { useOptionalSession } from '../hooks/session-context';
+import { useOptionalSession } from '../../../lib/session/session-context';
 import { signInPath } from '../utils/return-to';
 
 export function RequireAuth() {

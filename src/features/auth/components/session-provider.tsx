@@ -3,7 +3,7 @@
 // organisations comes back to the one they last used.
 import { useCallback, useMemo, useState, type ReactNode } from 'react';
 import { useMe } from '../api/get-me';
-import { SessionContext, type Session } from '../hooks/session-context';
+import { SessionContext, type Session } from '../../../lib/session/session-context';
 
 const STORAGE_KEY = 'lanewright.organisationId';
 

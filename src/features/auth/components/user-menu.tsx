@@ -3,7 +3,7 @@ import { useNavigate } from 'react-router-dom';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { useSignOut } from '../api/sign-out';
-import type { Session } from '../hooks/session-context';
+import type { Session } from '../../../lib/session/session-context';
 import { SIGNED_OUT_STATE } from '../utils/return-to';
 import { OrganisationPicker } from './organisation-picker';
 

@@ -11,7 +11,7 @@ import { TextField } from '../../../components/ui/field';
 import { PageHeader } from '../../../components/ui/page-header';
 import { useApiFormSubmit } from '../../../lib/use-api-form-submit';
 import { useChangePassword, useSignOutOtherSessions } from '../api/account';
-import { useSession } from '../hooks/session-context';
+import { useSession } from '../../../lib/session/session-context';
 
 const FIELDS = ['currentPassword', 'newPassword'] as const;
 const ended = (n: number) => (n === 0 ? 'No other browser was signed in.' : `${n} other session${n === 1 ? '' : 's'} signed out.`);

@@ -1,22 +1,21 @@
 // What each step's stations did, aligned by step across the compared runs: one row per step, one
 // bar per run. Each bar carries its figures in words, so it reads without colour.
-import { stateColour, stateLabel, type StationState as ChartState } from '../../../components/charts';
+import { stateColour, stateLabel } from '../../../components/charts';
 import type { StationState } from '../../../../shared/results/run-result';
 import type { StepRow, StepShares } from '../utils/steps';
 
 const SHOWN: readonly StationState[] = ['processing', 'starved', 'blocked', 'down', 'onBreak'];
-const chartState = (state: StationState): ChartState => (state === 'onBreak' ? 'idle' : state);
 const percent = (share: number) => `${Math.round(share * 100)} %`;
 
 function Bar({ shares }: { shares: StepShares }) {
-  const words = SHOWN.filter((s) => shares[s] >= 0.005).map((s) => `${stateLabel[chartState(s)]} ${percent(shares[s])}`);
+  const words = SHOWN.filter((s) => shares[s] >= 0.005).map((s) => `${stateLabel[s]} ${percent(shares[s])}`);
   return (
     <div className="flex flex-col gap-1">
       {/* SVG fills print even where browsers leave out background colours. */}
       <svg className="h-4 w-full" viewBox="0 0 100 4" preserveAspectRatio="none" aria-hidden>
         {SHOWN.map((s, i) => {
           const x = SHOWN.slice(0, i).reduce((sum, before) => sum + shares[before] * 100, 0);
-          return <rect key={s} x={x} y={0} width={shares[s] * 100} height={4} fill={stateColour[chartState(s)]} />;
+          return <rect key={s} x={x} y={0} width={shares[s] * 100} height={4} fill={stateColour[s]} />;
         })}
         <rect x={0} y={0} width={100} height={4} fill="none" stroke="currentColor" strokeWidth={0.4} vectorEffect="non-scaling-stroke" />
       </svg>
@@ -35,9 +34,9 @@ export function StepStateBars({ rows, labels }: { rows: readonly StepRow[]; labe
         {SHOWN.map((s) => (
           <span key={s} className="flex items-center gap-1">
             <svg className="size-3" viewBox="0 0 12 12">
-              <rect x={0.5} y={0.5} width={11} height={11} fill={stateColour[chartState(s)]} stroke="currentColor" />
+              <rect x={0.5} y={0.5} width={11} height={11} fill={stateColour[s]} stroke="currentColor" />
             </svg>
-            {stateLabel[chartState(s)]}
+            {stateLabel[s]}
           </span>
         ))}
       </div>

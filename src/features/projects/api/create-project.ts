@@ -3,7 +3,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { projectSchema, type CreateProjectInput } from '../../../../shared/api/projects';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { api } from '../../../lib/api-client';
-import { projectKeys } from './keys';
+import { projectKeys } from '../../../lib/query-keys/projects';
 
 export const createProject = (input: CreateProjectInput) => api.post(apiRoutes.projects, input, projectSchema);
 

@@ -3,7 +3,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { projectSchema } from '../../../../shared/api/projects';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { api } from '../../../lib/api-client';
-import { projectKeys } from './keys';
+import { projectKeys } from '../../../lib/query-keys/projects';
 
 export const getProject = (id: string, signal?: AbortSignal) => api.get(apiRoutes.project(id), projectSchema, { signal });
 

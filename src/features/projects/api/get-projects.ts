@@ -4,7 +4,7 @@ import { z } from 'zod';
 import { projectSchema } from '../../../../shared/api/projects';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { api } from '../../../lib/api-client';
-import { projectKeys } from './keys';
+import { projectKeys } from '../../../lib/query-keys/projects';
 
 const projectListSchema = z.array(projectSchema);
 

@@ -3,7 +3,7 @@ import type { RunResult } from '../../../../shared/results/run-result';
 import { TimeSeriesChart } from '../../../components/charts';
 import { StackedShareBars, type ShareCategory } from '../../../components/charts/StackedShareBars';
 import { Card, CardTitle } from '../../../components/ui/card';
-import { formatPercent, formatSeconds } from '../../runs/utils/format-run';
+import { formatPercent, formatSeconds } from '../../../lib/format-run';
 import { wipSeries } from '../utils/chart-data';
 import { LeadTimeHistogram } from './lead-time-histogram';
 

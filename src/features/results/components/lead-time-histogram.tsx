@@ -7,7 +7,7 @@ import { ChartFrame, ChartMessage, plotWidthOf, type Margin } from '../../../com
 import { formatNumber } from '../../../components/charts/format';
 import { useChartShell } from '../../../components/charts/useChartShell';
 import type { RunResult } from '../../../../shared/results/run-result';
-import { formatSeconds } from '../../runs/utils/format-run';
+import { formatSeconds } from '../../../lib/format-run';
 import { CLIP_QUANTILE, clipHistogram } from '../utils/clip-histogram';
 
 const MARGIN: Margin = { top: 10, right: 20, bottom: 56, left: 64 };

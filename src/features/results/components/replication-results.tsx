@@ -1,7 +1,7 @@
 // Each replication's own figures, the spread the confidence intervals are computed from.
 import type { ReplicationResult } from '../../../../shared/results/run-result';
 import { Card, CardTitle } from '../../../components/ui/card';
-import { formatMean1, formatMean2, formatPerHour, formatSeconds, formatTakt } from '../../runs/utils/format-run';
+import { formatMean1, formatMean2, formatPerHour, formatSeconds, formatTakt } from '../../../lib/format-run';
 import { ResultTable, type ResultColumn } from './result-table';
 
 const columns: ResultColumn<ReplicationResult>[] = [

@@ -3,7 +3,7 @@
 import type { ReactNode } from 'react';
 import { BeltBaselineTag } from '../../../components/ui/belt-baseline-tag';
 import type { Interval, RunResult } from '../../../../shared/results/run-result';
-import { formatInterval, formatMean1, formatMean2, formatParts, formatPerHour, formatSeconds, formatTakt } from '../../runs/utils/format-run';
+import { formatInterval, formatMean1, formatMean2, formatParts, formatPerHour, formatSeconds, formatTakt } from '../../../lib/format-run';
 import { taktVerdict } from '../utils/takt-verdict';
 
 const VERDICT_TONE = {

@@ -15,6 +15,13 @@ function Item({ term, children }: { term: string; children: ReactNode }) {
   );
 }
 
+/** Which calendar choice the run used for breaks; results stored before it was recorded say so. */
+function breakText(results: RunDetail['results']): string {
+  if (results.breakMinutesPerShift === 0) return 'none in the calendar';
+  const minutes = results.breakMinutesPerShift === undefined ? '' : `${results.breakMinutesPerShift} min per shift; `;
+  return results.breakMode === 'wholeLine' ? `${minutes}stop the whole line (carriers halt, no station works)` : `${minutes}only manual stations that pause for breaks stop`;
+}
+
 /** `readOnlyView`: for a shared page, whose reader has no scenario to open and needs no names of the team. */
 export function RunMetadata({ run, readOnlyView = false }: { run: RunDetail; readOnlyView?: boolean }) {
   const { settings } = run;
@@ -44,6 +51,7 @@ export function RunMetadata({ run, readOnlyView = false }: { run: RunDetail; rea
         </Item>
         <Item term="Carriers">{settings.carriers === undefined ? `${run.results.carriers.count} (as in the scenario)` : `${settings.carriers} (override)`}</Item>
         <Item term="Conveyor">{run.results.conveyor === 'belt' ? 'belt or chain conveyor (baseline)' : 'independent carriers'}</Item>
+        <Item term="Breaks">{breakText(run.results)}</Item>
         <Item term="Events simulated">{run.results.events.toLocaleString('en-GB')}</Item>
       </dl>
       <p className="text-sm text-ink-soft">

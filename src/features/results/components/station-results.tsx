@@ -4,7 +4,7 @@ import { useMemo } from 'react';
 import type { RunResult, StationResult } from '../../../../shared/results/run-result';
 import { StationStateBars } from '../../../components/charts';
 import { Card, CardTitle } from '../../../components/ui/card';
-import { formatMean2, formatPercent, formatTakt } from '../../runs/utils/format-run';
+import { formatMean2, formatPercent, formatTakt } from '../../../lib/format-run';
 import { stationBars } from '../utils/chart-data';
 import { ResultTable, type ResultColumn } from './result-table';
 
@@ -42,6 +42,8 @@ function bottleneckSentence(result: RunResult): string {
   if (!station) return 'No station stood out as the bottleneck in this run.';
   const others = result.stations.filter((s) => s.id !== station.id && s.bottleneckShare > 0).sort((a, b) => b.bottleneckShare - a.bottleneckShare);
   const runnerUp = others[0] ? ` Next most often: ${others[0].name} (${formatPercent(others[0].bottleneckShare)}).` : '';
+  const transfer = result.transfers.find((t) => t.id === result.bottleneckTransferId);
+  if (transfer) return `${transfer.name}, a transfer, held the line more often than any station (see Transfers). Among the stations, ${station.name} came first.${runnerUp}`;
   return (
     `${station.name} is the bottleneck: the sole bottleneck ${formatPercent(station.soleBottleneckShare)} of the time, and shifting with another station a further ` +
     `${formatPercent(station.shiftingBottleneckShare)}.${runnerUp}`

@@ -1,10 +1,7 @@
 // Stored results reshaped for the chart components, without changing a value: only the layout of
-// the arrays and the names beside them. The result calls break time "onBreak"; the charts call
-// the same state "idle" and label it "on break".
-import type { RunResult, StationState } from '../../../../shared/results/run-result';
-import type { SpaceTimeLane, StationStateBarsStation, StationState as ChartState } from '../../../components/charts';
-
-export const chartState = (state: StationState): ChartState => (state === 'onBreak' ? 'idle' : state);
+// the arrays and the names beside them. The charts use the result's own station states.
+import type { RunResult } from '../../../../shared/results/run-result';
+import type { SpaceTimeLane, StationStateBarsStation } from '../../../components/charts';
 
 const nameOf = (items: readonly { id: string; name: string }[], id: string) => items.find((item) => item.id === id)?.name ?? id;
 
@@ -34,7 +31,7 @@ export function stationTimeline(result: RunResult) {
   const { heatmaps } = result;
   return {
     stations: heatmaps.stations.map((s) => ({ id: s.stationId, name: nameOf(result.stations, s.stationId) })),
-    states: heatmaps.stationStates.map(chartState),
+    states: heatmaps.stationStates,
     shares: withinWholeBins(
       heatmaps.stations.flatMap((s) => s.shares),
       heatmaps.stationStates.length,
@@ -48,7 +45,7 @@ export function stationBars(result: RunResult): StationStateBarsStation[] {
   return result.stations.map((s) => ({
     id: s.id,
     name: s.name,
-    shares: { processing: s.processing, starved: s.starved, blocked: s.blocked, down: s.down, idle: s.onBreak },
+    shares: { processing: s.processing, starved: s.starved, blocked: s.blocked, down: s.down, onBreak: s.onBreak },
   }));
 }
 

@@ -1,7 +1,7 @@
 // A plain sentence on whether the line reaches its target takt, read from the achieved takt's mean
 // and its 95 % interval: the mean decides the verdict, the interval says how sure it is.
 import type { Interval } from '../../../../shared/results/run-result';
-import { formatTakt } from '../../runs/utils/format-run';
+import { formatTakt } from '../../../lib/format-run';
 
 export type TaktVerdict = { tone: 'meets' | 'misses' | 'none'; text: string };
 

@@ -4,8 +4,8 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { runListItemSchema, type CreateRunInput } from '../../../../shared/api/runs';
 import { api } from '../../../lib/api-client';
-import { scenarioKeys } from '../../scenarios/api/keys';
-import { runKeys } from './keys';
+import { scenarioKeys } from '../../../lib/query-keys/scenarios';
+import { runKeys } from '../../../lib/query-keys/runs';
 
 export const createRun = (scenarioId: string, input: CreateRunInput) => api.post(apiRoutes.scenarioRuns(scenarioId), input, runListItemSchema);
 

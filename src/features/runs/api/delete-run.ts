@@ -3,8 +3,8 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { okSchema } from '../../../../shared/api/common';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { api } from '../../../lib/api-client';
-import { scenarioKeys } from '../../scenarios/api/keys';
-import { runKeys } from './keys';
+import { scenarioKeys } from '../../../lib/query-keys/scenarios';
+import { runKeys } from '../../../lib/query-keys/runs';
 
 export const deleteRun = (id: string) => api.delete(apiRoutes.run(id), okSchema);
 

@@ -4,7 +4,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { runDetailSchema } from '../../../../shared/api/runs';
 import { api } from '../../../lib/api-client';
-import { runKeys } from './keys';
+import { runKeys } from '../../../lib/query-keys/runs';
 
 export const getRun = (id: string, signal?: AbortSignal) => api.get(apiRoutes.run(id), runDetailSchema, { signal });
 

@@ -4,7 +4,7 @@ import { z } from 'zod';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { runListItemSchema } from '../../../../shared/api/runs';
 import { api } from '../../../lib/api-client';
-import { runKeys, type RunListScope } from './keys';
+import { runKeys, type RunListScope } from '../../../lib/query-keys/runs';
 
 const runListSchema = z.array(runListItemSchema);
 

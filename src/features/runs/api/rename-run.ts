@@ -3,7 +3,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { runListItemSchema } from '../../../../shared/api/runs';
 import { api } from '../../../lib/api-client';
-import { runKeys } from './keys';
+import { runKeys } from '../../../lib/query-keys/runs';
 
 export const renameRun = (id: string, name: string) => api.patch(apiRoutes.run(id), { name }, runListItemSchema);
 

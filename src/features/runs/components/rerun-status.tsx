@@ -1,7 +1,7 @@
 // The strip above the runs table while a run is being repeated, and what came of it.
 import { LoadError } from '../../../components/load-error';
-import { SimulationProblem } from '../../simulation/components/simulation-problem';
-import { SimulationProgress } from '../../simulation/components/simulation-progress';
+import { SimulationProblem } from '../simulation/components/simulation-problem';
+import { SimulationProgress } from '../simulation/components/simulation-progress';
 import type { useRerun } from '../hooks/use-rerun';
 import { SaveStatus } from './save-status';
 

@@ -3,7 +3,7 @@ import { LoadError } from '../../../components/load-error';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { PageSpinner } from '../../../components/ui/spinner';
 import { useRuns } from '../api/get-runs';
-import type { RunListScope } from '../api/keys';
+import type { RunListScope } from '../../../lib/query-keys/runs';
 import { RunsTable } from './runs-table';
 
 interface RunListSectionProps {

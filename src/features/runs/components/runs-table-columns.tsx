@@ -5,7 +5,7 @@ import type { ReactNode } from 'react';
 import type { RunListItem } from '../../../../shared/api/runs';
 import { formatDateTime, formatPerson } from '../../../lib/format';
 import { atLeast, atMost, authorIs, equalsText, sinceDay } from '../utils/run-filters';
-import { formatInterval, formatPerHour, formatTakt } from '../utils/format-run';
+import { formatInterval, formatPerHour, formatTakt } from '../../../lib/format-run';
 
 const column = createColumnHelper<RunListItem>();
 

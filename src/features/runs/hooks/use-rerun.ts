@@ -1,13 +1,12 @@
 // Repeats a stored run: fetches the exact revision it was computed from and runs it again with the
 // same settings and seed, then saves the new run.
-import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { RunListItem } from '../../../../shared/api/runs';
-import { revisionQueryOptions } from '../api/get-revision';
+import { useLoadRevision } from './revision-source';
 import { useRunAndSave } from './use-run-and-save';
 
 export function useRerun() {
-  const queryClient = useQueryClient();
+  const loadRevision = useLoadRevision();
   const runAndSave = useRunAndSave();
   const [source, setSource] = useState<RunListItem | null>(null);
   const [loadError, setLoadError] = useState<unknown>(null);
@@ -16,7 +15,7 @@ export function useRerun() {
     setSource(run);
     setLoadError(null);
     try {
-      const revision = await queryClient.fetchQuery(revisionQueryOptions(run.scenarioId, run.revisionNumber));
+      const revision = await loadRevision(run.scenarioId, run.revisionNumber);
       await runAndSave.run(run.scenarioId, revision, run.settings);
     } catch (error) {
       setLoadError(error);

@@ -5,7 +5,7 @@
 import { useCallback, useEffect, useState } from 'react';
 import type { CreateRunInput, RunListItem } from '../../../../shared/api/runs';
 import type { RunSettings } from '../../../../shared/scenario/run-settings';
-import { useSimulation, type SimulationOutcome } from '../../simulation/hooks/use-simulation';
+import { useSimulation, type SimulationOutcome } from '../simulation/hooks/use-simulation';
 import { useCreateRun } from '../api/create-run';
 
 export interface RevisionToRun {

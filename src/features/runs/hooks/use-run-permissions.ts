@@ -1,7 +1,7 @@
 // The signed-in user's rights over runs of one organisation.
 import type { RunListItem } from '../../../../shared/api/runs';
 import { canEdit } from '../../../../shared/api/roles';
-import { useSession } from '../../auth/hooks/session-context';
+import { useSession } from '../../../lib/session/session-context';
 import { mayChangeRun } from '../utils/run-permissions';
 
 export function useRunPermissions(organisationId: string | undefined) {

@@ -4,8 +4,8 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { scenarioSummarySchema, type CreateScenarioInput } from '../../../../shared/api/scenarios';
 import { api } from '../../../lib/api-client';
-import { projectKeys } from '../../projects/api/keys';
-import { scenarioKeys } from './keys';
+import { projectKeys } from '../../../lib/query-keys/projects';
+import { scenarioKeys } from '../../../lib/query-keys/scenarios';
 
 export const createScenario = (projectId: string, input: CreateScenarioInput) =>
   api.post(apiRoutes.projectScenarios(projectId), input, scenarioSummarySchema);

@@ -4,7 +4,7 @@ import { z } from 'zod';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { revisionSummarySchema } from '../../../../shared/api/scenarios';
 import { api } from '../../../lib/api-client';
-import { scenarioKeys } from './keys';
+import { scenarioKeys } from '../../../lib/query-keys/scenarios';
 
 const revisionListSchema = z.array(revisionSummarySchema);
 

@@ -3,7 +3,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { scenarioDetailSchema } from '../../../../shared/api/scenarios';
 import { api } from '../../../lib/api-client';
-import { scenarioKeys } from './keys';
+import { scenarioKeys } from '../../../lib/query-keys/scenarios';
 
 export const getScenario = (id: string, signal?: AbortSignal) => api.get(apiRoutes.scenario(id), scenarioDetailSchema, { signal });
 

@@ -4,7 +4,7 @@ import { z } from 'zod';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { scenarioSummarySchema } from '../../../../shared/api/scenarios';
 import { api } from '../../../lib/api-client';
-import { scenarioKeys } from './keys';
+import { scenarioKeys } from '../../../lib/query-keys/scenarios';
 
 const scenarioListSchema = z.array(scenarioSummarySchema);
 

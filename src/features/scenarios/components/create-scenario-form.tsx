@@ -11,8 +11,8 @@ import { SelectField, TextAreaField, TextField } from '../../../components/ui/fi
 import { useApiFormSubmit } from '../../../lib/use-api-form-submit';
 import { useCreateScenario } from '../api/create-scenario';
 import { scenarioQueryOptions } from '../api/get-scenario';
-import { exampleScenarios } from '../utils/examples';
-import { TEMPLATE_NOTES } from '../utils/template-notes';
+import { exampleScenarios } from '../../../lib/examples/examples';
+import { TEMPLATE_NOTES } from '../../../lib/examples/template-notes';
 
 const EXAMPLE = 'example:';
 const COPY = 'copy:';

@@ -1,5 +1,5 @@
 // Read-only view of the process: steps in order, each with its stations and mean cycle time.
-import { distributionMean } from '../../../../shared/scenario/distribution-moments';
+import { distributionMean } from '../../../../workers/engine/stats/distribution-moments';
 import type { Scenario } from '../../../../shared/scenario/scenario';
 import { formatLengthMm } from '../../../lib/format';
 

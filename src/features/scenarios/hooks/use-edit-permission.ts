@@ -2,7 +2,7 @@
 // being handed down: a page loaded directly can render once before the session context catches up
 // with the sign-in query, and `ready` lets it wait for that instead of failing.
 import { canEdit } from '../../../../shared/api/roles';
-import { useOptionalSession } from '../../auth/hooks/session-context';
+import { useOptionalSession } from '../../../lib/session/session-context';
 
 export function useEditPermission(organisationId: string | undefined): { ready: boolean; mayEdit: boolean } {
   const session = useOptionalSession();

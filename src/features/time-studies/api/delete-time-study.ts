@@ -3,7 +3,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { okSchema } from '../../../../shared/api/common';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { api } from '../../../lib/api-client';
-import { timeStudyKeys } from './keys';
+import { timeStudyKeys } from '../../../lib/query-keys/time-studies';
 
 export const deleteTimeStudy = (id: string) => api.delete(apiRoutes.timeStudy(id), okSchema);
 

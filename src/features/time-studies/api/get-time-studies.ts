@@ -3,7 +3,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { timeStudyListSchema } from '../../../../shared/api/time-studies';
 import { api } from '../../../lib/api-client';
-import { timeStudyKeys, type TimeStudyListScope } from './keys';
+import { timeStudyKeys, type TimeStudyListScope } from '../../../lib/query-keys/time-studies';
 
 export const getTimeStudies = ({ scenarioId, stationId }: TimeStudyListScope, signal?: AbortSignal) =>
   api.get(apiRoutes.scenarioTimeStudies(scenarioId), timeStudyListSchema, { query: { stationId }, signal });

@@ -3,7 +3,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { timeStudyDetailSchema } from '../../../../shared/api/time-studies';
 import { api } from '../../../lib/api-client';
-import { timeStudyKeys } from './keys';
+import { timeStudyKeys } from '../../../lib/query-keys/time-studies';
 
 export const getTimeStudy = (id: string, signal?: AbortSignal) => api.get(apiRoutes.timeStudy(id), timeStudyDetailSchema, { signal });
 

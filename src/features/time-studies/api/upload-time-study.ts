@@ -4,7 +4,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRoutes } from '../../../../shared/api/routes';
 import { timeStudyDetailSchema } from '../../../../shared/api/time-studies';
 import { api } from '../../../lib/api-client';
-import { timeStudyKeys } from './keys';
+import { timeStudyKeys } from '../../../lib/query-keys/time-studies';
 
 export interface UploadTimeStudyInput {
   scenarioId: string;

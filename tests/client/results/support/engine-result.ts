@@ -24,6 +24,7 @@ export function storedRun(results: RunResult, overrides: Partial<RunDetail> = {}
     name: 'Stacked, revision 2',
     seed: results.seed,
     engineVersion: results.engineVersion,
+    serverChecked: false,
     settings: RESULT_SETTINGS,
     summary: {
       throughputPerHour: results.throughputPerHour,

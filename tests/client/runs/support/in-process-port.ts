@@ -1,7 +1,7 @@
 // A simulation port that runs the real engine in the test's own thread, since happy-dom has no Web
 // Worker. It answers in the worker's outcome shape, and counts the runs it was asked for.
 import { InvalidInputError, runExperiment } from '../../../../workers/engine';
-import type { OpenSimulationPort } from '../../../../src/features/simulation/simulation-port';
+import type { OpenSimulationPort } from '../../../../src/features/runs/simulation/simulation-port';
 
 export function inProcessPorts() {
   const runs: { scenario: unknown; settings: unknown }[] = [];

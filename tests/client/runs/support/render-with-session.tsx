@@ -6,8 +6,8 @@ import type { ReactNode } from 'react';
 import { createMemoryRouter, RouterProvider, useParams } from 'react-router-dom';
 import { AppProvider, createAppQueryClient } from '../../../../src/app/provider';
 import { RequireAuth } from '../../../../src/features/auth/components/require-auth';
-import { SimulationPortContext } from '../../../../src/features/simulation/simulation-context';
-import type { OpenSimulationPort } from '../../../../src/features/simulation/simulation-port';
+import { SimulationPortContext } from '../../../../src/features/runs/simulation/simulation-context';
+import type { OpenSimulationPort } from '../../../../src/features/runs/simulation/simulation-port';
 
 function ResultStandIn() {
   const { runId } = useParams();

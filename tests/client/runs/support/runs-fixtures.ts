@@ -19,6 +19,7 @@ export function runItem(n: number, overrides: { throughput?: number; takt?: numb
     name: `Run ${n}`,
     seed: String(n),
     engineVersion: '1.1.0',
+    serverChecked: false,
     settings: runSettingsSchema.parse({ hours: 1, warmupMinutes: 5, replications: 3, seed: n }),
     summary: {
       throughputPerHour: interval(throughput, 4),

@@ -1,0 +1,78 @@
+// Carrier sizing: which counts to try, and which to recommend. The default range runs from one carrier
+// per station (fewer leaves a station waiting for work by construction) to the most the track holds.
+// The recommendation is the smallest count whose throughput is within a tolerance of the best and that
+// meets the target when any count does, said in words with the price paid beyond it in lead time.
+import type { Scenario } from '../../shared/scenario/scenario';
+import { trackCapacity } from '../engine';
+import type { PointStatistics } from './point-statistics';
+
+export const SIZING_DEFAULTS = { tolerance: 0.01, gridPoints: 20 } as const;
+
+/** Counts from `low` to `high` on the smallest whole step that keeps to about `points` of them; `high` always included. */
+export function carrierGrid(low: number, high: number, points: number = SIZING_DEFAULTS.gridPoints): number[] {
+  const from = Math.max(1, Math.floor(low));
+  const to = Math.max(from, Math.floor(high));
+  const raw = (to - from) / Math.max(1, points - 1);
+  const step = Math.max(1, Math.ceil(raw));
+  const counts: number[] = [];
+  for (let n = from; n < to; n += step) counts.push(n);
+  counts.push(to);
+  return counts;
+}
+
+export function defaultCarrierRange(s: Scenario): { low: number; high: number } {
+  const stations = s.steps.reduce((sum, step) => sum + step.stations.length, 0);
+  const high = trackCapacity(s);
+  return { low: Math.min(stations, high), high };
+}
+
+export type SizingPoint = { carriers: number; stats: PointStatistics };
+
+export type SizingAdvice =
+  | { kind: 'recommend'; carriers: number; best: number; meetsTarget: boolean | null; text: string }
+  | { kind: 'unreachable'; best: number; bestThroughput: number; limitingStation: string | null; text: string }
+  | { kind: 'none'; text: string };
+
+const pct = (x: number) => `${Math.round(x * 100)} %`;
+const perHour = (x: number) => `${x.toFixed(1)} parts/h`;
+
+/**
+ * @param targetPerHour the rate the target takt asks for (3600 / takt), or null without a target
+ * @param stationNames names in the order of the points' bottleneck shares
+ */
+export function recommendCarriers(points: SizingPoint[], targetPerHour: number | null, stationNames: string[], tolerance: number = SIZING_DEFAULTS.tolerance): SizingAdvice {
+  const usable = points.filter((p) => p.stats.throughput && (p.stats.state === 'done' || p.stats.state === 'partial')).sort((a, b) => a.carriers - b.carriers);
+  if (usable.length === 0) return { kind: 'none', text: 'No carrier count has finished yet, so there is nothing to recommend.' };
+  const rate = (p: SizingPoint) => p.stats.throughput!.mean;
+  const best = usable.reduce((a, b) => (rate(b) > rate(a) ? b : a));
+  const meets = (p: SizingPoint) => targetPerHour !== null && rate(p) >= targetPerHour;
+  const anyMeets = usable.some(meets);
+  if (targetPerHour !== null && !anyMeets) {
+    const shares = best.stats.bottleneckShares;
+    const top = shares.length > 0 ? shares.indexOf(Math.max(...shares)) : -1;
+    const limitingStation = top >= 0 ? (stationNames[top] ?? null) : null;
+    const limit = limitingStation ? ` Station ${limitingStation} limits the line: it is the bottleneck ${pct(shares[top])} of the time at ${best.carriers} carriers, so more carriers cannot help; shorten its cycle time or add a station beside it.` : '';
+    return {
+      kind: 'unreachable',
+      best: best.carriers,
+      bestThroughput: rate(best),
+      limitingStation,
+      text: `No carrier count reaches the target of ${perHour(targetPerHour)}: the most is ${perHour(rate(best))} at ${best.carriers} carriers.${limit}`,
+    };
+  }
+  const pick = usable.find((p) => rate(p) >= rate(best) * (1 - tolerance) && (!anyMeets || meets(p)))!;
+  const beyond = usable.filter((p) => p.carriers > pick.carriers);
+  const parts = [`${pick.carriers} carriers make ${perHour(rate(pick))}, within ${pct(tolerance)} of the best (${perHour(rate(best))} at ${best.carriers})`];
+  if (targetPerHour !== null) parts[0] += ` and meet the target of ${perHour(targetPerHour)}`;
+  parts[0] += '.';
+  if (beyond.length > 0) {
+    const last = beyond[beyond.length - 1];
+    const gain = rate(best) / rate(pick) - 1;
+    const leadPick = pick.stats.leadSeconds?.mean;
+    const leadLast = last.stats.leadSeconds?.mean;
+    const leadGrowth = leadPick && leadLast ? leadLast / leadPick - 1 : null;
+    const gainText = gain < tolerance ? `by less than ${pct(tolerance)}` : `by ${(gain * 100).toFixed(1)} %`;
+    parts.push(`Beyond ${pick.carriers} carriers throughput rises ${gainText}${leadGrowth !== null ? ` while lead time ${leadGrowth >= 0 ? 'grows' : 'falls'} ${pct(Math.abs(leadGrowth))} (at ${last.carriers})` : ''}.`);
+  }
+  return { kind: 'recommend', carriers: pick.carriers, best: best.carriers, meetsTarget: targetPerHour === null ? null : meets(pick), text: parts.join(' ') };
+}

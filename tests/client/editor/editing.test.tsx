@@ -89,6 +89,10 @@ describe('scenario editor', () => {
     // Step 2's only station is "Press": the list names it, never the internal path.
     expect(screen.getByRole('alert').textContent).toContain("Station 'Press', cycle time value: value must be at most 3600");
     expect(screen.getByRole('alert').textContent).not.toContain('steps[1]');
+    const alert = screen.getByRole('alert');
+    const pressItem = within(alert).getAllByRole('listitem').find((li) => li.textContent?.startsWith("Station 'Press'")) as HTMLElement;
+    await user.click(within(pressItem).getByRole('button', { name: 'Show the field' }));
+    await waitFor(() => expect(document.activeElement?.getAttribute('name')).toBe('steps.1.stations.0.cycleTimeSeconds.value'));
   });
 
   it('on a conflict keeps the draft and puts it on top of the revision saved meanwhile', async () => {

@@ -9,13 +9,18 @@ import { displayPath, type PathIssue } from '../utils/paths';
 /** Names the station and field of a dotted form path, from the draft being saved. */
 type DescribePath = (formPath: string) => string;
 
-function IssueList({ issues, describe }: { issues: PathIssue[]; describe: DescribePath }) {
+function IssueList({ issues, describe, onShow }: { issues: PathIssue[]; describe: DescribePath; onShow: (formPath: string) => void }) {
   const shown = issues.slice(0, 12);
   return (
     <ul className="mt-1 list-disc pl-5" data-issue-list>
       {shown.map((issue) => (
         <li key={`${issue.path}:${issue.message}`} data-issue-path={displayPath(issue.path)}>
-          {describe(issue.path)}: {issue.message}
+          {describe(issue.path)}: {issue.message}{' '}
+          {issue.path !== '' && (
+            <button type="button" className="text-sm font-semibold text-accent-strong underline underline-offset-4" onClick={() => onShow(issue.path)}>
+              Show the field
+            </button>
+          )}
         </li>
       ))}
       {issues.length > shown.length && <li>and {issues.length - shown.length} more, marked in the editor</li>}
@@ -29,9 +34,10 @@ interface SaveOutcomeProps {
   onKeepMine: () => void;
   rebasing: boolean;
   describe: DescribePath;
+  onShow: (formPath: string) => void;
 }
 
-export function SaveOutcomeMessage({ outcome, scenarioId, onKeepMine, rebasing, describe }: SaveOutcomeProps) {
+export function SaveOutcomeMessage({ outcome, scenarioId, onKeepMine, rebasing, describe, onShow }: SaveOutcomeProps) {
   if (!outcome) return null;
   switch (outcome.kind) {
     case 'saved':
@@ -44,14 +50,14 @@ export function SaveOutcomeMessage({ outcome, scenarioId, onKeepMine, rebasing, 
       return (
         <ErrorBanner title={`Not saved: ${outcome.issues.length} problem${outcome.issues.length === 1 ? '' : 's'} to fix first`}>
           <p>Each is marked beside its field; the section list shows where they are. Nothing you typed is lost.</p>
-          <IssueList issues={outcome.issues} describe={describe} />
+          <IssueList issues={outcome.issues} describe={describe} onShow={onShow} />
         </ErrorBanner>
       );
     case 'rejected':
       return (
         <ErrorBanner title="The server did not accept this revision">
           <p>{outcome.message} Your draft is unchanged.</p>
-          <IssueList issues={outcome.issues} describe={describe} />
+          <IssueList issues={outcome.issues} describe={describe} onShow={onShow} />
         </ErrorBanner>
       );
     case 'conflict': {

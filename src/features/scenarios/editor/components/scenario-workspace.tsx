@@ -18,7 +18,7 @@ import { describeFormPath } from '../utils/describe-issue';
 import { SaveOutcomeMessage } from './save-outcome';
 import { TemplatePicker } from './template-picker';
 import type { StationStudiesSlot } from '../editor-context';
-import { WorkspaceBody } from './workspace-body';
+import { WorkspaceBody, type FocusRequest } from './workspace-body';
 import { WorkspaceHistory } from './workspace-history';
 
 export interface ScenarioWorkspaceProps {
@@ -48,6 +48,7 @@ export function ScenarioWorkspace({ scenario, mayEdit, engineIssues, stationStud
   }, [engineIssues, replaceExternal]);
   const saving = useSaveDraft(scenario.id, draft, replaceExternal);
   const [message, setMessage] = useState('');
+  const [focus, setFocus] = useState<FocusRequest | null>(null);
   const messageId = useId();
 
   const exportDocument = () => {
@@ -113,6 +114,7 @@ export function ScenarioWorkspace({ scenario, mayEdit, engineIssues, stationStud
           onKeepMine={() => void saving.keepMineOnTop()}
           rebasing={saving.rebasing}
           describe={(path) => describeFormPath(path, draft.form.getValues())}
+          onShow={(path) => setFocus((last) => ({ path, seq: (last?.seq ?? 0) + 1 }))}
         />
         <div className="flex flex-wrap items-start justify-between gap-4 border-t border-paper-sunk pt-4">
           <ImportExport exportDocument={exportDocument} onImported={mayEdit ? draft.replaceDraft : undefined} />
@@ -123,7 +125,7 @@ export function ScenarioWorkspace({ scenario, mayEdit, engineIssues, stationStud
           )}
         </div>
       </Card>
-      <WorkspaceBody readOnly={!mayEdit} scenarioId={scenario.id} stationStudies={stationStudies} externalIssues={external} clearExternal={clearExternal} />
+      <WorkspaceBody readOnly={!mayEdit} focus={focus} scenarioId={scenario.id} stationStudies={stationStudies} externalIssues={external} clearExternal={clearExternal} />
       <WorkspaceHistory scenarioId={scenario.id} draft={draft} mayEdit={mayEdit} />
     </FormProvider>
   );

@@ -1,6 +1,6 @@
 // The editor beside the live drawing, and the line balance under them. Shared by the editable
 // workspace and the read-only view of an old revision; the form comes from the surrounding provider.
-import { useCallback, useMemo, useRef, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { useWatch } from 'react-hook-form';
 import { LineBalanceChart } from '../../../../components/charts';
 import { Card, CardTitle } from '../../../../components/ui/card';
@@ -9,7 +9,7 @@ import type { LayoutDraft } from '../../../../components/layout/layout-model';
 import type { LayoutSelection } from '../../../../components/layout/selection';
 import { EditorContext, useEditor, type ScenarioForm, type StationStudiesSlot } from '../editor-context';
 import { balanceSteps } from '../utils/line-balance';
-import type { SectionId } from '../utils/paths';
+import { sectionOf, type SectionId } from '../utils/paths';
 import { ScenarioEditor } from './scenario-editor';
 
 function DraftDrawing() {
@@ -28,8 +28,15 @@ function DraftBalance() {
   return <LineBalanceChart steps={balance} taktSeconds={takt} title="Line balance against the target takt (before simulation)" exportName="line-balance" />;
 }
 
+/** A field to open and focus, e.g. from the list of save problems; `seq` repeats a request. */
+export interface FocusRequest {
+  path: string;
+  seq: number;
+}
+
 interface WorkspaceBodyProps {
   readOnly: boolean;
+  focus?: FocusRequest | null;
   /** Lets station forms show the time studies stored with this scenario. */
   scenarioId?: string;
   /** What station forms show below the cycle time (the app mounts the time studies). */
@@ -40,10 +47,23 @@ interface WorkspaceBodyProps {
 
 const NO_ISSUES: Readonly<Record<string, string>> = {};
 
-export function WorkspaceBody({ readOnly, scenarioId, stationStudies, externalIssues = NO_ISSUES, clearExternal }: WorkspaceBodyProps) {
+export function WorkspaceBody({ readOnly, focus, scenarioId, stationStudies, externalIssues = NO_ISSUES, clearExternal }: WorkspaceBodyProps) {
   const [selection, setSelection] = useState<LayoutSelection>(null);
   const [section, setSection] = useState<SectionId>('general');
   const editorRef = useRef<HTMLElement>(null);
+  useEffect(() => {
+    if (!focus) return;
+    setSection(sectionOf(focus.path));
+    const station = /^steps\.(\d+)\.stations\.(\d+)(\.|$)/.exec(focus.path);
+    if (station) setSelection({ kind: 'station', stepIndex: Number(station[1]), stationIndex: Number(station[2]) });
+    // The field mounts once its section and station are open, after this render.
+    const timer = setTimeout(() => {
+      const field = document.querySelector<HTMLElement>(`[name="${CSS.escape(focus.path)}"]`);
+      field?.scrollIntoView?.({ block: 'center' });
+      field?.focus();
+    }, 0);
+    return () => clearTimeout(timer);
+  }, [focus]);
   const select = useCallback((next: LayoutSelection, from: 'drawing' | 'editor' = 'editor') => {
     setSelection(next);
     if (next?.kind === 'lane') setSection('lanes');

@@ -1,5 +1,5 @@
 // `npm run bench:api`: the API under load on loopback. A fresh database with the demo organisation and a
-// long run history (BENCH_RUNS stored runs of real engine results), 50 signed-in users for BENCH_SECONDS per
+// long run history (`--runs` stored runs of real engine results), 50 signed-in users for `--seconds` per
 // round listing projects, listing the project's runs and reading a run. Prints requests per second, p50/p95/
 // p99 latency and errors per round and their median; exits non-zero on any error. Bounded in time.
 import 'reflect-metadata';
@@ -16,9 +16,16 @@ import { startServer } from '../index';
 import { createDatabase, dropDatabase, ensureLocalPostgres } from '../setup/local-postgres';
 
 const USERS = 50;
-const SECONDS = Number(process.env.BENCH_SECONDS ?? 30);
-const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 3);
-const RUNS = Number(process.env.BENCH_RUNS ?? 342);
+// Options as `--seconds=30 --rounds=3 --runs=342` (command-line flags, so nothing reads the environment here).
+function option(name: string, fallback: number): number {
+  const flag = process.argv.find((arg) => arg.startsWith(`--${name}=`));
+  const value = flag ? Number(flag.slice(name.length + 3)) : fallback;
+  if (!Number.isFinite(value) || value <= 0) throw new Error(`--${name} must be a positive number (got ${flag})`);
+  return value;
+}
+const SECONDS = option('seconds', 30);
+const ROUNDS = option('rounds', 3);
+const RUNS = option('runs', 342);
 
 function percentile(sorted: number[], p: number): number {
   if (sorted.length === 0) return NaN;

@@ -16,7 +16,7 @@ import { startSession } from '../auth/start-session';
 import { MembershipEntity, OrganisationEntity, UserEntity } from '../db/entities';
 import { alreadyRegisteredMail, signUpMail } from '../mail/messages';
 import { sendInBackground } from '../mail/mailer';
-import { badRequest, HttpError, unauthenticated } from '../http/http-error';
+import { badRequest, unauthenticated } from '../http/http-error';
 import { publicLink } from '../http/public-link';
 import { currentUser } from '../http/request-context';
 import { validate } from '../http/validate';

@@ -22,7 +22,7 @@ export interface PlaybackPort {
 }
 
 function spawnWorker() {
-  const worker = new Worker(new URL('../../../workers/simulation.worker.ts', import.meta.url), { type: 'module', name: 'lanewright-simulation' });
+  const worker = new Worker(new URL('../../../../workers/simulation.worker.ts', import.meta.url), { type: 'module', name: 'lanewright-simulation' });
   const remote = Comlink.wrap<SimulationWorkerApi>(worker);
   // A worker that fails to load or crashes answers nothing over comlink; its error event is the only news.
   const crashed = new Promise<never>((_, reject) => {

@@ -58,8 +58,16 @@ export function revisionsRouter(ctx: AppContext) {
           ]);
         }
         const revision = await manager.getRepository(ScenarioRevisionEntity).save({ scenarioId: scenario.id, number: latest.number + 1, document: body.document, message: body.message ?? '', createdById: user.id });
-        // The document's name is the scenario's name: saving a new one renames the scenario.
-        await manager.getRepository(ScenarioEntity).update({ id: scenario.id }, { latestRevisionId: revision.id, name: body.document.name });
+        // A name changed in the document renames the scenario; an unchanged one leaves a scenario named
+        // apart from its document (a copy, the demo's short names) as it was.
+        const previous = await manager
+          .getRepository(ScenarioRevisionEntity)
+          .createQueryBuilder('r')
+          .select("r.document->>'name'", 'name')
+          .where('r.id = :id', { id: latest.id })
+          .getRawOne<{ name: string | null }>();
+        const renamed = previous?.name !== body.document.name;
+        await manager.getRepository(ScenarioEntity).update({ id: scenario.id }, { latestRevisionId: revision.id, ...(renamed ? { name: body.document.name } : {}) });
         await touchProject(manager, locked.projectId);
         await recordAudit(manager, { organisationId: scenario.project?.organisationId ?? null, actorId: user.id, action: 'create', entity: 'revision', entityId: revision.id, detail: { scenarioId: scenario.id, number: revision.number } });
         return revision.id;

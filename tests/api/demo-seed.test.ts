@@ -8,6 +8,7 @@ import { DEMO_ACCOUNTS, DEMO_ORGANISATION_ID, DEMO_PASSWORD, seedDemo } from '..
 import { OrganisationEntity, ProjectEntity, ScenarioRevisionEntity, UserEntity } from '../../server/db/entities';
 import { useCleanDatabase } from './fixtures/database';
 import { appFor } from './fixtures/app';
+import { mailTo, tokenIn } from './fixtures/mail';
 import { sideBySideLoop, stackedLoop } from './fixtures/documents';
 
 const db = useCleanDatabase();
@@ -62,7 +63,11 @@ describe('demo seed', () => {
 
   it('refuses to take over an existing account that uses a demo e-mail', async () => {
     const app = appFor(db());
-    const res = await request(app).post(apiRoutes.signUp).send({ email: 'owner@demo.lanewright.test', password: 'someone-else-1', name: 'Someone', organisationName: 'Elsewhere' });
+    const email = 'owner@demo.lanewright.test';
+    const asked = await request(app).post(apiRoutes.signUp).send({ email, password: 'someone-else-1', name: 'Someone', organisationName: 'Elsewhere' });
+    expect(asked.status).toBe(202);
+    const token = tokenIn(await mailTo(email, /Finish creating/));
+    const res = await request(app).post('/api/auth/sign-up/confirm').send({ token });
     expect(res.status).toBe(201);
     await expect(seedDemo(db())).rejects.toThrow(/already belong/);
     expect(await db().getRepository(OrganisationEntity).count()).toBe(1);

@@ -45,7 +45,8 @@ describe('a carrier-sizing study of the demo scenario', () => {
     await form.getByLabel('Question').selectOption('carrierSizing');
     await expect.poll(() => form.getByLabel('Fewest carriers').inputValue()).not.toBe('1');
     await form.getByLabel('Name', { exact: true }).fill('How many carriers?');
-    await form.getByLabel('Hours per replication').fill('20');
+    // Long enough that Cancel comes while jobs are still running, even on a quiet machine.
+    await form.getByLabel('Hours per replication').fill('60');
     await form.getByLabel('Warm-up (min)').fill('10');
     await form.getByLabel('Replications').fill('4');
     await form.getByLabel('Counts to try').fill('8');

@@ -47,7 +47,8 @@ export function ProjectStudiesRoute() {
           </Link>
         }
         description="A study runs one scenario many times over, at several carrier counts or settings, and answers with a chart and a recommendation."
-        actions={startButton || undefined}
+        // The empty state carries the button while there are no studies, so the page never shows two.
+        actions={(studies.data?.length ?? 0) > 0 ? startButton || undefined : undefined}
       />
       {creating && chosen && (
         <TitledCard title="New study" className="max-w-3xl">

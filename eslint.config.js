@@ -13,7 +13,8 @@ const featureZones = features.map((feature) => ({
   target: `./src/features/${feature}`,
   from: './src/features',
   except: [`./${feature}`],
-  message: 'Features do not import one another: compose them in src/app/routes, or move the shared piece to src/lib or src/components.',
+  message:
+    'Features do not import one another: compose them in src/app/routes, or move the shared piece to src/lib or src/components.',
 }));
 
 export default tseslint.config(
@@ -21,7 +22,9 @@ export default tseslint.config(
   ...tseslint.configs.recommended,
   {
     plugins: { 'import-x': importX },
-    settings: { 'import-x/resolver-next': [createNodeResolver({ extensions: ['.ts', '.tsx', '.js', '.mjs', '.json'] })] },
+    settings: {
+      'import-x/resolver-next': [createNodeResolver({ extensions: ['.ts', '.tsx', '.js', '.mjs', '.json'] })],
+    },
     rules: {
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
       'import-x/no-cycle': 'error',
@@ -29,13 +32,33 @@ export default tseslint.config(
         'error',
         {
           zones: [
-            { target: './shared', from: ['./src', './server', './workers', './tests'], message: 'shared/ holds schemas only and imports nothing but zod.' },
-            { target: './workers', from: ['./src', './server'], message: 'The simulation knows nothing of React, HTTP or the database.' },
+            {
+              target: './shared',
+              from: ['./src', './server', './workers', './tests'],
+              message: 'shared/ holds schemas only and imports nothing but zod.',
+            },
+            {
+              target: './workers',
+              from: ['./src', './server'],
+              message: 'The simulation knows nothing of React, HTTP or the database.',
+            },
             { target: './server', from: './src', message: 'The server never imports client code.' },
             { target: './src', from: './server', message: 'The client talks to the server over HTTP only.' },
-            { target: './src/components', from: ['./src/features', './src/app'], message: 'Shared UI pieces know no feature or route.' },
-            { target: './src/lib', from: ['./src/features', './src/app'], message: 'Client libraries know no feature or route.' },
-            { target: './src/features', from: './src/app', message: 'Features are composed by app/, never the other way round.' },
+            {
+              target: './src/components',
+              from: ['./src/features', './src/app'],
+              message: 'Shared UI pieces know no feature or route.',
+            },
+            {
+              target: './src/lib',
+              from: ['./src/features', './src/app'],
+              message: 'Client libraries know no feature or route.',
+            },
+            {
+              target: './src/features',
+              from: './src/app',
+              message: 'Features are composed by app/, never the other way round.',
+            },
             ...featureZones,
           ],
         },
@@ -46,13 +69,20 @@ export default tseslint.config(
     // Environment variables are read through one parsed configuration per program: the server's
     // (server/config.ts), the set-up scripts' (server/setup/setup-config.ts) and the test run's
     // (tests/support/test-env.ts). Passing the whole environment on to a child process is fine.
-    ignores: ['server/config.ts', 'server/setup/setup-config.ts', 'tests/support/test-env.ts', 'server/setup/ensure-deps.mjs'],
+    ignores: [
+      'server/config.ts',
+      'server/setup/setup-config.ts',
+      'tests/support/test-env.ts',
+      'server/setup/ensure-deps.mjs',
+    ],
     rules: {
       'no-restricted-syntax': [
         'error',
         {
-          selector: "MemberExpression[object.type='MemberExpression'][object.object.name='process'][object.property.name='env']",
-          message: 'Read environment variables through the parsed configuration (server/config.ts, server/setup/setup-config.ts or tests/support/test-env.ts).',
+          selector:
+            "MemberExpression[object.type='MemberExpression'][object.object.name='process'][object.property.name='env']",
+          message:
+            'Read environment variables through the parsed configuration (server/config.ts, server/setup/setup-config.ts or tests/support/test-env.ts).',
         },
       ],
     },
@@ -69,7 +99,18 @@ export default tseslint.config(
   {
     files: ['workers/engine/**'],
     rules: {
-      'no-restricted-globals': ['error', 'window', 'document', 'navigator', 'localStorage', 'sessionStorage', 'fetch', 'XMLHttpRequest', 'process', 'Buffer'],
+      'no-restricted-globals': [
+        'error',
+        'window',
+        'document',
+        'navigator',
+        'localStorage',
+        'sessionStorage',
+        'fetch',
+        'XMLHttpRequest',
+        'process',
+        'Buffer',
+      ],
       'no-restricted-imports': ['error', { patterns: ['node:*', 'react', 'react-dom', 'express', 'typeorm', 'pg'] }],
     },
   },

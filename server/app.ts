@@ -71,7 +71,11 @@ export function createApp(opts: CreateAppOptions): express.Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', opts.trustProxy ?? false);
-  app.use(refuseUnknownHosts(allowedHostNames({ publicOrigin, listenHost: opts.listenHost, allowedHosts: opts.allowedHosts })));
+  app.use(
+    refuseUnknownHosts(
+      allowedHostNames({ publicOrigin, listenHost: opts.listenHost, allowedHosts: opts.allowedHosts }),
+    ),
+  );
   app.set('etag', false);
   app.use(securityHeaders(publicOrigin?.startsWith('https:') ?? false));
 
@@ -82,11 +86,31 @@ export function createApp(opts: CreateAppOptions): express.Express {
     next();
   });
   api.use(exceptTimeStudyUploads(requireJsonBody));
-  const parsers = Object.fromEntries(Object.entries(BODY_LIMITS).map(([kind, limit]) => [kind, express.json({ limit, strict: true, verify: noteSuspectText })]));
+  const parsers = Object.fromEntries(
+    Object.entries(BODY_LIMITS).map(([kind, limit]) => [
+      kind,
+      express.json({ limit, strict: true, verify: noteSuspectText }),
+    ]),
+  );
   api.use((req, res, next) => parsers[bodyKindOf(req)](req, res, next));
   api.use(refuseUnstorableText);
   api.use(loadSession(ctx.auth, publicOrigin));
-  for (const router of [authRouter, projectsRouter, scenariosRouter, revisionsRouter, runsRouter, studiesRouter, membersRouter, invitationsRouter, accountRouter, sharesRouter, priceListsRouter, auditRouter, timeStudiesRouter]) api.use(router(ctx));
+  for (const router of [
+    authRouter,
+    projectsRouter,
+    scenariosRouter,
+    revisionsRouter,
+    runsRouter,
+    studiesRouter,
+    membersRouter,
+    invitationsRouter,
+    accountRouter,
+    sharesRouter,
+    priceListsRouter,
+    auditRouter,
+    timeStudiesRouter,
+  ])
+    api.use(router(ctx));
   if (ctx.mailbox) api.use(mailboxRouter(ctx.mailbox));
   api.use(unknownApiRoute);
   app.use('/api', api);

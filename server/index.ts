@@ -31,7 +31,10 @@ export async function startServer(opts: StartServerOptions): Promise<RunningServ
   if (!opts.dataSource.isInitialized) await opts.dataSource.initialize();
   // Parsing the whole environment here makes a bad setting stop the start with a readable list.
   const config = loadConfig();
-  const mail = await setUpMail({ ...config, LANEWRIGHT_FAKE_SMTP_PORT: opts.fakeSmtpPort ?? config.LANEWRIGHT_FAKE_SMTP_PORT });
+  const mail = await setUpMail({
+    ...config,
+    LANEWRIGHT_FAKE_SMTP_PORT: opts.fakeSmtpPort ?? config.LANEWRIGHT_FAKE_SMTP_PORT,
+  });
   const app = createApp({
     dataSource: opts.dataSource,
     clientDir: opts.clientDir,

@@ -26,7 +26,9 @@ function ensureChromium(): void {
 
 function hasBrowserTests(): boolean {
   const folder = join(projectRoot, 'tests', 'browser');
-  return existsSync(folder) && readdirSync(folder, { recursive: true }).some((file) => String(file).endsWith('.test.ts'));
+  return (
+    existsSync(folder) && readdirSync(folder, { recursive: true }).some((file) => String(file).endsWith('.test.ts'))
+  );
 }
 
 function runVitest(args: string[], env: NodeJS.ProcessEnv): Promise<number> {
@@ -34,7 +36,11 @@ function runVitest(args: string[], env: NodeJS.ProcessEnv): Promise<number> {
   // Our reporter comes from vite.config.ts, unless the caller chose reporters: then add it to theirs.
   const reporterArgs = args.some((arg) => arg.startsWith('--reporter')) ? [`--reporter=${REPORTER}`] : [];
   // Piped rather than inherited: vitest then prints plain lines instead of redrawing a live summary.
-  const child = spawn(process.execPath, [vitest, 'run', ...args, ...reporterArgs], { cwd: projectRoot, env, stdio: ['ignore', 'pipe', 'pipe'] });
+  const child = spawn(process.execPath, [vitest, 'run', ...args, ...reporterArgs], {
+    cwd: projectRoot,
+    env,
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
   child.stdout.pipe(process.stdout, { end: false });
   child.stderr.pipe(process.stderr, { end: false });
   const forward = (signal: NodeJS.Signals) => child.kill(signal);
@@ -130,7 +136,9 @@ async function main(): Promise<number> {
   }
   if (setupFailures > 0) say(`${setupFailures} set-up step(s) failed (counted as failures below)`);
   if (staticCounts.failed > 0) say(`${staticCounts.failed} static check(s) failed (counted as failures below)`);
-  console.log(`${(passed ?? 0) + staticCounts.passed} passed, ${failures} failed${skipped ? `, ${skipped} skipped` : ''}`);
+  console.log(
+    `${(passed ?? 0) + staticCounts.passed} passed, ${failures} failed${skipped ? `, ${skipped} skipped` : ''}`,
+  );
   return failures > 0 ? Math.max(exitCode, 1) : exitCode;
 }
 

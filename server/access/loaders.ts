@@ -10,7 +10,10 @@ import { currentUser } from '../http/request-context';
 import { parseInput } from '../http/validate';
 import { roleIn } from './membership';
 
-type Finder = (ctx: AppContext, id: string) => Promise<{ organisationId: string; attach: (req: Request) => void } | null>;
+type Finder = (
+  ctx: AppContext,
+  id: string,
+) => Promise<{ organisationId: string; attach: (req: Request) => void } | null>;
 
 function loader(what: string, find: Finder) {
   return (ctx: AppContext): RequestHandler =>
@@ -37,8 +40,12 @@ export const loadProject = loader('The project', async ({ ds }, id) => {
 });
 
 export const loadScenario = loader('The scenario', async ({ ds }, id) => {
-  const scenario = await ds.getRepository(ScenarioEntity).findOne({ where: { id }, relations: { project: true, createdBy: true } });
-  return scenario?.project ? { organisationId: scenario.project.organisationId, attach: (req) => (req.scenario = scenario) } : null;
+  const scenario = await ds
+    .getRepository(ScenarioEntity)
+    .findOne({ where: { id }, relations: { project: true, createdBy: true } });
+  return scenario?.project
+    ? { organisationId: scenario.project.organisationId, attach: (req) => (req.scenario = scenario) }
+    : null;
 });
 
 export const loadRun = loader('The run', async ({ ds }, id) => {

@@ -4,7 +4,9 @@ import type { Role } from '../../shared/api/roles';
 import { MembershipEntity } from '../db/entities';
 
 export async function roleIn(ds: DataSource, organisationId: string, userId: string): Promise<Role | null> {
-  const membership = await ds.getRepository(MembershipEntity).findOne({ where: { organisationId, userId }, select: { role: true } });
+  const membership = await ds
+    .getRepository(MembershipEntity)
+    .findOne({ where: { organisationId, userId }, select: { role: true } });
   return membership?.role ?? null;
 }
 

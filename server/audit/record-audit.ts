@@ -18,7 +18,11 @@ export async function recordAudit(manager: EntityManager, input: AuditInput): Pr
 }
 
 /** Runs `work` in a transaction and records the audit row it describes (from its result, if needed). */
-export function audited<T>(ds: DataSource, work: (manager: EntityManager) => Promise<T>, entry: AuditInput | ((result: T) => AuditInput)): Promise<T> {
+export function audited<T>(
+  ds: DataSource,
+  work: (manager: EntityManager) => Promise<T>,
+  entry: AuditInput | ((result: T) => AuditInput),
+): Promise<T> {
   return ds.transaction(async (manager) => {
     const result = await work(manager);
     await recordAudit(manager, typeof entry === 'function' ? entry(result) : entry);

@@ -9,9 +9,10 @@ import { hashLinkToken, newLinkToken } from './link-tokens';
 export const LINKS_PER_ADDRESS_PER_HOUR = 5;
 
 export const invalidLink = () =>
-  badRequest('This link is no longer valid: it was already used, replaced by a newer one, or has expired. Ask for a new one.', [
-    { path: 'token', message: 'is no longer valid' },
-  ]);
+  badRequest(
+    'This link is no longer valid: it was already used, replaced by a newer one, or has expired. Ask for a new one.',
+    [{ path: 'token', message: 'is no longer valid' }],
+  );
 
 interface IssueInput {
   purpose: TokenPurpose;
@@ -39,14 +40,23 @@ export async function issueToken(manager: EntityManager, input: IssueInput): Pro
 }
 
 export async function mayMailAnotherLink(ds: DataSource, purpose: TokenPurpose, email: string): Promise<boolean> {
-  const recent = await ds.getRepository(OneTimeTokenEntity).countBy({ purpose, email, createdAt: MoreThan(new Date(Date.now() - 3_600_000)) });
+  const recent = await ds
+    .getRepository(OneTimeTokenEntity)
+    .countBy({ purpose, email, createdAt: MoreThan(new Date(Date.now() - 3_600_000)) });
   return recent < LINKS_PER_ADDRESS_PER_HOUR;
 }
 
 /** Marks the token spent and returns its row, or throws the one "no longer valid" answer. */
-export async function spendToken(manager: EntityManager, purpose: TokenPurpose, token: string): Promise<OneTimeTokenEntity> {
+export async function spendToken(
+  manager: EntityManager,
+  purpose: TokenPurpose,
+  token: string,
+): Promise<OneTimeTokenEntity> {
   const repo = manager.getRepository(OneTimeTokenEntity);
-  const row = await repo.findOne({ where: { tokenHash: hashLinkToken(token), purpose }, lock: { mode: 'pessimistic_write' } });
+  const row = await repo.findOne({
+    where: { tokenHash: hashLinkToken(token), purpose },
+    lock: { mode: 'pessimistic_write' },
+  });
   if (!row || row.usedAt || row.expiresAt.getTime() <= Date.now()) throw invalidLink();
   await repo.update({ id: row.id }, { usedAt: new Date() });
   return row;

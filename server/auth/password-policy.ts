@@ -23,10 +23,22 @@ export function passwordProblem(password: string, owner: PasswordOwner): FieldIs
   const email = owner.email.toLowerCase();
   const localPart = email.split('@')[0];
   if (lower.includes(email) || (localPart.length >= 4 && lower.includes(localPart))) {
-    return { path: 'password', message: 'must not contain your e-mail address; choose something unrelated to your account' };
+    return {
+      path: 'password',
+      message: 'must not contain your e-mail address; choose something unrelated to your account',
+    };
   }
-  const result = zxcvbn.check(password.slice(0, ANALYSED_LENGTH), [email, localPart, owner.name ?? '', owner.organisationName ?? ''].filter((s) => s !== ''));
+  const result = zxcvbn.check(
+    password.slice(0, ANALYSED_LENGTH),
+    [email, localPart, owner.name ?? '', owner.organisationName ?? ''].filter((s) => s !== ''),
+  );
   if (result.score >= MIN_SCORE) return null;
-  const why = result.feedback.warning === 'userInputs' ? 'is built from your name or e-mail' : 'is one of the most commonly used passwords or too close to one';
-  return { path: 'password', message: `${why}; a few unrelated words or a longer phrase is both easier to remember and safer` };
+  const why =
+    result.feedback.warning === 'userInputs'
+      ? 'is built from your name or e-mail'
+      : 'is one of the most commonly used passwords or too close to one';
+  return {
+    path: 'password',
+    message: `${why}; a few unrelated words or a longer phrase is both easier to remember and safer`,
+  };
 }

@@ -29,12 +29,25 @@ const keyOf = (kind: string, value: string) => `${kind}:${createHash('sha256').u
 
 function tooMany(res: RateLimiterRes): HttpError {
   const seconds = Math.max(1, Math.ceil(res.msBeforeNext / 1000));
-  return new HttpError(429, 'rate_limited', `Too many sign-in attempts; try again in ${Math.ceil(seconds / 60)} minute(s).`, [], { 'Retry-After': String(seconds) });
+  return new HttpError(
+    429,
+    'rate_limited',
+    `Too many sign-in attempts; try again in ${Math.ceil(seconds / 60)} minute(s).`,
+    [],
+    { 'Retry-After': String(seconds) },
+  );
 }
 
 export function createSignInLimiter(ds: DataSource, limits: SignInLimits = DEFAULT_SIGN_IN_LIMITS): SignInLimiter {
   const store = (points: number) =>
-    new RateLimiterPostgres({ storeClient: ds, storeType: 'typeorm', tableName: 'sign_in_attempts', tableCreated: true, points, duration: limits.windowSeconds });
+    new RateLimiterPostgres({
+      storeClient: ds,
+      storeType: 'typeorm',
+      tableName: 'sign_in_attempts',
+      tableCreated: true,
+      points,
+      duration: limits.windowSeconds,
+    });
   const accounts = store(limits.perAccount);
   const addresses = store(limits.perAddress);
   const consume = async (limiter: RateLimiterPostgres, key: string) => {

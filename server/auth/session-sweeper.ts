@@ -8,7 +8,11 @@ const HOUR_MS = 60 * 60 * 1000;
 export function sweepExpiredSessions(ds: DataSource, everyMs = HOUR_MS): () => void {
   const adapter = createSessionAdapter(ds);
   const sweep = () => {
-    adapter.deleteExpiredSessions().catch((error: unknown) => console.error('Could not delete expired sessions:', error instanceof Error ? error.message : error));
+    adapter
+      .deleteExpiredSessions()
+      .catch((error: unknown) =>
+        console.error('Could not delete expired sessions:', error instanceof Error ? error.message : error),
+      );
   };
   sweep();
   const timer = setInterval(sweep, everyMs);

@@ -9,7 +9,14 @@ import type { SignedInUser } from '../http/request-context';
 import { toMe } from '../mappers/organisations';
 import { writeSessionCookie } from './session-cookie';
 
-export async function startSession(ctx: AppContext, req: Request, res: Response, user: SignedInUser, status: number, wrap: (me: Me) => unknown = (me) => me): Promise<void> {
+export async function startSession(
+  ctx: AppContext,
+  req: Request,
+  res: Response,
+  user: SignedInUser,
+  status: number,
+  wrap: (me: Me) => unknown = (me) => me,
+): Promise<void> {
   if (req.sessionId) await ctx.auth.invalidateSession(req.sessionId);
   const session = await ctx.auth.createSession(user.id, {});
   await ctx.ds.getRepository(UserEntity).update({ id: user.id }, { lastSignInAt: new Date() });

@@ -58,12 +58,18 @@ async function seedHistory(ds: ReturnType<typeof createDataSource>): Promise<{ p
     createdById: author.id,
   }));
   for (let i = 0; i < rows.length; i += 50) await ds.getRepository(RunEntity).insert(rows.slice(i, i + 50));
-  const run = await ds.getRepository(RunEntity).findOneOrFail({ where: { scenarioId: scenario.id }, select: { id: true } });
+  const run = await ds
+    .getRepository(RunEntity)
+    .findOneOrFail({ where: { scenarioId: scenario.id }, select: { id: true } });
   return { projectId: project.id, runId: run.id };
 }
 
 async function signIn(url: string, email: string): Promise<string> {
-  const res = await fetch(`${url}/api/auth/sign-in`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password: DEMO_PASSWORD }) });
+  const res = await fetch(`${url}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
+  });
   if (res.status !== 200) throw new Error(`sign-in answered ${res.status}`);
   return (res.headers.get('set-cookie') ?? '').split(';')[0];
 }
@@ -86,22 +92,27 @@ async function round(url: string, paths: string[], cookies: string[]): Promise<R
     finish = resolve;
     fail = reject;
   });
-  const instance = autocannon({
-    url,
-    connections: USERS,
-    duration: SECONDS,
-    // Each connection is one user with their own session, cycling through the three reads.
-    requests: paths.map((path) => ({
-      path,
-      method: 'GET' as const,
-      setupRequest: (req: autocannon.Request, context: object) => {
-        const user = context as { cookie?: string };
-        user.cookie ??= cookies[next++ % cookies.length];
-        return { ...req, headers: { ...req.headers, Cookie: user.cookie } };
-      },
-    })),
-  }, (error, result) => (error ? fail(error) : finish(result)));
-  instance.on('response', (_client: unknown, _status: number, _bytes: number, responseTime: number) => latencies.push(responseTime));
+  const instance = autocannon(
+    {
+      url,
+      connections: USERS,
+      duration: SECONDS,
+      // Each connection is one user with their own session, cycling through the three reads.
+      requests: paths.map((path) => ({
+        path,
+        method: 'GET' as const,
+        setupRequest: (req: autocannon.Request, context: object) => {
+          const user = context as { cookie?: string };
+          user.cookie ??= cookies[next++ % cookies.length];
+          return { ...req, headers: { ...req.headers, Cookie: user.cookie } };
+        },
+      })),
+    },
+    (error, result) => (error ? fail(error) : finish(result)),
+  );
+  instance.on('response', (_client: unknown, _status: number, _bytes: number, responseTime: number) =>
+    latencies.push(responseTime),
+  );
   const result = await done;
   latencies.sort((a, b) => a - b);
   return {
@@ -127,25 +138,40 @@ async function main(): Promise<void> {
   const server = await startServer({ dataSource: ds, port: 0, host: '127.0.0.1' });
   try {
     const cookies: string[] = [];
-    for (let i = 0; i < USERS; i += 1) cookies.push(await signIn(server.url, DEMO_ACCOUNTS[i % DEMO_ACCOUNTS.length].email));
+    for (let i = 0; i < USERS; i += 1)
+      cookies.push(await signIn(server.url, DEMO_ACCOUNTS[i % DEMO_ACCOUNTS.length].email));
     const paths = ['/api/projects', `/api/projects/${projectId}/runs?limit=50`, `/api/runs/${runId}`];
     for (const path of paths) {
       const started = performance.now();
-      for (let i = 0; i < 5; i += 1) await (await fetch(`${server.url}${path}`, { headers: { Cookie: cookies[0] } })).arrayBuffer();
-      console.log(`one user, ${path.split('?')[0].replace(/[0-9a-f-]{36}/g, ':id')}: ${((performance.now() - started) / 5).toFixed(1)} ms per request`);
+      for (let i = 0; i < 5; i += 1)
+        await (await fetch(`${server.url}${path}`, { headers: { Cookie: cookies[0] } })).arrayBuffer();
+      console.log(
+        `one user, ${path.split('?')[0].replace(/[0-9a-f-]{36}/g, ':id')}: ${((performance.now() - started) / 5).toFixed(1)} ms per request`,
+      );
     }
-    const sizes = await Promise.all(paths.map(async (path) => (await (await fetch(`${server.url}${path}`, { headers: { Cookie: cookies[0] } })).arrayBuffer()).byteLength));
-    console.log(`${RUNS} stored runs; answer sizes: ${paths.map((p, i) => `${p.split('?')[0].replace(/[0-9a-f-]{36}/g, ':id')} ${(sizes[i] / 1024).toFixed(1)} KB`).join(', ')}`);
+    const sizes = await Promise.all(
+      paths.map(
+        async (path) =>
+          (await (await fetch(`${server.url}${path}`, { headers: { Cookie: cookies[0] } })).arrayBuffer()).byteLength,
+      ),
+    );
+    console.log(
+      `${RUNS} stored runs; answer sizes: ${paths.map((p, i) => `${p.split('?')[0].replace(/[0-9a-f-]{36}/g, ':id')} ${(sizes[i] / 1024).toFixed(1)} KB`).join(', ')}`,
+    );
     console.log(`${USERS} users, ${ROUNDS} round(s) of ${SECONDS} s on loopback\n`);
     console.log('round  requests/s   p50 ms   p95 ms   p99 ms   errors');
     const rounds: Round[] = [];
     for (let r = 0; r < ROUNDS; r += 1) {
       const result = await round(server.url, paths, cookies);
       rounds.push(result);
-      console.log(`${String(r + 1).padStart(5)}  ${result.requestsPerSecond.toFixed(0).padStart(10)}  ${result.p50.toFixed(0).padStart(7)}  ${result.p95.toFixed(0).padStart(7)}  ${result.p99.toFixed(0).padStart(7)}  ${String(result.errors).padStart(7)}`);
+      console.log(
+        `${String(r + 1).padStart(5)}  ${result.requestsPerSecond.toFixed(0).padStart(10)}  ${result.p50.toFixed(0).padStart(7)}  ${result.p95.toFixed(0).padStart(7)}  ${result.p99.toFixed(0).padStart(7)}  ${String(result.errors).padStart(7)}`,
+      );
     }
     const errors = rounds.reduce((sum, r) => sum + r.errors, 0);
-    console.log(`\nmedian: ${median(rounds.map((r) => r.requestsPerSecond)).toFixed(0)} requests/s, p95 ${median(rounds.map((r) => r.p95)).toFixed(0)} ms; errors in all rounds: ${errors}`);
+    console.log(
+      `\nmedian: ${median(rounds.map((r) => r.requestsPerSecond)).toFixed(0)} requests/s, p95 ${median(rounds.map((r) => r.p95)).toFixed(0)} ms; errors in all rounds: ${errors}`,
+    );
     if (errors > 0) process.exitCode = 1;
   } finally {
     await server.close();

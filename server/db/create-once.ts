@@ -2,7 +2,10 @@
 // second. Two attempts racing past the lookup meet the unique constraint; the loser answers like a retry.
 import { isUniqueViolation } from './query-errors';
 
-export async function createOnce<T>(find: () => Promise<T | null>, create: () => Promise<T>): Promise<{ value: T; created: boolean }> {
+export async function createOnce<T>(
+  find: () => Promise<T | null>,
+  create: () => Promise<T>,
+): Promise<{ value: T; created: boolean }> {
   const existing = await find();
   if (existing) return { value: existing, created: false };
   try {

@@ -21,7 +21,8 @@ export function isRefusedValue(error: unknown): boolean {
 }
 
 const CONNECTION_ERRORS = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', 'ENOTFOUND', 'EAI_AGAIN']);
-const CONNECTION_MESSAGES = /Connection terminated|connection timeout|Client has encountered a connection error|terminating connection|the database system is (starting up|shutting down|in recovery)|Connection is not established|timeout exceeded when trying to connect/i;
+const CONNECTION_MESSAGES =
+  /Connection terminated|connection timeout|Client has encountered a connection error|terminating connection|the database system is (starting up|shutting down|in recovery)|Connection is not established|timeout exceeded when trying to connect/i;
 
 /**
  * The database cannot be reached or dropped the connection: SQLSTATE class 08 (connection exception), 57P0x
@@ -29,7 +30,8 @@ const CONNECTION_MESSAGES = /Connection terminated|connection timeout|Client has
  */
 export function isDatabaseUnavailable(error: unknown): boolean {
   const code = sqlState(error);
-  if (code && (code.startsWith('08') || ['57P01', '57P02', '57P03'].includes(code) || CONNECTION_ERRORS.has(code))) return true;
+  if (code && (code.startsWith('08') || ['57P01', '57P02', '57P03'].includes(code) || CONNECTION_ERRORS.has(code)))
+    return true;
   const errors = (error as { errors?: unknown[] } | null)?.errors;
   if (Array.isArray(errors) && errors.some((inner) => isDatabaseUnavailable(inner))) return true;
   const message = error instanceof Error ? error.message : '';

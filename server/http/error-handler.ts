@@ -19,9 +19,17 @@ function bodyParserError(err: unknown): HttpError | null {
   const limit = (err as BodyParserError | null)?.limit ?? JSON_BODY_LIMIT_BYTES;
   switch (type) {
     case 'entity.parse.failed':
-      return new HttpError(400, 'bad_request', 'The request body is not valid JSON; check quotes, commas and brackets.');
+      return new HttpError(
+        400,
+        'bad_request',
+        'The request body is not valid JSON; check quotes, commas and brackets.',
+      );
     case 'entity.too.large':
-      return new HttpError(413, 'payload_too_large', `The request body is larger than this route's limit of ${formatBytes(limit)}.`);
+      return new HttpError(
+        413,
+        'payload_too_large',
+        `The request body is larger than this route's limit of ${formatBytes(limit)}.`,
+      );
     case 'encoding.unsupported':
     case 'charset.unsupported':
       return new HttpError(415, 'unsupported_media_type', 'Send the body as UTF-8 JSON.');
@@ -36,7 +44,12 @@ function bodyParserError(err: unknown): HttpError | null {
   // labelled with an encoding it is not in.
   const zlibCode = (err as { code?: unknown } | null)?.code;
   if (typeof zlibCode === 'string' && (zlibCode.startsWith('Z_') || zlibCode.startsWith('ERR__ERROR_'))) {
-    return new HttpError(400, 'bad_request', 'The request body is labelled with a Content-Encoding (such as gzip) but is not data in that encoding; send it uncompressed or compress it as labelled.', [{ path: 'Content-Encoding', message: 'does not match the body' }]);
+    return new HttpError(
+      400,
+      'bad_request',
+      'The request body is labelled with a Content-Encoding (such as gzip) but is not data in that encoding; send it uncompressed or compress it as labelled.',
+      [{ path: 'Content-Encoding', message: 'does not match the body' }],
+    );
   }
   return null;
 }
@@ -52,7 +65,12 @@ function badAddress(err: unknown, path: string): HttpError | null {
       return true;
     }
   });
-  return new HttpError(400, 'bad_request', `The address has malformed percent-encoding${segment ? ` in "${segment.slice(0, 60)}"` : ''}; ids are plain UUIDs.`, [{ path: 'address', message: 'has malformed percent-encoding' }]);
+  return new HttpError(
+    400,
+    'bad_request',
+    `The address has malformed percent-encoding${segment ? ` in "${segment.slice(0, 60)}"` : ''}; ids are plain UUIDs.`,
+    [{ path: 'address', message: 'has malformed percent-encoding' }],
+  );
 }
 
 let lastOutageLog = 0;
@@ -61,22 +79,41 @@ function logOutage(err: unknown): void {
   const now = Date.now();
   if (now - lastOutageLog < 10_000) return;
   lastOutageLog = now;
-  console.error(`Database unavailable: ${(err instanceof Error ? err.message : String(err)).split('\n')[0].slice(0, 200)}; answering 503 until it is back.`);
+  console.error(
+    `Database unavailable: ${(err instanceof Error ? err.message : String(err)).split('\n')[0].slice(0, 200)}; answering 503 until it is back.`,
+  );
 }
 
 function toHttpError(err: unknown, path: string): HttpError {
   if (err instanceof HttpError) return err;
   const address = badAddress(err, path);
   if (address) return address;
-  if (err instanceof ZodError) return new HttpError(400, 'bad_request', 'Invalid input.', toFieldIssues({ issues: err.issues.slice(0, MAX_REPORTED_ISSUES) }));
+  if (err instanceof ZodError)
+    return new HttpError(
+      400,
+      'bad_request',
+      'Invalid input.',
+      toFieldIssues({ issues: err.issues.slice(0, MAX_REPORTED_ISSUES) }),
+    );
   const parsed = bodyParserError(err);
   if (parsed) return parsed;
   // Two requests created the same unique thing at once; the loser hears what a later request would.
   if (isUniqueViolation(err)) return new HttpError(409, 'conflict', 'This already exists; reload and try again.');
-  if (isRefusedValue(err)) return new HttpError(400, 'bad_request', 'A value in the request is outside what can be stored (a number too large, or text that cannot be encoded).');
+  if (isRefusedValue(err))
+    return new HttpError(
+      400,
+      'bad_request',
+      'A value in the request is outside what can be stored (a number too large, or text that cannot be encoded).',
+    );
   if (isDatabaseUnavailable(err)) {
     logOutage(err);
-    return new HttpError(503, 'unavailable', 'The database is not reachable right now; nothing was changed. Try again in a moment.', [], { 'Retry-After': '5' });
+    return new HttpError(
+      503,
+      'unavailable',
+      'The database is not reachable right now; nothing was changed. Try again in a moment.',
+      [],
+      { 'Retry-After': '5' },
+    );
   }
   // The stack only: a failed query's error object carries its parameters, which may hold personal data.
   console.error('Unexpected server error:', err instanceof Error ? err.stack : String(err));

@@ -25,7 +25,11 @@ export interface HostNames {
 export function allowedHostNames({ publicOrigin, listenHost, allowedHosts = [] }: HostNames): Set<string> {
   const names = new Set(LOOPBACK_NAMES);
   if (publicOrigin) names.add(new URL(publicOrigin).hostname.toLowerCase());
-  if (listenHost && !WILDCARD_ADDRESSES.has(listenHost)) names.add(hostnameOf(listenHost.includes(':') && !listenHost.startsWith('[') ? `[${listenHost}]` : listenHost) ?? listenHost);
+  if (listenHost && !WILDCARD_ADDRESSES.has(listenHost))
+    names.add(
+      hostnameOf(listenHost.includes(':') && !listenHost.startsWith('[') ? `[${listenHost}]` : listenHost) ??
+        listenHost,
+    );
   for (const name of allowedHosts) names.add(hostnameOf(name) ?? name);
   return names;
 }
@@ -36,6 +40,11 @@ export function refuseUnknownHosts(names: ReadonlySet<string>): RequestHandler {
     const header = req.get('host');
     const name = header === undefined ? null : hostnameOf(header);
     if (name !== null && names.has(name)) return next();
-    next(badRequest(`This server does not answer to the host name ${JSON.stringify(header ?? '')}; it answers to ${list}. Add a name with ALLOWED_HOSTS.`, [{ path: 'Host', message: 'is not an allowed host name' }]));
+    next(
+      badRequest(
+        `This server does not answer to the host name ${JSON.stringify(header ?? '')}; it answers to ${list}. Add a name with ALLOWED_HOSTS.`,
+        [{ path: 'Host', message: 'is not an allowed host name' }],
+      ),
+    );
   };
 }

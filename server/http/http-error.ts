@@ -15,7 +15,8 @@ export class HttpError extends Error {
   }
 }
 
-export const badRequest = (message: string, fields: FieldIssue[] = []) => new HttpError(400, 'bad_request', message, fields);
+export const badRequest = (message: string, fields: FieldIssue[] = []) =>
+  new HttpError(400, 'bad_request', message, fields);
 export const unauthenticated = (message = 'Sign in to continue.') => new HttpError(401, 'unauthenticated', message);
 export const forbidden = (message: string) => new HttpError(403, 'forbidden', message);
 export const notFound = (what: string) => new HttpError(404, 'not_found', `${what} was not found.`);

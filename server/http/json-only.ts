@@ -6,5 +6,11 @@ import { HttpError } from './http-error';
 export const requireJsonBody: RequestHandler = (req, _res, next) => {
   const hasBody = req.get('transfer-encoding') !== undefined || Number(req.get('content-length') ?? 0) > 0;
   if (!hasBody || req.is('application/json')) return next();
-  next(new HttpError(415, 'unsupported_media_type', `Send the request body as JSON with Content-Type: application/json (got ${req.get('content-type') ?? 'no Content-Type'}).`));
+  next(
+    new HttpError(
+      415,
+      'unsupported_media_type',
+      `Send the request body as JSON with Content-Type: application/json (got ${req.get('content-type') ?? 'no Content-Type'}).`,
+    ),
+  );
 };

@@ -33,7 +33,10 @@ export function currentUser(req: Request): SignedInUser {
   return req.user;
 }
 
-export function loaded<K extends 'organisation' | 'project' | 'scenario' | 'run' | 'study' | 'role'>(req: Request, key: K): NonNullable<Request[K]> {
+export function loaded<K extends 'organisation' | 'project' | 'scenario' | 'run' | 'study' | 'role'>(
+  req: Request,
+  key: K,
+): NonNullable<Request[K]> {
   const value = req[key];
   if (value === undefined || value === null) throw new HttpError(500, 'internal', `route is missing its ${key} loader`);
   return value as NonNullable<Request[K]>;

@@ -17,7 +17,8 @@ interface StackLayer {
 function walk(stack: StackLayer[], prefix: string, out: RegisteredRoute[]): void {
   for (const layer of stack) {
     if (layer.route) {
-      for (const method of Object.keys(layer.route.methods).filter((m) => m !== '_all')) out.push({ method: method.toUpperCase(), path: prefix + layer.route.path });
+      for (const method of Object.keys(layer.route.methods).filter((m) => m !== '_all'))
+        out.push({ method: method.toUpperCase(), path: prefix + layer.route.path });
     } else if (layer.handle?.stack) {
       const mount = typeof layer.rawPath === 'string' && layer.rawPath !== '/' ? layer.rawPath : '';
       walk(layer.handle.stack, prefix + mount, out);

@@ -12,7 +12,9 @@ const MAX_REPORTED = 5;
 function problemOf(text: string): string | null {
   const match = UNSTORABLE.exec(text);
   if (!match) return null;
-  return match[0] === '\u0000' ? 'contains a NUL character, which cannot be stored' : 'contains half of a UTF-16 surrogate pair, which is not valid Unicode';
+  return match[0] === '\u0000'
+    ? 'contains a NUL character, which cannot be stored'
+    : 'contains half of a UTF-16 surrogate pair, which is not valid Unicode';
 }
 
 /** Walks a parsed JSON value without recursion (a deeply nested body must not exhaust the stack). */
@@ -50,10 +52,19 @@ export function noteSuspectText(req: IncomingMessage, _res: unknown, raw: Buffer
 }
 
 export const refuseUnstorableText: RequestHandler = (req, _res, next) => {
-  for (const [part, where] of [['body', 'request body'], ['query', 'query string']] as const) {
+  for (const [part, where] of [
+    ['body', 'request body'],
+    ['query', 'query string'],
+  ] as const) {
     if (part === 'body' && !(req as Suspect).mayHoldUnstorableText) continue;
     const issues = unstorableText(req[part]);
-    if (issues.length > 0) return next(badRequest(`Invalid input in the ${where}: ${issues.map((i) => `${i.path || '(the value)'} ${i.message}`).join('; ')}`, issues));
+    if (issues.length > 0)
+      return next(
+        badRequest(
+          `Invalid input in the ${where}: ${issues.map((i) => `${i.path || '(the value)'} ${i.message}`).join('; ')}`,
+          issues,
+        ),
+      );
   }
   next();
 };

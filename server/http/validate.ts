@@ -24,7 +24,9 @@ function valueAt(value: unknown, path: readonly PropertyKey[]): unknown {
 
 export function parseInput<S extends z.ZodType>(schema: S, value: unknown, part: keyof typeof where): z.output<S> {
   if (part === 'body' && value === undefined) {
-    throw badRequest('This request needs a JSON body sent with Content-Type: application/json.', [{ path: '', message: 'is required' }]);
+    throw badRequest('This request needs a JSON body sent with Content-Type: application/json.', [
+      { path: '', message: 'is required' },
+    ]);
   }
   const result = schema.safeParse(value ?? {});
   if (result.success) return result.data;
@@ -32,11 +34,15 @@ export function parseInput<S extends z.ZodType>(schema: S, value: unknown, part:
   const fields = toFieldIssues({ issues }).map((field, i) => {
     const issue = issues[i];
     // Schemas give one message per type check ("must be text"); a field that is absent is better told so.
-    const absent = ['invalid_type', 'invalid_value', 'invalid_union'].includes(issue.code) && valueAt(value, issue.path) === undefined;
+    const absent =
+      ['invalid_type', 'invalid_value', 'invalid_union'].includes(issue.code) &&
+      valueAt(value, issue.path) === undefined;
     return absent ? { ...field, message: 'is required' } : field;
   });
   const more = result.error.issues.length - issues.length;
-  const summary = fields.map((f) => (f.path ? `${f.path} ${f.message}` : f.message)).join('; ') + (more > 0 ? `; and ${more} more problem(s) not listed` : '');
+  const summary =
+    fields.map((f) => (f.path ? `${f.path} ${f.message}` : f.message)).join('; ') +
+    (more > 0 ? `; and ${more} more problem(s) not listed` : '');
   throw badRequest(`Invalid input ${where[part]}: ${summary}`, fields);
 }
 

@@ -17,10 +17,17 @@ export interface Accepted {
 }
 
 function missingAccountFields(input: AcceptInvitationInput) {
-  return [...(input.name ? [] : [{ path: 'name', message: 'is required' }]), ...(input.password ? [] : [{ path: 'password', message: 'is required' }])];
+  return [
+    ...(input.name ? [] : [{ path: 'name', message: 'is required' }]),
+    ...(input.password ? [] : [{ path: 'password', message: 'is required' }]),
+  ];
 }
 
-export async function acceptInvitation(ds: DataSource, input: AcceptInvitationInput, signedIn: SignedInUser | undefined): Promise<Accepted> {
+export async function acceptInvitation(
+  ds: DataSource,
+  input: AcceptInvitationInput,
+  signedIn: SignedInUser | undefined,
+): Promise<Accepted> {
   // Hashing is slow, so it happens before the transaction holds the invitation's row lock.
   const passwordHash = !signedIn && input.password ? await hashPassword(input.password) : undefined;
   return ds.transaction(async (manager) => {
@@ -30,16 +37,21 @@ export async function acceptInvitation(ds: DataSource, input: AcceptInvitationIn
     let user: UserEntity;
     if (signedIn) {
       if (signedIn.email !== invitation.email) {
-        throw badRequest(`This invitation is for ${invitation.email}, but you are signed in as ${signedIn.email}. Sign out and open the link again.`, [
-          { path: 'token', message: 'is for another address' },
-        ]);
+        throw badRequest(
+          `This invitation is for ${invitation.email}, but you are signed in as ${signedIn.email}. Sign out and open the link again.`,
+          [{ path: 'token', message: 'is for another address' }],
+        );
       }
       user = existing!;
     } else if (existing) {
-      throw badRequest(`An account already uses ${invitation.email}: sign in with it, then open the link again to accept.`, [{ path: 'token', message: 'needs you to sign in first' }]);
+      throw badRequest(
+        `An account already uses ${invitation.email}: sign in with it, then open the link again to accept.`,
+        [{ path: 'token', message: 'needs you to sign in first' }],
+      );
     } else {
       const missing = missingAccountFields(input);
-      if (missing.length > 0 || !passwordHash) throw badRequest('Enter your name and choose a password to create your account.', missing);
+      if (missing.length > 0 || !passwordHash)
+        throw badRequest('Enter your name and choose a password to create your account.', missing);
       user = await users.save({ email: invitation.email, name: input.name!, passwordHash });
     }
     await manager.getRepository(InvitationEntity).update({ id: invitation.id }, { acceptedAt: new Date() });
@@ -56,6 +68,10 @@ export async function acceptInvitation(ds: DataSource, input: AcceptInvitationIn
       entityId: user.id,
       detail: { email: user.email, role: invitation.role, invitationId: invitation.id },
     });
-    return { organisationId: invitation.organisationId, user: { id: user.id, email: user.email, name: user.name }, isNew: !signedIn };
+    return {
+      organisationId: invitation.organisationId,
+      user: { id: user.id, email: user.email, name: user.name },
+      isNew: !signedIn,
+    };
   });
 }

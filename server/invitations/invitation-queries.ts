@@ -23,15 +23,29 @@ export function pendingInvitations(ds: DataSource, organisationId: string): Prom
 export async function freshInvitationToken(manager: EntityManager, invitationId: string): Promise<string> {
   const { token, hash } = newLinkToken();
   const now = Date.now();
-  await manager.getRepository(InvitationEntity).update({ id: invitationId }, { tokenHash: hash, sentAt: new Date(now), expiresAt: new Date(now + INVITATION_LIFETIME_MS) });
+  await manager
+    .getRepository(InvitationEntity)
+    .update(
+      { id: invitationId },
+      { tokenHash: hash, sentAt: new Date(now), expiresAt: new Date(now + INVITATION_LIFETIME_MS) },
+    );
   return token;
 }
 
 /** A usable invitation by its link token; locked when `lock`, for the transaction that spends it. */
-export async function usableInvitation(manager: EntityManager, token: string, lock: boolean): Promise<InvitationEntity> {
+export async function usableInvitation(
+  manager: EntityManager,
+  token: string,
+  lock: boolean,
+): Promise<InvitationEntity> {
   const invitation = lock
-    ? await manager.getRepository(InvitationEntity).findOne({ where: { tokenHash: hashLinkToken(token) }, lock: { mode: 'pessimistic_write' } })
-    : await manager.getRepository(InvitationEntity).findOne({ where: { tokenHash: hashLinkToken(token) }, relations: { organisation: true, invitedBy: true } });
-  if (!invitation || invitation.acceptedAt || invitation.revokedAt || invitation.expiresAt.getTime() <= Date.now()) throw invalidLink();
+    ? await manager
+        .getRepository(InvitationEntity)
+        .findOne({ where: { tokenHash: hashLinkToken(token) }, lock: { mode: 'pessimistic_write' } })
+    : await manager
+        .getRepository(InvitationEntity)
+        .findOne({ where: { tokenHash: hashLinkToken(token) }, relations: { organisation: true, invitedBy: true } });
+  if (!invitation || invitation.acceptedAt || invitation.revokedAt || invitation.expiresAt.getTime() <= Date.now())
+    throw invalidLink();
   return invitation;
 }

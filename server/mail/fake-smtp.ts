@@ -20,7 +20,11 @@ function addressesOf(field: AddressObject | AddressObject[] | undefined): string
   return groups.flatMap((group) => group.value.map((entry) => entry.address ?? '')).filter((address) => address !== '');
 }
 
-export async function startFakeSmtp(options: { port: number; host?: string; mailbox?: CaughtMailbox }): Promise<FakeSmtp> {
+export async function startFakeSmtp(options: {
+  port: number;
+  host?: string;
+  mailbox?: CaughtMailbox;
+}): Promise<FakeSmtp> {
   const host = options.host ?? '127.0.0.1';
   const mailbox = options.mailbox ?? new CaughtMailbox();
   const server = new SMTPServer({
@@ -35,8 +39,15 @@ export async function startFakeSmtp(options: { port: number; host?: string; mail
       simpleParser(stream)
         .then((parsed) => {
           // smtp-server sets this flag once the stream passed `size`; the message is then refused whole.
-          if ((stream as unknown as { sizeExceeded?: boolean }).sizeExceeded) return callback(new Error('Message is larger than the mailbox accepts'));
-          mailbox.add({ receivedAt: new Date(), from: addressesOf(parsed.from).join(', '), to: addressesOf(parsed.to), subject: parsed.subject ?? '', text: parsed.text ?? '' });
+          if ((stream as unknown as { sizeExceeded?: boolean }).sizeExceeded)
+            return callback(new Error('Message is larger than the mailbox accepts'));
+          mailbox.add({
+            receivedAt: new Date(),
+            from: addressesOf(parsed.from).join(', '),
+            to: addressesOf(parsed.to),
+            subject: parsed.subject ?? '',
+            text: parsed.text ?? '',
+          });
           callback();
         })
         .catch((error: unknown) => callback(error instanceof Error ? error : new Error(String(error))));

@@ -13,7 +13,10 @@ export interface MailSetup {
   close(): Promise<void>;
 }
 
-type MailConfig = Pick<ServerConfig, 'SMTP_HOST' | 'SMTP_PORT' | 'SMTP_SECURE' | 'SMTP_USER' | 'SMTP_PASSWORD' | 'MAIL_FROM' | 'LANEWRIGHT_FAKE_SMTP_PORT'>;
+type MailConfig = Pick<
+  ServerConfig,
+  'SMTP_HOST' | 'SMTP_PORT' | 'SMTP_SECURE' | 'SMTP_USER' | 'SMTP_PASSWORD' | 'MAIL_FROM' | 'LANEWRIGHT_FAKE_SMTP_PORT'
+>;
 
 export async function setUpMail(config: MailConfig): Promise<MailSetup> {
   if (config.SMTP_HOST) {
@@ -30,9 +33,17 @@ export async function setUpMail(config: MailConfig): Promise<MailSetup> {
   const fake = await startFakeSmtp({ port: config.LANEWRIGHT_FAKE_SMTP_PORT }).catch((error: unknown) => {
     if ((error as NodeJS.ErrnoException).code !== 'EADDRINUSE') throw error;
     // Worded so the HTTP port's "in use" advice does not claim this error for itself.
-    throw new Error(`the mail catcher cannot listen on 127.0.0.1:${config.LANEWRIGHT_FAKE_SMTP_PORT}, another program holds it; choose another with LANEWRIGHT_FAKE_SMTP_PORT (0 picks any free port) or set SMTP_HOST`);
+    throw new Error(
+      `the mail catcher cannot listen on 127.0.0.1:${config.LANEWRIGHT_FAKE_SMTP_PORT}, another program holds it; choose another with LANEWRIGHT_FAKE_SMTP_PORT (0 picks any free port) or set SMTP_HOST`,
+    );
   });
-  const mailer = createSmtpMailer({ host: fake.host, port: fake.port, secure: false, ignoreTls: true, from: config.MAIL_FROM });
+  const mailer = createSmtpMailer({
+    host: fake.host,
+    port: fake.port,
+    secure: false,
+    ignoreTls: true,
+    from: config.MAIL_FROM,
+  });
   return {
     mailer,
     mailbox: fake.mailbox,

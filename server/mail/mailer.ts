@@ -49,6 +49,8 @@ export function createSmtpMailer(settings: SmtpSettings): Mailer {
  */
 export function sendInBackground(mailer: Mailer, mail: OutgoingMail): void {
   mailer.send(mail).catch((error: unknown) => {
-    console.error(`Mail "${mail.subject}" could not be sent: ${error instanceof Error ? error.message : String(error)}`);
+    console.error(
+      `Mail "${mail.subject}" could not be sent: ${error instanceof Error ? error.message : String(error)}`,
+    );
   });
 }

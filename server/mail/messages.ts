@@ -4,9 +4,13 @@ import { INVITATION_LIFETIME_DAYS } from '../../shared/api/invitations';
 import { PASSWORD_RESET_MINUTES, SIGN_UP_LINK_HOURS } from '../../shared/api/account';
 import type { OutgoingMail } from './mailer';
 
-const signature = '\n\n-- \nLanewright, line planning for carrier-track assembly\nYou receive this because someone entered your address in Lanewright.';
+const signature =
+  '\n\n-- \nLanewright, line planning for carrier-track assembly\nYou receive this because someone entered your address in Lanewright.';
 
-export function invitationMail(to: string, args: { organisationName: string; inviterName: string; role: string; link: string }): OutgoingMail {
+export function invitationMail(
+  to: string,
+  args: { organisationName: string; inviterName: string; role: string; link: string },
+): OutgoingMail {
   return {
     to,
     subject: `Join ${args.organisationName} on Lanewright`,

@@ -35,6 +35,10 @@ export function toAuditEntry(entry: AuditEntryEntity): AuditEntry {
 export function toMe(user: SignedInUser, memberships: MembershipEntity[]): Me {
   return {
     user: { id: user.id, email: user.email, name: user.name },
-    memberships: memberships.map((m) => ({ organisationId: m.organisationId, organisationName: m.organisation?.name ?? '', role: m.role })),
+    memberships: memberships.map((m) => ({
+      organisationId: m.organisationId,
+      organisationName: m.organisation?.name ?? '',
+      role: m.role,
+    })),
   };
 }

@@ -18,7 +18,11 @@ export function toRevision(revision: ScenarioRevisionEntity): Revision {
   return { ...toRevisionSummary(revision), document: revision.document };
 }
 
-export function toScenarioSummary(scenario: ScenarioEntity, latest: ScenarioRevisionEntity, runCount: number): ScenarioSummary {
+export function toScenarioSummary(
+  scenario: ScenarioEntity,
+  latest: ScenarioRevisionEntity,
+  runCount: number,
+): ScenarioSummary {
   return {
     id: scenario.id,
     projectId: scenario.projectId,
@@ -32,6 +36,10 @@ export function toScenarioSummary(scenario: ScenarioEntity, latest: ScenarioRevi
   };
 }
 
-export function toScenarioDetail(scenario: ScenarioEntity, latest: ScenarioRevisionEntity, runCount: number): ScenarioDetail {
+export function toScenarioDetail(
+  scenario: ScenarioEntity,
+  latest: ScenarioRevisionEntity,
+  runCount: number,
+): ScenarioDetail {
   return { ...toScenarioSummary(scenario, latest, runCount), document: latest.document };
 }

@@ -4,5 +4,10 @@ import type { EntityManager } from 'typeorm';
 import { ProjectEntity } from '../db/entities';
 
 export async function touchProject(manager: EntityManager, projectId: string): Promise<void> {
-  await manager.createQueryBuilder().update(ProjectEntity).set({ updatedAt: () => 'now()' }).where('id = :id', { id: projectId }).execute();
+  await manager
+    .createQueryBuilder()
+    .update(ProjectEntity)
+    .set({ updatedAt: () => 'now()' })
+    .where('id = :id', { id: projectId })
+    .execute();
 }

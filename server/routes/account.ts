@@ -2,7 +2,12 @@
 // the same whether or not the address has an account; a reset ends every session of that user.
 import express from 'express';
 import { IsNull, Not } from 'typeorm';
-import { changePasswordSchema, PASSWORD_RESET_MINUTES, requestPasswordResetSchema, resetPasswordSchema } from '../../shared/api/account';
+import {
+  changePasswordSchema,
+  PASSWORD_RESET_MINUTES,
+  requestPasswordResetSchema,
+  resetPasswordSchema,
+} from '../../shared/api/account';
 import type { AppContext } from '../app-context';
 import { audited, recordAudit } from '../audit/record-audit';
 import { issueToken, mayMailAnotherLink, spendToken } from '../auth/one-time-tokens';
@@ -16,7 +21,8 @@ import { sendInBackground } from '../mail/mailer';
 import { passwordResetMail } from '../mail/messages';
 
 export const RESET_ANSWER = {
-  message: 'If an account uses this address, a link to choose a new password is on its way. It is valid for 30 minutes.',
+  message:
+    'If an account uses this address, a link to choose a new password is on its way. It is valid for 30 minutes.',
 };
 
 export function accountRouter(ctx: AppContext) {
@@ -28,8 +34,16 @@ export function accountRouter(ctx: AppContext) {
     validate({ body: requestPasswordResetSchema }, async ({ body }, req, res) => {
       const user = await ds.getRepository(UserEntity).findOneBy({ email: body.email });
       if (user && (await mayMailAnotherLink(ds, 'password-reset', user.email))) {
-        const token = await issueToken(ds.manager, { purpose: 'password-reset', email: user.email, userId: user.id, lifetimeMs: PASSWORD_RESET_MINUTES * 60_000 });
-        sendInBackground(mailer, passwordResetMail(user.email, publicLink(req, publicOrigin, `/reset-password#${token}`)));
+        const token = await issueToken(ds.manager, {
+          purpose: 'password-reset',
+          email: user.email,
+          userId: user.id,
+          lifetimeMs: PASSWORD_RESET_MINUTES * 60_000,
+        });
+        sendInBackground(
+          mailer,
+          passwordResetMail(user.email, publicLink(req, publicOrigin, `/reset-password#${token}`)),
+        );
       }
       res.status(202).json(RESET_ANSWER);
     }),
@@ -45,8 +59,16 @@ export function accountRouter(ctx: AppContext) {
         await manager.getRepository(UserEntity).update({ id: userId }, { passwordHash });
         // Every session ends (whoever knew the old password is out) and older reset links die with it.
         await manager.getRepository(SessionEntity).delete({ userId });
-        await manager.getRepository(OneTimeTokenEntity).update({ userId, purpose: 'password-reset', usedAt: IsNull() }, { usedAt: new Date() });
-        await recordAudit(manager, { organisationId: null, actorId: userId, action: 'password-reset', entity: 'user', entityId: userId });
+        await manager
+          .getRepository(OneTimeTokenEntity)
+          .update({ userId, purpose: 'password-reset', usedAt: IsNull() }, { usedAt: new Date() });
+        await recordAudit(manager, {
+          organisationId: null,
+          actorId: userId,
+          action: 'password-reset',
+          entity: 'user',
+          entityId: userId,
+        });
       });
       res.json({ ok: true });
     }),
@@ -58,14 +80,18 @@ export function accountRouter(ctx: AppContext) {
       const me = currentUser(req);
       const user = await ds.getRepository(UserEntity).findOneByOrFail({ id: me.id });
       if (!(await verifyPassword(user.passwordHash, body.currentPassword))) {
-        throw badRequest('The current password is not right.', [{ path: 'currentPassword', message: 'is not your current password' }]);
+        throw badRequest('The current password is not right.', [
+          { path: 'currentPassword', message: 'is not your current password' },
+        ]);
       }
       const passwordHash = await hashPassword(body.newPassword);
       const ended = await audited(
         ds,
         async (manager) => {
           await manager.getRepository(UserEntity).update({ id: me.id }, { passwordHash });
-          const result = await manager.getRepository(SessionEntity).delete({ userId: me.id, id: Not(req.sessionId ?? '') });
+          const result = await manager
+            .getRepository(SessionEntity)
+            .delete({ userId: me.id, id: Not(req.sessionId ?? '') });
           return result.affected ?? 0;
         },
         { organisationId: null, actorId: me.id, action: 'password-change', entity: 'user', entityId: me.id },

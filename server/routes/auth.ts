@@ -41,14 +41,32 @@ export function authRouter(ctx: AppContext) {
         // The same hashing work as a real sign-up, so the time taken does not tell either.
         await verifyAgainstDecoy(body.password);
         if (mayMail) {
-          await issueToken(ds.manager, { purpose: 'sign-up', email: body.email, userId: existing.id, lifetimeMs: 0, spent: true });
-          sendInBackground(mailer, alreadyRegisteredMail(body.email, publicLink(req, publicOrigin, '/sign-in'), publicLink(req, publicOrigin, '/forgot-password')));
+          await issueToken(ds.manager, {
+            purpose: 'sign-up',
+            email: body.email,
+            userId: existing.id,
+            lifetimeMs: 0,
+            spent: true,
+          });
+          sendInBackground(
+            mailer,
+            alreadyRegisteredMail(
+              body.email,
+              publicLink(req, publicOrigin, '/sign-in'),
+              publicLink(req, publicOrigin, '/forgot-password'),
+            ),
+          );
         }
       } else {
         const passwordHash = await hashPassword(body.password);
         if (mayMail) {
           const payload = { name: body.name, organisationName: body.organisationName, passwordHash };
-          const token = await issueToken(ds.manager, { purpose: 'sign-up', email: body.email, payload, lifetimeMs: SIGN_UP_LINK_HOURS * 3_600_000 });
+          const token = await issueToken(ds.manager, {
+            purpose: 'sign-up',
+            email: body.email,
+            payload,
+            lifetimeMs: SIGN_UP_LINK_HOURS * 3_600_000,
+          });
           sendInBackground(mailer, signUpMail(body.email, publicLink(req, publicOrigin, `/sign-up/finish#${token}`)));
         }
       }
@@ -63,11 +81,26 @@ export function authRouter(ctx: AppContext) {
         const link = await spendToken(manager, 'sign-up', body.token);
         const { name, organisationName, passwordHash } = link.payload;
         // A spent notice row or an address registered meanwhile (through an invitation) finishes nothing.
-        if (!name || !organisationName || !passwordHash || (await manager.getRepository(UserEntity).existsBy({ email: link.email }))) throw invalidLink();
+        if (
+          !name ||
+          !organisationName ||
+          !passwordHash ||
+          (await manager.getRepository(UserEntity).existsBy({ email: link.email }))
+        )
+          throw invalidLink();
         const created = await manager.getRepository(UserEntity).save({ email: link.email, name, passwordHash });
         const organisation = await manager.getRepository(OrganisationEntity).save({ name: organisationName });
-        await manager.getRepository(MembershipEntity).insert({ organisationId: organisation.id, userId: created.id, role: 'owner' });
-        await recordAudit(manager, { organisationId: organisation.id, actorId: created.id, action: 'create', entity: 'organisation', entityId: organisation.id, detail: { name: organisation.name } });
+        await manager
+          .getRepository(MembershipEntity)
+          .insert({ organisationId: organisation.id, userId: created.id, role: 'owner' });
+        await recordAudit(manager, {
+          organisationId: organisation.id,
+          actorId: created.id,
+          action: 'create',
+          entity: 'organisation',
+          entityId: organisation.id,
+          detail: { name: organisation.name },
+        });
         return created;
       });
       await startSession(ctx, req, res, { id: user.id, email: user.email, name: user.name }, 201);
@@ -80,14 +113,29 @@ export function authRouter(ctx: AppContext) {
       const address = req.ip ?? '';
       await signInLimiter.begin(body.email, address);
       const user = await ds.getRepository(UserEntity).findOneBy({ email: body.email });
-      const valid = user ? await verifyPassword(user.passwordHash, body.password) : await verifyAgainstDecoy(body.password);
+      const valid = user
+        ? await verifyPassword(user.passwordHash, body.password)
+        : await verifyAgainstDecoy(body.password);
       if (!user || !valid) {
         // Kept for the audit page: against a known account its id, so that account's organisations see it.
-        await recordAudit(ds.manager, { organisationId: null, actorId: null, action: 'sign-in-failed', entity: 'user', entityId: user?.id ?? body.email, detail: { email: body.email, address: req.ip ?? '' } });
+        await recordAudit(ds.manager, {
+          organisationId: null,
+          actorId: null,
+          action: 'sign-in-failed',
+          entity: 'user',
+          entityId: user?.id ?? body.email,
+          detail: { email: body.email, address: req.ip ?? '' },
+        });
         throw unauthenticated('The e-mail or password is incorrect.');
       }
       await signInLimiter.succeeded(body.email, address);
-      await recordAudit(ds.manager, { organisationId: null, actorId: user.id, action: 'sign-in', entity: 'user', entityId: user.id });
+      await recordAudit(ds.manager, {
+        organisationId: null,
+        actorId: user.id,
+        action: 'sign-in',
+        entity: 'user',
+        entityId: user.id,
+      });
       await startSession(ctx, req, res, { id: user.id, email: user.email, name: user.name }, 200);
     }),
   );

@@ -18,7 +18,12 @@ import { publicLink } from '../http/public-link';
 import { currentUser, loaded } from '../http/request-context';
 import { parseInput, validate } from '../http/validate';
 import { acceptInvitation } from '../invitations/accept-invitation';
-import { freshInvitationToken, INVITATION_LIFETIME_MS, pendingInvitations, usableInvitation } from '../invitations/invitation-queries';
+import {
+  freshInvitationToken,
+  INVITATION_LIFETIME_MS,
+  pendingInvitations,
+  usableInvitation,
+} from '../invitations/invitation-queries';
 import { sendInBackground } from '../mail/mailer';
 import { invitationMail } from '../mail/messages';
 import { toInvitation } from '../mappers/links';
@@ -38,11 +43,14 @@ export function invitationsRouter(ctx: AppContext) {
         link: publicLink(req, publicOrigin, `/invitations/accept#${token}`),
       }),
     );
-  const reload = (id: string) => ds.getRepository(InvitationEntity).findOneOrFail({ where: { id }, relations: { invitedBy: true } });
+  const reload = (id: string) =>
+    ds.getRepository(InvitationEntity).findOneOrFail({ where: { id }, relations: { invitedBy: true } });
 
   const loadInvitation: RequestHandler = async (req, res, next) => {
     const { invitationId } = parseInput(invitationParamsSchema, req.params, 'params');
-    const invitation = await ds.getRepository(InvitationEntity).findOne({ where: { id: invitationId, organisationId: loaded(req, 'organisation').id } });
+    const invitation = await ds
+      .getRepository(InvitationEntity)
+      .findOne({ where: { id: invitationId, organisationId: loaded(req, 'organisation').id } });
     if (!invitation || invitation.acceptedAt || invitation.revokedAt) return next(notFound('The invitation'));
     res.locals.invitation = invitation;
     next();
@@ -58,7 +66,9 @@ export function invitationsRouter(ctx: AppContext) {
   });
 
   router.get('/organisations/:id/invitations', loadOrganisation(ctx), requireRole('owner'), async (req, res) => {
-    res.json((await pendingInvitations(ds, loaded(req, 'organisation').id)).map((invitation) => toInvitation(invitation)));
+    res.json(
+      (await pendingInvitations(ds, loaded(req, 'organisation').id)).map((invitation) => toInvitation(invitation)),
+    );
   });
 
   router.post(
@@ -68,10 +78,20 @@ export function invitationsRouter(ctx: AppContext) {
     validate({ body: inviteMemberSchema }, async ({ body }, req, res) => {
       const organisation = loaded(req, 'organisation');
       // Members are on the owner's page already, so saying so reveals nothing about accounts.
-      const member = await ds.getRepository(MembershipEntity).exists({ where: { organisationId: organisation.id, user: { email: body.email } }, relations: { user: true } });
-      if (member) throw conflict(`${body.email} is already a member; change their role instead.`, [{ path: 'email', message: 'is already a member' }]);
-      const pending = (await pendingInvitations(ds, organisation.id)).some((invitation) => invitation.email === body.email);
-      if (pending) throw conflict(`${body.email} already has an invitation; resend or revoke it below.`, [{ path: 'email', message: 'is already invited' }]);
+      const member = await ds
+        .getRepository(MembershipEntity)
+        .exists({ where: { organisationId: organisation.id, user: { email: body.email } }, relations: { user: true } });
+      if (member)
+        throw conflict(`${body.email} is already a member; change their role instead.`, [
+          { path: 'email', message: 'is already a member' },
+        ]);
+      const pending = (await pendingInvitations(ds, organisation.id)).some(
+        (invitation) => invitation.email === body.email,
+      );
+      if (pending)
+        throw conflict(`${body.email} already has an invitation; resend or revoke it below.`, [
+          { path: 'email', message: 'is already invited' },
+        ]);
       const { token, hash } = newLinkToken();
       const now = Date.now();
       const saved = await audited(
@@ -88,25 +108,52 @@ export function invitationsRouter(ctx: AppContext) {
             acceptedAt: null,
             revokedAt: null,
           }),
-        (row) => ({ organisationId: organisation.id, actorId: currentUser(req).id, action: 'invite', entity: 'invitation', entityId: row.id, detail: { email: body.email, role: body.role } }),
+        (row) => ({
+          organisationId: organisation.id,
+          actorId: currentUser(req).id,
+          action: 'invite',
+          entity: 'invitation',
+          entityId: row.id,
+          detail: { email: body.email, role: body.role },
+        }),
       );
       mailInvitation(req, saved, token, organisation.name);
       res.status(201).json(toInvitation(await reload(saved.id)));
     }),
   );
 
-  router.post('/organisations/:id/invitations/:invitationId/resend', loadOrganisation(ctx), requireRole('owner'), loadInvitation, async (req, res) => {
-    const invitation = invitationOf(res);
-    const token = await audited(ds, (manager) => freshInvitationToken(manager, invitation.id), auditOf(req, invitation, 'invite-resend'));
-    mailInvitation(req, invitation, token, loaded(req, 'organisation').name);
-    res.json(toInvitation(await reload(invitation.id)));
-  });
+  router.post(
+    '/organisations/:id/invitations/:invitationId/resend',
+    loadOrganisation(ctx),
+    requireRole('owner'),
+    loadInvitation,
+    async (req, res) => {
+      const invitation = invitationOf(res);
+      const token = await audited(
+        ds,
+        (manager) => freshInvitationToken(manager, invitation.id),
+        auditOf(req, invitation, 'invite-resend'),
+      );
+      mailInvitation(req, invitation, token, loaded(req, 'organisation').name);
+      res.json(toInvitation(await reload(invitation.id)));
+    },
+  );
 
-  router.delete('/organisations/:id/invitations/:invitationId', loadOrganisation(ctx), requireRole('owner'), loadInvitation, async (req, res) => {
-    const invitation = invitationOf(res);
-    await audited(ds, (manager) => manager.getRepository(InvitationEntity).update({ id: invitation.id }, { revokedAt: new Date() }), auditOf(req, invitation, 'invite-revoke'));
-    res.json({ ok: true });
-  });
+  router.delete(
+    '/organisations/:id/invitations/:invitationId',
+    loadOrganisation(ctx),
+    requireRole('owner'),
+    loadInvitation,
+    async (req, res) => {
+      const invitation = invitationOf(res);
+      await audited(
+        ds,
+        (manager) => manager.getRepository(InvitationEntity).update({ id: invitation.id }, { revokedAt: new Date() }),
+        auditOf(req, invitation, 'invite-revoke'),
+      );
+      res.json({ ok: true });
+    },
+  );
 
   router.post(
     '/invitations/preview',
@@ -128,8 +175,15 @@ export function invitationsRouter(ctx: AppContext) {
     '/invitations/accept',
     validate({ body: acceptInvitationSchema }, async ({ body }, req, res) => {
       const accepted = await acceptInvitation(ds, body, req.user);
-      if (accepted.isNew) return startSession(ctx, req, res, accepted.user, 201, (me) => ({ organisationId: accepted.organisationId, me }));
-      res.json({ organisationId: accepted.organisationId, me: toMe(accepted.user, await membershipsOf(ds, accepted.user.id)) });
+      if (accepted.isNew)
+        return startSession(ctx, req, res, accepted.user, 201, (me) => ({
+          organisationId: accepted.organisationId,
+          me,
+        }));
+      res.json({
+        organisationId: accepted.organisationId,
+        me: toMe(accepted.user, await membershipsOf(ds, accepted.user.id)),
+      });
     }),
   );
 

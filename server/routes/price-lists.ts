@@ -15,7 +15,9 @@ export function priceListsRouter(ctx: AppContext) {
   const { ds } = ctx;
   const router = express.Router();
   const read = async (organisationId: string) => {
-    const row = await ds.getRepository(PriceListEntity).findOne({ where: { organisationId }, relations: { updatedBy: true } });
+    const row = await ds
+      .getRepository(PriceListEntity)
+      .findOne({ where: { organisationId }, relations: { updatedBy: true } });
     return { priceList: row ? toPriceList(row) : null };
   };
 
@@ -33,11 +35,28 @@ export function priceListsRouter(ctx: AppContext) {
       await audited(
         ds,
         (manager) =>
-          manager.getRepository(PriceListEntity).upsert(
-            { organisationId: organisation.id, currency: body.currency, ...body.prices, note: body.note, invented: false, updatedById: user.id, updatedAt: new Date() },
-            ['organisationId'],
-          ),
-        { organisationId: organisation.id, actorId: user.id, action: 'update', entity: 'price-list', entityId: organisation.id, detail: { currency: body.currency } },
+          manager
+            .getRepository(PriceListEntity)
+            .upsert(
+              {
+                organisationId: organisation.id,
+                currency: body.currency,
+                ...body.prices,
+                note: body.note,
+                invented: false,
+                updatedById: user.id,
+                updatedAt: new Date(),
+              },
+              ['organisationId'],
+            ),
+        {
+          organisationId: organisation.id,
+          actorId: user.id,
+          action: 'update',
+          entity: 'price-list',
+          entityId: organisation.id,
+          detail: { currency: body.currency },
+        },
       );
       res.json(await read(organisation.id));
     }),

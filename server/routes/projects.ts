@@ -29,7 +29,9 @@ async function scenarioCounts(ds: DataSource, projectIds: string[]): Promise<Map
 }
 
 async function projectView(ds: DataSource, id: string) {
-  const project = await ds.getRepository(ProjectEntity).findOneOrFail({ where: { id }, relations: { createdBy: true } });
+  const project = await ds
+    .getRepository(ProjectEntity)
+    .findOneOrFail({ where: { id }, relations: { createdBy: true } });
   const counts = await scenarioCounts(ds, [id]);
   return toProject(project, counts.get(id) ?? 0);
 }
@@ -51,7 +53,10 @@ export function projectsRouter(ctx: AppContext) {
         relations: { createdBy: true },
         order: { updatedAt: 'DESC' },
       });
-      const counts = await scenarioCounts(ds, list.map((p) => p.id));
+      const counts = await scenarioCounts(
+        ds,
+        list.map((p) => p.id),
+      );
       res.json(list.map((p) => toProject(p, counts.get(p.id) ?? 0)));
     }),
   );
@@ -68,17 +73,37 @@ export function projectsRouter(ctx: AppContext) {
         if (!canEdit(role)) throw forbidden(`Only an engineer or owner may create projects; your role is ${role}.`);
       } else {
         organisationId = (await membershipsOf(ds, user.id)).find((m) => canEdit(m.role))?.organisationId;
-        if (!organisationId) throw forbidden('You are not an engineer or owner in any organisation, so you cannot create projects.');
+        if (!organisationId)
+          throw forbidden('You are not an engineer or owner in any organisation, so you cannot create projects.');
       }
       const orgId = organisationId;
       const { clientId } = body;
       const { value: project, created } = await createOnce(
-        () => (clientId ? projects().findOne({ where: { organisationId: orgId, clientId }, select: { id: true } }) : Promise.resolve(null)),
+        () =>
+          clientId
+            ? projects().findOne({ where: { organisationId: orgId, clientId }, select: { id: true } })
+            : Promise.resolve(null),
         () =>
           audited(
             ds,
-            (manager) => manager.getRepository(ProjectEntity).save({ organisationId: orgId, name: body.name, description: body.description ?? '', clientId: clientId ?? null, createdById: user.id }),
-            (saved) => ({ organisationId: orgId, actorId: user.id, action: 'create', entity: 'project', entityId: saved.id, detail: { name: saved.name } }),
+            (manager) =>
+              manager
+                .getRepository(ProjectEntity)
+                .save({
+                  organisationId: orgId,
+                  name: body.name,
+                  description: body.description ?? '',
+                  clientId: clientId ?? null,
+                  createdById: user.id,
+                }),
+            (saved) => ({
+              organisationId: orgId,
+              actorId: user.id,
+              action: 'create',
+              entity: 'project',
+              entityId: saved.id,
+              detail: { name: saved.name },
+            }),
           ),
       );
       res.status(created ? 201 : 200).json(await projectView(ds, project.id));

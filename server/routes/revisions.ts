@@ -34,7 +34,10 @@ export function revisionsRouter(ctx: AppContext) {
     '/scenarios/:id/revisions/:number',
     loadScenario(ctx),
     validate({ params: revisionParamsSchema }, async ({ params }, req, res) => {
-      const revision = await revisions().findOne({ where: { scenarioId: loaded(req, 'scenario').id, number: params.number }, relations: { createdBy: true } });
+      const revision = await revisions().findOne({
+        where: { scenarioId: loaded(req, 'scenario').id, number: params.number },
+        relations: { createdBy: true },
+      });
       if (!revision) throw notFound(`Revision ${params.number}`);
       res.json(toRevision(revision));
     }),
@@ -50,14 +53,32 @@ export function revisionsRouter(ctx: AppContext) {
       const user = currentUser(req);
       const revisionId = await ds.transaction(async (manager) => {
         // The row lock serialises concurrent saves of one scenario, so numbers never collide.
-        const locked = await manager.getRepository(ScenarioEntity).findOneOrFail({ where: { id: scenario.id }, lock: { mode: 'pessimistic_write' } });
-        const latest = await manager.getRepository(ScenarioRevisionEntity).findOneOrFail({ where: { id: latestRevisionIdOf(locked) }, select: { id: true, number: true } });
+        const locked = await manager
+          .getRepository(ScenarioEntity)
+          .findOneOrFail({ where: { id: scenario.id }, lock: { mode: 'pessimistic_write' } });
+        const latest = await manager
+          .getRepository(ScenarioRevisionEntity)
+          .findOneOrFail({ where: { id: latestRevisionIdOf(locked) }, select: { id: true, number: true } });
         if (body.baseRevisionNumber !== undefined && body.baseRevisionNumber !== latest.number) {
-          throw conflict(`This scenario was saved as revision ${latest.number} since you opened revision ${body.baseRevisionNumber}; reload it and apply your changes again.`, [
-            { path: 'baseRevisionNumber', message: `is ${body.baseRevisionNumber} but the latest revision is ${latest.number}` },
-          ]);
+          throw conflict(
+            `This scenario was saved as revision ${latest.number} since you opened revision ${body.baseRevisionNumber}; reload it and apply your changes again.`,
+            [
+              {
+                path: 'baseRevisionNumber',
+                message: `is ${body.baseRevisionNumber} but the latest revision is ${latest.number}`,
+              },
+            ],
+          );
         }
-        const revision = await manager.getRepository(ScenarioRevisionEntity).save({ scenarioId: scenario.id, number: latest.number + 1, document: body.document, message: body.message ?? '', createdById: user.id });
+        const revision = await manager
+          .getRepository(ScenarioRevisionEntity)
+          .save({
+            scenarioId: scenario.id,
+            number: latest.number + 1,
+            document: body.document,
+            message: body.message ?? '',
+            createdById: user.id,
+          });
         // A name changed in the document renames the scenario; an unchanged one leaves a scenario named
         // apart from its document (a copy, the demo's short names) as it was.
         const previous = await manager
@@ -67,9 +88,21 @@ export function revisionsRouter(ctx: AppContext) {
           .where('r.id = :id', { id: latest.id })
           .getRawOne<{ name: string | null }>();
         const renamed = previous?.name !== body.document.name;
-        await manager.getRepository(ScenarioEntity).update({ id: scenario.id }, { latestRevisionId: revision.id, ...(renamed ? { name: body.document.name } : {}) });
+        await manager
+          .getRepository(ScenarioEntity)
+          .update(
+            { id: scenario.id },
+            { latestRevisionId: revision.id, ...(renamed ? { name: body.document.name } : {}) },
+          );
         await touchProject(manager, locked.projectId);
-        await recordAudit(manager, { organisationId: scenario.project?.organisationId ?? null, actorId: user.id, action: 'create', entity: 'revision', entityId: revision.id, detail: { scenarioId: scenario.id, number: revision.number } });
+        await recordAudit(manager, {
+          organisationId: scenario.project?.organisationId ?? null,
+          actorId: user.id,
+          action: 'create',
+          entity: 'revision',
+          entityId: revision.id,
+          detail: { scenarioId: scenario.id, number: revision.number },
+        });
         return revision.id;
       });
       const saved = await revisions().findOneOrFail({ where: { id: revisionId }, relations: { createdBy: true } });

@@ -25,7 +25,14 @@ const requireRunAuthorOrOwner: RequestHandler = (req, _res, next) => {
 
 function runAudit(req: Request, action: 'update' | 'delete', detail: Record<string, unknown>): AuditInput {
   const run = loaded(req, 'run');
-  return { organisationId: run.scenario?.project?.organisationId ?? null, actorId: currentUser(req).id, action, entity: 'run', entityId: run.id, detail };
+  return {
+    organisationId: run.scenario?.project?.organisationId ?? null,
+    actorId: currentUser(req).id,
+    action,
+    entity: 'run',
+    entityId: run.id,
+    detail,
+  };
 }
 
 export function runsRouter(ctx: AppContext) {
@@ -56,17 +63,28 @@ export function runsRouter(ctx: AppContext) {
     validate({ body: createRunSchema }, async ({ body }, req, res) => {
       const scenario = loaded(req, 'scenario');
       const user = currentUser(req);
-      const findExisting = () => runs().findOne({ where: { scenarioId: scenario.id, clientRunId: body.clientRunId }, select: { id: true, revisionId: true } });
+      const findExisting = () =>
+        runs().findOne({
+          where: { scenarioId: scenario.id, clientRunId: body.clientRunId },
+          select: { id: true, revisionId: true },
+        });
       const answerRetry = async (existing: { id: string; revisionId: string }) => {
         if (existing.revisionId !== body.revisionId) {
-          throw conflict('This clientRunId was already used for a run of another revision; choose a new clientRunId.', [{ path: 'clientRunId', message: 'is already used by another run' }]);
+          throw conflict('This clientRunId was already used for a run of another revision; choose a new clientRunId.', [
+            { path: 'clientRunId', message: 'is already used by another run' },
+          ]);
         }
         res.status(200).json(await runListItem(ds, existing.id));
       };
       const existing = await findExisting();
       if (existing) return answerRetry(existing);
-      const revision = await ds.getRepository(ScenarioRevisionEntity).findOne({ where: { id: body.revisionId, scenarioId: scenario.id }, select: { id: true, number: true } });
-      if (!revision) throw badRequest('The revision does not belong to this scenario.', [{ path: 'revisionId', message: 'is not a revision of this scenario' }]);
+      const revision = await ds
+        .getRepository(ScenarioRevisionEntity)
+        .findOne({ where: { id: body.revisionId, scenarioId: scenario.id }, select: { id: true, number: true } });
+      if (!revision)
+        throw badRequest('The revision does not belong to this scenario.', [
+          { path: 'revisionId', message: 'is not a revision of this scenario' },
+        ]);
       const { summary, seed, engineVersion } = summariseRun(body.settings, body.results);
       try {
         const run = await audited(
@@ -89,7 +107,14 @@ export function runsRouter(ctx: AppContext) {
               createdById: user.id,
             });
           },
-          (saved) => ({ organisationId: scenario.project?.organisationId ?? null, actorId: user.id, action: 'run', entity: 'run', entityId: saved.id, detail: { scenarioId: scenario.id, revisionNumber: revision.number } }),
+          (saved) => ({
+            organisationId: scenario.project?.organisationId ?? null,
+            actorId: user.id,
+            action: 'run',
+            entity: 'run',
+            entityId: saved.id,
+            detail: { scenarioId: scenario.id, revisionNumber: revision.number },
+          }),
         );
         res.status(201).json(await runListItem(ds, run.id));
       } catch (error) {
@@ -111,14 +136,22 @@ export function runsRouter(ctx: AppContext) {
     requireRunAuthorOrOwner,
     validate({ body: updateRunSchema }, async ({ body }, req, res) => {
       const run = loaded(req, 'run');
-      await audited(ds, (manager) => manager.getRepository(RunEntity).update({ id: run.id }, { name: body.name }), runAudit(req, 'update', { name: body.name }));
+      await audited(
+        ds,
+        (manager) => manager.getRepository(RunEntity).update({ id: run.id }, { name: body.name }),
+        runAudit(req, 'update', { name: body.name }),
+      );
       res.json(await runListItem(ds, run.id));
     }),
   );
 
   router.delete('/runs/:id', loadRun(ctx), requireRunAuthorOrOwner, async (req, res) => {
     const run = loaded(req, 'run');
-    await audited(ds, (manager) => manager.getRepository(RunEntity).delete({ id: run.id }), runAudit(req, 'delete', { name: run.name }));
+    await audited(
+      ds,
+      (manager) => manager.getRepository(RunEntity).delete({ id: run.id }),
+      runAudit(req, 'delete', { name: run.name }),
+    );
     res.json({ ok: true });
   });
 

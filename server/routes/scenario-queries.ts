@@ -5,7 +5,14 @@ import type { ScenarioDetail, ScenarioSummary } from '../../shared/api/scenarios
 import { RunEntity, ScenarioEntity, ScenarioRevisionEntity } from '../db/entities';
 import { toScenarioDetail, toScenarioSummary } from '../mappers/scenarios';
 
-const summaryColumns = { id: true, scenarioId: true, number: true, message: true, createdAt: true, createdById: true } as const;
+const summaryColumns = {
+  id: true,
+  scenarioId: true,
+  number: true,
+  message: true,
+  createdAt: true,
+  createdById: true,
+} as const;
 
 export async function runCounts(ds: DataSource, scenarioIds: string[]): Promise<Map<string, number>> {
   if (scenarioIds.length === 0) return new Map();
@@ -23,10 +30,15 @@ export async function runCounts(ds: DataSource, scenarioIds: string[]): Promise<
 export async function scenarioSummaries(ds: DataSource, scenarios: ScenarioEntity[]): Promise<ScenarioSummary[]> {
   const revisionIds = scenarios.map((s) => s.latestRevisionId).filter((id): id is string => id !== null);
   const revisions = revisionIds.length
-    ? await ds.getRepository(ScenarioRevisionEntity).find({ where: { id: In(revisionIds) }, select: summaryColumns, relations: { createdBy: true } })
+    ? await ds
+        .getRepository(ScenarioRevisionEntity)
+        .find({ where: { id: In(revisionIds) }, select: summaryColumns, relations: { createdBy: true } })
     : [];
   const byId = new Map(revisions.map((r) => [r.id, r]));
-  const counts = await runCounts(ds, scenarios.map((s) => s.id));
+  const counts = await runCounts(
+    ds,
+    scenarios.map((s) => s.id),
+  );
   return scenarios.flatMap((s) => {
     const latest = s.latestRevisionId ? byId.get(s.latestRevisionId) : undefined;
     return latest ? [toScenarioSummary(s, latest, counts.get(s.id) ?? 0)] : [];
@@ -40,8 +52,12 @@ export function latestRevisionIdOf(scenario: ScenarioEntity): string {
 }
 
 export async function scenarioDetail(ds: DataSource, scenarioId: string): Promise<ScenarioDetail> {
-  const scenario = await ds.getRepository(ScenarioEntity).findOneOrFail({ where: { id: scenarioId }, relations: { createdBy: true } });
-  const latest = await ds.getRepository(ScenarioRevisionEntity).findOneOrFail({ where: { id: latestRevisionIdOf(scenario) }, relations: { createdBy: true } });
+  const scenario = await ds
+    .getRepository(ScenarioEntity)
+    .findOneOrFail({ where: { id: scenarioId }, relations: { createdBy: true } });
+  const latest = await ds
+    .getRepository(ScenarioRevisionEntity)
+    .findOneOrFail({ where: { id: latestRevisionIdOf(scenario) }, relations: { createdBy: true } });
   const counts = await runCounts(ds, [scenarioId]);
   return toScenarioDetail(scenario, latest, counts.get(scenarioId) ?? 0);
 }

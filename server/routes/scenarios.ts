@@ -21,7 +21,9 @@ export function scenariosRouter(ctx: AppContext) {
 
   router.get('/projects/:id/scenarios', loadProject(ctx), async (req, res) => {
     const project = loaded(req, 'project');
-    const scenarios = await ds.getRepository(ScenarioEntity).find({ where: { projectId: project.id }, relations: { createdBy: true }, order: { updatedAt: 'DESC' } });
+    const scenarios = await ds
+      .getRepository(ScenarioEntity)
+      .find({ where: { projectId: project.id }, relations: { createdBy: true }, order: { updatedAt: 'DESC' } });
     res.json(await scenarioSummaries(ds, scenarios));
   });
 
@@ -35,13 +37,33 @@ export function scenariosRouter(ctx: AppContext) {
       const user = currentUser(req);
       const { clientId } = body;
       const { value: scenario, created } = await createOnce(
-        () => (clientId ? ds.getRepository(ScenarioEntity).findOne({ where: { projectId: project.id, clientId }, select: { id: true } }) : Promise.resolve(null)),
+        () =>
+          clientId
+            ? ds
+                .getRepository(ScenarioEntity)
+                .findOne({ where: { projectId: project.id, clientId }, select: { id: true } })
+            : Promise.resolve(null),
         () =>
           audited(
             ds,
             (manager) =>
-              createScenarioWithFirstRevision(manager, { projectId: project.id, name: body.name, description: body.description ?? '', document: body.document, message: 'Created', createdById: user.id, clientId: clientId ?? null }),
-            (saved) => ({ organisationId: project.organisationId, actorId: user.id, action: 'create', entity: 'scenario', entityId: saved.id, detail: { name: saved.name, projectId: project.id } }),
+              createScenarioWithFirstRevision(manager, {
+                projectId: project.id,
+                name: body.name,
+                description: body.description ?? '',
+                document: body.document,
+                message: 'Created',
+                createdById: user.id,
+                clientId: clientId ?? null,
+              }),
+            (saved) => ({
+              organisationId: project.organisationId,
+              actorId: user.id,
+              action: 'create',
+              entity: 'scenario',
+              entityId: saved.id,
+              detail: { name: saved.name, projectId: project.id },
+            }),
           ),
       );
       res.status(created ? 201 : 200).json(await scenarioDetail(ds, scenario.id));
@@ -58,34 +80,42 @@ export function scenariosRouter(ctx: AppContext) {
     requireRole('engineer'),
     validate({ body: updateScenarioSchema }, async ({ body }, req, res) => {
       const scenario = loaded(req, 'scenario');
-      await audited(ds, async (manager) => {
-        await manager.getRepository(ScenarioEntity).update({ id: scenario.id }, body);
-        await touchProject(manager, scenario.projectId);
-      }, {
-        organisationId: scenario.project?.organisationId ?? null,
-        actorId: currentUser(req).id,
-        action: 'update',
-        entity: 'scenario',
-        entityId: scenario.id,
-        detail: { ...body },
-      });
+      await audited(
+        ds,
+        async (manager) => {
+          await manager.getRepository(ScenarioEntity).update({ id: scenario.id }, body);
+          await touchProject(manager, scenario.projectId);
+        },
+        {
+          organisationId: scenario.project?.organisationId ?? null,
+          actorId: currentUser(req).id,
+          action: 'update',
+          entity: 'scenario',
+          entityId: scenario.id,
+          detail: { ...body },
+        },
+      );
       res.json(await scenarioDetail(ds, scenario.id));
     }),
   );
 
   router.delete('/scenarios/:id', loadScenario(ctx), requireRole('engineer'), async (req, res) => {
     const scenario = loaded(req, 'scenario');
-    await audited(ds, async (manager) => {
-      await manager.getRepository(ScenarioEntity).delete({ id: scenario.id });
-      await touchProject(manager, scenario.projectId);
-    }, {
-      organisationId: scenario.project?.organisationId ?? null,
-      actorId: currentUser(req).id,
-      action: 'delete',
-      entity: 'scenario',
-      entityId: scenario.id,
-      detail: { name: scenario.name },
-    });
+    await audited(
+      ds,
+      async (manager) => {
+        await manager.getRepository(ScenarioEntity).delete({ id: scenario.id });
+        await touchProject(manager, scenario.projectId);
+      },
+      {
+        organisationId: scenario.project?.organisationId ?? null,
+        actorId: currentUser(req).id,
+        action: 'delete',
+        entity: 'scenario',
+        entityId: scenario.id,
+        detail: { name: scenario.name },
+      },
+    );
     res.json({ ok: true });
   });
 

@@ -23,20 +23,32 @@ import { shareSubjects } from '../shares/share-subjects';
 /** Links listed per subject; older ones beyond this are not shown (they stay valid until they expire). */
 export const SHARES_LISTED_MAX = 100;
 
-const goneLink = () => new HttpError(404, 'not_found', 'This shared link does not exist, has expired or was withdrawn. Ask whoever sent it for a new one.');
+const goneLink = () =>
+  new HttpError(
+    404,
+    'not_found',
+    'This shared link does not exist, has expired or was withdrawn. Ask whoever sent it for a new one.',
+  );
 
 export function sharesRouter(ctx: AppContext) {
   const { ds, publicOrigin } = ctx;
   const router = express.Router();
 
   /** The caller's role in the organisation owning the thing, or a 404 that says nothing more. */
-  async function roleFor(organisationId: string | null, userId: string, what: string): Promise<{ organisationId: string; role: Role }> {
+  async function roleFor(
+    organisationId: string | null,
+    userId: string,
+    what: string,
+  ): Promise<{ organisationId: string; role: Role }> {
     const role = organisationId ? await roleIn(ds, organisationId, userId) : null;
     if (!organisationId || !role) throw notFound(what);
     return { organisationId, role };
   }
   const mayShare = (role: Role) => {
-    if (!canEdit(role)) throw forbidden(`Only an engineer or owner in this organisation may share or withdraw links; your role is ${role}.`);
+    if (!canEdit(role))
+      throw forbidden(
+        `Only an engineer or owner in this organisation may share or withdraw links; your role is ${role}.`,
+      );
   };
 
   router.post(
@@ -45,7 +57,11 @@ export function sharesRouter(ctx: AppContext) {
     validate({ body: createShareSchema }, async ({ body }, req, res) => {
       const subject = shareSubjects[body.kind];
       const user = currentUser(req);
-      const { organisationId, role } = await roleFor(await subject.organisationOf(ds, body.subjectId), user.id, subject.what);
+      const { organisationId, role } = await roleFor(
+        await subject.organisationOf(ds, body.subjectId),
+        user.id,
+        subject.what,
+      );
       mayShare(role);
       const { token, hash } = newLinkToken();
       const saved = await audited(
@@ -61,9 +77,18 @@ export function sharesRouter(ctx: AppContext) {
             revokedAt: null,
             lastOpenedAt: null,
           }),
-        (row) => ({ organisationId, actorId: user.id, action: 'share', entity: 'share', entityId: row.id, detail: { kind: body.kind, subjectId: body.subjectId, expiresInDays: body.expiresInDays } }),
+        (row) => ({
+          organisationId,
+          actorId: user.id,
+          action: 'share',
+          entity: 'share',
+          entityId: row.id,
+          detail: { kind: body.kind, subjectId: body.subjectId, expiresInDays: body.expiresInDays },
+        }),
       );
-      const created = await ds.getRepository(ShareLinkEntity).findOneOrFail({ where: { id: saved.id }, relations: { createdBy: true } });
+      const created = await ds
+        .getRepository(ShareLinkEntity)
+        .findOneOrFail({ where: { id: saved.id }, relations: { createdBy: true } });
       res.status(201).json({ ...toShare(created), url: publicLink(req, publicOrigin, `/shared#${token}`) });
     }),
   );
@@ -90,14 +115,18 @@ export function sharesRouter(ctx: AppContext) {
     const { role } = await roleFor(share?.organisationId ?? null, currentUser(req).id, 'The share link');
     mayShare(role);
     if (share && !share.revokedAt) {
-      await audited(ds, (manager) => manager.getRepository(ShareLinkEntity).update({ id: share.id }, { revokedAt: new Date() }), {
-        organisationId: share.organisationId,
-        actorId: currentUser(req).id,
-        action: 'share-revoke',
-        entity: 'share',
-        entityId: share.id,
-        detail: { kind: share.kind, subjectId: share.subjectId },
-      });
+      await audited(
+        ds,
+        (manager) => manager.getRepository(ShareLinkEntity).update({ id: share.id }, { revokedAt: new Date() }),
+        {
+          organisationId: share.organisationId,
+          actorId: currentUser(req).id,
+          action: 'share-revoke',
+          entity: 'share',
+          entityId: share.id,
+          detail: { kind: share.kind, subjectId: share.subjectId },
+        },
+      );
     }
     res.json({ ok: true });
   });
@@ -113,7 +142,12 @@ export function sharesRouter(ctx: AppContext) {
       await ds.getRepository(ShareLinkEntity).update({ id: share.id }, { lastOpenedAt: new Date() });
       const organisation = await ds.getRepository(OrganisationEntity).findOneByOrFail({ id: share.organisationId });
       res.set('X-Robots-Tag', 'noindex');
-      res.json(await subject.view(ds, share.subjectId, { expiresAt: share.expiresAt.toISOString(), organisationName: organisation.name }));
+      res.json(
+        await subject.view(ds, share.subjectId, {
+          expiresAt: share.expiresAt.toISOString(),
+          organisationName: organisation.name,
+        }),
+      );
     }),
   );
 

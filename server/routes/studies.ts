@@ -4,14 +4,25 @@
 import express, { type RequestHandler } from 'express';
 import { z } from 'zod';
 import { canEdit } from '../../shared/api/roles';
-import { createStudySchema, saveJobResultSchema, updateStudySchema, type SaveJobResultInput } from '../../shared/api/studies';
+import {
+  createStudySchema,
+  saveJobResultSchema,
+  updateStudySchema,
+  type SaveJobResultInput,
+} from '../../shared/api/studies';
 import { figuresOf } from '../../shared/studies/replication-summary-json';
 import type { FieldIssue } from '../../shared/api/errors';
 import { loadProject, loadStudy } from '../access/loaders';
 import { requireRole } from '../access/require-role';
 import type { AppContext } from '../app-context';
 import { audited } from '../audit/record-audit';
-import { ScenarioRevisionEntity, StudyEntity, StudyJobResultEntity, StudyPointEntity, type ProjectEntity } from '../db/entities';
+import {
+  ScenarioRevisionEntity,
+  StudyEntity,
+  StudyJobResultEntity,
+  StudyPointEntity,
+  type ProjectEntity,
+} from '../db/entities';
 import { badRequest, conflict, forbidden } from '../http/http-error';
 import { currentUser, loaded } from '../http/request-context';
 import { validate } from '../http/validate';
@@ -25,7 +36,13 @@ const requireStudyAuthorOrOwner: RequestHandler = (req, _res, next) => {
   next(forbidden('Only the study’s author or an organisation owner may delete this study.'));
 };
 
-const pointParamsSchema = z.object({ id: z.uuid({ message: 'must be a valid id (UUID)' }), pointIndex: z.coerce.number({ error: 'must be a whole number' }).int('must be a whole number').min(0, 'must be 0 or more') });
+const pointParamsSchema = z.object({
+  id: z.uuid({ message: 'must be a valid id (UUID)' }),
+  pointIndex: z.coerce
+    .number({ error: 'must be a whole number' })
+    .int('must be a whole number')
+    .min(0, 'must be 0 or more'),
+});
 
 /** The revisions among `ids` that belong to scenarios of the project. */
 async function revisionsInProject(ds: DataSource, project: ProjectEntity, ids: string[]): Promise<Set<string>> {
@@ -42,15 +59,27 @@ async function revisionsInProject(ds: DataSource, project: ProjectEntity, ids: s
 function checkJobKey(study: StudyEntity, body: SaveJobResultInput): FieldIssue[] {
   const { replications } = study.settings;
   const issues: FieldIssue[] = [];
-  if (body.pointIndex >= study.pointCount) issues.push({ path: 'pointIndex', message: `must be below ${study.pointCount}, the number of points` });
+  if (body.pointIndex >= study.pointCount)
+    issues.push({ path: 'pointIndex', message: `must be below ${study.pointCount}, the number of points` });
   if (body.first >= replications || body.first % study.blockSize !== 0) {
-    issues.push({ path: 'first', message: `must be a multiple of the block size ${study.blockSize} below ${replications}, the replications` });
+    issues.push({
+      path: 'first',
+      message: `must be a multiple of the block size ${study.blockSize} below ${replications}, the replications`,
+    });
   } else if (body.count !== Math.min(study.blockSize, replications - body.first)) {
-    issues.push({ path: 'count', message: `must be ${Math.min(study.blockSize, replications - body.first)} for the job starting at replication ${body.first}` });
+    issues.push({
+      path: 'count',
+      message: `must be ${Math.min(study.blockSize, replications - body.first)} for the job starting at replication ${body.first}`,
+    });
   }
   if (body.outcome === 'done') {
-    if (body.summaries.length !== body.count) issues.push({ path: 'summaries', message: `must hold ${body.count} replication summaries, one per replication of the job` });
-    if (body.events.length !== body.count) issues.push({ path: 'events', message: `must hold ${body.count} event counts, one per replication of the job` });
+    if (body.summaries.length !== body.count)
+      issues.push({
+        path: 'summaries',
+        message: `must hold ${body.count} replication summaries, one per replication of the job`,
+      });
+    if (body.events.length !== body.count)
+      issues.push({ path: 'events', message: `must hold ${body.count} event counts, one per replication of the job` });
   }
   return issues;
 }
@@ -70,14 +99,22 @@ export function studiesRouter(ctx: AppContext) {
     validate({ body: createStudySchema }, async ({ body }, req, res) => {
       const project = loaded(req, 'project');
       const user = currentUser(req);
-      const wanted = [...new Set([body.revisionId, ...body.points.flatMap((p) => (p.revisionId ? [p.revisionId] : []))])];
+      const wanted = [
+        ...new Set([body.revisionId, ...body.points.flatMap((p) => (p.revisionId ? [p.revisionId] : []))]),
+      ];
       const known = await revisionsInProject(ds, project, wanted);
       const issues: FieldIssue[] = [];
-      if (!known.has(body.revisionId)) issues.push({ path: 'revisionId', message: 'is not a revision of a scenario in this project' });
+      if (!known.has(body.revisionId))
+        issues.push({ path: 'revisionId', message: 'is not a revision of a scenario in this project' });
       body.points.forEach((p, i) => {
-        if (p.revisionId && !known.has(p.revisionId)) issues.push({ path: `points[${i}].revisionId`, message: 'is not a revision of a scenario in this project' });
+        if (p.revisionId && !known.has(p.revisionId))
+          issues.push({ path: `points[${i}].revisionId`, message: 'is not a revision of a scenario in this project' });
       });
-      if (issues.length > 0) throw badRequest(`Invalid input in the request body: ${issues.map((i) => `${i.path} ${i.message}`).join('; ')}`, issues);
+      if (issues.length > 0)
+        throw badRequest(
+          `Invalid input in the request body: ${issues.map((i) => `${i.path} ${i.message}`).join('; ')}`,
+          issues,
+        );
       const blockSize = Math.min(body.blockSize ?? body.settings.replications, body.settings.replications);
       const study = await audited(
         ds,
@@ -97,10 +134,27 @@ export function studiesRouter(ctx: AppContext) {
             jobCount: body.points.length * Math.ceil(body.settings.replications / blockSize),
             createdById: user.id,
           });
-          await manager.getRepository(StudyPointEntity).insert(body.points.map((p, index) => ({ studyId: saved.id, index, revisionId: p.revisionId ?? body.revisionId, label: p.label, changes: p.changes })));
+          await manager
+            .getRepository(StudyPointEntity)
+            .insert(
+              body.points.map((p, index) => ({
+                studyId: saved.id,
+                index,
+                revisionId: p.revisionId ?? body.revisionId,
+                label: p.label,
+                changes: p.changes,
+              })),
+            );
           return saved;
         },
-        (saved) => ({ organisationId: project.organisationId, actorId: user.id, action: 'create', entity: 'study', entityId: saved.id, detail: { kind: body.kind, points: body.points.length } }),
+        (saved) => ({
+          organisationId: project.organisationId,
+          actorId: user.id,
+          action: 'create',
+          entity: 'study',
+          entityId: saved.id,
+          detail: { kind: body.kind, points: body.points.length },
+        }),
       );
       res.status(201).json(await studyDetail(ds, study.id));
     }),
@@ -110,11 +164,18 @@ export function studiesRouter(ctx: AppContext) {
     res.json(await studyDetail(ds, loaded(req, 'study').id));
   });
 
-  router.get('/studies/:id/points/:pointIndex/blocks', loadStudy(ctx), validate({ params: pointParamsSchema }, async ({ params }, req, res) => {
-    const study = loaded(req, 'study');
-    if (params.pointIndex >= study.pointCount) throw badRequest(`Invalid input in the address: pointIndex must be below ${study.pointCount}`, [{ path: 'pointIndex', message: `must be below ${study.pointCount}, the number of points` }]);
-    res.json(await pointBlocks(ds, study.id, params.pointIndex));
-  }));
+  router.get(
+    '/studies/:id/points/:pointIndex/blocks',
+    loadStudy(ctx),
+    validate({ params: pointParamsSchema }, async ({ params }, req, res) => {
+      const study = loaded(req, 'study');
+      if (params.pointIndex >= study.pointCount)
+        throw badRequest(`Invalid input in the address: pointIndex must be below ${study.pointCount}`, [
+          { path: 'pointIndex', message: `must be below ${study.pointCount}, the number of points` },
+        ]);
+      res.json(await pointBlocks(ds, study.id, params.pointIndex));
+    }),
+  );
 
   router.patch(
     '/studies/:id',
@@ -123,8 +184,14 @@ export function studiesRouter(ctx: AppContext) {
     validate({ body: updateStudySchema }, async ({ body }, req, res) => {
       const study = loaded(req, 'study');
       const finished = study.status === 'done' || study.status === 'failedPoints';
-      if (body.status === 'cancelled' && finished) throw conflict('This study has finished; there is nothing to cancel.', [{ path: 'status', message: 'the study has already finished' }]);
-      const changes = { ...(body.name !== undefined && { name: body.name }), ...(body.status !== undefined && !finished && { status: body.status }) };
+      if (body.status === 'cancelled' && finished)
+        throw conflict('This study has finished; there is nothing to cancel.', [
+          { path: 'status', message: 'the study has already finished' },
+        ]);
+      const changes = {
+        ...(body.name !== undefined && { name: body.name }),
+        ...(body.status !== undefined && !finished && { status: body.status }),
+      };
       await audited(ds, (manager) => manager.getRepository(StudyEntity).update({ id: study.id }, changes), {
         organisationId: study.project?.organisationId ?? null,
         actorId: currentUser(req).id,
@@ -157,7 +224,11 @@ export function studiesRouter(ctx: AppContext) {
     validate({ body: saveJobResultSchema }, async ({ body }, req, res) => {
       const study = loaded(req, 'study');
       const issues = checkJobKey(study, body);
-      if (issues.length > 0) throw badRequest(`Invalid input in the request body: ${issues.map((i) => `${i.path} ${i.message}`).join('; ')}`, issues);
+      if (issues.length > 0)
+        throw badRequest(
+          `Invalid input in the request body: ${issues.map((i) => `${i.path} ${i.message}`).join('; ')}`,
+          issues,
+        );
       const done = body.outcome === 'done';
       const inserted = await ds
         .getRepository(StudyJobResultEntity)

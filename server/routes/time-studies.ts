@@ -26,7 +26,12 @@ function nameFromFile(fileName: string): string {
 }
 
 /** Studies belong to the scenario's data, so their trail sits on the scenario (action `update`). */
-function studyAudit(req: Request, study: TimeStudyEntity, change: 'time study added' | 'time study deleted', organisationId: string | null): AuditInput {
+function studyAudit(
+  req: Request,
+  study: TimeStudyEntity,
+  change: 'time study added' | 'time study deleted',
+  organisationId: string | null,
+): AuditInput {
   return {
     organisationId,
     actorId: currentUser(req).id,
@@ -41,32 +46,41 @@ export function timeStudiesRouter(ctx: AppContext) {
   const { ds } = ctx;
   const router = express.Router();
 
-  router.post('/scenarios/:id/time-studies', loadScenario(ctx), requireRole('engineer'), receiveTimeStudyUpload, async (req, res) => {
-    const scenario = loaded(req, 'scenario');
-    const fields = parseInput(uploadTimeStudyFieldsSchema, req.body ?? {}, 'body');
-    if (!req.file) throw badRequest('Attach the CSV of measured cycle times in the form field named "file".', [{ path: 'file', message: 'is required' }]);
-    const { column, samples } = readCycleTimes(csvTextOf(req.file.buffer, req.file.originalname));
-    const m = mean(samples);
-    const study = await audited(
-      ds,
-      (manager) =>
-        manager.getRepository(TimeStudyEntity).save({
-          scenarioId: scenario.id,
-          stationId: fields.stationId,
-          name: fields.name ?? nameFromFile(req.file?.originalname ?? ''),
-          fileName: req.file?.originalname ?? '',
-          sampleColumn: column,
-          sampleCount: samples.length,
-          mean: m,
-          sd: samples.length > 1 ? Math.sqrt(sumOfSquares(samples, m) / (samples.length - 1)) : 0,
-          samples,
-          analysis: analyseTimeStudy(samples),
-          createdById: currentUser(req).id,
-        }),
-      (saved) => studyAudit(req, saved, 'time study added', scenario.project?.organisationId ?? null),
-    );
-    res.status(201).json(await timeStudyDetail(ds, study.id));
-  });
+  router.post(
+    '/scenarios/:id/time-studies',
+    loadScenario(ctx),
+    requireRole('engineer'),
+    receiveTimeStudyUpload,
+    async (req, res) => {
+      const scenario = loaded(req, 'scenario');
+      const fields = parseInput(uploadTimeStudyFieldsSchema, req.body ?? {}, 'body');
+      if (!req.file)
+        throw badRequest('Attach the CSV of measured cycle times in the form field named "file".', [
+          { path: 'file', message: 'is required' },
+        ]);
+      const { column, samples } = readCycleTimes(csvTextOf(req.file.buffer, req.file.originalname));
+      const m = mean(samples);
+      const study = await audited(
+        ds,
+        (manager) =>
+          manager.getRepository(TimeStudyEntity).save({
+            scenarioId: scenario.id,
+            stationId: fields.stationId,
+            name: fields.name ?? nameFromFile(req.file?.originalname ?? ''),
+            fileName: req.file?.originalname ?? '',
+            sampleColumn: column,
+            sampleCount: samples.length,
+            mean: m,
+            sd: samples.length > 1 ? Math.sqrt(sumOfSquares(samples, m) / (samples.length - 1)) : 0,
+            samples,
+            analysis: analyseTimeStudy(samples),
+            createdById: currentUser(req).id,
+          }),
+        (saved) => studyAudit(req, saved, 'time study added', scenario.project?.organisationId ?? null),
+      );
+      res.status(201).json(await timeStudyDetail(ds, study.id));
+    },
+  );
 
   router.get(
     '/scenarios/:id/time-studies',
@@ -82,7 +96,11 @@ export function timeStudiesRouter(ctx: AppContext) {
 
   router.delete('/time-studies/:id', loadTimeStudy(ctx), requireRole('engineer'), async (req, res) => {
     const study = loadedTimeStudy(req);
-    await audited(ds, (manager) => manager.getRepository(TimeStudyEntity).delete({ id: study.id }), studyAudit(req, study, 'time study deleted', study.scenario?.project?.organisationId ?? null));
+    await audited(
+      ds,
+      (manager) => manager.getRepository(TimeStudyEntity).delete({ id: study.id }),
+      studyAudit(req, study, 'time study deleted', study.scenario?.project?.organisationId ?? null),
+    );
     res.json({ ok: true });
   });
 

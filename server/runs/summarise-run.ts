@@ -14,9 +14,10 @@ export interface RunColumns {
 export function summariseRun(settings: RunSettings, results: RunResult): RunColumns {
   // Both went through the same schema, so equal settings serialise identically.
   if (JSON.stringify(settings) !== JSON.stringify(results.settings)) {
-    throw badRequest('The run settings differ from the settings stored inside the results; send the settings the engine ran with.', [
-      { path: 'settings', message: 'does not match results.settings' },
-    ]);
+    throw badRequest(
+      'The run settings differ from the settings stored inside the results; send the settings the engine ran with.',
+      [{ path: 'settings', message: 'does not match results.settings' }],
+    );
   }
   return {
     summary: runSummaryOf(results),

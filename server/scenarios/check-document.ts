@@ -9,5 +9,8 @@ export function assertRunnable(document: Scenario, field = 'document'): void {
   const issues = staticChecks(document).slice(0, MAX_REPORTED_ISSUES);
   if (issues.length === 0) return;
   const fields = issues.map((issue) => ({ path: `${field}.${issue.path}`, message: issue.message }));
-  throw badRequest(`The scenario cannot be simulated as saved: ${fields.map((f) => `${f.path} ${f.message}`).join('; ')}`, fields);
+  throw badRequest(
+    `The scenario cannot be simulated as saved: ${fields.map((f) => `${f.path} ${f.message}`).join('; ')}`,
+    fields,
+  );
 }

@@ -15,10 +15,28 @@ export interface NewScenario {
   clientId?: string | null;
 }
 
-export async function createScenarioWithFirstRevision(manager: EntityManager, input: NewScenario): Promise<ScenarioEntity> {
+export async function createScenarioWithFirstRevision(
+  manager: EntityManager,
+  input: NewScenario,
+): Promise<ScenarioEntity> {
   const scenarios = manager.getRepository(ScenarioEntity);
-  const scenario = await scenarios.save({ projectId: input.projectId, name: input.name, description: input.description, latestRevisionId: null, createdById: input.createdById, clientId: input.clientId ?? null });
-  const revision = await manager.getRepository(ScenarioRevisionEntity).save({ scenarioId: scenario.id, number: 1, document: input.document, message: input.message, createdById: input.createdById });
+  const scenario = await scenarios.save({
+    projectId: input.projectId,
+    name: input.name,
+    description: input.description,
+    latestRevisionId: null,
+    createdById: input.createdById,
+    clientId: input.clientId ?? null,
+  });
+  const revision = await manager
+    .getRepository(ScenarioRevisionEntity)
+    .save({
+      scenarioId: scenario.id,
+      number: 1,
+      document: input.document,
+      message: input.message,
+      createdById: input.createdById,
+    });
   await scenarios.update({ id: scenario.id }, { latestRevisionId: revision.id });
   await touchProject(manager, input.projectId);
   return { ...scenario, latestRevisionId: revision.id };

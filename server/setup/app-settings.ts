@@ -4,7 +4,6 @@ import { SetupError } from './log';
 
 export const HTTP_HOST = '127.0.0.1';
 
-
 export function demoSignInText(): string {
   return [
     `Demo sign-in (password for each: ${DEMO_PASSWORD}):`,
@@ -15,6 +14,7 @@ export function demoSignInText(): string {
 
 /** Turns "address in use" into advice; other errors pass through unchanged. */
 export function portInUseHelp(error: unknown, port: number, advice: string): unknown {
-  const inUse = (error as NodeJS.ErrnoException).code === 'EADDRINUSE' || /already in use/i.test(String((error as Error).message));
+  const inUse =
+    (error as NodeJS.ErrnoException).code === 'EADDRINUSE' || /already in use/i.test(String((error as Error).message));
   return inUse ? new SetupError(`port ${port} is already in use; ${advice}`) : error;
 }

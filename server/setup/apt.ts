@@ -13,7 +13,9 @@ export function aptInstall(packages: string[], reason: string): void {
   for (const args of [['update'], ['install', '-y', ...packages]]) {
     const result = runCommand('apt-get', args, { inherit: true, env });
     if (result.status !== 0) {
-      throw new SetupError(`apt-get ${args.join(' ')} failed (exit ${result.status}); install ${list} by hand and retry.`);
+      throw new SetupError(
+        `apt-get ${args.join(' ')} failed (exit ${result.status}); install ${list} by hand and retry.`,
+      );
     }
   }
 }

@@ -6,7 +6,16 @@ import { join } from 'node:path';
 import { say, SetupError } from './log';
 import { clientOutDir, projectRoot } from './paths';
 
-const CLIENT_SOURCES = ['src', 'index.html', 'shared', 'workers', 'public', 'vite.config.ts', 'tailwind.config.ts', 'package-lock.json'];
+const CLIENT_SOURCES = [
+  'src',
+  'index.html',
+  'shared',
+  'workers',
+  'public',
+  'vite.config.ts',
+  'tailwind.config.ts',
+  'package-lock.json',
+];
 
 function newestChange(path: string): number {
   if (!existsSync(path)) return 0;

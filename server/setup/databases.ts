@@ -5,7 +5,8 @@ import { redactUrl, SetupError } from './log';
 
 export function databaseName(url: string): string {
   const name = decodeURIComponent(new URL(url).pathname.replace(/^\//, ''));
-  if (!name) throw new SetupError(`the database URL ${redactUrl(url)} names no database (expected …/<name> at its end)`);
+  if (!name)
+    throw new SetupError(`the database URL ${redactUrl(url)} names no database (expected …/<name> at its end)`);
   return name;
 }
 
@@ -61,7 +62,9 @@ export async function createDatabase(url: string): Promise<boolean> {
 /** Drops the database named in `url`, closing its open connections first; no error when it is absent. */
 export async function dropDatabase(url: string): Promise<void> {
   const name = databaseName(url);
-  await withMaintenanceClient(url, (client) => client.query(`DROP DATABASE IF EXISTS ${quoteIdentifier(name)} WITH (FORCE)`));
+  await withMaintenanceClient(url, (client) =>
+    client.query(`DROP DATABASE IF EXISTS ${quoteIdentifier(name)} WITH (FORCE)`),
+  );
 }
 
 /** Client connections to the server other than this query's own (any database). */

@@ -21,7 +21,11 @@ function startVite(apiPort: number): void {
   const viteBin = join(projectRoot, 'node_modules', 'vite', 'bin', 'vite.js');
   const args = [viteBin, '--host', HTTP_HOST, '--port', String(VITE_PORT), '--strictPort'];
   // vite.config.ts reads PORT to point its /api proxy at the API.
-  const child = spawn(process.execPath, args, { cwd: projectRoot, stdio: 'inherit', env: { ...process.env, PORT: String(apiPort) } });
+  const child = spawn(process.execPath, args, {
+    cwd: projectRoot,
+    stdio: 'inherit',
+    env: { ...process.env, PORT: String(apiPort) },
+  });
   let stopping = false;
   onCleanup(async () => {
     stopping = true;
@@ -31,7 +35,9 @@ function startVite(apiPort: number): void {
   });
   child.once('exit', (code) => {
     if (stopping) return;
-    const why = new SetupError(`Vite's dev server stopped (exit ${code}); is port ${VITE_PORT} taken by another dev server?`);
+    const why = new SetupError(
+      `Vite's dev server stopped (exit ${code}); is port ${VITE_PORT} taken by another dev server?`,
+    );
     void failAndExit(why);
   });
 }

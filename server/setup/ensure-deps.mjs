@@ -28,7 +28,9 @@ function fail(message) {
 function checkNode() {
   const [major, minor] = process.versions.node.split('.').map(Number);
   if (major < 20 || (major === 20 && minor < 19)) {
-    fail(`Node.js ${process.versions.node} is too old: Lanewright needs 20.19 or newer (see "engines" in package.json).`);
+    fail(
+      `Node.js ${process.versions.node} is too old: Lanewright needs 20.19 or newer (see "engines" in package.json).`,
+    );
   }
 }
 
@@ -39,7 +41,9 @@ function staleReason(lockHash) {
   // Installed by a plain `npm install`/`npm ci` (no hash recorded yet, or `npm i <pkg>` changed both files):
   // npm rewrites its record after the lockfile, so a record at least as new means they agree.
   if (existsSync(npmRecord) && statSync(npmRecord).mtimeMs >= statSync(lockfile).mtimeMs - 5_000) return undefined;
-  return existsSync(hashFile) ? 'package-lock.json changed since the last install' : 'node_modules was not installed from this package-lock.json';
+  return existsSync(hashFile)
+    ? 'package-lock.json changed since the last install'
+    : 'node_modules was not installed from this package-lock.json';
 }
 
 checkNode();
@@ -56,4 +60,5 @@ if (reason) {
 } else {
   say('dependencies match package-lock.json');
 }
-if (!existsSync(hashFile) || readFileSync(hashFile, 'utf8').trim() !== lockHash) writeFileSync(hashFile, `${lockHash}\n`);
+if (!existsSync(hashFile) || readFileSync(hashFile, 'utf8').trim() !== lockHash)
+  writeFileSync(hashFile, `${lockHash}\n`);

@@ -51,12 +51,21 @@ function initCluster(bins: PgBinaries, paths: ClusterPaths): void {
   if (result.status !== 0) throw new SetupError(`initdb failed:\n${result.stdout}${result.stderr}`);
   // Loopback TCP only, no password: the cluster is reachable from this machine alone. No unix sockets, so
   // no socket path can exceed the 107-byte limit wherever the clone lives.
-  writeFileSync(join(paths.dataDir, 'pg_hba.conf'), '# Lanewright: loopback TCP only, trusted.\nhost all all 127.0.0.1/32 trust\n');
-  appendFileSync(join(paths.dataDir, 'postgresql.conf'), `\n# Lanewright\nlisten_addresses = '${HOST}'\nunix_socket_directories = ''\n`);
+  writeFileSync(
+    join(paths.dataDir, 'pg_hba.conf'),
+    '# Lanewright: loopback TCP only, trusted.\nhost all all 127.0.0.1/32 trust\n',
+  );
+  appendFileSync(
+    join(paths.dataDir, 'postgresql.conf'),
+    `\n# Lanewright\nlisten_addresses = '${HOST}'\nunix_socket_directories = ''\n`,
+  );
 }
 
 function isRunning(bins: PgBinaries, paths: ClusterPaths): boolean {
-  return runCommand(bins.bin('pg_ctl'), ['-D', paths.dataDir, 'status'], { asServerUser: true, cwd: paths.dataDir }).status === 0;
+  return (
+    runCommand(bins.bin('pg_ctl'), ['-D', paths.dataDir, 'status'], { asServerUser: true, cwd: paths.dataDir })
+      .status === 0
+  );
 }
 
 /** The port a running cluster listens on, from the 4th line of postmaster.pid. */
@@ -98,7 +107,9 @@ async function startCluster(bins: PgBinaries, paths: ClusterPaths, port: number)
   const args = ['-D', paths.dataDir, '-l', paths.logFile, '-w', '-t', '30', '-o', `-p ${port}`, 'start'];
   const result = runCommand(bins.bin('pg_ctl'), args, { asServerUser: true, cwd: paths.dataDir });
   if (result.status !== 0) {
-    throw new SetupError(`PostgreSQL did not start (pg_ctl exit ${result.status}). Last lines of ${paths.logFile}:\n${logTail(paths)}`);
+    throw new SetupError(
+      `PostgreSQL did not start (pg_ctl exit ${result.status}). Last lines of ${paths.logFile}:\n${logTail(paths)}`,
+    );
   }
 }
 
@@ -107,7 +118,9 @@ async function waitUntilReady(bins: PgBinaries, port: number, paths: ClusterPath
   const args = ['-h', HOST, '-p', String(port), '-U', SUPERUSER, '-d', 'postgres', '-q'];
   while (runCommand(bins.bin('pg_isready'), args).status !== 0) {
     if (Date.now() > deadline) {
-      throw new SetupError(`PostgreSQL on ${HOST}:${port} did not become ready within 30 s. Last lines of ${paths.logFile}:\n${logTail(paths)}`);
+      throw new SetupError(
+        `PostgreSQL on ${HOST}:${port} did not become ready within 30 s. Last lines of ${paths.logFile}:\n${logTail(paths)}`,
+      );
     }
     await sleep(200);
   }

@@ -55,7 +55,8 @@ export function requirePgBinaries(wanted?: number): PgBinaries {
     }
     aptInstall(['postgresql'], 'PostgreSQL server binaries are missing');
     majors = installedMajors();
-    if (majors.length === 0) throw new SetupError(`apt-get installed postgresql, yet ${INSTALL_ROOT}/<major>/bin is still missing.`);
+    if (majors.length === 0)
+      throw new SetupError(`apt-get installed postgresql, yet ${INSTALL_ROOT}/<major>/bin is still missing.`);
     retireDefaultCluster(majors[0]);
   }
   if (wanted === undefined) return binariesOf(majors[0]);

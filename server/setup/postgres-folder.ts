@@ -36,7 +36,9 @@ export function chooseClusterPaths(projectRoot: string): ClusterPaths {
   const own = pathsIn(join(projectRoot, '.data'), false);
   if (!isRoot) return own;
   if (!serverUserIds()) {
-    throw new SetupError(`The '${SERVER_USER}' system user is missing; reinstall Debian's postgresql package (apt-get install --reinstall postgresql-common).`);
+    throw new SetupError(
+      `The '${SERVER_USER}' system user is missing; reinstall Debian's postgresql package (apt-get install --reinstall postgresql-common).`,
+    );
   }
   const blocked = firstBlockedFolder(projectRoot);
   if (!blocked) return own;
@@ -62,7 +64,8 @@ export function prepareClusterFolders(paths: ClusterPaths): void {
   chownSync(paths.logFile, ids.uid, ids.gid);
   if (statSync(paths.dataDir).uid !== ids.uid) {
     const result = runCommand('chown', ['-R', `${ids.uid}:${ids.gid}`, paths.dataDir]);
-    if (result.status !== 0) throw new SetupError(`could not hand ${paths.dataDir} to ${SERVER_USER}: ${result.stderr.trim()}`);
+    if (result.status !== 0)
+      throw new SetupError(`could not hand ${paths.dataDir} to ${SERVER_USER}: ${result.stderr.trim()}`);
   }
   chmodSync(paths.dataDir, 0o700);
 }

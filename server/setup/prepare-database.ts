@@ -20,7 +20,8 @@ export function demoEnabled(): boolean {
 function connectionHelp(url: string, error: unknown): SetupError {
   const code = (error as { code?: string }).code;
   const reason = error instanceof Error ? error.message : String(error);
-  const hint = code === '3D000' ? ' Create the database first (createdb), or point DATABASE_URL at an existing one.' : '';
+  const hint =
+    code === '3D000' ? ' Create the database first (createdb), or point DATABASE_URL at an existing one.' : '';
   return new SetupError(`could not connect to ${redactUrl(url)}: ${reason}.${hint}`);
 }
 
@@ -42,7 +43,11 @@ export async function prepareDatabase(options: { seed: boolean }): Promise<DataS
   });
 
   const applied = await runMigrations(dataSource);
-  say(applied.length > 0 ? `applied ${applied.length} migration(s): ${applied.join(', ')}` : 'database schema is up to date');
+  say(
+    applied.length > 0
+      ? `applied ${applied.length} migration(s): ${applied.join(', ')}`
+      : 'database schema is up to date',
+  );
   if (!options.seed) return dataSource;
   if (demoEnabled()) {
     await seedDemo(dataSource);

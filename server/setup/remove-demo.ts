@@ -31,7 +31,8 @@ async function main(): Promise<void> {
     );
     say(`removed ${users} demo user(s) and ${organisations} organisation(s) that only demo users belonged to`);
   });
-  if (loadConfig().LANEWRIGHT_DEMO !== 'off') say('start with LANEWRIGHT_DEMO=off from now on, or the next start seeds the demo again');
+  if (loadConfig().LANEWRIGHT_DEMO !== 'off')
+    say('start with LANEWRIGHT_DEMO=off from now on, or the next start seeds the demo again');
   await cleanUp();
 }
 

@@ -22,7 +22,11 @@ export function loadSetupConfig(env: NodeJS.ProcessEnv = process.env): SetupConf
   const own = Object.fromEntries(Object.entries(env).filter((entry) => entry[1] !== undefined && entry[1] !== ''));
   const parsed = setupSchema.safeParse(own);
   if (!parsed.success) {
-    throw new SetupError(parsed.error.issues.map((issue) => `${issue.path.join('.')}: ${issue.message}, got "${env[String(issue.path[0])]}"`).join('\n'));
+    throw new SetupError(
+      parsed.error.issues
+        .map((issue) => `${issue.path.join('.')}: ${issue.message}, got "${env[String(issue.path[0])]}"`)
+        .join('\n'),
+    );
   }
   return { ...loadConfig(env), ...parsed.data };
 }

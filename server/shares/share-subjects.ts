@@ -17,7 +17,9 @@ export const shareSubjects: Record<ShareKind, ShareSubject> = {
   run: {
     what: 'The run',
     async organisationOf(ds, subjectId) {
-      const run = await ds.getRepository(RunEntity).findOne({ where: { id: subjectId }, relations: { scenario: { project: true } } });
+      const run = await ds
+        .getRepository(RunEntity)
+        .findOne({ where: { id: subjectId }, relations: { scenario: { project: true } } });
       return run?.scenario?.project?.organisationId ?? null;
     },
     async view(ds, subjectId, base) {

@@ -6,7 +6,9 @@ import type { ReplicationSummaryJson } from '../../shared/studies/replication-su
 import { StudyEntity, StudyJobResultEntity, StudyPointEntity } from '../db/entities';
 import { iso, toUserRef } from '../mappers/common';
 
-type Loaded = StudyEntity & { revision: { id: string; number: number; scenarioId: string; scenario?: { name: string } } };
+type Loaded = StudyEntity & {
+  revision: { id: string; number: number; scenarioId: string; scenario?: { name: string } };
+};
 
 function studiesQuery(ds: DataSource) {
   return ds
@@ -57,8 +59,14 @@ function toListItem(study: Loaded, done: number): StudyListItem {
 }
 
 export async function listStudies(ds: DataSource, projectId: string): Promise<StudyListItem[]> {
-  const studies = (await studiesQuery(ds).where('study.projectId = :projectId', { projectId }).orderBy('study.createdAt', 'DESC').getMany()) as Loaded[];
-  const done = await jobsDone(ds, studies.map((s) => s.id));
+  const studies = (await studiesQuery(ds)
+    .where('study.projectId = :projectId', { projectId })
+    .orderBy('study.createdAt', 'DESC')
+    .getMany()) as Loaded[];
+  const done = await jobsDone(
+    ds,
+    studies.map((s) => s.id),
+  );
   return studies.map((s) => toListItem(s, done.get(s.id) ?? 0));
 }
 
@@ -70,12 +78,21 @@ export async function studyListItem(ds: DataSource, id: string): Promise<StudyLi
 export async function studyDetail(ds: DataSource, id: string): Promise<StudyDetail> {
   const study = (await studiesQuery(ds).where('study.id = :id', { id }).getOneOrFail()) as Loaded;
   const points = await ds.getRepository(StudyPointEntity).find({ where: { studyId: id }, order: { index: 'ASC' } });
-  const results = await ds.getRepository(StudyJobResultEntity).find({ where: { studyId: id }, order: { pointIndex: 'ASC', first: 'ASC' } });
+  const results = await ds
+    .getRepository(StudyJobResultEntity)
+    .find({ where: { studyId: id }, order: { pointIndex: 'ASC', first: 'ASC' } });
   return {
     ...toListItem(study, results.length),
     axes: study.axes,
     points: points.map((p) => ({ index: p.index, label: p.label, revisionId: p.revisionId, changes: p.changes })),
-    results: results.map((r) => ({ pointIndex: r.pointIndex, first: r.first, count: r.count, outcome: r.outcome, message: r.message, figures: r.figures })),
+    results: results.map((r) => ({
+      pointIndex: r.pointIndex,
+      first: r.first,
+      count: r.count,
+      outcome: r.outcome,
+      message: r.message,
+      figures: r.figures,
+    })),
   };
 }
 
@@ -84,22 +101,36 @@ export async function pointBlocks(ds: DataSource, studyId: string, pointIndex: n
     .getRepository(StudyJobResultEntity)
     .createQueryBuilder('r')
     .addSelect(['r.summaries', 'r.events'])
-    .where('r.studyId = :studyId AND r.pointIndex = :pointIndex AND r.outcome = :done', { studyId, pointIndex, done: 'done' })
+    .where('r.studyId = :studyId AND r.pointIndex = :pointIndex AND r.outcome = :done', {
+      studyId,
+      pointIndex,
+      done: 'done',
+    })
     .orderBy('r.first', 'ASC')
     .getMany();
   return {
     pointIndex,
     engineVersion: rows[0]?.engineVersion ?? null,
-    blocks: rows.map((r) => ({ first: r.first, summaries: r.summaries as ReplicationSummaryJson[], events: r.events ?? [] })),
+    blocks: rows.map((r) => ({
+      first: r.first,
+      summaries: r.summaries as ReplicationSummaryJson[],
+      events: r.events ?? [],
+    })),
   };
 }
 
 /** Once every job has a result the study is done, or done with failed points when any job failed. */
-export async function settleStatus(ds: DataSource, study: StudyEntity): Promise<{ status: StudyStatus; jobsDone: number }> {
+export async function settleStatus(
+  ds: DataSource,
+  study: StudyEntity,
+): Promise<{ status: StudyStatus; jobsDone: number }> {
   const results = ds.getRepository(StudyJobResultEntity);
   const done = await results.countBy({ studyId: study.id });
   if (done < study.jobCount) return { status: study.status, jobsDone: done };
-  const failed = await results.createQueryBuilder('r').where('r.studyId = :id AND r.outcome <> :done', { id: study.id, done: 'done' }).getCount();
+  const failed = await results
+    .createQueryBuilder('r')
+    .where('r.studyId = :id AND r.outcome <> :done', { id: study.id, done: 'done' })
+    .getCount();
   const status: StudyStatus = failed > 0 ? 'failedPoints' : 'done';
   if (status !== study.status) await ds.getRepository(StudyEntity).update({ id: study.id }, { status });
   return { status, jobsDone: done };

@@ -14,10 +14,14 @@ export const LIMIT_TEXT = formatMegabytes(TIME_STUDY_LIMITS.fileBytes).replace('
 export function fileTooLarge(bytes: number | null): HttpError {
   let size = bytes === null ? `over ${LIMIT_TEXT}` : formatMegabytes(bytes);
   // Just past the limit, rounding to a tenth would claim the file is exactly the limit.
-  if (bytes !== null && bytes < 1.05 * TIME_STUDY_LIMITS.fileBytes) size = `over ${LIMIT_TEXT} (the upload is ${bytes.toLocaleString('en-GB')} bytes)`;
-  return new HttpError(413, 'payload_too_large', `The file is ${size}; the limit is ${LIMIT_TEXT}. Split the time study or thin it out.`, [
-    { path: 'file', message: `is ${size}; the limit is ${LIMIT_TEXT}` },
-  ]);
+  if (bytes !== null && bytes < 1.05 * TIME_STUDY_LIMITS.fileBytes)
+    size = `over ${LIMIT_TEXT} (the upload is ${bytes.toLocaleString('en-GB')} bytes)`;
+  return new HttpError(
+    413,
+    'payload_too_large',
+    `The file is ${size}; the limit is ${LIMIT_TEXT}. Split the time study or thin it out.`,
+    [{ path: 'file', message: `is ${size}; the limit is ${LIMIT_TEXT}` }],
+  );
 }
 
 function unsupported(message: string, field: string): HttpError {

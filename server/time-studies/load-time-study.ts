@@ -22,7 +22,9 @@ export function loadTimeStudy({ ds }: AppContext): RequestHandler {
   return async (req, _res, next) => {
     const user = currentUser(req);
     const { id } = parseInput(idParamsSchema, { id: req.params.id }, 'params');
-    const study = await ds.getRepository(TimeStudyEntity).findOne({ where: { id }, relations: { scenario: { project: true } } });
+    const study = await ds
+      .getRepository(TimeStudyEntity)
+      .findOne({ where: { id }, relations: { scenario: { project: true } } });
     const organisationId = study?.scenario?.project?.organisationId;
     const role = organisationId ? await roleIn(ds, organisationId, user.id) : null;
     if (!study || !role) return next(notFound('The time study'));

@@ -37,19 +37,29 @@ export function parseDecimal(cell: string): number | null {
  * that is not on every line is taken as a decimal comma in a one-column file.
  */
 function findSeparator(text: string): string {
-  const lines = text.split(/\r\n|\n|\r/).filter((l) => l.trim() !== '').slice(0, SNIFF_LINES);
+  const lines = text
+    .split(/\r\n|\n|\r/)
+    .filter((l) => l.trim() !== '')
+    .slice(0, SNIFF_LINES);
   for (const sep of SEPARATORS) {
     const counts = lines.map((l) => l.split(sep).length - 1);
     if (counts.length > 0 && counts[0] > 0 && counts.every((c) => c === counts[0])) return sep;
   }
   // Short rows (a missing last cell) break the equal count; a separator in the header and in most lines still counts.
-  for (const sep of SEPARATORS) if (lines.length > 0 && lines[0].includes(sep) && lines.filter((l) => l.includes(sep)).length * 2 > lines.length) return sep;
+  for (const sep of SEPARATORS)
+    if (lines.length > 0 && lines[0].includes(sep) && lines.filter((l) => l.includes(sep)).length * 2 > lines.length)
+      return sep;
   return ONE_COLUMN;
 }
 
 const isBlank = (row: readonly string[]) => row.every((cell) => cell.trim() === '');
 
-function chooseColumn(header: string[] | null, data: string[][], width: number, separator: string): { index: number; name: string } {
+function chooseColumn(
+  header: string[] | null,
+  data: string[][],
+  width: number,
+  separator: string,
+): { index: number; name: string } {
   const names = Array.from({ length: width }, (_, i) => (header?.[i]?.trim() ? header[i].trim() : `column ${i + 1}`));
   const sample = data.slice(0, SNIFF_LINES);
   const counts = names.map((_, i) => {
@@ -70,27 +80,38 @@ function chooseColumn(header: string[] | null, data: string[][], width: number, 
   const candidates = names.map((_, i) => i).filter((i) => numeric[i]);
   const listed = names.join(', ');
   if (candidates.length === 1) return { index: candidates[0], name: names[candidates[0]] };
-  if (candidates.length === 0) throw badRequest(`No numeric column found; columns are: ${listed}.`, [{ path: 'file', message: `has no numeric column; columns are: ${listed}` }]);
+  if (candidates.length === 0)
+    throw badRequest(`No numeric column found; columns are: ${listed}.`, [
+      { path: 'file', message: `has no numeric column; columns are: ${listed}` },
+    ]);
   const several = candidates.map((i) => names[i]).join(', ');
   // "12,5" on every line of a one-column file without a header looks exactly like two columns.
-  const decimalComma = !header && separator === ',' && width === 2 ? ' If the file is one column of times with a decimal comma, add a header row such as "cycle_s".' : '';
-  throw badRequest(`Several numeric columns (${several}) and none is named like cycle, seconds or time; name the column of cycle times so, or remove the others.${decimalComma}`, [
-    { path: 'file', message: `has several numeric columns (${several}); name the cycle-time column "cycle_s"` },
-  ]);
+  const decimalComma =
+    !header && separator === ',' && width === 2
+      ? ' If the file is one column of times with a decimal comma, add a header row such as "cycle_s".'
+      : '';
+  throw badRequest(
+    `Several numeric columns (${several}) and none is named like cycle, seconds or time; name the column of cycle times so, or remove the others.${decimalComma}`,
+    [{ path: 'file', message: `has several numeric columns (${several}); name the cycle-time column "cycle_s"` }],
+  );
 }
 
 function tooManyRows(rows: number): HttpError {
   const limit = TIME_STUDY_LIMITS.rows.toLocaleString('en-GB');
-  return new HttpError(413, 'payload_too_large', `The file has ${rows.toLocaleString('en-GB')} rows of times; the limit is ${limit}. Thin the time study or split it.`, [
-    { path: 'file', message: `has ${rows} rows; the limit is ${limit}` },
-  ]);
+  return new HttpError(
+    413,
+    'payload_too_large',
+    `The file has ${rows.toLocaleString('en-GB')} rows of times; the limit is ${limit}. Thin the time study or split it.`,
+    [{ path: 'file', message: `has ${rows} rows; the limit is ${limit}` }],
+  );
 }
 
 function cellProblem(cell: string, value: number | null): string | null {
   if (cell.trim() === '') return 'the cell is empty';
   if (value === null) return `"${cell.trim().slice(0, 40)}" is not a number`;
   if (value < 0) return `${cell.trim()} is below zero; a cycle time cannot be negative`;
-  if (value > TIME_STUDY_LIMITS.maxSeconds) return `${cell.trim().slice(0, 40)} s is more than ${TIME_STUDY_LIMITS.maxSeconds.toLocaleString('en')} s (one day); times are in seconds, so check the unit`;
+  if (value > TIME_STUDY_LIMITS.maxSeconds)
+    return `${cell.trim().slice(0, 40)} s is more than ${TIME_STUDY_LIMITS.maxSeconds.toLocaleString('en')} s (one day); times are in seconds, so check the unit`;
   return null;
 }
 
@@ -100,21 +121,32 @@ export function readCycleTimes(text: string): CycleTimeColumn {
   const quoteError = parsed.errors.find((e) => e.type === 'Quotes');
   if (quoteError) {
     const row = (quoteError.row ?? 0) + 1;
-    throw badRequest(`Row ${row}: ${quoteError.message.toLowerCase()}; check the quotes in that row.`, [{ path: 'file', message: `row ${row}: ${quoteError.message.toLowerCase()}` }]);
+    throw badRequest(`Row ${row}: ${quoteError.message.toLowerCase()}; check the quotes in that row.`, [
+      { path: 'file', message: `row ${row}: ${quoteError.message.toLowerCase()}` },
+    ]);
   }
   const rows = parsed.data;
   const firstIndex = rows.findIndex((row) => !isBlank(row));
-  if (firstIndex < 0) throw badRequest('The file is empty; it needs one cycle time per row.', [{ path: 'file', message: 'is empty' }]);
+  if (firstIndex < 0)
+    throw badRequest('The file is empty; it needs one cycle time per row.', [{ path: 'file', message: 'is empty' }]);
   const hasHeader = rows[firstIndex].some((cell) => cell.trim() !== '' && parseDecimal(cell) === null);
   const header = hasHeader ? rows[firstIndex] : null;
   const dataStart = hasHeader ? firstIndex + 1 : firstIndex;
   const dataRows = rows.slice(dataStart);
   const filled = dataRows.filter((row) => !isBlank(row)).length;
   if (filled > TIME_STUDY_LIMITS.rows) throw tooManyRows(filled);
-  if (filled === 0) throw badRequest('The file has a header row but no cycle times below it.', [{ path: 'file', message: 'has no rows of cycle times' }]);
+  if (filled === 0)
+    throw badRequest('The file has a header row but no cycle times below it.', [
+      { path: 'file', message: 'has no rows of cycle times' },
+    ]);
 
   const width = Math.max(...rows.slice(firstIndex, firstIndex + SNIFF_LINES).map((row) => row.length));
-  const { index, name } = chooseColumn(header, dataRows.filter((row) => !isBlank(row)), width, separator);
+  const { index, name } = chooseColumn(
+    header,
+    dataRows.filter((row) => !isBlank(row)),
+    width,
+    separator,
+  );
   const samples: number[] = [];
   const problems: FieldIssue[] = [];
   let problemCount = 0;
@@ -125,7 +157,8 @@ export function readCycleTimes(text: string): CycleTimeColumn {
     const problem = cellProblem(cell, value);
     if (problem === null && value !== null) return void samples.push(value);
     problemCount += 1;
-    if (problems.length < REPORTED_PROBLEMS) problems.push({ path: 'file', message: `row ${dataStart + i + 1}, column "${name}": ${problem}` });
+    if (problems.length < REPORTED_PROBLEMS)
+      problems.push({ path: 'file', message: `row ${dataStart + i + 1}, column "${name}": ${problem}` });
   });
   if (problemCount > 0) {
     const more = problemCount > problems.length ? ` (and ${problemCount - problems.length} more)` : '';

@@ -29,25 +29,32 @@ function uploadError(err: unknown, req: Request): HttpError {
         return fileTooLarge(declaredLength(req));
       case 'LIMIT_UNEXPECTED_FILE':
       case 'LIMIT_FILE_COUNT':
-        return badRequest(`Send exactly one file, in the form field named "file"${err.field ? ` (got a file in "${err.field}")` : ''}.`, [
-          { path: err.field ?? 'file', message: 'is not the form field for the file; use "file"' },
-        ]);
+        return badRequest(
+          `Send exactly one file, in the form field named "file"${err.field ? ` (got a file in "${err.field}")` : ''}.`,
+          [{ path: err.field ?? 'file', message: 'is not the form field for the file; use "file"' }],
+        );
       default:
-        return badRequest(`The upload form is not as expected: ${err.message.toLowerCase()}${err.field ? ` (field "${err.field}")` : ''}.`, [
-          { path: err.field ?? 'file', message: err.message.toLowerCase() },
-        ]);
+        return badRequest(
+          `The upload form is not as expected: ${err.message.toLowerCase()}${err.field ? ` (field "${err.field}")` : ''}.`,
+          [{ path: err.field ?? 'file', message: err.message.toLowerCase() }],
+        );
     }
   }
   const message = err instanceof Error ? err.message : String(err);
-  return badRequest(`The upload could not be read as multipart/form-data (${message}); send the form again.`, [{ path: 'file', message: 'could not be read' }]);
+  return badRequest(`The upload could not be read as multipart/form-data (${message}); send the form again.`, [
+    { path: 'file', message: 'could not be read' },
+  ]);
 }
 
 export const receiveTimeStudyUpload: RequestHandler = (req, res, next) => {
   if (!req.is('multipart/form-data')) {
     return next(
-      new HttpError(415, 'unsupported_media_type', `Send the time study as multipart/form-data with the CSV in a field named "file" (got ${req.get('content-type') ?? 'no Content-Type'}).`, [
-        { path: 'file', message: 'is required' },
-      ]),
+      new HttpError(
+        415,
+        'unsupported_media_type',
+        `Send the time study as multipart/form-data with the CSV in a field named "file" (got ${req.get('content-type') ?? 'no Content-Type'}).`,
+        [{ path: 'file', message: 'is required' }],
+      ),
     );
   }
   const length = declaredLength(req);

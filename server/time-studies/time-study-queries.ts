@@ -26,14 +26,24 @@ function studiesQuery(ds: DataSource): SelectQueryBuilder<TimeStudyEntity> {
   return ds.getRepository(TimeStudyEntity).createQueryBuilder('study').leftJoinAndSelect('study.createdBy', 'author');
 }
 
-export async function listTimeStudies(ds: DataSource, scenarioId: string, stationId?: string): Promise<TimeStudyListItem[]> {
-  const query = studiesQuery(ds).where('study.scenarioId = :scenarioId', { scenarioId }).orderBy('study.createdAt', 'DESC').addOrderBy('study.id', 'ASC');
+export async function listTimeStudies(
+  ds: DataSource,
+  scenarioId: string,
+  stationId?: string,
+): Promise<TimeStudyListItem[]> {
+  const query = studiesQuery(ds)
+    .where('study.scenarioId = :scenarioId', { scenarioId })
+    .orderBy('study.createdAt', 'DESC')
+    .addOrderBy('study.id', 'ASC');
   if (stationId !== undefined) query.andWhere('study.stationId = :stationId', { stationId });
   return (await query.getMany()).map(toTimeStudyListItem);
 }
 
 export async function timeStudyDetail(ds: DataSource, id: string): Promise<TimeStudyDetail> {
-  const study = await studiesQuery(ds).addSelect(['study.samples', 'study.analysis']).where('study.id = :id', { id }).getOneOrFail();
+  const study = await studiesQuery(ds)
+    .addSelect(['study.samples', 'study.analysis'])
+    .where('study.id = :id', { id })
+    .getOneOrFail();
   let analysis = study.analysis;
   if (analysis === null) {
     analysis = analyseTimeStudy(study.samples);

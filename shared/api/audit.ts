@@ -22,7 +22,20 @@ export const auditActionSchema = z.enum([
   'share',
   'share-revoke',
 ]);
-export const auditEntitySchema = z.enum(['organisation', 'member', 'invitation', 'project', 'scenario', 'revision', 'run', 'study', 'time-study', 'share', 'user', 'price-list']);
+export const auditEntitySchema = z.enum([
+  'organisation',
+  'member',
+  'invitation',
+  'project',
+  'scenario',
+  'revision',
+  'run',
+  'study',
+  'time-study',
+  'share',
+  'user',
+  'price-list',
+]);
 
 export const auditEntrySchema = z.object({
   id: uuidSchema,
@@ -43,7 +56,9 @@ export const AUDIT_PAGE_MAX = 200;
 /** A CSV export holds at most this many rows; narrow the filter for more. */
 export const AUDIT_EXPORT_MAX = 10_000;
 
-const dayOrInstant = z.union([z.iso.date(), isoDateSchema], { message: 'must be a date (YYYY-MM-DD) or a date and time' });
+const dayOrInstant = z.union([z.iso.date(), isoDateSchema], {
+  message: 'must be a date (YYYY-MM-DD) or a date and time',
+});
 
 /** Filters shared by the page and the CSV export; `to` includes the whole day when it is a date. */
 const auditFilterFields = z.object({
@@ -69,7 +84,12 @@ export const auditFilterSchema = auditFilterFields.refine(rangeInOrder, rangeMes
 
 export const listAuditQuerySchema = auditFilterFields
   .extend({
-    page: z.coerce.number({ message: 'must be a number' }).int({ message: 'must be a whole number' }).min(1, { message: 'must be at least 1' }).max(100_000, { message: 'must be at most 100000' }).default(1),
+    page: z.coerce
+      .number({ message: 'must be a number' })
+      .int({ message: 'must be a whole number' })
+      .min(1, { message: 'must be at least 1' })
+      .max(100_000, { message: 'must be at most 100000' })
+      .default(1),
     pageSize: z.coerce
       .number({ message: 'must be a number' })
       .int({ message: 'must be a whole number' })

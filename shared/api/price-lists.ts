@@ -17,7 +17,15 @@ const price = z
   .refine((v) => Math.abs(v * 100 - Math.round(v * 100)) < 1e-6, 'must have at most two decimals');
 
 /** The priced items, in the order a bill of materials lists them. */
-export const PRICE_ITEMS = ['trackPerMetre', 'carrier', 'elevator', 'lateralTransfer', 'curve', 'automaticStation', 'manualStation'] as const;
+export const PRICE_ITEMS = [
+  'trackPerMetre',
+  'carrier',
+  'elevator',
+  'lateralTransfer',
+  'curve',
+  'automaticStation',
+  'manualStation',
+] as const;
 export type PriceItem = (typeof PRICE_ITEMS)[number];
 
 export const PRICE_ITEM_LABELS: Record<PriceItem, { label: string; unit: string }> = {
@@ -45,7 +53,11 @@ export const savePriceListSchema = z.object({
     .string({ error: 'must be text' })
     .regex(/^[A-Z]{3}$/, 'must be a three-letter currency code in capitals, such as EUR'),
   prices: pricesSchema,
-  note: z.string({ error: 'must be text' }).trim().max(PRICE_LIMITS.noteMax, `must be at most ${PRICE_LIMITS.noteMax} characters`).default(''),
+  note: z
+    .string({ error: 'must be text' })
+    .trim()
+    .max(PRICE_LIMITS.noteMax, `must be at most ${PRICE_LIMITS.noteMax} characters`)
+    .default(''),
 });
 
 export const priceListSchema = savePriceListSchema.extend({

@@ -29,8 +29,10 @@ export const apiRoutes = {
   member: (organisationId: string, userId: string) => `/api/organisations/${organisationId}/members/${userId}`,
   membership: (organisationId: string) => `/api/organisations/${organisationId}/membership`,
   invitations: (organisationId: string) => `/api/organisations/${organisationId}/invitations`,
-  invitation: (organisationId: string, invitationId: string) => `/api/organisations/${organisationId}/invitations/${invitationId}`,
-  invitationResend: (organisationId: string, invitationId: string) => `/api/organisations/${organisationId}/invitations/${invitationId}/resend`,
+  invitation: (organisationId: string, invitationId: string) =>
+    `/api/organisations/${organisationId}/invitations/${invitationId}`,
+  invitationResend: (organisationId: string, invitationId: string) =>
+    `/api/organisations/${organisationId}/invitations/${invitationId}/resend`,
   invitationPreview: '/api/invitations/preview',
   invitationAccept: '/api/invitations/accept',
   audit: (organisationId: string) => `/api/organisations/${organisationId}/audit`,

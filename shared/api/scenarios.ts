@@ -57,7 +57,10 @@ export const revisionNumberSchema = z
 
 export const createRevisionSchema = z.object({
   document: scenarioSchema,
-  message: z.string().max(REVISION_MESSAGE_MAX, { message: `must be at most ${REVISION_MESSAGE_MAX} characters` }).optional(),
+  message: z
+    .string()
+    .max(REVISION_MESSAGE_MAX, { message: `must be at most ${REVISION_MESSAGE_MAX} characters` })
+    .optional(),
   /** The revision number the editor started from; a mismatch answers 409 so no edit is silently lost. */
   baseRevisionNumber: revisionNumberSchema.optional(),
 });

@@ -26,14 +26,24 @@ export const studyKindSchema = z.enum(STUDY_KINDS, { error: `must be one of ${ST
 export const studyStatusSchema = z.enum(STUDY_STATUSES);
 
 export const studyPointSchema = z.object({
-  label: z.string({ error: 'must be text' }).trim().min(1, 'is required').max(STUDY_LIMITS.labelMaxLength, `must be at most ${STUDY_LIMITS.labelMaxLength} characters`),
+  label: z
+    .string({ error: 'must be text' })
+    .trim()
+    .min(1, 'is required')
+    .max(STUDY_LIMITS.labelMaxLength, `must be at most ${STUDY_LIMITS.labelMaxLength} characters`),
   /** The revision this point runs; the study's revision when absent. */
   revisionId: uuidSchema.optional(),
-  changes: z.array(pointChangeSchema, { error: 'must be a list' }).max(STUDY_LIMITS.changesPerPointMax, `a point may change at most ${STUDY_LIMITS.changesPerPointMax} fields`).default([]),
+  changes: z
+    .array(pointChangeSchema, { error: 'must be a list' })
+    .max(STUDY_LIMITS.changesPerPointMax, `a point may change at most ${STUDY_LIMITS.changesPerPointMax} fields`)
+    .default([]),
 });
 
 /** Layout of the chart axes for sweeps (one or two swept paths); carrier sizing and what-if read their points. */
-export const studyAxesSchema = z.array(z.object({ path: z.string().max(200), label: z.string().max(STUDY_LIMITS.labelMaxLength) })).max(2).default([]);
+export const studyAxesSchema = z
+  .array(z.object({ path: z.string().max(200), label: z.string().max(STUDY_LIMITS.labelMaxLength) }))
+  .max(2)
+  .default([]);
 
 export const createStudySchema = z
   .object({
@@ -48,22 +58,45 @@ export const createStudySchema = z
     /** What-if: the share by which each station's cycle time is shortened (0.1 = 10 %). */
     reduction: z.number().gt(0, 'must be above 0').lt(1, 'must be below 1').optional(),
     axes: studyAxesSchema,
-    points: z.array(studyPointSchema, { error: 'must be a list' }).min(1, 'a study needs at least one point').max(STUDY_LIMITS.pointsMax, `a study may have at most ${STUDY_LIMITS.pointsMax} points; use a coarser grid`),
+    points: z
+      .array(studyPointSchema, { error: 'must be a list' })
+      .min(1, 'a study needs at least one point')
+      .max(STUDY_LIMITS.pointsMax, `a study may have at most ${STUDY_LIMITS.pointsMax} points; use a coarser grid`),
   })
   .superRefine((s, ctx) => {
     const block = s.blockSize ?? s.settings.replications;
-    if (block > s.settings.replications) ctx.addIssue({ code: 'custom', path: ['blockSize'], message: `must not exceed the replications (${s.settings.replications})` });
+    if (block > s.settings.replications)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['blockSize'],
+        message: `must not exceed the replications (${s.settings.replications})`,
+      });
     const jobs = s.points.length * Math.ceil(s.settings.replications / Math.min(block, s.settings.replications));
-    if (jobs > STUDY_LIMITS.jobsMax) ctx.addIssue({ code: 'custom', path: ['blockSize'], message: `the study would have ${jobs} jobs; at most ${STUDY_LIMITS.jobsMax} are allowed, so use larger blocks or fewer points` });
+    if (jobs > STUDY_LIMITS.jobsMax)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['blockSize'],
+        message: `the study would have ${jobs} jobs; at most ${STUDY_LIMITS.jobsMax} are allowed, so use larger blocks or fewer points`,
+      });
     const hours = s.points.length * s.settings.replications * (s.settings.hours + s.settings.warmupMinutes / 60);
     if (hours > STUDY_LIMITS.simulatedHoursMax) {
-      ctx.addIssue({ code: 'custom', path: ['settings', 'hours'], message: `the study would simulate ${Math.round(hours)} hours (points × replications × (hours + warm-up)); at most ${STUDY_LIMITS.simulatedHoursMax} are allowed` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['settings', 'hours'],
+        message: `the study would simulate ${Math.round(hours)} hours (points × replications × (hours + warm-up)); at most ${STUDY_LIMITS.simulatedHoursMax} are allowed`,
+      });
     }
   });
 
 export const updateStudySchema = z
-  .object({ name: nameSchema.optional(), status: z.enum(['running', 'cancelled'], { error: 'must be running (resume) or cancelled' }).optional() })
-  .refine((b) => b.name !== undefined || b.status !== undefined, { message: 'give a name or a status', path: ['status'] });
+  .object({
+    name: nameSchema.optional(),
+    status: z.enum(['running', 'cancelled'], { error: 'must be running (resume) or cancelled' }).optional(),
+  })
+  .refine((b) => b.name !== undefined || b.status !== undefined, {
+    message: 'give a name or a status',
+    path: ['status'],
+  });
 
 const jobKeyShape = {
   pointIndex: z.int({ error: 'must be a whole number' }).min(0, 'must be 0 or more'),
@@ -112,7 +145,12 @@ export const studyListItemSchema = z.object({
   updatedAt: isoDateSchema,
 });
 
-export const storedPointSchema = z.object({ index: z.number().int(), label: z.string(), revisionId: uuidSchema, changes: z.array(pointChangeSchema) });
+export const storedPointSchema = z.object({
+  index: z.number().int(),
+  label: z.string(),
+  revisionId: uuidSchema,
+  changes: z.array(pointChangeSchema),
+});
 
 export const jobResultSchema = z.object({
   pointIndex: z.number().int(),
@@ -130,10 +168,22 @@ export const studyDetailSchema = studyListItemSchema.extend({
 });
 
 /** A finished job's replications as the engine's combineBlocks reads them. */
-export const jobBlockSchema = z.object({ first: z.number().int(), summaries: z.array(replicationSummaryJsonSchema), events: z.array(z.number()) });
-export const pointBlocksSchema = z.object({ pointIndex: z.number().int(), engineVersion: z.string().nullable(), blocks: z.array(jobBlockSchema) });
+export const jobBlockSchema = z.object({
+  first: z.number().int(),
+  summaries: z.array(replicationSummaryJsonSchema),
+  events: z.array(z.number()),
+});
+export const pointBlocksSchema = z.object({
+  pointIndex: z.number().int(),
+  engineVersion: z.string().nullable(),
+  blocks: z.array(jobBlockSchema),
+});
 
-export const saveJobResultAnswerSchema = z.object({ saved: z.boolean(), status: studyStatusSchema, jobsDone: z.number().int() });
+export const saveJobResultAnswerSchema = z.object({
+  saved: z.boolean(),
+  status: studyStatusSchema,
+  jobsDone: z.number().int(),
+});
 
 /** One unit of work: plain data, so a Web Worker or a server process can run it as it is. */
 export type StudyJob = {
@@ -149,7 +199,11 @@ export type StudyJob = {
 type JobSource = Pick<StudyDetail, 'id' | 'settings' | 'commonRandomNumbers' | 'blockSize' | 'points'>;
 
 /** Without common random numbers each point gets its own seed, derived from the study's. */
-export function pointSeed(settings: RunSettings, commonRandomNumbers: boolean, pointIndex: number): RunSettings['seed'] {
+export function pointSeed(
+  settings: RunSettings,
+  commonRandomNumbers: boolean,
+  pointIndex: number,
+): RunSettings['seed'] {
   return commonRandomNumbers ? settings.seed : `${settings.seed}/point-${pointIndex}`;
 }
 
@@ -159,7 +213,15 @@ export function studyJobs(study: JobSource): StudyJob[] {
   for (const point of study.points) {
     const settings = { ...study.settings, seed: pointSeed(study.settings, study.commonRandomNumbers, point.index) };
     for (let first = 0; first < replications; first += study.blockSize) {
-      jobs.push({ studyId: study.id, pointIndex: point.index, revisionId: point.revisionId, changes: point.changes, settings, first, count: Math.min(study.blockSize, replications - first) });
+      jobs.push({
+        studyId: study.id,
+        pointIndex: point.index,
+        revisionId: point.revisionId,
+        changes: point.changes,
+        settings,
+        first,
+        count: Math.min(study.blockSize, replications - first),
+      });
     }
   }
   return jobs;

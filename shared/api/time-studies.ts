@@ -70,8 +70,16 @@ const fittedBase = {
 
 export const fittedCandidateSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('normal'), ...fittedBase, parameters: z.object({ mean: z.number(), sd: z.number() }) }),
-  z.object({ kind: z.literal('lognormal'), ...fittedBase, parameters: z.object({ mu: z.number(), sigma: z.number(), mean: z.number(), cv: z.number() }) }),
-  z.object({ kind: z.literal('gamma'), ...fittedBase, parameters: z.object({ shape: z.number(), scale: z.number(), mean: z.number(), cv: z.number() }) }),
+  z.object({
+    kind: z.literal('lognormal'),
+    ...fittedBase,
+    parameters: z.object({ mu: z.number(), sigma: z.number(), mean: z.number(), cv: z.number() }),
+  }),
+  z.object({
+    kind: z.literal('gamma'),
+    ...fittedBase,
+    parameters: z.object({ shape: z.number(), scale: z.number(), mean: z.number(), cv: z.number() }),
+  }),
 ]);
 
 export const refusedCandidateSchema = z.object({

@@ -59,7 +59,12 @@ export function quantitiesOf(scenario: Countable, carriers = scenario.carriers.c
 }
 
 export function billOf(quantities: Quantities, prices: Prices): Bill {
-  const lines = PRICE_ITEMS.map((item) => ({ item, quantity: quantities[item], unitPrice: prices[item], total: quantities[item] * prices[item] }));
+  const lines = PRICE_ITEMS.map((item) => ({
+    item,
+    quantity: quantities[item],
+    unitPrice: prices[item],
+    total: quantities[item] * prices[item],
+  }));
   return { lines, capitalCost: lines.reduce((sum, line) => sum + line.total, 0) };
 }
 

@@ -19,7 +19,9 @@ export const playbackRequestSchema = z.object({
   replication: wholeBetween('replication', 0, RUN_LIMITS.replicationsMax - 1).default(0),
   /** Where the window starts, in simulated minutes from the start of the replication (warm-up included). */
   startMinutes: between('startMinutes', 0, RUN_LIMITS.hoursMax * 60).default(0),
-  windowMinutes: between('windowMinutes', PLAYBACK_LIMITS.windowMinutesMin, PLAYBACK_LIMITS.windowMinutesMax).default(30),
+  windowMinutes: between('windowMinutes', PLAYBACK_LIMITS.windowMinutesMin, PLAYBACK_LIMITS.windowMinutesMax).default(
+    30,
+  ),
 });
 
 export type PlaybackRequest = z.infer<typeof playbackRequestSchema>;

@@ -18,7 +18,10 @@ export const RESULT_LIMITS = {
 } as const;
 
 const text = () => z.string().max(RESULT_LIMITS.textMax, `must be at most ${RESULT_LIMITS.textMax} characters`);
-const series = () => z.array(z.number()).max(RESULT_LIMITS.numbersPerSeriesMax, `may hold at most ${RESULT_LIMITS.numbersPerSeriesMax} numbers`);
+const series = () =>
+  z
+    .array(z.number())
+    .max(RESULT_LIMITS.numbersPerSeriesMax, `may hold at most ${RESULT_LIMITS.numbersPerSeriesMax} numbers`);
 const listOf = <T extends z.ZodType>(item: T, max: number) => z.array(item).max(max, `may hold at most ${max} entries`);
 
 /** Mean across replications with its two-sided 95 % Student t interval. */
@@ -149,7 +152,9 @@ export const replicationResultSchema = z.object({
 });
 
 export const runResultSchema = z.object({
-  engineVersion: z.string().max(RESULT_LIMITS.engineVersionMax, `must be at most ${RESULT_LIMITS.engineVersionMax} characters`),
+  engineVersion: z
+    .string()
+    .max(RESULT_LIMITS.engineVersionMax, `must be at most ${RESULT_LIMITS.engineVersionMax} characters`),
   seed: z.string().max(RUN_LIMITS.seedMaxLength, `must be at most ${RUN_LIMITS.seedMaxLength} characters`),
   settings: runSettingsSchema,
   scenarioName: text(),
@@ -204,7 +209,13 @@ export type CarrierResult = z.infer<typeof carrierResultSchema>;
 export type ReplicationResult = z.infer<typeof replicationResultSchema>;
 export type RunResult = z.infer<typeof runResultSchema>;
 
-export type TransferShares = { carrying: number | null; returning: number | null; blocked: number; idle: number; busy: number };
+export type TransferShares = {
+  carrying: number | null;
+  returning: number | null;
+  blocked: number;
+  idle: number;
+  busy: number;
+};
 
 /**
  * The four time shares of a transfer and its busy share. Results stored before engine 1.2.0 recorded
@@ -213,5 +224,11 @@ export type TransferShares = { carrying: number | null; returning: number | null
  */
 export function transferShares(t: TransferResult): TransferShares {
   const idle = t.idle ?? 1 - t.utilisation;
-  return { carrying: t.carrying ?? null, returning: t.returning ?? null, blocked: t.blocked, idle, busy: t.busy ?? t.utilisation - t.blocked };
+  return {
+    carrying: t.carrying ?? null,
+    returning: t.returning ?? null,
+    blocked: t.blocked,
+    idle,
+    busy: t.busy ?? t.utilisation - t.blocked,
+  };
 }

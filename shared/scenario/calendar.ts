@@ -35,15 +35,29 @@ export const breakSchema = z.object(
 );
 
 export const calendarSchema = z
-  .object({
-    shiftsPerDay: wholeBetween('shiftsPerDay', 1, CALENDAR_LIMITS.shiftsPerDayMax),
-    hoursPerShift: finiteNumber('hoursPerShift').refine((v) => v > 0, 'hoursPerShift must be above zero'),
-    /** The same breaks apply to every shift. */
-    breaks: z.array(breakSchema, { error: 'breaks must be a list' }).max(CALENDAR_LIMITS.breaksPerShiftMax, `at most ${CALENDAR_LIMITS.breaksPerShiftMax} breaks per shift`).default([]),
-    breakMode: z.enum(BREAK_MODES, { error: 'breakMode must be "manualStations" (only manual stations pause) or "wholeLine" (the whole line stops)' }).default('manualStations'),
-    daysPerWeek: wholeBetween('daysPerWeek', 1, CALENDAR_LIMITS.daysPerWeekMax),
-    weeksPerYear: wholeBetween('weeksPerYear', 1, CALENDAR_LIMITS.weeksPerYearMax),
-  }, { error: 'calendar must be an object with shiftsPerDay, hoursPerShift, breaks, breakMode, daysPerWeek and weeksPerYear' })
+  .object(
+    {
+      shiftsPerDay: wholeBetween('shiftsPerDay', 1, CALENDAR_LIMITS.shiftsPerDayMax),
+      hoursPerShift: finiteNumber('hoursPerShift').refine((v) => v > 0, 'hoursPerShift must be above zero'),
+      /** The same breaks apply to every shift. */
+      breaks: z
+        .array(breakSchema, { error: 'breaks must be a list' })
+        .max(CALENDAR_LIMITS.breaksPerShiftMax, `at most ${CALENDAR_LIMITS.breaksPerShiftMax} breaks per shift`)
+        .default([]),
+      breakMode: z
+        .enum(BREAK_MODES, {
+          error:
+            'breakMode must be "manualStations" (only manual stations pause) or "wholeLine" (the whole line stops)',
+        })
+        .default('manualStations'),
+      daysPerWeek: wholeBetween('daysPerWeek', 1, CALENDAR_LIMITS.daysPerWeekMax),
+      weeksPerYear: wholeBetween('weeksPerYear', 1, CALENDAR_LIMITS.weeksPerYearMax),
+    },
+    {
+      error:
+        'calendar must be an object with shiftsPerDay, hoursPerShift, breaks, breakMode, daysPerWeek and weeksPerYear',
+    },
+  )
   .superRefine((c, ctx) => {
     if (c.shiftsPerDay * c.hoursPerShift > CALENDAR_LIMITS.hoursPerDay) {
       ctx.addIssue({

@@ -44,7 +44,9 @@ export const stationSchema = z.object({
   positionMm: nonNegative('positionMm'),
   cycleTimeSeconds: distributionSchema,
   failures: failureSchema.optional(),
-  operation: z.enum(STATION_OPERATIONS, { error: `operation must be one of ${STATION_OPERATIONS.join(', ')}` }).default('automatic'),
+  operation: z
+    .enum(STATION_OPERATIONS, { error: `operation must be one of ${STATION_OPERATIONS.join(', ')}` })
+    .default('automatic'),
   /** A manual station whose operators take the calendar's breaks does no work during them. */
   pausesForBreaks: z.boolean({ error: 'pausesForBreaks must be true or false' }).default(false),
 });
@@ -55,7 +57,9 @@ const stepBase = {
   stations: z
     .array(stationSchema, { error: 'stations must be a list' })
     .max(PROCESS_LIMITS.stationsPerStepMax, `a step may have at most ${PROCESS_LIMITS.stationsPerStepMax} stations`),
-  dispatch: z.enum(DISPATCH_RULES, { error: `dispatch must be one of ${DISPATCH_RULES.join(', ')}` }).default(DEFAULT_DISPATCH),
+  dispatch: z
+    .enum(DISPATCH_RULES, { error: `dispatch must be one of ${DISPATCH_RULES.join(', ')}` })
+    .default(DEFAULT_DISPATCH),
 };
 
 export const loadStepSchema = z.object({ ...stepBase, kind: z.literal('load') });
@@ -71,9 +75,13 @@ export const inspectStepSchema = z.object({
   reworkStepId: idSchema.optional(),
 });
 
-export const stepSchema = z.discriminatedUnion('kind', [loadStepSchema, processStepSchema, inspectStepSchema, unloadStepSchema], {
-  error: `kind must be one of ${STEP_KINDS.join(', ')}`,
-});
+export const stepSchema = z.discriminatedUnion(
+  'kind',
+  [loadStepSchema, processStepSchema, inspectStepSchema, unloadStepSchema],
+  {
+    error: `kind must be one of ${STEP_KINDS.join(', ')}`,
+  },
+);
 
 export type DispatchRule = (typeof DISPATCH_RULES)[number];
 export type StepKind = (typeof STEP_KINDS)[number];

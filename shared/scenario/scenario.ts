@@ -15,10 +15,14 @@ export type ScenarioInput = z.input<typeof scenarioSchema>;
 
 /** The published JSON Schema (draft 2020-12) of a scenario file, as accepted on input. */
 export function scenarioJsonSchema(): Record<string, unknown> {
-  const schema = z.toJSONSchema(scenarioShapeSchema, { io: 'input', unrepresentable: 'any' }) as Record<string, unknown>;
+  const schema = z.toJSONSchema(scenarioShapeSchema, { io: 'input', unrepresentable: 'any' }) as Record<
+    string,
+    unknown
+  >;
   return {
     ...schema,
     title: 'Lanewright scenario',
-    description: 'A line of independently driven carriers: decks, lanes, transfers, carriers, process steps, stations and calendar. Lengths in mm, times in s.',
+    description:
+      'A line of independently driven carriers: decks, lanes, transfers, carriers, process steps, stations and calendar. Lengths in mm, times in s.',
   };
 }

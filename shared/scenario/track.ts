@@ -21,9 +21,14 @@ export const TRACK_LIMITS = {
 export const trackSchema = z.object({
   /** The standard module lengths a lane may be assembled from. */
   moduleLengthsMm: z
-    .array(between('each module length (mm)', 1, TRACK_LIMITS.moduleLengthMaxMm), { error: 'moduleLengthsMm must be a list' })
+    .array(between('each module length (mm)', 1, TRACK_LIMITS.moduleLengthMaxMm), {
+      error: 'moduleLengthsMm must be a list',
+    })
     .min(1, 'moduleLengthsMm must list at least one standard module length')
-    .max(TRACK_LIMITS.moduleLengthsMax, `moduleLengthsMm may list at most ${TRACK_LIMITS.moduleLengthsMax} standard lengths`),
+    .max(
+      TRACK_LIMITS.moduleLengthsMax,
+      `moduleLengthsMm may list at most ${TRACK_LIMITS.moduleLengthsMax} standard lengths`,
+    ),
   /** Width of a track lane in plan, used for drawing and footprint. */
   widthMm: positive('widthMm'),
 });
@@ -56,7 +61,10 @@ export const laneSchema = z.object({
   modules: z
     .array(laneModuleSchema, { error: 'modules must be a list' })
     .min(1, 'a lane needs at least one module')
-    .max(TRACK_LIMITS.moduleRunsPerLaneMax, `a lane may list at most ${TRACK_LIMITS.moduleRunsPerLaneMax} module entries; give repeated modules a count`),
+    .max(
+      TRACK_LIMITS.moduleRunsPerLaneMax,
+      `a lane may list at most ${TRACK_LIMITS.moduleRunsPerLaneMax} module entries; give repeated modules a count`,
+    ),
   /** Where the lane starts (its entry) in plan, and which way carriers travel from there. */
   start: planPointSchema,
   heading: z.enum(HEADINGS, { error: `heading must be one of ${HEADINGS.join(', ')}` }),
@@ -119,7 +127,6 @@ export function laneModuleCount(lane: Pick<Lane, 'modules'>): number {
   for (const m of lane.modules) total += m.count;
   return total;
 }
-
 
 export type Track = z.infer<typeof trackSchema>;
 export type Deck = z.infer<typeof deckSchema>;

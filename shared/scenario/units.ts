@@ -17,8 +17,7 @@ export const labelSchema = z
   .max(120, 'name must be at most 120 characters');
 
 export const positive = (name: string) => finiteNumber(name).refine((v) => v > 0, `${name} must be above zero`);
-export const nonNegative = (name: string) =>
-  finiteNumber(name).refine((v) => v >= 0, `${name} must be zero or more`);
+export const nonNegative = (name: string) => finiteNumber(name).refine((v) => v >= 0, `${name} must be zero or more`);
 export const between = (name: string, min: number, max: number) =>
   finiteNumber(name).refine((v) => v >= min && v <= max, `${name} must be from ${min} to ${max}`);
 export const wholeBetween = (name: string, min: number, max: number) =>

@@ -9,7 +9,10 @@ export const CHANGE_OPS = ['set', 'scale'] as const;
 export const pointChangeSchema = z.object({
   path: z
     .string({ error: 'must be text' })
-    .regex(/^[A-Za-z][A-Za-z0-9]*(\.([A-Za-z][A-Za-z0-9]*|\d+))*$/, 'must name a scenario field as keys and list indexes joined by dots, e.g. steps.1.stations.0.cycleTimeSeconds')
+    .regex(
+      /^[A-Za-z][A-Za-z0-9]*(\.([A-Za-z][A-Za-z0-9]*|\d+))*$/,
+      'must name a scenario field as keys and list indexes joined by dots, e.g. steps.1.stations.0.cycleTimeSeconds',
+    )
     .max(200, 'must be at most 200 characters'),
   op: z.enum(CHANGE_OPS, { error: `must be one of ${CHANGE_OPS.join(', ')}` }),
   value: z.number({ error: 'must be a finite number' }),

@@ -4,10 +4,19 @@
 import { z } from 'zod';
 
 /** Bounds that hold for any scenario the schema allows (stations, transfers, lanes, result bins). */
-export const SUMMARY_LIMITS = { perStation: 40_000, perTransfer: 400, perLane: 200, seriesMax: 5_000, histogramBins: 1_000, timelineMax: 4_000_000, heatMax: 100_000 } as const;
+export const SUMMARY_LIMITS = {
+  perStation: 40_000,
+  perTransfer: 400,
+  perLane: 200,
+  seriesMax: 5_000,
+  histogramBins: 1_000,
+  timelineMax: 4_000_000,
+  heatMax: 100_000,
+} as const;
 
 const finite = z.number({ error: 'must be a finite number' });
-const list = (max: number) => z.array(finite, { error: 'must be a list of numbers' }).max(max, `must hold at most ${max} numbers`);
+const list = (max: number) =>
+  z.array(finite, { error: 'must be a list of numbers' }).max(max, `must hold at most ${max} numbers`);
 const triple = z.tuple([finite, finite, finite], { error: 'must be three numbers (mean, median, 95th percentile)' });
 
 export const replicationSummaryJsonSchema = z.object({

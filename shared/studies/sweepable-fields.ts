@@ -3,27 +3,71 @@
 import type { Distribution } from '../scenario/distribution';
 import type { Scenario } from '../scenario/scenario';
 
-export type SweepableField = { path: string; label: string; group: string; unit: string; value: number; whole?: boolean };
+export type SweepableField = {
+  path: string;
+  label: string;
+  group: string;
+  unit: string;
+  value: number;
+  whole?: boolean;
+};
 
 /** The path of the carrier count, the field a carrier-sizing study varies. */
 export const CARRIER_COUNT_PATH = 'carriers.count';
 
-const PARAMETER_LABELS: Record<string, string> = { value: 'time', min: 'min', mode: 'mode', max: 'max', mean: 'mean', sd: 'sd', cv: 'cv', k: 'phases k' };
+const PARAMETER_LABELS: Record<string, string> = {
+  value: 'time',
+  min: 'min',
+  mode: 'mode',
+  max: 'max',
+  mean: 'mean',
+  sd: 'sd',
+  cv: 'cv',
+  k: 'phases k',
+};
 
 function distributionFields(d: Distribution, path: string, label: string, group: string): SweepableField[] {
   return Object.entries(d)
     .filter((entry): entry is [string, number] => typeof entry[1] === 'number')
-    .map(([key, value]) => ({ path: `${path}.${key}`, label: `${label} ${PARAMETER_LABELS[key] ?? key}`, group, unit: key === 'cv' || key === 'k' ? '' : 's', value, whole: key === 'k' }));
+    .map(([key, value]) => ({
+      path: `${path}.${key}`,
+      label: `${label} ${PARAMETER_LABELS[key] ?? key}`,
+      group,
+      unit: key === 'cv' || key === 'k' ? '' : 's',
+      value,
+      whole: key === 'k',
+    }));
 }
 
 export function sweepableFields(s: Scenario): SweepableField[] {
-  const fields: SweepableField[] = [{ path: CARRIER_COUNT_PATH, label: 'Carrier count', group: 'Carriers', unit: '', value: s.carriers.count, whole: true }];
+  const fields: SweepableField[] = [
+    {
+      path: CARRIER_COUNT_PATH,
+      label: 'Carrier count',
+      group: 'Carriers',
+      unit: '',
+      value: s.carriers.count,
+      whole: true,
+    },
+  ];
   const motion = (profile: 'loaded' | 'empty', name: string) => {
     const p = s.carriers[profile];
     if (!p) return;
     fields.push(
-      { path: `carriers.${profile}.vMaxMmPerS`, label: `Carrier speed, ${name}`, group: 'Carriers', unit: 'mm/s', value: p.vMaxMmPerS },
-      { path: `carriers.${profile}.aMaxMmPerS2`, label: `Carrier acceleration, ${name}`, group: 'Carriers', unit: 'mm/s²', value: p.aMaxMmPerS2 },
+      {
+        path: `carriers.${profile}.vMaxMmPerS`,
+        label: `Carrier speed, ${name}`,
+        group: 'Carriers',
+        unit: 'mm/s',
+        value: p.vMaxMmPerS,
+      },
+      {
+        path: `carriers.${profile}.aMaxMmPerS2`,
+        label: `Carrier acceleration, ${name}`,
+        group: 'Carriers',
+        unit: 'mm/s²',
+        value: p.aMaxMmPerS2,
+      },
     );
   };
   motion('loaded', 'loaded');
@@ -34,8 +78,22 @@ export function sweepableFields(s: Scenario): SweepableField[] {
       const group = `Station ${station.name}`;
       fields.push(...distributionFields(station.cycleTimeSeconds, `${base}.cycleTimeSeconds`, 'Cycle time', group));
       if (station.failures) {
-        fields.push(...distributionFields(station.failures.timeBetweenFailuresSeconds, `${base}.failures.timeBetweenFailuresSeconds`, 'MTBF', group));
-        fields.push(...distributionFields(station.failures.timeToRepairSeconds, `${base}.failures.timeToRepairSeconds`, 'MTTR', group));
+        fields.push(
+          ...distributionFields(
+            station.failures.timeBetweenFailuresSeconds,
+            `${base}.failures.timeBetweenFailuresSeconds`,
+            'MTBF',
+            group,
+          ),
+        );
+        fields.push(
+          ...distributionFields(
+            station.failures.timeToRepairSeconds,
+            `${base}.failures.timeToRepairSeconds`,
+            'MTTR',
+            group,
+          ),
+        );
       }
     }),
   );

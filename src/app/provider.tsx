@@ -18,7 +18,8 @@ export function AppProvider({ children, queryClient }: { children: ReactNode; qu
   const [client] = useState(() => queryClient ?? createAppQueryClient());
   // Runs are repeated from the scenario revision they were computed from, read through the cache.
   const [loadRevision] = useState(() => {
-    const load: LoadRevision = (scenarioId, number) => client.fetchQuery(scenarioRevisionQueryOptions(scenarioId, number));
+    const load: LoadRevision = (scenarioId, number) =>
+      client.fetchQuery(scenarioRevisionQueryOptions(scenarioId, number));
     return load;
   });
   return (

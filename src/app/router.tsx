@@ -22,9 +22,15 @@ const publicPages: RouteObject[] = [
   { path: '/sign-up/finish', element: <FinishSignUpRoute /> },
   { path: '/forgot-password', element: <ForgotPasswordRoute /> },
   { path: '/reset-password', element: <ResetPasswordRoute /> },
-  { path: '/invitations/accept', lazy: async () => ({ Component: (await import('./routes/accept-invitation-route')).AcceptInvitationRoute }) },
+  {
+    path: '/invitations/accept',
+    lazy: async () => ({ Component: (await import('./routes/accept-invitation-route')).AcceptInvitationRoute }),
+  },
   { path: '/shared', lazy: async () => ({ Component: (await import('./routes/shared-route')).SharedRoute }) },
-  { path: '/dev/mailbox', lazy: async () => ({ Component: (await import('../features/mailbox/routes/mailbox-route')).MailboxRoute }) },
+  {
+    path: '/dev/mailbox',
+    lazy: async () => ({ Component: (await import('../features/mailbox/routes/mailbox-route')).MailboxRoute }),
+  },
 ];
 
 /** Pages behind sign-in; RequireAuth sends visitors to sign-in and back. */
@@ -70,9 +76,18 @@ const signedInPages: RouteObject[] = [
     path: '/runs/:runId',
     lazy: async () => ({ Component: (await import('./routes/run-page-route')).RunPageRoute }),
   },
-  { path: '/account', lazy: async () => ({ Component: (await import('../features/auth/routes/account-route')).AccountRoute }) },
-  { path: '/organisations/:organisationId/members', lazy: async () => ({ Component: (await import('./routes/members-route')).MembersRoute }) },
-  { path: '/organisations/:organisationId/audit', lazy: async () => ({ Component: (await import('./routes/audit-route')).AuditRoute }) },
+  {
+    path: '/account',
+    lazy: async () => ({ Component: (await import('../features/auth/routes/account-route')).AccountRoute }),
+  },
+  {
+    path: '/organisations/:organisationId/members',
+    lazy: async () => ({ Component: (await import('./routes/members-route')).MembersRoute }),
+  },
+  {
+    path: '/organisations/:organisationId/audit',
+    lazy: async () => ({ Component: (await import('./routes/audit-route')).AuditRoute }),
+  },
 ];
 
 export const appRoutes: RouteObject[] = [
@@ -83,7 +98,11 @@ export const appRoutes: RouteObject[] = [
       {
         // A page that throws is replaced inside the frame, keeping header and safety note.
         errorElement: <RouteError />,
-        children: [...publicPages, { element: <RequireAuth />, children: signedInPages }, { path: '*', element: <NotFoundRoute /> }],
+        children: [
+          ...publicPages,
+          { element: <RequireAuth />, children: signedInPages },
+          { path: '*', element: <NotFoundRoute /> },
+        ],
       },
     ],
   },

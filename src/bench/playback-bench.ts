@@ -39,7 +39,15 @@ const port = typeof address === 'object' && address ? address.port : 0;
 const browser = await chromium.launch({
   executablePath: CHROMIUM_PATH,
   headless: true,
-  args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  args: [
+    '--no-sandbox',
+    '--disable-gpu',
+    '--disable-quic',
+    '--no-first-run',
+    '--disable-background-networking',
+    '--disable-component-update',
+    '--disable-sync',
+  ],
 });
 try {
   const page = await browser.newPage({ viewport: { width: 1280, height: 1000 } });
@@ -52,7 +60,9 @@ try {
   await page.locator('[data-playback-speed]').selectOption('60');
   for (let run = 0; run < RUNS; run++) {
     paused.push((await page.evaluate<FrameCount>(countFrames(SECONDS))).fps);
-    await page.locator('[data-playback-scrubber]').fill(String(await page.locator('[data-playback-scrubber]').getAttribute('min')));
+    await page
+      .locator('[data-playback-scrubber]')
+      .fill(String(await page.locator('[data-playback-scrubber]').getAttribute('min')));
     await page.locator('[data-playback-toggle]').click();
     const measured = await page.evaluate<FrameCount>(countFrames(SECONDS));
     await page.locator('[data-playback-toggle]').click();

@@ -15,15 +15,27 @@ import { indexTrace } from '../components/layout/playback/trace-index';
 
 const CARRIERS = 50;
 
-const trace = await recordPlayback(tripleDeck, { hours: 1, warmupMinutes: 10, replications: 1, seed: 1, carriers: CARRIERS }, { startMinutes: 10, windowMinutes: 30 });
-createRoot(document.getElementById('root') as HTMLElement).render(<PlaybackPlayer document={tripleDeck as LayoutDraft} trace={trace} />);
+const trace = await recordPlayback(
+  tripleDeck,
+  { hours: 1, warmupMinutes: 10, replications: 1, seed: 1, carriers: CARRIERS },
+  { startMinutes: 10, windowMinutes: 30 },
+);
+createRoot(document.getElementById('root') as HTMLElement).render(
+  <PlaybackPlayer document={tripleDeck as LayoutDraft} trace={trace} />,
+);
 
 /** Milliseconds per painted frame over `frames` frames one simulated second apart, style recalculated each time. */
 Object.assign(window, {
   benchPaint(frames: number): number {
     const root = document.querySelector<HTMLElement>('[data-playback]') as HTMLElement;
     const model = layoutModel(tripleDeck as LayoutDraft);
-    const painter = createPainter(root, model, indexTrace(trace), model.footprint ? planFrame(model.footprint.box) : null, elevationFrame(model));
+    const painter = createPainter(
+      root,
+      model,
+      indexTrace(trace),
+      model.footprint ? planFrame(model.footprint.box) : null,
+      elevationFrame(model),
+    );
     const started = performance.now();
     for (let i = 0; i < frames; i++) {
       painter.paint(trace.startSeconds + i);

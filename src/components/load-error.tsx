@@ -10,7 +10,8 @@ interface LoadErrorProps {
 }
 
 export function LoadError({ what, error, onRetry }: LoadErrorProps) {
-  const message = isApiRequestError(error) || error instanceof Error ? error.message : 'Something unexpected went wrong.';
+  const message =
+    isApiRequestError(error) || error instanceof Error ? error.message : 'Something unexpected went wrong.';
   return (
     <ErrorBanner
       title={`Could not load ${what}.`}

@@ -65,7 +65,12 @@ function errorFromResponse(response: Response, body: unknown): ApiRequestError {
   });
 }
 
-async function request<S extends z.ZodType>(method: Method, path: string, schema: S, options: RequestOptions = {}): Promise<z.infer<S>> {
+async function request<S extends z.ZodType>(
+  method: Method,
+  path: string,
+  schema: S,
+  options: RequestOptions = {},
+): Promise<z.infer<S>> {
   const headers: Record<string, string> = { Accept: 'application/json' };
   if (options.body !== undefined) headers['Content-Type'] = 'application/json';
   let response: Response;
@@ -100,7 +105,8 @@ async function request<S extends z.ZodType>(method: Method, path: string, schema
 }
 
 export const api = {
-  get: <S extends z.ZodType>(path: string, schema: S, options?: Omit<RequestOptions, 'body' | 'form'>) => request('GET', path, schema, options),
+  get: <S extends z.ZodType>(path: string, schema: S, options?: Omit<RequestOptions, 'body' | 'form'>) =>
+    request('GET', path, schema, options),
   post: <S extends z.ZodType>(path: string, body: unknown, schema: S) => request('POST', path, schema, { body }),
   postForm: <S extends z.ZodType>(path: string, form: FormData, schema: S) => request('POST', path, schema, { form }),
   patch: <S extends z.ZodType>(path: string, body: unknown, schema: S) => request('PATCH', path, schema, { body }),

@@ -2,7 +2,8 @@
 // prints, so a stored run and the command line read alike for the same revision and seed.
 import type { Interval } from '../../shared/results/run-result';
 
-const fixed = (digits: number) => new Intl.NumberFormat('en-GB', { minimumFractionDigits: digits, maximumFractionDigits: digits });
+const fixed = (digits: number) =>
+  new Intl.NumberFormat('en-GB', { minimumFractionDigits: digits, maximumFractionDigits: digits });
 const oneDecimal = fixed(1);
 const twoDecimals = fixed(2);
 const whole = fixed(0);

@@ -13,7 +13,11 @@ export interface SubmitFailure {
   issues: FieldIssue[];
 }
 
-function failureFrom<T extends FieldValues>(error: unknown, fieldNames: readonly FieldPath<T>[], form: UseFormReturn<T, unknown, unknown>): SubmitFailure | null {
+function failureFrom<T extends FieldValues>(
+  error: unknown,
+  fieldNames: readonly FieldPath<T>[],
+  form: UseFormReturn<T, unknown, unknown>,
+): SubmitFailure | null {
   const issues = applyServerFieldErrors(error, fieldNames, form.setError);
   const placedAll = isApiRequestError(error) && error.fields.length > 0 && issues.length === 0;
   if (placedAll) return null;

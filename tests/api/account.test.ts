@@ -58,22 +58,37 @@ describe('forgot password', () => {
     expect((await person.agent.get(apiRoutes.me)).status).toBe(401);
     expect((await second.get(apiRoutes.me)).status).toBe(401);
 
-    expect((await request(app).post(apiRoutes.passwordReset).send({ token, password: 'yet another passphrase' })).status).toBe(400);
-    expect((await request(app).post(apiRoutes.signIn).send({ email: person.email, password: PASSWORD })).status).toBe(401);
-    expect((await request(app).post(apiRoutes.signIn).send({ email: person.email, password: NEW_PASSWORD })).status).toBe(200);
+    expect(
+      (await request(app).post(apiRoutes.passwordReset).send({ token, password: 'yet another passphrase' })).status,
+    ).toBe(400);
+    expect((await request(app).post(apiRoutes.signIn).send({ email: person.email, password: PASSWORD })).status).toBe(
+      401,
+    );
+    expect(
+      (await request(app).post(apiRoutes.signIn).send({ email: person.email, password: NEW_PASSWORD })).status,
+    ).toBe(200);
   });
 
   it('refuses an expired link, and an older link once a newer one was used', async () => {
     const { email } = await signUp(appFor(db()), 'expired');
     const older = await (await askForReset(email)).token();
     const newer = await (await askForReset(email)).token();
-    await db().getRepository(OneTimeTokenEntity).update({ tokenHash: hashLinkToken(newer) }, { expiresAt: new Date(Date.now() - 1) });
-    const late = await request(appFor(db())).post(apiRoutes.passwordReset).send({ token: newer, password: NEW_PASSWORD });
+    await db()
+      .getRepository(OneTimeTokenEntity)
+      .update({ tokenHash: hashLinkToken(newer) }, { expiresAt: new Date(Date.now() - 1) });
+    const late = await request(appFor(db()))
+      .post(apiRoutes.passwordReset)
+      .send({ token: newer, password: NEW_PASSWORD });
     expect(late.status).toBe(400);
     expect(late.body.error.fields).toEqual([{ path: 'token', message: 'is no longer valid' }]);
     const newest = await (await askForReset(email)).token();
-    expect((await request(appFor(db())).post(apiRoutes.passwordReset).send({ token: newest, password: NEW_PASSWORD })).status).toBe(200);
-    expect((await request(appFor(db())).post(apiRoutes.passwordReset).send({ token: older, password: NEW_PASSWORD })).status).toBe(400);
+    expect(
+      (await request(appFor(db())).post(apiRoutes.passwordReset).send({ token: newest, password: NEW_PASSWORD }))
+        .status,
+    ).toBe(200);
+    expect(
+      (await request(appFor(db())).post(apiRoutes.passwordReset).send({ token: older, password: NEW_PASSWORD })).status,
+    ).toBe(400);
   });
 
   it(`mails at most ${LINKS_PER_ADDRESS_PER_HOUR} links an hour to one address, answering the same throughout`, async () => {
@@ -81,7 +96,9 @@ describe('forgot password', () => {
     const answers = [];
     for (let i = 0; i <= LINKS_PER_ADDRESS_PER_HOUR; i += 1) answers.push((await askForReset(email)).res.body);
     expect(new Set(answers.map((a) => JSON.stringify(a))).size).toBe(1);
-    expect(await db().getRepository(OneTimeTokenEntity).countBy({ email, purpose: 'password-reset' })).toBe(LINKS_PER_ADDRESS_PER_HOUR);
+    expect(await db().getRepository(OneTimeTokenEntity).countBy({ email, purpose: 'password-reset' })).toBe(
+      LINKS_PER_ADDRESS_PER_HOUR,
+    );
   });
 
   it('a reset with a too-short password says which field is wrong and spends nothing', async () => {
@@ -90,7 +107,9 @@ describe('forgot password', () => {
     const res = await request(appFor(db())).post(apiRoutes.passwordReset).send({ token, password: 'short' });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.map((f: { path: string }) => f.path)).toEqual(['password']);
-    expect((await request(appFor(db())).post(apiRoutes.passwordReset).send({ token, password: NEW_PASSWORD })).status).toBe(200);
+    expect(
+      (await request(appFor(db())).post(apiRoutes.passwordReset).send({ token, password: NEW_PASSWORD })).status,
+    ).toBe(200);
   });
 });
 
@@ -101,11 +120,15 @@ describe('signed-in password and sessions', () => {
     const elsewhere = request.agent(app);
     await elsewhere.post(apiRoutes.signIn).send({ email: person.email, password: PASSWORD });
 
-    const wrong = await person.agent.post(apiRoutes.accountPassword).send({ currentPassword: 'not it at all', newPassword: NEW_PASSWORD });
+    const wrong = await person.agent
+      .post(apiRoutes.accountPassword)
+      .send({ currentPassword: 'not it at all', newPassword: NEW_PASSWORD });
     expect(wrong.status).toBe(400);
     expect(wrong.body.error.fields).toEqual([{ path: 'currentPassword', message: 'is not your current password' }]);
 
-    const changed = await person.agent.post(apiRoutes.accountPassword).send({ currentPassword: PASSWORD, newPassword: NEW_PASSWORD });
+    const changed = await person.agent
+      .post(apiRoutes.accountPassword)
+      .send({ currentPassword: PASSWORD, newPassword: NEW_PASSWORD });
     expect(changed.status).toBe(200);
     expect(changed.body).toEqual({ ended: 1 });
     expect((await person.agent.get(apiRoutes.me)).status).toBe(200);
@@ -122,6 +145,12 @@ describe('signed-in password and sessions', () => {
     for (const agent of others) expect((await agent.get(apiRoutes.me)).status).toBe(401);
     expect((await person.agent.get(apiRoutes.me)).status).toBe(200);
     expect((await request(app).delete(apiRoutes.accountOtherSessions)).status).toBe(401);
-    expect((await request(app).post(apiRoutes.accountPassword).send({ currentPassword: PASSWORD, newPassword: NEW_PASSWORD })).status).toBe(401);
+    expect(
+      (
+        await request(app)
+          .post(apiRoutes.accountPassword)
+          .send({ currentPassword: PASSWORD, newPassword: NEW_PASSWORD })
+      ).status,
+    ).toBe(401);
   });
 });

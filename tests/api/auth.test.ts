@@ -18,11 +18,20 @@ function sessionCookie(res: request.Response): string {
 }
 
 /** Asks to sign up, then opens the e-mailed link; returns the answer to the link (session cookie and all). */
-async function finishedSignUp(app: Express, email: string, name = 'Ada Founder', organisationName = 'Founder Works'): Promise<request.Response> {
+async function finishedSignUp(
+  app: Express,
+  email: string,
+  name = 'Ada Founder',
+  organisationName = 'Founder Works',
+): Promise<request.Response> {
   const since = Date.now();
-  const asked = await request(app).post('/api/auth/sign-up').send({ email, password: PASSWORD, name, organisationName });
+  const asked = await request(app)
+    .post('/api/auth/sign-up')
+    .send({ email, password: PASSWORD, name, organisationName });
   expect(asked.status, JSON.stringify(asked.body)).toBe(202);
-  return request(app).post('/api/auth/sign-up/confirm').send({ token: tokenIn(await mailTo(email.toLowerCase(), /Finish creating/, since)) });
+  return request(app)
+    .post('/api/auth/sign-up/confirm')
+    .send({ token: tokenIn(await mailTo(email.toLowerCase(), /Finish creating/, since)) });
 }
 
 describe('sign-up', () => {
@@ -32,7 +41,9 @@ describe('sign-up', () => {
     const res = await finishedSignUp(app, email);
     expect(res.status).toBe(201);
     expect(res.body.user.email).toBe(email.toLowerCase());
-    expect(res.body.memberships).toEqual([{ organisationId: expect.any(String), organisationName: 'Founder Works', role: 'owner' }]);
+    expect(res.body.memberships).toEqual([
+      { organisationId: expect.any(String), organisationName: 'Founder Works', role: 'owner' },
+    ]);
     const cookie = sessionCookie(res);
     expect(cookie).toMatch(/HttpOnly/i);
     expect(cookie).toMatch(/SameSite=Lax/i);
@@ -46,7 +57,9 @@ describe('sign-up', () => {
     const app = appFor(db());
     const email = uniqueEmail('once');
     const since = Date.now();
-    await request(app).post('/api/auth/sign-up').send({ email, password: PASSWORD, name: 'Once', organisationName: 'Once' });
+    await request(app)
+      .post('/api/auth/sign-up')
+      .send({ email, password: PASSWORD, name: 'Once', organisationName: 'Once' });
     const token = tokenIn(await mailTo(email, /Finish creating/, since));
     expect(await db().getRepository(UserEntity).existsBy({ email })).toBe(false);
     const stored = await db().getRepository(OneTimeTokenEntity).findOneByOrFail({ email, purpose: 'sign-up' });
@@ -70,8 +83,12 @@ describe('sign-up', () => {
     const app = appFor(db());
     const { email, id } = await signUp(app, 'twice');
     const since = Date.now();
-    const taken = await request(app).post('/api/auth/sign-up').send({ email: email.toUpperCase(), password: PASSWORD, name: 'Again', organisationName: 'Again' });
-    const fresh = await request(app).post('/api/auth/sign-up').send({ email: uniqueEmail('fresh'), password: PASSWORD, name: 'Again', organisationName: 'Again' });
+    const taken = await request(app)
+      .post('/api/auth/sign-up')
+      .send({ email: email.toUpperCase(), password: PASSWORD, name: 'Again', organisationName: 'Again' });
+    const fresh = await request(app)
+      .post('/api/auth/sign-up')
+      .send({ email: uniqueEmail('fresh'), password: PASSWORD, name: 'Again', organisationName: 'Again' });
     expect(taken.status).toBe(202);
     expect(fresh.status).toBe(202);
     expect(taken.body).toEqual(fresh.body);
@@ -95,7 +112,9 @@ describe('sign-in', () => {
     const app = appFor(db());
     const { email } = await signUp(app, 'signin');
     const wrong = await request(app).post('/api/auth/sign-in').send({ email, password: 'not the password' });
-    const unknown = await request(app).post('/api/auth/sign-in').send({ email: uniqueEmail('nobody'), password: 'not the password' });
+    const unknown = await request(app)
+      .post('/api/auth/sign-in')
+      .send({ email: uniqueEmail('nobody'), password: 'not the password' });
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(wrong.body).toEqual(unknown.body);
@@ -117,7 +136,14 @@ describe('sign-in', () => {
     const app = appFor(db());
     const { email } = await signUp(app, 'guessed');
     const statuses: number[] = [];
-    for (let i = 0; i < 11; i += 1) statuses.push((await request(app).post('/api/auth/sign-in').send({ email, password: `guess-${i}` })).status);
+    for (let i = 0; i < 11; i += 1)
+      statuses.push(
+        (
+          await request(app)
+            .post('/api/auth/sign-in')
+            .send({ email, password: `guess-${i}` })
+        ).status,
+      );
     expect(statuses.slice(0, 10).every((s) => s === 401)).toBe(true);
     const limited = await request(app).post('/api/auth/sign-in').send({ email, password: PASSWORD });
     expect(limited.status).toBe(429);
@@ -143,7 +169,10 @@ describe('sessions', () => {
     const app = appFor(db());
     const res = await finishedSignUp(app, uniqueEmail('again'));
     const before = sessionCookie(res).split(';')[0];
-    const again = await request(app).post('/api/auth/sign-in').set('Cookie', before).send({ email: res.body.user.email, password: PASSWORD });
+    const again = await request(app)
+      .post('/api/auth/sign-in')
+      .set('Cookie', before)
+      .send({ email: res.body.user.email, password: PASSWORD });
     expect(again.status).toBe(200);
     const after = sessionCookie(again).split(';')[0];
     expect(after).not.toBe(before);
@@ -155,7 +184,9 @@ describe('sessions', () => {
     const app = appFor(db());
     const res = await finishedSignUp(app, uniqueEmail('expiring'));
     const cookie = sessionCookie(res).split(';')[0];
-    await db().getRepository(SessionEntity).update({ userId: res.body.user.id }, { expiresAt: new Date(Date.now() - 1000) });
+    await db()
+      .getRepository(SessionEntity)
+      .update({ userId: res.body.user.id }, { expiresAt: new Date(Date.now() - 1000) });
     const me = await request(app).get('/api/me').set('Cookie', cookie);
     expect(me.status).toBe(401);
     expect(me.body.error.code).toBe('unauthenticated');

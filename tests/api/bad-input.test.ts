@@ -35,20 +35,102 @@ interface BodyRoute {
   emptyFields: string[];
 }
 
-const withCarriers = (count: unknown) => ({ ...stackedLoop(), carriers: { ...(stackedLoop().carriers as object), count } });
+const withCarriers = (count: unknown) => ({
+  ...stackedLoop(),
+  carriers: { ...(stackedLoop().carriers as object), count },
+});
 
 const bodyRoutes: BodyRoute[] = [
-  { name: 'sign-up', method: 'post', path: () => apiRoutes.signUp, anonymous: true, wrong: () => ({ email: 5, password: true, name: [], organisationName: {} }), wrongFields: ['email', 'password', 'name', 'organisationName'], emptyFields: ['email', 'password', 'name', 'organisationName'] },
-  { name: 'sign-in', method: 'post', path: () => apiRoutes.signIn, anonymous: true, wrong: () => ({ email: 'no-at-sign', password: 3 }), wrongFields: ['email', 'password'], emptyFields: ['email', 'password'] },
-  { name: 'create project', method: 'post', path: () => apiRoutes.projects, wrong: () => ({ name: 42, description: 7, organisationId: 'x' }), wrongFields: ['name', 'description', 'organisationId'], emptyFields: ['name'] },
-  { name: 'update project', method: 'patch', path: () => apiRoutes.project(org.content.projectId), wrong: () => ({ name: '', description: 3 }), wrongFields: ['name', 'description'], emptyFields: [''] },
-  { name: 'create scenario', method: 'post', path: () => apiRoutes.projectScenarios(org.content.projectId), wrong: () => ({ name: 'Ok', document: withCarriers(-3) }), wrongFields: ['document.carriers.count'], emptyFields: ['name', 'document'] },
-  { name: 'update scenario', method: 'patch', path: () => apiRoutes.scenario(org.content.scenarioId), wrong: () => ({ name: ['x'] }), wrongFields: ['name'], emptyFields: [''] },
-  { name: 'save revision', method: 'post', path: () => apiRoutes.scenarioRevisions(org.content.scenarioId), wrong: () => ({ document: { ...stackedLoop(), schemaVersion: 99 }, baseRevisionNumber: 'one' }), wrongFields: ['document.schemaVersion', 'baseRevisionNumber'], emptyFields: ['document'] },
-  { name: 'save run', method: 'post', path: () => apiRoutes.scenarioRuns(org.content.scenarioId), wrong: () => ({ clientRunId: 'x', revisionId: 7, settings: { hours: -1 }, results: { engineVersion: 1 } }), wrongFields: ['clientRunId', 'revisionId', 'settings.hours', 'results.engineVersion'], emptyFields: ['clientRunId', 'revisionId', 'settings', 'results'] },
-  { name: 'rename run', method: 'patch', path: () => apiRoutes.run(org.content.runId), wrong: () => ({ name: 12 }), wrongFields: ['name'], emptyFields: ['name'] },
-  { name: 'invite member', method: 'post', path: () => apiRoutes.invitations(org.people.organisationId), wrong: () => ({ email: 'not-an-email', role: 'boss' }), wrongFields: ['email', 'role'], emptyFields: ['email', 'role'] },
-  { name: 'change member', method: 'patch', path: () => apiRoutes.member(org.people.organisationId, org.people.viewer.id), wrong: () => ({ role: 'admin' }), wrongFields: ['role'], emptyFields: ['role'] },
+  {
+    name: 'sign-up',
+    method: 'post',
+    path: () => apiRoutes.signUp,
+    anonymous: true,
+    wrong: () => ({ email: 5, password: true, name: [], organisationName: {} }),
+    wrongFields: ['email', 'password', 'name', 'organisationName'],
+    emptyFields: ['email', 'password', 'name', 'organisationName'],
+  },
+  {
+    name: 'sign-in',
+    method: 'post',
+    path: () => apiRoutes.signIn,
+    anonymous: true,
+    wrong: () => ({ email: 'no-at-sign', password: 3 }),
+    wrongFields: ['email', 'password'],
+    emptyFields: ['email', 'password'],
+  },
+  {
+    name: 'create project',
+    method: 'post',
+    path: () => apiRoutes.projects,
+    wrong: () => ({ name: 42, description: 7, organisationId: 'x' }),
+    wrongFields: ['name', 'description', 'organisationId'],
+    emptyFields: ['name'],
+  },
+  {
+    name: 'update project',
+    method: 'patch',
+    path: () => apiRoutes.project(org.content.projectId),
+    wrong: () => ({ name: '', description: 3 }),
+    wrongFields: ['name', 'description'],
+    emptyFields: [''],
+  },
+  {
+    name: 'create scenario',
+    method: 'post',
+    path: () => apiRoutes.projectScenarios(org.content.projectId),
+    wrong: () => ({ name: 'Ok', document: withCarriers(-3) }),
+    wrongFields: ['document.carriers.count'],
+    emptyFields: ['name', 'document'],
+  },
+  {
+    name: 'update scenario',
+    method: 'patch',
+    path: () => apiRoutes.scenario(org.content.scenarioId),
+    wrong: () => ({ name: ['x'] }),
+    wrongFields: ['name'],
+    emptyFields: [''],
+  },
+  {
+    name: 'save revision',
+    method: 'post',
+    path: () => apiRoutes.scenarioRevisions(org.content.scenarioId),
+    wrong: () => ({ document: { ...stackedLoop(), schemaVersion: 99 }, baseRevisionNumber: 'one' }),
+    wrongFields: ['document.schemaVersion', 'baseRevisionNumber'],
+    emptyFields: ['document'],
+  },
+  {
+    name: 'save run',
+    method: 'post',
+    path: () => apiRoutes.scenarioRuns(org.content.scenarioId),
+    wrong: () => ({ clientRunId: 'x', revisionId: 7, settings: { hours: -1 }, results: { engineVersion: 1 } }),
+    wrongFields: ['clientRunId', 'revisionId', 'settings.hours', 'results.engineVersion'],
+    emptyFields: ['clientRunId', 'revisionId', 'settings', 'results'],
+  },
+  {
+    name: 'rename run',
+    method: 'patch',
+    path: () => apiRoutes.run(org.content.runId),
+    wrong: () => ({ name: 12 }),
+    wrongFields: ['name'],
+    emptyFields: ['name'],
+  },
+  {
+    name: 'invite member',
+    method: 'post',
+    path: () => apiRoutes.invitations(org.people.organisationId),
+    wrong: () => ({ email: 'not-an-email', role: 'boss' }),
+    wrongFields: ['email', 'role'],
+    emptyFields: ['email', 'role'],
+  },
+  {
+    name: 'change member',
+    method: 'patch',
+    path: () => apiRoutes.member(org.people.organisationId, org.people.viewer.id),
+    wrong: () => ({ role: 'admin' }),
+    wrongFields: ['role'],
+    emptyFields: ['role'],
+  },
 ];
 
 function caller(route: { anonymous?: boolean }): Agent {
@@ -70,7 +152,9 @@ describe.each(bodyRoutes)('$name', (route) => {
     const res = await caller(route)[route.method](route.path()).send({});
     expectError(res, 400, 'bad_request');
     expect(paths(res)).toEqual(expect.arrayContaining(route.emptyFields));
-    const absent = res.body.error.fields.filter((f: { path: string }) => f.path !== '' && route.emptyFields.includes(f.path));
+    const absent = res.body.error.fields.filter(
+      (f: { path: string }) => f.path !== '' && route.emptyFields.includes(f.path),
+    );
     for (const field of absent) expect(field.message).toBe('is required');
   });
 
@@ -82,7 +166,10 @@ describe.each(bodyRoutes)('$name', (route) => {
   });
 
   it('answers malformed JSON with 400 bad_request', async () => {
-    const res = await caller(route)[route.method](route.path()).set('Content-Type', 'application/json').send('{"name": "unterminated');
+    const res = await caller(route)
+      [route.method](route.path())
+      .set('Content-Type', 'application/json')
+      .send('{"name": "unterminated');
     expectError(res, 400, 'bad_request');
     expect(res.body.error.message).toMatch(/not valid JSON/);
   });
@@ -138,17 +225,31 @@ describe('route parameters and query strings', () => {
   });
 
   it('a malformed member user id answers 400 naming "userId"', async () => {
-    const res = await org.people.owner.agent.patch(apiRoutes.member(org.people.organisationId, 'nobody')).send({ role: 'viewer' });
+    const res = await org.people.owner.agent
+      .patch(apiRoutes.member(org.people.organisationId, 'nobody'))
+      .send({ role: 'viewer' });
     expectError(res, 400, 'bad_request');
     expect(paths(res)).toEqual(['userId']);
   });
 
   it.each([
-    ['revision number that is not a number', () => `${apiRoutes.scenarioRevisions(org.content.scenarioId)}/latest`, ['number']],
+    [
+      'revision number that is not a number',
+      () => `${apiRoutes.scenarioRevisions(org.content.scenarioId)}/latest`,
+      ['number'],
+    ],
     ['revision number zero', () => apiRoutes.scenarioRevision(org.content.scenarioId, 0), ['number']],
     ['project filter that is not an id', () => `${apiRoutes.projects}?organisationId=abc`, ['organisationId']],
-    ['run filters that are not ids', () => `${apiRoutes.scenarioRuns(org.content.scenarioId)}?revisionId=abc&createdBy=def`, ['revisionId', 'createdBy']],
-    ['project run filter that is not an id', () => `${apiRoutes.projectRuns(org.content.projectId)}?revisionId=1`, ['revisionId']],
+    [
+      'run filters that are not ids',
+      () => `${apiRoutes.scenarioRuns(org.content.scenarioId)}?revisionId=abc&createdBy=def`,
+      ['revisionId', 'createdBy'],
+    ],
+    [
+      'project run filter that is not an id',
+      () => `${apiRoutes.projectRuns(org.content.projectId)}?revisionId=1`,
+      ['revisionId'],
+    ],
     ['audit page size out of range', () => `${apiRoutes.audit(org.people.organisationId)}?pageSize=0`, ['pageSize']],
     ['audit date that is not a date', () => `${apiRoutes.audit(org.people.organisationId)}?from=yesterday`, ['from']],
   ] as const)('a %s answers 400 naming the field', async (_name, path, fields) => {
@@ -158,7 +259,12 @@ describe('route parameters and query strings', () => {
   });
 
   it('unknown API routes answer 404 in the same shape', async () => {
-    for (const [method, path] of [['get', '/api/nothing-here'], ['post', `/api/projects/${org.content.projectId}/archive`], ['put', apiRoutes.project(org.content.projectId)], ['get', '/api']] as const) {
+    for (const [method, path] of [
+      ['get', '/api/nothing-here'],
+      ['post', `/api/projects/${org.content.projectId}/archive`],
+      ['put', apiRoutes.project(org.content.projectId)],
+      ['get', '/api'],
+    ] as const) {
       const res = await org.people.owner.agent[method](path).send({});
       expectError(res, 404, 'not_found');
     }

@@ -15,7 +15,16 @@ const db = useCleanDatabase();
 
 async function snapshot() {
   const rows = await Promise.all(
-    ['users', 'organisations', 'memberships', 'projects', 'scenarios', 'scenario_revisions', 'runs', 'audit_entries'].map(async (table) => {
+    [
+      'users',
+      'organisations',
+      'memberships',
+      'projects',
+      'scenarios',
+      'scenario_revisions',
+      'runs',
+      'audit_entries',
+    ].map(async (table) => {
       const data = await db().query(`SELECT * FROM ${table} ORDER BY 1`);
       return [table, data] as const;
     }),
@@ -43,13 +52,17 @@ describe('demo seed', () => {
     const scenarios = await viewer.get(apiRoutes.projectScenarios(projects.body[0].id));
     expect(scenarios.body).toHaveLength(2);
     expect(scenarios.body.map((s: { latestRevision: { number: number } }) => s.latestRevision.number)).toEqual([1, 1]);
-    const names = await db().getRepository(ScenarioRevisionEntity).find({ select: { id: true, document: true } });
+    const names = await db()
+      .getRepository(ScenarioRevisionEntity)
+      .find({ select: { id: true, document: true } });
     expect(names.map((r) => r.document.name).sort()).toEqual([stackedLoop().name, sideBySideLoop().name].sort());
   });
 
   it('a second run changes nothing and keeps what users changed', async () => {
     await seedDemo(db());
-    await db().getRepository(ProjectEntity).update({ organisationId: DEMO_ORGANISATION_ID }, { name: 'Renamed by a user' });
+    await db()
+      .getRepository(ProjectEntity)
+      .update({ organisationId: DEMO_ORGANISATION_ID }, { name: 'Renamed by a user' });
     const before = await snapshot();
     await seedDemo(db());
     expect(await snapshot()).toEqual(before);
@@ -64,7 +77,9 @@ describe('demo seed', () => {
   it('refuses to take over an existing account that uses a demo e-mail', async () => {
     const app = appFor(db());
     const email = 'owner@demo.lanewright.test';
-    const asked = await request(app).post(apiRoutes.signUp).send({ email, password: 'someone-else-1', name: 'Someone', organisationName: 'Elsewhere' });
+    const asked = await request(app)
+      .post(apiRoutes.signUp)
+      .send({ email, password: 'someone-else-1', name: 'Someone', organisationName: 'Elsewhere' });
     expect(asked.status).toBe(202);
     const token = tokenIn(await mailTo(email, /Finish creating/));
     const res = await request(app).post('/api/auth/sign-up/confirm').send({ token });

@@ -20,8 +20,21 @@ describe('host names', () => {
 
   it('answers loopback names, the public origin’s host and configured names', async () => {
     const config = loadConfig({ ALLOWED_HOSTS: 'lanewright.lan, Planner.Example.test' });
-    const app = createApp({ dataSource: db(), publicOrigin: 'https://lines.example.test', allowedHosts: config.ALLOWED_HOSTS, listenHost: '192.0.2.10' });
-    for (const host of ['localhost:3000', '127.0.0.1', '[::1]:8080', 'lines.example.test', 'lanewright.lan:3000', 'planner.example.test', '192.0.2.10:3000']) {
+    const app = createApp({
+      dataSource: db(),
+      publicOrigin: 'https://lines.example.test',
+      allowedHosts: config.ALLOWED_HOSTS,
+      listenHost: '192.0.2.10',
+    });
+    for (const host of [
+      'localhost:3000',
+      '127.0.0.1',
+      '[::1]:8080',
+      'lines.example.test',
+      'lanewright.lan:3000',
+      'planner.example.test',
+      '192.0.2.10:3000',
+    ]) {
       const res = await request(app).get(apiRoutes.me).set('Host', host);
       expect(res.status, host).toBe(401);
     }

@@ -23,7 +23,10 @@ describe('cross-origin requests', () => {
   it('refuses a mutation whose Origin is another site, and changes nothing', async () => {
     const app = appFor(db());
     const { agent } = await signUp(app, 'origin');
-    const res = await agent.post(apiRoutes.projects).set('Origin', 'https://elsewhere.example').send({ name: 'Forged' });
+    const res = await agent
+      .post(apiRoutes.projects)
+      .set('Origin', 'https://elsewhere.example')
+      .send({ name: 'Forged' });
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('forbidden');
     expect((await agent.get(apiRoutes.projects)).body).toEqual([]);
@@ -31,15 +34,22 @@ describe('cross-origin requests', () => {
 
   it('refuses a cross-origin sign-in and sign-out too', async () => {
     const app = appFor(db());
-    const res = await request(app).post(apiRoutes.signIn).set('Origin', 'http://evil.example').send({ email: uniqueEmail('x'), password: 'whatever-long' });
+    const res = await request(app)
+      .post(apiRoutes.signIn)
+      .set('Origin', 'http://evil.example')
+      .send({ email: uniqueEmail('x'), password: 'whatever-long' });
     expect(res.status).toBe(403);
   });
 
   it('allows the app’s own origin, the public origin, and requests without Origin', async () => {
     const app = appFor(db(), 'https://lanewright.example.test');
     const email = uniqueEmail('sameorigin');
-    await request(app).post(apiRoutes.signUp).send({ email, password: 'long enough password', name: 'S', organisationName: 'S' });
-    const signedUp = await request(app).post(apiRoutes.signUpConfirm).send({ token: tokenIn(await mailTo(email, /Finish creating/)) });
+    await request(app)
+      .post(apiRoutes.signUp)
+      .send({ email, password: 'long enough password', name: 'S', organisationName: 'S' });
+    const signedUp = await request(app)
+      .post(apiRoutes.signUpConfirm)
+      .send({ token: tokenIn(await mailTo(email, /Finish creating/)) });
     // The cookie is Secure (https public origin), so supertest's plain-http agent would not send it.
     const cookie = String(signedUp.headers['set-cookie']).split(';')[0];
     const post = (origin: string | null, name: string) => {
@@ -50,7 +60,10 @@ describe('cross-origin requests', () => {
     expect((await post('https://lanewright.example.test', 'Public')).status).toBe(201);
     expect((await post(null, 'No origin')).status).toBe(201);
     expect((await post('http://localhost:3001', 'Other port')).status).toBe(403);
-    const reads = await request(app).get(apiRoutes.projects).set('Cookie', cookie).set('Origin', 'https://elsewhere.example');
+    const reads = await request(app)
+      .get(apiRoutes.projects)
+      .set('Cookie', cookie)
+      .set('Origin', 'https://elsewhere.example');
     expect(reads.status).toBe(200);
     expect(reads.body).toHaveLength(3);
   });
@@ -120,6 +133,11 @@ describe('configuration', () => {
   });
 
   it('fills defaults and treats empty values as unset', () => {
-    expect(loadConfig({ PORT: '', PUBLIC_ORIGIN: 'https://lanewright.example.test/path' })).toMatchObject({ PORT: 3000, HOST: '127.0.0.1', LANEWRIGHT_DEMO: 'on', PUBLIC_ORIGIN: 'https://lanewright.example.test' });
+    expect(loadConfig({ PORT: '', PUBLIC_ORIGIN: 'https://lanewright.example.test/path' })).toMatchObject({
+      PORT: 3000,
+      HOST: '127.0.0.1',
+      LANEWRIGHT_DEMO: 'on',
+      PUBLIC_ORIGIN: 'https://lanewright.example.test',
+    });
   });
 });

@@ -20,17 +20,28 @@ async function invite(email: string, role = 'engineer') {
   return { invitation: res.body, token: tokenIn(await mailTo(email, /^Join /, since)) };
 }
 
-const isMember = (userId: string) => db().getRepository(MembershipEntity).existsBy({ organisationId: org.people.organisationId, userId });
+const isMember = (userId: string) =>
+  db().getRepository(MembershipEntity).existsBy({ organisationId: org.people.organisationId, userId });
 
 describe('inviting', () => {
   it('answers an address with an account and one without in the same way, and mails both', async () => {
     const withAccount = await signUp(appFor(db()), 'known');
-    const known = await org.people.owner.agent.post(apiRoutes.invitations(org.people.organisationId)).send({ email: withAccount.email, role: 'viewer' });
-    const unknown = await org.people.owner.agent.post(apiRoutes.invitations(org.people.organisationId)).send({ email: uniqueEmail('stranger'), role: 'viewer' });
+    const known = await org.people.owner.agent
+      .post(apiRoutes.invitations(org.people.organisationId))
+      .send({ email: withAccount.email, role: 'viewer' });
+    const unknown = await org.people.owner.agent
+      .post(apiRoutes.invitations(org.people.organisationId))
+      .send({ email: uniqueEmail('stranger'), role: 'viewer' });
     expect(known.status).toBe(201);
     expect(unknown.status).toBe(201);
     expect(Object.keys(known.body).sort()).toEqual(Object.keys(unknown.body).sort());
-    expect({ ...known.body, id: '', email: '', sentAt: '', expiresAt: '' }).toEqual({ ...unknown.body, id: '', email: '', sentAt: '', expiresAt: '' });
+    expect({ ...known.body, id: '', email: '', sentAt: '', expiresAt: '' }).toEqual({
+      ...unknown.body,
+      id: '',
+      email: '',
+      sentAt: '',
+      expiresAt: '',
+    });
     await mailTo(withAccount.email, /^Join /);
     await mailTo(unknown.body.email, /^Join /);
     // Nobody joins by being invited.
@@ -47,11 +58,15 @@ describe('inviting', () => {
   });
 
   it('refuses to invite a member again, or an address with an invitation waiting', async () => {
-    const member = await org.people.owner.agent.post(apiRoutes.invitations(org.people.organisationId)).send({ email: org.people.viewer.email, role: 'viewer' });
+    const member = await org.people.owner.agent
+      .post(apiRoutes.invitations(org.people.organisationId))
+      .send({ email: org.people.viewer.email, role: 'viewer' });
     expect(member.status).toBe(409);
     expect(member.body.error.fields).toEqual([{ path: 'email', message: 'is already a member' }]);
     const { invitation } = await invite(uniqueEmail('twice'));
-    const again = await org.people.owner.agent.post(apiRoutes.invitations(org.people.organisationId)).send({ email: invitation.email, role: 'viewer' });
+    const again = await org.people.owner.agent
+      .post(apiRoutes.invitations(org.people.organisationId))
+      .send({ email: invitation.email, role: 'viewer' });
     expect(again.status).toBe(409);
     expect(again.body.error.fields).toEqual([{ path: 'email', message: 'is already invited' }]);
   });
@@ -74,13 +89,19 @@ describe('accepting', () => {
     ]);
 
     const agent = request.agent(app);
-    const accepted = await agent.post(apiRoutes.invitationAccept).send({ token, name: 'New Person', password: PASSWORD });
+    const accepted = await agent
+      .post(apiRoutes.invitationAccept)
+      .send({ token, name: 'New Person', password: PASSWORD });
     expect(accepted.status).toBe(201);
     expect(accepted.body.organisationId).toBe(org.people.organisationId);
-    expect(accepted.body.me.memberships).toEqual([{ organisationId: org.people.organisationId, organisationName: 'owner works', role: 'engineer' }]);
+    expect(accepted.body.me.memberships).toEqual([
+      { organisationId: org.people.organisationId, organisationName: 'owner works', role: 'engineer' },
+    ]);
     expect((await agent.get(apiRoutes.me)).status).toBe(200);
 
-    const again = await request(app).post(apiRoutes.invitationAccept).send({ token, name: 'Someone Else', password: PASSWORD });
+    const again = await request(app)
+      .post(apiRoutes.invitationAccept)
+      .send({ token, name: 'Someone Else', password: PASSWORD });
     expect(again.status).toBe(400);
     expect(again.body.error.fields).toEqual([{ path: 'token', message: 'is no longer valid' }]);
     expect((await request(app).post(apiRoutes.invitationPreview).send({ token })).status).toBe(400);
@@ -93,7 +114,9 @@ describe('accepting', () => {
     const { token } = await invite(invitee.email, 'viewer');
     expect((await request(app).post(apiRoutes.invitationPreview).send({ token })).body.accountExists).toBe(true);
 
-    const anonymous = await request(app).post(apiRoutes.invitationAccept).send({ token, name: 'Taken Over', password: 'another password 1' });
+    const anonymous = await request(app)
+      .post(apiRoutes.invitationAccept)
+      .send({ token, name: 'Taken Over', password: 'another password 1' });
     expect(anonymous.status).toBe(400);
     expect(anonymous.body.error.fields).toEqual([{ path: 'token', message: 'needs you to sign in first' }]);
 
@@ -110,13 +133,17 @@ describe('accepting', () => {
   it('refuses an expired link, and a resent invitation carries a new link that replaces the old', async () => {
     const email = uniqueEmail('late');
     const { invitation, token } = await invite(email);
-    await db().getRepository(InvitationEntity).update({ id: invitation.id }, { expiresAt: new Date(Date.now() - 1000) });
+    await db()
+      .getRepository(InvitationEntity)
+      .update({ id: invitation.id }, { expiresAt: new Date(Date.now() - 1000) });
     expect((await request(appFor(db())).post(apiRoutes.invitationPreview).send({ token })).status).toBe(400);
     const listed = await org.people.owner.agent.get(apiRoutes.invitations(org.people.organisationId));
     expect(listed.body.find((i: { id: string }) => i.id === invitation.id).state).toBe('expired');
 
     const since = Date.now();
-    const resent = await org.people.owner.agent.post(apiRoutes.invitationResend(org.people.organisationId, invitation.id));
+    const resent = await org.people.owner.agent.post(
+      apiRoutes.invitationResend(org.people.organisationId, invitation.id),
+    );
     expect(resent.status).toBe(200);
     expect(resent.body.state).toBe('pending');
     const fresh = tokenIn(await mailTo(email, /^Join /, since));
@@ -127,19 +154,30 @@ describe('accepting', () => {
 
   it('a revoked invitation leaves the list and its link stops working', async () => {
     const { invitation, token } = await invite(uniqueEmail('revoked'));
-    expect((await org.people.owner.agent.delete(apiRoutes.invitation(org.people.organisationId, invitation.id))).status).toBe(200);
+    expect(
+      (await org.people.owner.agent.delete(apiRoutes.invitation(org.people.organisationId, invitation.id))).status,
+    ).toBe(200);
     const listed = await org.people.owner.agent.get(apiRoutes.invitations(org.people.organisationId));
     expect(listed.body.map((i: { id: string }) => i.id)).not.toContain(invitation.id);
-    const accepted = await request(appFor(db())).post(apiRoutes.invitationAccept).send({ token, name: 'Too Late', password: PASSWORD });
+    const accepted = await request(appFor(db()))
+      .post(apiRoutes.invitationAccept)
+      .send({ token, name: 'Too Late', password: PASSWORD });
     expect(accepted.status).toBe(400);
-    expect((await org.people.owner.agent.delete(apiRoutes.invitation(org.people.organisationId, invitation.id))).status).toBe(404);
+    expect(
+      (await org.people.owner.agent.delete(apiRoutes.invitation(org.people.organisationId, invitation.id))).status,
+    ).toBe(404);
   });
 
   it("another organisation's owner gets 404 for this organisation's invitation", async () => {
     const { invitation } = await invite(uniqueEmail('private'));
-    const res = await org.people.outsider.agent.post(apiRoutes.invitationResend(org.people.outsider.organisationId, invitation.id));
+    const res = await org.people.outsider.agent.post(
+      apiRoutes.invitationResend(org.people.outsider.organisationId, invitation.id),
+    );
     expect(res.status).toBe(404);
-    expect((await org.people.outsider.agent.delete(apiRoutes.invitation(org.people.outsider.organisationId, invitation.id))).status).toBe(404);
+    expect(
+      (await org.people.outsider.agent.delete(apiRoutes.invitation(org.people.outsider.organisationId, invitation.id)))
+        .status,
+    ).toBe(404);
   });
 
   it('a malformed link token is refused with its field named', async () => {
@@ -174,10 +212,14 @@ describe('members', () => {
     const { owner, engineer, viewer, organisationId } = org.people;
     expect((await viewer.agent.delete(apiRoutes.membership(organisationId))).status).toBe(200);
     expect(await isMember(viewer.id)).toBe(false);
-    expect((await owner.agent.patch(apiRoutes.member(organisationId, engineer.id)).send({ role: 'owner' })).status).toBe(200);
+    expect(
+      (await owner.agent.patch(apiRoutes.member(organisationId, engineer.id)).send({ role: 'owner' })).status,
+    ).toBe(200);
     expect((await owner.agent.delete(apiRoutes.membership(organisationId))).status).toBe(200);
     expect(await isMember(owner.id)).toBe(false);
     const audit = await engineer.agent.get(apiRoutes.audit(organisationId)).query({ action: 'member-leave' });
-    expect(audit.body.entries.map((e: { actor: { id: string } }) => e.actor.id).sort()).toEqual([owner.id, viewer.id].sort());
+    expect(audit.body.entries.map((e: { actor: { id: string } }) => e.actor.id).sort()).toEqual(
+      [owner.id, viewer.id].sort(),
+    );
   });
 });

@@ -13,7 +13,13 @@ const db = useCleanDatabase();
 const smtp = startFakeSmtp({ port: 0, mailbox: new CaughtMailbox(3) });
 const mailerFor = async () => {
   const { host, port } = await smtp;
-  return createSmtpMailer({ host, port, secure: false, ignoreTls: true, from: 'Lanewright <no-reply@lanewright.localhost>' });
+  return createSmtpMailer({
+    host,
+    port,
+    secure: false,
+    ignoreTls: true,
+    from: 'Lanewright <no-reply@lanewright.localhost>',
+  });
 };
 
 afterAll(async () => (await smtp).close());
@@ -21,9 +27,17 @@ afterAll(async () => (await smtp).close());
 describe('fake SMTP server', () => {
   it('catches a mail sent through nodemailer, with its links', async () => {
     const mailer = await mailerFor();
-    await mailer.send({ to: 'reader@example.test', subject: 'Übung macht den Meister', text: 'Open http://127.0.0.1:3000/reset-password#abc to go on.\nAnd https://example.test/x.' });
+    await mailer.send({
+      to: 'reader@example.test',
+      subject: 'Übung macht den Meister',
+      text: 'Open http://127.0.0.1:3000/reset-password#abc to go on.\nAnd https://example.test/x.',
+    });
     const [mail] = (await smtp).mailbox.list();
-    expect(mail).toMatchObject({ to: ['reader@example.test'], from: 'no-reply@lanewright.localhost', subject: 'Übung macht den Meister' });
+    expect(mail).toMatchObject({
+      to: ['reader@example.test'],
+      from: 'no-reply@lanewright.localhost',
+      subject: 'Übung macht den Meister',
+    });
     expect(mail.links).toEqual(['http://127.0.0.1:3000/reset-password#abc', 'https://example.test/x.']);
   });
 
@@ -36,7 +50,9 @@ describe('fake SMTP server', () => {
   it('refuses a message larger than it accepts, and keeps nothing of it', async () => {
     const mailer = await mailerFor();
     const before = (await smtp).mailbox.list()[0];
-    await expect(mailer.send({ to: 'big@example.test', subject: 'Too big', text: 'x'.repeat(FAKE_SMTP_MAX_BYTES + 1024) })).rejects.toThrow();
+    await expect(
+      mailer.send({ to: 'big@example.test', subject: 'Too big', text: 'x'.repeat(FAKE_SMTP_MAX_BYTES + 1024) }),
+    ).rejects.toThrow();
     expect((await smtp).mailbox.list()[0]).toBe(before);
   });
 });

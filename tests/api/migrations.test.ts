@@ -24,9 +24,23 @@ describe('migrations', () => {
       // TypeORM's own schema diff: empty when migrations and entity definitions agree.
       const pending = await ds.driver.createSchemaBuilder().log();
       expect(pending.upQueries.map((q) => q.query)).toEqual([]);
-      const tables = await ds.query(`SELECT table_name FROM information_schema.tables WHERE table_schema = 'public' ORDER BY table_name`);
+      const tables = await ds.query(
+        `SELECT table_name FROM information_schema.tables WHERE table_schema = 'public' ORDER BY table_name`,
+      );
       const entityTables = ds.entityMetadatas.map((m) => m.tableName);
-      expect(entityTables).toEqual(expect.arrayContaining(['users', 'organisations', 'memberships', 'sessions', 'projects', 'scenarios', 'scenario_revisions', 'runs', 'audit_entries']));
+      expect(entityTables).toEqual(
+        expect.arrayContaining([
+          'users',
+          'organisations',
+          'memberships',
+          'sessions',
+          'projects',
+          'scenarios',
+          'scenario_revisions',
+          'runs',
+          'audit_entries',
+        ]),
+      );
       expect(tables.map((t: { table_name: string }) => t.table_name)).toEqual([...entityTables, 'migrations'].sort());
     } finally {
       if (ds.isInitialized) await ds.destroy();

@@ -14,11 +14,23 @@ const org = useOrganisation(db, { contentPerTest: false });
 
 const validList = (): SavePriceListInput => ({
   currency: 'EUR',
-  prices: { trackPerMetre: 1200.5, carrier: 2500, elevator: 40000, lateralTransfer: 20000, curve: 8000, automaticStation: 50000, manualStation: 10000 },
+  prices: {
+    trackPerMetre: 1200.5,
+    carrier: 2500,
+    elevator: 40000,
+    lateralTransfer: 20000,
+    curve: 8000,
+    automaticStation: 50000,
+    manualStation: 10000,
+  },
   note: 'Quoted in spring',
 });
 
-const put = (actor: Actor, body: unknown, organisationId = org.people.organisationId) => org.people.as(actor).put(apiRoutes.priceList(organisationId)).send(body as object);
+const put = (actor: Actor, body: unknown, organisationId = org.people.organisationId) =>
+  org.people
+    .as(actor)
+    .put(apiRoutes.priceList(organisationId))
+    .send(body as object);
 
 describe('price list roles', () => {
   it.each([
@@ -62,7 +74,10 @@ describe('saving a price list', () => {
   });
 
   it('names every bad field by its path', async () => {
-    const res = await put('engineer', { currency: 'euro', prices: { ...validList().prices, carrier: -1, curve: 'cheap', elevator: 1.234 } });
+    const res = await put('engineer', {
+      currency: 'euro',
+      prices: { ...validList().prices, carrier: -1, curve: 'cheap', elevator: 1.234 },
+    });
     expect(res.status).toBe(400);
     const paths = res.body.error.fields.map((f: { path: string }) => f.path).sort();
     expect(paths).toEqual(['currency', 'prices.carrier', 'prices.curve', 'prices.elevator']);
@@ -77,10 +92,18 @@ describe('saving a price list', () => {
   });
 
   it('accepts prices and notes at their limits and refuses them just past', async () => {
-    const atLimit = await put('engineer', { ...validList(), prices: { ...validList().prices, elevator: PRICE_LIMITS.unitPriceMax, carrier: 0 }, note: 'n'.repeat(PRICE_LIMITS.noteMax) });
+    const atLimit = await put('engineer', {
+      ...validList(),
+      prices: { ...validList().prices, elevator: PRICE_LIMITS.unitPriceMax, carrier: 0 },
+      note: 'n'.repeat(PRICE_LIMITS.noteMax),
+    });
     expect(atLimit.status).toBe(200);
     expect(atLimit.body.priceList.prices.elevator).toBe(PRICE_LIMITS.unitPriceMax);
-    const past = await put('engineer', { ...validList(), prices: { ...validList().prices, elevator: PRICE_LIMITS.unitPriceMax + 1 }, note: 'n'.repeat(PRICE_LIMITS.noteMax + 1) });
+    const past = await put('engineer', {
+      ...validList(),
+      prices: { ...validList().prices, elevator: PRICE_LIMITS.unitPriceMax + 1 },
+      note: 'n'.repeat(PRICE_LIMITS.noteMax + 1),
+    });
     expect(past.status).toBe(400);
     expect(past.body.error.fields.map((f: { path: string }) => f.path).sort()).toEqual(['note', 'prices.elevator']);
   });
@@ -96,7 +119,9 @@ describe('demo prices', () => {
     const seeded = await db().getRepository(PriceListEntity).findOneByOrFail({ organisationId: DEMO_ORGANISATION_ID });
     expect(seeded.invented).toBe(true);
     expect(seeded.note).toMatch(/Invented/);
-    await db().getRepository(PriceListEntity).update({ organisationId: DEMO_ORGANISATION_ID }, { carrier: 1, invented: false });
+    await db()
+      .getRepository(PriceListEntity)
+      .update({ organisationId: DEMO_ORGANISATION_ID }, { carrier: 1, invented: false });
     await seedDemoPrices(db());
     const kept = await db().getRepository(PriceListEntity).findOneByOrFail({ organisationId: DEMO_ORGANISATION_ID });
     expect(kept.carrier).toBe(1);

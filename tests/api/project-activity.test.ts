@@ -14,11 +14,24 @@ const pause = () => new Promise((resolve) => setTimeout(resolve, 15));
 describe('project activity', () => {
   it('moves the project’s updated time on a new scenario, revision, run and rename', async () => {
     const engineer = org.people.engineer.agent;
-    const updated = async () => Date.parse((await engineer.get(apiRoutes.project(org.content.projectId))).body.updatedAt as string);
+    const updated = async () =>
+      Date.parse((await engineer.get(apiRoutes.project(org.content.projectId))).body.updatedAt as string);
     const steps: [string, () => Promise<{ status: number }>][] = [
-      ['new scenario', () => engineer.post(apiRoutes.projectScenarios(org.content.projectId)).send({ name: 'Second layout', document: stackedLoop() })],
-      ['new revision', () => engineer.post(apiRoutes.scenarioRevisions(org.content.scenarioId)).send({ document: stackedLoop() })],
-      ['new run', () => engineer.post(apiRoutes.scenarioRuns(org.content.scenarioId)).send(runBody(org.content.revisionId))],
+      [
+        'new scenario',
+        () =>
+          engineer
+            .post(apiRoutes.projectScenarios(org.content.projectId))
+            .send({ name: 'Second layout', document: stackedLoop() }),
+      ],
+      [
+        'new revision',
+        () => engineer.post(apiRoutes.scenarioRevisions(org.content.scenarioId)).send({ document: stackedLoop() }),
+      ],
+      [
+        'new run',
+        () => engineer.post(apiRoutes.scenarioRuns(org.content.scenarioId)).send(runBody(org.content.revisionId)),
+      ],
       ['rename', () => engineer.patch(apiRoutes.scenario(org.content.scenarioId)).send({ name: 'Renamed' })],
     ];
     for (const [what, step] of steps) {
@@ -33,8 +46,12 @@ describe('project activity', () => {
   it('renames the scenario when a revision is saved under a new document name', async () => {
     const engineer = org.people.engineer.agent;
     const document = { ...stackedLoop(), name: 'Stacked loop, two presses' };
-    expect((await engineer.post(apiRoutes.scenarioRevisions(org.content.scenarioId)).send({ document })).status).toBe(201);
-    expect((await engineer.get(apiRoutes.scenario(org.content.scenarioId))).body.name).toBe('Stacked loop, two presses');
+    expect((await engineer.post(apiRoutes.scenarioRevisions(org.content.scenarioId)).send({ document })).status).toBe(
+      201,
+    );
+    expect((await engineer.get(apiRoutes.scenario(org.content.scenarioId))).body.name).toBe(
+      'Stacked loop, two presses',
+    );
     const list = await engineer.get(apiRoutes.projectScenarios(org.content.projectId));
     expect(list.body.map((s: { name: string }) => s.name)).toContain('Stacked loop, two presses');
   });

@@ -26,17 +26,25 @@ describe('request bounds', () => {
     expect(bytes).toBeGreaterThan(BODY_LIMITS.scenario * 0.6);
     const created = await agent.post(apiRoutes.projectScenarios(projectId)).send({ name: 'Maximal', document });
     expect(created.status, JSON.stringify(created.body).slice(0, 500)).toBe(201);
-    const revision = await agent.post(apiRoutes.scenarioRevisions(created.body.id)).send({ document, message: 'again' });
+    const revision = await agent
+      .post(apiRoutes.scenarioRevisions(created.body.id))
+      .send({ document, message: 'again' });
     expect(revision.status).toBe(201);
   }, 60_000);
 
   it('a 5 MB list of a million wrong items answers 400 at once with a short error body', async () => {
     const { agent, projectId } = await projectOf('million');
     const document = stackedLoop() as { steps: { stations: unknown[] }[] };
-    const body = JSON.stringify({ name: 'Flood', document }).replace('"stations":[', `"stations":[${'0,'.repeat(2_500_000)}`);
+    const body = JSON.stringify({ name: 'Flood', document }).replace(
+      '"stations":[',
+      `"stations":[${'0,'.repeat(2_500_000)}`,
+    );
     expect(body.length).toBeGreaterThan(5_000_000);
     const started = performance.now();
-    const res = await agent.post(apiRoutes.projectScenarios(projectId)).set('Content-Type', 'application/json').send(body);
+    const res = await agent
+      .post(apiRoutes.projectScenarios(projectId))
+      .set('Content-Type', 'application/json')
+      .send(body);
     const elapsed = performance.now() - started;
     expect(res.status).toBe(400);
     expect(res.body.error.fields.length).toBeLessThanOrEqual(MAX_REPORTED_ISSUES);
@@ -49,11 +57,16 @@ describe('request bounds', () => {
   it('a list of many wrong items where each item is checked reports at most the bounded number of problems', async () => {
     const { agent, projectId } = await projectOf('many');
     const document = stackedLoop() as { steps: { stations: { cycleTimeSeconds: unknown }[] }[] };
-    document.steps[1].stations[0].cycleTimeSeconds = { kind: 'empirical', samples: Array.from({ length: 50_000 }, () => -1) };
+    document.steps[1].stations[0].cycleTimeSeconds = {
+      kind: 'empirical',
+      samples: Array.from({ length: 50_000 }, () => -1),
+    };
     const res = await agent.post(apiRoutes.projectScenarios(projectId)).send({ name: 'Negative', document });
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toHaveLength(MAX_REPORTED_ISSUES);
-    expect(res.body.error.message, res.body.error.message.slice(-200)).toMatch(/and 4998\d more problem\(s\) not listed/);
+    expect(res.body.error.message, res.body.error.message.slice(-200)).toMatch(
+      /and 4998\d more problem\(s\) not listed/,
+    );
   });
 
   it('small routes have a small limit: a 100 KB project name answers 413 naming the limit', async () => {

@@ -14,9 +14,16 @@ describe('scenario revisions', () => {
   it('a new save makes revision number + 1 and moves the scenario to it', async () => {
     const engineer = org.people.engineer.agent;
     const changed = sideBySideLoop();
-    const saved = await engineer.post(apiRoutes.scenarioRevisions(org.content.scenarioId)).send({ document: changed, message: 'Side by side instead', baseRevisionNumber: 1 });
+    const saved = await engineer
+      .post(apiRoutes.scenarioRevisions(org.content.scenarioId))
+      .send({ document: changed, message: 'Side by side instead', baseRevisionNumber: 1 });
     expect(saved.status).toBe(201);
-    expect(saved.body).toMatchObject({ number: 2, message: 'Side by side instead', scenarioId: org.content.scenarioId, createdBy: { id: org.people.engineer.id } });
+    expect(saved.body).toMatchObject({
+      number: 2,
+      message: 'Side by side instead',
+      scenarioId: org.content.scenarioId,
+      createdBy: { id: org.people.engineer.id },
+    });
     expect(saved.body.document.name).toBe(changed.name);
 
     const scenario = await engineer.get(apiRoutes.scenario(org.content.scenarioId));
@@ -34,15 +41,31 @@ describe('scenario revisions', () => {
 
   it('a save based on an older revision answers 409 and stores nothing', async () => {
     const engineer = org.people.engineer.agent;
-    expect((await engineer.post(apiRoutes.scenarioRevisions(org.content.scenarioId)).send({ document: stackedLoop(), baseRevisionNumber: 1 })).status).toBe(201);
-    const stale = await org.people.owner.agent.post(apiRoutes.scenarioRevisions(org.content.scenarioId)).send({ document: sideBySideLoop(), baseRevisionNumber: 1 });
+    expect(
+      (
+        await engineer
+          .post(apiRoutes.scenarioRevisions(org.content.scenarioId))
+          .send({ document: stackedLoop(), baseRevisionNumber: 1 })
+      ).status,
+    ).toBe(201);
+    const stale = await org.people.owner.agent
+      .post(apiRoutes.scenarioRevisions(org.content.scenarioId))
+      .send({ document: sideBySideLoop(), baseRevisionNumber: 1 });
     expect(stale.status).toBe(409);
-    expect(stale.body.error.fields).toEqual([{ path: 'baseRevisionNumber', message: 'is 1 but the latest revision is 2' }]);
+    expect(stale.body.error.fields).toEqual([
+      { path: 'baseRevisionNumber', message: 'is 1 but the latest revision is 2' },
+    ]);
     expect(await db().getRepository(ScenarioRevisionEntity).countBy({ scenarioId: org.content.scenarioId })).toBe(2);
   });
 
   it('concurrent saves get consecutive numbers, never the same one', async () => {
-    const saves = await Promise.all(Array.from({ length: 5 }, () => org.people.engineer.agent.post(apiRoutes.scenarioRevisions(org.content.scenarioId)).send({ document: stackedLoop() })));
+    const saves = await Promise.all(
+      Array.from({ length: 5 }, () =>
+        org.people.engineer.agent
+          .post(apiRoutes.scenarioRevisions(org.content.scenarioId))
+          .send({ document: stackedLoop() }),
+      ),
+    );
     expect(saves.map((s) => s.status)).toEqual([201, 201, 201, 201, 201]);
     expect(saves.map((s) => s.body.number).sort()).toEqual([2, 3, 4, 5, 6]);
   });
@@ -60,8 +83,12 @@ describe('scenario revisions', () => {
 
   it('the database refuses to change a stored revision even outside the API', async () => {
     const repo = db().getRepository(ScenarioRevisionEntity);
-    await expect(repo.update({ scenarioId: org.content.scenarioId, number: 1 }, { message: 'rewritten' })).rejects.toThrow(/immutable/);
-    await expect(repo.update({ scenarioId: org.content.scenarioId, number: 1 }, { number: 7 })).rejects.toThrow(/immutable/);
+    await expect(
+      repo.update({ scenarioId: org.content.scenarioId, number: 1 }, { message: 'rewritten' }),
+    ).rejects.toThrow(/immutable/);
+    await expect(repo.update({ scenarioId: org.content.scenarioId, number: 1 }, { number: 7 })).rejects.toThrow(
+      /immutable/,
+    );
   });
 
   it('a missing revision number answers 404', async () => {

@@ -13,14 +13,21 @@ type Doc = { steps: { stations: unknown[] }[]; transfers: unknown[]; carriers: {
 async function scenarioOf(label: string) {
   const { agent } = await signUp(appFor(db()), label);
   const project = await agent.post(apiRoutes.projects).send({ name: 'Runnable' });
-  const scenario = await agent.post(apiRoutes.projectScenarios(project.body.id)).send({ name: 'Loop', document: stackedLoop() });
+  const scenario = await agent
+    .post(apiRoutes.projectScenarios(project.body.id))
+    .send({ name: 'Loop', document: stackedLoop() });
   expect(scenario.status).toBe(201);
   return { agent, projectId: project.body.id as string, scenarioId: scenario.body.id as string };
 }
 
 const cases: [string, (d: Doc) => void, string, RegExp][] = [
   ['a step with no station', (d) => (d.steps[1].stations = []), 'document.steps[1].stations', /has no station/],
-  ['a loop that does not close', (d) => (d.transfers = d.transfers.slice(0, 1)), 'document.steps[0].stations[0].laneId', /loop must close/],
+  [
+    'a loop that does not close',
+    (d) => (d.transfers = d.transfers.slice(0, 1)),
+    'document.steps[0].stations[0].laneId',
+    /loop must close/,
+  ],
   ['more carriers than the track holds', (d) => (d.carriers.count = 2000), 'document.carriers.count', /do not fit/],
 ];
 

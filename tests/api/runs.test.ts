@@ -4,7 +4,13 @@ import { randomUUID } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import { apiRoutes } from '../../shared/api/routes';
 import { runDetailSchema, runListItemSchema } from '../../shared/api/runs';
-import { AuditEntryEntity, RunEntity, ScenarioEntity, ScenarioRevisionEntity, UserEntity } from '../../server/db/entities';
+import {
+  AuditEntryEntity,
+  RunEntity,
+  ScenarioEntity,
+  ScenarioRevisionEntity,
+  UserEntity,
+} from '../../server/db/entities';
 import { JSON_BODY_LIMIT_BYTES } from '../../server/http/limits';
 import { useCleanDatabase } from './fixtures/database';
 import { appFor, signUp } from './fixtures/app';
@@ -28,7 +34,11 @@ describe('saving runs', () => {
 
   it('simultaneous attempts with one client run id store one run', async () => {
     const body = runBody(org.content.revisionId);
-    const answers = await Promise.all(Array.from({ length: 4 }, () => org.people.engineer.agent.post(apiRoutes.scenarioRuns(org.content.scenarioId)).send(body)));
+    const answers = await Promise.all(
+      Array.from({ length: 4 }, () =>
+        org.people.engineer.agent.post(apiRoutes.scenarioRuns(org.content.scenarioId)).send(body),
+      ),
+    );
     expect(answers.map((a) => a.status).sort()).toEqual([200, 200, 200, 201]);
     expect(new Set(answers.map((a) => a.body.id)).size).toBe(1);
   });
@@ -36,21 +46,29 @@ describe('saving runs', () => {
   it('reusing a client run id for another revision answers 409', async () => {
     const body = runBody(org.content.revisionId);
     await org.people.engineer.agent.post(apiRoutes.scenarioRuns(org.content.scenarioId)).send(body);
-    const second = await org.people.engineer.agent.post(apiRoutes.scenarioRevisions(org.content.scenarioId)).send({ document: stackedLoop() });
-    const res = await org.people.engineer.agent.post(apiRoutes.scenarioRuns(org.content.scenarioId)).send({ ...body, revisionId: second.body.id });
+    const second = await org.people.engineer.agent
+      .post(apiRoutes.scenarioRevisions(org.content.scenarioId))
+      .send({ document: stackedLoop() });
+    const res = await org.people.engineer.agent
+      .post(apiRoutes.scenarioRuns(org.content.scenarioId))
+      .send({ ...body, revisionId: second.body.id });
     expect(res.status).toBe(409);
     expect(res.body.error.fields[0].path).toBe('clientRunId');
   });
 
   it('refuses a revision of another scenario', async () => {
     const other = await freshContent(org.people);
-    const res = await org.people.engineer.agent.post(apiRoutes.scenarioRuns(org.content.scenarioId)).send(runBody(other.revisionId));
+    const res = await org.people.engineer.agent
+      .post(apiRoutes.scenarioRuns(org.content.scenarioId))
+      .send(runBody(other.revisionId));
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toEqual([{ path: 'revisionId', message: 'is not a revision of this scenario' }]);
   });
 
   it('refuses settings that differ from the ones inside the results', async () => {
-    const res = await org.people.engineer.agent.post(apiRoutes.scenarioRuns(org.content.scenarioId)).send({ ...runBody(org.content.revisionId), settings: runSettings({ replications: 7 }) });
+    const res = await org.people.engineer.agent
+      .post(apiRoutes.scenarioRuns(org.content.scenarioId))
+      .send({ ...runBody(org.content.revisionId), settings: runSettings({ replications: 7 }) });
     expect(res.status).toBe(400);
     expect(res.body.error.fields[0].path).toBe('settings');
   });
@@ -62,8 +80,20 @@ describe('saving runs', () => {
       .send({ clientRunId: randomUUID(), revisionId: org.content.revisionId, settings: results.settings, results });
     expect(res.status).toBe(201);
     const item = runListItemSchema.parse(res.body);
-    expect(item).toMatchObject({ seed: 'line-42', engineVersion: results.engineVersion, revisionNumber: 1, scenarioName: 'Stacked', name: 'Stacked, revision 1' });
-    expect(item.summary).toEqual({ throughputPerHour: results.throughputPerHour, taktSeconds: results.taktSeconds, annualOutput: results.annualOutput, carriers: results.carriers.count, bottleneckStationId: results.bottleneckStationId });
+    expect(item).toMatchObject({
+      seed: 'line-42',
+      engineVersion: results.engineVersion,
+      revisionNumber: 1,
+      scenarioName: 'Stacked',
+      name: 'Stacked, revision 1',
+    });
+    expect(item.summary).toEqual({
+      throughputPerHour: results.throughputPerHour,
+      taktSeconds: results.taktSeconds,
+      annualOutput: results.annualOutput,
+      carriers: results.carriers.count,
+      bottleneckStationId: results.bottleneckStationId,
+    });
     const row = await db().getRepository(RunEntity).findOneByOrFail({ id: item.id });
     expect(row.throughputPerHourMean).toBe(results.throughputPerHour.mean);
     expect(row.taktSecondsMean).toBe(results.taktSeconds.mean);
@@ -77,7 +107,9 @@ describe('saving runs', () => {
     const res = await org.people.engineer.agent.post(apiRoutes.scenarioRuns(org.content.scenarioId)).send(body);
     expect(res.status).toBe(201);
     const detail = await org.people.viewer.agent.get(apiRoutes.run(res.body.id));
-    expect(runDetailSchema.parse(detail.body).results.heatmaps.lanes[7].occupancy).toEqual(results.heatmaps.lanes[7].occupancy);
+    expect(runDetailSchema.parse(detail.body).results.heatmaps.lanes[7].occupancy).toEqual(
+      results.heatmaps.lanes[7].occupancy,
+    );
   });
 });
 
@@ -93,19 +125,29 @@ describe('reading runs', () => {
   });
 
   it('project run lists filter by revision and author', async () => {
-    const second = await org.people.engineer.agent.post(apiRoutes.scenarioRevisions(org.content.scenarioId)).send({ document: stackedLoop() });
-    const byOwner = await org.people.owner.agent.post(apiRoutes.scenarioRuns(org.content.scenarioId)).send(runBody(second.body.id));
+    const second = await org.people.engineer.agent
+      .post(apiRoutes.scenarioRevisions(org.content.scenarioId))
+      .send({ document: stackedLoop() });
+    const byOwner = await org.people.owner.agent
+      .post(apiRoutes.scenarioRuns(org.content.scenarioId))
+      .send(runBody(second.body.id));
     expect(byOwner.status).toBe(201);
     const all = await org.people.viewer.agent.get(apiRoutes.projectRuns(org.content.projectId));
     expect(all.body.map((r: { id: string }) => r.id).sort()).toEqual([org.content.runId, byOwner.body.id].sort());
-    const ofRevision = await org.people.viewer.agent.get(apiRoutes.projectRuns(org.content.projectId)).query({ revisionId: second.body.id });
+    const ofRevision = await org.people.viewer.agent
+      .get(apiRoutes.projectRuns(org.content.projectId))
+      .query({ revisionId: second.body.id });
     expect(ofRevision.body.map((r: { id: string }) => r.id)).toEqual([byOwner.body.id]);
-    const ofEngineer = await org.people.viewer.agent.get(apiRoutes.scenarioRuns(org.content.scenarioId)).query({ createdBy: org.people.engineer.id });
+    const ofEngineer = await org.people.viewer.agent
+      .get(apiRoutes.scenarioRuns(org.content.scenarioId))
+      .query({ createdBy: org.people.engineer.id });
     expect(ofEngineer.body.map((r: { id: string }) => r.id)).toEqual([org.content.runId]);
   });
 
   it('the author renames a run', async () => {
-    const res = await org.people.engineer.agent.patch(apiRoutes.run(org.content.runId)).send({ name: '  Twenty carriers  ' });
+    const res = await org.people.engineer.agent
+      .patch(apiRoutes.run(org.content.runId))
+      .send({ name: '  Twenty carriers  ' });
     expect(res.status).toBe(200);
     expect(res.body.name).toBe('Twenty carriers');
   });
@@ -124,13 +166,21 @@ describe('cascades', () => {
     const app = appFor(db());
     const leaver = await signUp(app, 'leaver');
     await addMember(org.people.owner.agent, org.people.organisationId, leaver, 'engineer');
-    const renamed = await leaver.agent.patch(apiRoutes.project(org.content.projectId)).send({ description: 'Checked by the leaver' });
+    const renamed = await leaver.agent
+      .patch(apiRoutes.project(org.content.projectId))
+      .send({ description: 'Checked by the leaver' });
     expect(renamed.status).toBe(200);
     await db().getRepository(UserEntity).delete({ id: leaver.id });
-    const rows = await db().getRepository(AuditEntryEntity).findBy({ entityId: org.content.projectId, action: 'update' });
+    const rows = await db()
+      .getRepository(AuditEntryEntity)
+      .findBy({ entityId: org.content.projectId, action: 'update' });
     expect(rows).toHaveLength(1);
     expect(rows[0].actorId).toBeNull();
     const audit = await org.people.owner.agent.get(apiRoutes.audit(org.people.organisationId));
-    expect(audit.body.entries.find((e: { entityId: string; action: string }) => e.entityId === org.content.projectId && e.action === 'update').actor).toBeNull();
+    expect(
+      audit.body.entries.find(
+        (e: { entityId: string; action: string }) => e.entityId === org.content.projectId && e.action === 'update',
+      ).actor,
+    ).toBeNull();
   });
 });

@@ -14,7 +14,9 @@ const db = useCleanDatabase({ truncate: false });
 const org = useOrganisation(db);
 
 async function share(expiresInDays = 7) {
-  const res = await org.people.engineer.agent.post(apiRoutes.shares).send({ kind: 'run', subjectId: org.content.runId, expiresInDays });
+  const res = await org.people.engineer.agent
+    .post(apiRoutes.shares)
+    .send({ kind: 'run', subjectId: org.content.runId, expiresInDays });
   expect(res.status, JSON.stringify(res.body)).toBe(201);
   return { share: res.body, token: new URL(res.body.url).hash.slice(1) };
 }
@@ -41,7 +43,9 @@ describe('share links', () => {
     const row = await db().getRepository(ShareLinkEntity).findOneByOrFail({ id: made.id });
     expect(row.tokenHash).toBe(hashLinkToken(token));
     expect(JSON.stringify(await db().query('SELECT * FROM share_links'))).not.toContain(token);
-    const listed = await org.people.viewer.agent.get(apiRoutes.shares).query({ kind: 'run', subjectId: org.content.runId });
+    const listed = await org.people.viewer.agent
+      .get(apiRoutes.shares)
+      .query({ kind: 'run', subjectId: org.content.runId });
     expect(listed.status).toBe(200);
     const entry = listed.body.find((s: { id: string }) => s.id === made.id);
     expect(entry).toMatchObject({ state: 'active', createdBy: { id: org.people.engineer.id } });
@@ -53,7 +57,9 @@ describe('share links', () => {
     const withdrawn = await share();
     expect((await org.people.owner.agent.delete(apiRoutes.share(withdrawn.share.id))).status).toBe(200);
     const expired = await share();
-    await db().getRepository(ShareLinkEntity).update({ id: expired.share.id }, { expiresAt: new Date(Date.now() - 1) });
+    await db()
+      .getRepository(ShareLinkEntity)
+      .update({ id: expired.share.id }, { expiresAt: new Date(Date.now() - 1) });
     const orphan = await share();
     const answers = [await view(withdrawn.token), await view(expired.token), await view(newLinkToken().token)];
     expect((await org.people.engineer.agent.delete(apiRoutes.run(org.content.runId))).status).toBe(200);
@@ -62,7 +68,9 @@ describe('share links', () => {
       expect(res.status).toBe(404);
       expect(res.body).toEqual(answers[0].body);
     }
-    const listed = await org.people.owner.agent.get(apiRoutes.shares).query({ kind: 'run', subjectId: withdrawn.share.subjectId });
+    const listed = await org.people.owner.agent
+      .get(apiRoutes.shares)
+      .query({ kind: 'run', subjectId: withdrawn.share.subjectId });
     expect(listed.status).toBe(404);
   });
 
@@ -70,7 +78,9 @@ describe('share links', () => {
     const { share: made, token } = await share();
     await view(token);
     await org.people.engineer.agent.delete(apiRoutes.share(made.id));
-    const listed = await org.people.engineer.agent.get(apiRoutes.shares).query({ kind: 'run', subjectId: org.content.runId });
+    const listed = await org.people.engineer.agent
+      .get(apiRoutes.shares)
+      .query({ kind: 'run', subjectId: org.content.runId });
     const entry = listed.body.find((s: { id: string }) => s.id === made.id);
     expect(entry.state).toBe('revoked');
     expect(entry.lastOpenedAt).not.toBeNull();
@@ -80,18 +90,24 @@ describe('share links', () => {
     await share(1);
     await share(SHARE_MAX_DAYS);
     for (const days of [0, SHARE_MAX_DAYS + 1, 2.5]) {
-      const res = await org.people.engineer.agent.post(apiRoutes.shares).send({ kind: 'run', subjectId: org.content.runId, expiresInDays: days });
+      const res = await org.people.engineer.agent
+        .post(apiRoutes.shares)
+        .send({ kind: 'run', subjectId: org.content.runId, expiresInDays: days });
       expect(res.status).toBe(400);
       expect(res.body.error.fields.map((f: { path: string }) => f.path)).toEqual(['expiresInDays']);
     }
-    const kind = await org.people.engineer.agent.post(apiRoutes.shares).send({ kind: 'project', subjectId: org.content.runId });
+    const kind = await org.people.engineer.agent
+      .post(apiRoutes.shares)
+      .send({ kind: 'project', subjectId: org.content.runId });
     expect(kind.body.error.fields.map((f: { path: string }) => f.path)).toEqual(['kind']);
   });
 
   it('the audit shows who shared and who withdrew', async () => {
     const { share: made } = await share();
     await org.people.owner.agent.delete(apiRoutes.share(made.id));
-    const audit = await org.people.owner.agent.get(apiRoutes.audit(org.people.organisationId)).query({ entity: 'share' });
+    const audit = await org.people.owner.agent
+      .get(apiRoutes.audit(org.people.organisationId))
+      .query({ entity: 'share' });
     const rows = audit.body.entries.filter((e: { entityId: string }) => e.entityId === made.id);
     expect(rows.map((e: { action: string; actor: { id: string } }) => [e.action, e.actor.id])).toEqual([
       ['share-revoke', org.people.owner.id],

@@ -15,7 +15,10 @@ const db = useCleanDatabase({ truncate: false });
 const org = useOrganisation(db);
 
 const uploadCsv = (content: string) =>
-  org.people.engineer.agent.post(apiRoutes.scenarioTimeStudies(org.content.scenarioId)).field('stationId', 'PR').attach('file', Buffer.from(content), 'times.csv');
+  org.people.engineer.agent
+    .post(apiRoutes.scenarioTimeStudies(org.content.scenarioId))
+    .field('stationId', 'PR')
+    .attach('file', Buffer.from(content), 'times.csv');
 
 describe('time studies', () => {
   it('refuses a value of 1e308 (and anything over a day) with the row and a unit hint', async () => {
@@ -33,7 +36,9 @@ describe('time studies', () => {
   it('stores the analysis at upload and reads it back without recomputing', async () => {
     const res = await uploadCsv(`cycle_s\n${Array.from({ length: 200 }, (_, i) => 9 + (i % 7) * 0.1).join('\n')}\n`);
     expect(res.status).toBe(201);
-    const stored = await db().getRepository(TimeStudyEntity).findOneOrFail({ where: { id: res.body.id }, select: { id: true, analysis: true } });
+    const stored = await db()
+      .getRepository(TimeStudyEntity)
+      .findOneOrFail({ where: { id: res.body.id }, select: { id: true, analysis: true } });
     expect(stored.analysis).toEqual(res.body.analysis);
     // A marker written into the stored analysis comes back: the read used the column, not a recomputation.
     const marked = { ...stored.analysis!, summary: { ...stored.analysis!.summary, max: 123.456 } };
@@ -47,7 +52,9 @@ describe('time studies', () => {
     await db().getRepository(TimeStudyEntity).update({ id: res.body.id }, { analysis: null });
     const read = await org.people.viewer.agent.get(apiRoutes.timeStudy(res.body.id));
     expect(read.body.analysis).toEqual(res.body.analysis);
-    const stored = await db().getRepository(TimeStudyEntity).findOneOrFail({ where: { id: res.body.id }, select: { id: true, analysis: true } });
+    const stored = await db()
+      .getRepository(TimeStudyEntity)
+      .findOneOrFail({ where: { id: res.body.id }, select: { id: true, analysis: true } });
     expect(stored.analysis).toEqual(res.body.analysis);
   });
 });
@@ -56,7 +63,10 @@ describe('retry-safe creation', () => {
   it('a project created twice with one client id exists once; the retry answers 200 with the same project', async () => {
     const clientId = randomUUID();
     const body = { name: 'Retried line', organisationId: org.people.organisationId, clientId };
-    const [a, b] = await Promise.all([org.people.engineer.agent.post(apiRoutes.projects).send(body), org.people.engineer.agent.post(apiRoutes.projects).send(body)]);
+    const [a, b] = await Promise.all([
+      org.people.engineer.agent.post(apiRoutes.projects).send(body),
+      org.people.engineer.agent.post(apiRoutes.projects).send(body),
+    ]);
     expect([a.status, b.status].sort()).toEqual([200, 201]);
     expect(a.body.id).toBe(b.body.id);
     const again = await org.people.engineer.agent.post(apiRoutes.projects).send(body);
@@ -85,7 +95,9 @@ describe('retry-safe creation', () => {
 
 describe('stored runs', () => {
   it('records that a browser-posted result was not checked by the server', async () => {
-    const res = await org.people.engineer.agent.post(apiRoutes.scenarioRuns(org.content.scenarioId)).send(runBody(org.content.revisionId));
+    const res = await org.people.engineer.agent
+      .post(apiRoutes.scenarioRuns(org.content.scenarioId))
+      .send(runBody(org.content.revisionId));
     expect(res.status).toBe(201);
     expect(res.body.serverChecked).toBe(false);
     expect((await db().getRepository(RunEntity).findOneByOrFail({ id: res.body.id })).serverChecked).toBe(false);
@@ -93,9 +105,22 @@ describe('stored runs', () => {
 
   it.each([
     ['seed', (b: ReturnType<typeof runBody>) => (b.results.seed = 'x'.repeat(65)), 'results.seed'],
-    ['engine version', (b: ReturnType<typeof runBody>) => (b.results.engineVersion = 'v'.repeat(RESULT_LIMITS.engineVersionMax + 1)), 'results.engineVersion'],
-    ['a series', (b: ReturnType<typeof runBody>) => (b.results.wip.series.values = new Array(RESULT_LIMITS.numbersPerSeriesMax + 1).fill(1)), 'results.wip.series.values'],
-    ['a station name', (b: ReturnType<typeof runBody>) => (b.results.stations[0].name = 'n'.repeat(RESULT_LIMITS.textMax + 1)), 'results.stations[0].name'],
+    [
+      'engine version',
+      (b: ReturnType<typeof runBody>) => (b.results.engineVersion = 'v'.repeat(RESULT_LIMITS.engineVersionMax + 1)),
+      'results.engineVersion',
+    ],
+    [
+      'a series',
+      (b: ReturnType<typeof runBody>) =>
+        (b.results.wip.series.values = new Array(RESULT_LIMITS.numbersPerSeriesMax + 1).fill(1)),
+      'results.wip.series.values',
+    ],
+    [
+      'a station name',
+      (b: ReturnType<typeof runBody>) => (b.results.stations[0].name = 'n'.repeat(RESULT_LIMITS.textMax + 1)),
+      'results.stations[0].name',
+    ],
   ])('refuses a %s over its size limit', async (_, grow, path) => {
     const body = runBody(org.content.revisionId);
     grow(body);

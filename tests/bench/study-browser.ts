@@ -22,15 +22,34 @@ const SETTINGS = { hours: 8, warmupMinutes: 30, replications: 10, seed: 1 };
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 async function makeStudy(page: Page, base: string, workers: number): Promise<string> {
-  const projects = (await page.evaluate((url) => fetch(url).then((r) => r.json()), `${base}${apiRoutes.projects}`)) as { id: string; name: string }[];
+  const projects = (await page.evaluate((url) => fetch(url).then((r) => r.json()), `${base}${apiRoutes.projects}`)) as {
+    id: string;
+    name: string;
+  }[];
   const project = projects.find((p) => p.name === 'Cartridge line layout study') ?? projects[0];
-  const scenarios = (await page.evaluate((url) => fetch(url).then((r) => r.json()), `${base}${apiRoutes.projectScenarios(project.id)}`)) as { id: string; name: string; latestRevision: { id: string; number: number } }[];
+  const scenarios = (await page.evaluate(
+    (url) => fetch(url).then((r) => r.json()),
+    `${base}${apiRoutes.projectScenarios(project.id)}`,
+  )) as { id: string; name: string; latestRevision: { id: string; number: number } }[];
   const scenario = scenarios.find((s) => s.name === 'Stacked loop') ?? scenarios[0];
-  const revision = (await page.evaluate((url) => fetch(url).then((r) => r.json()), `${base}${apiRoutes.scenarioRevision(scenario.id, scenario.latestRevision.number)}`)) as { document: unknown };
+  const revision = (await page.evaluate(
+    (url) => fetch(url).then((r) => r.json()),
+    `${base}${apiRoutes.scenarioRevision(scenario.id, scenario.latestRevision.number)}`,
+  )) as { document: unknown };
   const range = defaultCarrierRange(scenarioSchema.parse(revision.document));
-  const body: CreateStudyInput = { name: `Bench, ${workers} worker(s)`, kind: 'carrierSizing', revisionId: scenario.latestRevision.id, settings: SETTINGS, blockSize: SETTINGS.replications, points: carrierSizingPoints(carrierGrid(range.low, range.high)) };
+  const body: CreateStudyInput = {
+    name: `Bench, ${workers} worker(s)`,
+    kind: 'carrierSizing',
+    revisionId: scenario.latestRevision.id,
+    settings: SETTINGS,
+    blockSize: SETTINGS.replications,
+    points: carrierSizingPoints(carrierGrid(range.low, range.high)),
+  };
   const created = await page.evaluate(
-    ([url, payload]) => fetch(url, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: payload }).then((r) => r.json()),
+    ([url, payload]) =>
+      fetch(url, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: payload }).then((r) =>
+        r.json(),
+      ),
     [`${base}${apiRoutes.projectStudies(project.id)}`, JSON.stringify(body)] as const,
   );
   return studyDetailSchema.parse(created).id;
@@ -70,8 +89,12 @@ async function main() {
     const one = median(times[1]);
     const many = median(times[pool]);
     console.log(`\nCarrier sizing of the demo (20 counts × 10 replications × 8 h), Chromium, ${cores} cores reported`);
-    console.log(`median of ${RUNS}: 1 worker ${one.toFixed(1)} s, ${pool} workers ${many.toFixed(1)} s, speed-up ${(one / many).toFixed(2)}×`);
-    console.log(`targets: ${pool} workers under 15 s (${many < 15 ? 'met' : 'not met'}); speed-up at least 1.7× (${one / many >= 1.7 ? 'met' : 'not met'})`);
+    console.log(
+      `median of ${RUNS}: 1 worker ${one.toFixed(1)} s, ${pool} workers ${many.toFixed(1)} s, speed-up ${(one / many).toFixed(2)}×`,
+    );
+    console.log(
+      `targets: ${pool} workers under 15 s (${many < 15 ? 'met' : 'not met'}); speed-up at least 1.7× (${one / many >= 1.7 ? 'met' : 'not met'})`,
+    );
   } finally {
     await browser.close();
     await app.close();

@@ -74,7 +74,10 @@ describe('demo engineer in the browser', () => {
     expect(await page.getByRole('table', { name: 'Revision history' }).textContent()).toContain('Demo Engineer');
     // The stacked loop is two decks of eight 1000 mm modules each (shared/examples/stacked-loop.json).
     expect(await page.locator('[data-fact="modules"]').textContent()).toBe('16');
-    await page.getByRole('navigation', { name: 'Scenario sections' }).getByRole('button', { name: /^Carriers/ }).click();
+    await page
+      .getByRole('navigation', { name: 'Scenario sections' })
+      .getByRole('button', { name: /^Carriers/ })
+      .click();
     expect(await page.getByRole('region', { name: 'Carriers' }).getByLabel('Carrier count').inputValue()).toBe('20');
     await screenshot(page, '05-scenario');
 

@@ -8,12 +8,21 @@ import { MembershipEntity, OrganisationEntity, UserEntity } from '../../server/d
 import { screenshot, useAppInBrowser, type TestApp } from '../support/browser';
 import { followMailedLink } from './support/mailbox';
 
-const person = { email: `forgetful-${randomUUID().slice(0, 8)}@example.test`, name: 'Fen Forgetful', old: 'the password I forgot', fresh: 'a brand new passphrase' };
+const person = {
+  email: `forgetful-${randomUUID().slice(0, 8)}@example.test`,
+  name: 'Fen Forgetful',
+  old: 'the password I forgot',
+  fresh: 'a brand new passphrase',
+};
 
 const session = useAppInBrowser(async ({ dataSource }) => {
-  const user = await dataSource.getRepository(UserEntity).save({ email: person.email, name: person.name, passwordHash: await hashPassword(person.old) });
+  const user = await dataSource
+    .getRepository(UserEntity)
+    .save({ email: person.email, name: person.name, passwordHash: await hashPassword(person.old) });
   const organisation = await dataSource.getRepository(OrganisationEntity).save({ name: 'Forgetful fixtures' });
-  await dataSource.getRepository(MembershipEntity).insert({ organisationId: organisation.id, userId: user.id, role: 'owner' });
+  await dataSource
+    .getRepository(MembershipEntity)
+    .insert({ organisationId: organisation.id, userId: user.id, role: 'owner' });
 });
 let page: Page;
 let app: TestApp;

@@ -27,7 +27,15 @@ afterAll(async () => {
 async function placements(): Promise<Map<string, string>> {
   const marks = await page
     .locator('[data-pb-carrier][visibility="visible"]:not([data-pb-view="@elevation"])')
-    .evaluateAll((els) => els.map((el) => [`${el.getAttribute('data-pb-view')}/${el.getAttribute('data-pb-carrier')}`, el.getAttribute('transform') ?? ''] as const));
+    .evaluateAll((els) =>
+      els.map(
+        (el) =>
+          [
+            `${el.getAttribute('data-pb-view')}/${el.getAttribute('data-pb-carrier')}`,
+            el.getAttribute('transform') ?? '',
+          ] as const,
+      ),
+    );
   return new Map(marks);
 }
 
@@ -41,7 +49,10 @@ describe('playback of a stored run', () => {
     await page.getByLabel('Password').fill('demo-password');
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.getByRole('link', { name: /Cartridge line layout study/ }).click();
-    await page.getByRole('link', { name: /Stacked loop/ }).first().click();
+    await page
+      .getByRole('link', { name: /Stacked loop/ })
+      .first()
+      .click();
     const form = page.getByRole('form', { name: 'Run settings' });
     await form.getByLabel('Hours simulated', { exact: true }).fill('1');
     await form.getByLabel('Warm-up (minutes)', { exact: true }).fill('10');
@@ -66,7 +77,9 @@ describe('playback of a stored run', () => {
     // Carriers are drawn on more than one deck of the stacked loop.
     expect(new Set([...shown.keys()].map((k) => k.split('/')[0])).size).toBeGreaterThan(1);
     // Every carrier of the scenario appears once in the side elevation.
-    expect(await page.locator('[data-pb-carriers="@elevation"] [visibility="visible"]').count()).toBe(await page.locator('[data-pb-carriers="@elevation"] [data-pb-carrier]').count());
+    expect(await page.locator('[data-pb-carriers="@elevation"] [visibility="visible"]').count()).toBe(
+      await page.locator('[data-pb-carriers="@elevation"] [data-pb-carrier]').count(),
+    );
     expect(await page.locator('[data-pb-station][stroke^="#"]').count()).toBeGreaterThan(0);
     await screenshot(page, 'playback-00-recorded');
   });
@@ -110,7 +123,11 @@ describe('playback of a stored run', () => {
     const runPath = playbackPath.replace(/\/playback$/, '');
     const scenarioPath = await page.getByRole('link', { name: 'Stacked loop' }).first().getAttribute('href');
     await page.setViewportSize({ width: 390, height: 844 });
-    for (const [name, path] of [['scenario', scenarioPath ?? ''], ['result', runPath], ['playback', playbackPath]] as const) {
+    for (const [name, path] of [
+      ['scenario', scenarioPath ?? ''],
+      ['result', runPath],
+      ['playback', playbackPath],
+    ] as const) {
       await page.goto(`${app.url}${path}`);
       await page.locator('main h1').waitFor();
       await page.waitForTimeout(1500);

@@ -27,7 +27,6 @@ afterAll(async () => {
   await app?.close();
 });
 
-
 async function signIn(email: string) {
   await page.goto(`${app.url}/sign-in`);
   await page.getByLabel('E-mail').fill(email);
@@ -63,7 +62,10 @@ describe('running the demo scenario as the demo engineer', () => {
   });
 
   it('changes the press cycle time and saves it as a new revision', async () => {
-    await page.getByRole('navigation', { name: 'Scenario sections' }).getByRole('button', { name: /^Process and stations/ }).click();
+    await page
+      .getByRole('navigation', { name: 'Scenario sections' })
+      .getByRole('button', { name: /^Process and stations/ })
+      .click();
     await page.getByRole('button', { name: /^Step 2: Press seat ring/ }).click();
     await page.getByRole('button', { name: 'Station PR', exact: true }).click();
     const value = page.locator('[data-distribution$="cycleTimeSeconds"]').getByLabel('Value (s)', { exact: true });
@@ -78,7 +80,13 @@ describe('running the demo scenario as the demo engineer', () => {
   });
 
   it('runs 5 replications with visible progress, then opens the stored result with both heatmaps', async () => {
-    await fillSettings({ 'Hours simulated': '24', 'Warm-up (minutes)': '10', Replications: '5', Seed: '2026', 'Carrier count': '' });
+    await fillSettings({
+      'Hours simulated': '24',
+      'Warm-up (minutes)': '10',
+      Replications: '5',
+      Seed: '2026',
+      'Carrier count': '',
+    });
     await page.getByRole('button', { name: 'Run simulation' }).click();
     await page.getByText(/Replication [2-5] of 5/).waitFor({ timeout: RUN_TIMEOUT });
     const progress = page.getByRole('progressbar', { name: 'Simulation progress' });
@@ -90,7 +98,10 @@ describe('running the demo scenario as the demo engineer', () => {
     await open.waitFor({ timeout: RUN_TIMEOUT });
     runPath = (await open.getAttribute('href')) ?? '';
     expect(runPath).toMatch(/^\/runs\/[0-9a-f-]{36}$/);
-    await page.getByRole('table', { name: 'Runs of this scenario' }).locator(`tr[data-run-id="${runPath.split('/').pop()}"]`).waitFor();
+    await page
+      .getByRole('table', { name: 'Runs of this scenario' })
+      .locator(`tr[data-run-id="${runPath.split('/').pop()}"]`)
+      .waitFor();
     await open.click();
     await page.waitForURL((url) => url.pathname === runPath);
     await page.getByRole('heading', { name: 'Headline' }).waitFor();
@@ -100,8 +111,12 @@ describe('running the demo scenario as the demo engineer', () => {
       expect(await frame.locator('[data-chart-state]').count()).toBe(0);
     }
     expect(await page.locator('[data-verdict]').textContent()).toMatch(/(Meets|Misses) the target takt of 10\.00 s/);
-    expect(await page.getByText('Seed', { exact: true }).locator('xpath=following-sibling::dd').textContent()).toBe('2026');
-    expect(await page.getByRole('complementary', { name: 'Safety caution' }).textContent()).toContain('not a safety sign-off');
+    expect(await page.getByText('Seed', { exact: true }).locator('xpath=following-sibling::dd').textContent()).toBe(
+      '2026',
+    );
+    expect(await page.getByRole('complementary', { name: 'Safety caution' }).textContent()).toContain(
+      'not a safety sign-off',
+    );
     await screenshot(page, 'run-02-result');
   });
 
@@ -147,14 +162,16 @@ describe('the demo viewer', () => {
     await page.goto(`${app.url}${runPath}`);
     await page.getByRole('heading', { name: 'Headline' }).waitFor();
     await page.locator('[data-chart$="-space-time"] svg[role="img"]').waitFor();
-    for (const name of [/^Delete/, /^Rename/, /^Rerun/]) expect(await page.getByRole('button', { name }).count()).toBe(0);
+    for (const name of [/^Delete/, /^Rename/, /^Rerun/])
+      expect(await page.getByRole('button', { name }).count()).toBe(0);
     await screenshot(page, 'run-06-viewer-result');
 
     await page.getByRole('link', { name: DEMO_SCENARIO, exact: true }).click();
     await page.getByRole('heading', { level: 1, name: DEMO_SCENARIO, exact: true }).waitFor();
     await page.getByRole('table', { name: 'Runs of this scenario' }).waitFor();
     expect(await page.getByRole('button', { name: 'Run simulation' }).count()).toBe(0);
-    for (const name of [/^Delete/, /^Rename/, /^Rerun/, /^Save as revision/, /^Restore/]) expect(await page.getByRole('button', { name }).count()).toBe(0);
+    for (const name of [/^Delete/, /^Rename/, /^Rerun/, /^Save as revision/, /^Restore/])
+      expect(await page.getByRole('button', { name }).count()).toBe(0);
     await screenshot(page, 'run-07-viewer-scenario');
     expect(browser.pageErrors).toEqual([]);
   });

@@ -14,8 +14,13 @@ let shareUrl: string;
 const session = useAppInBrowser(async (app) => {
   // A stored run of the demo's first scenario, saved through the API as the engineer.
   const engineer = request.agent(app.url);
-  await engineer.post('/api/auth/sign-in').send({ email: 'engineer@demo.lanewright.test', password: DEMO_PASSWORD }).expect(200);
-  const scenario = await app.dataSource.getRepository(ScenarioEntity).findOneOrFail({ where: {}, order: { createdAt: 'ASC' } });
+  await engineer
+    .post('/api/auth/sign-in')
+    .send({ email: 'engineer@demo.lanewright.test', password: DEMO_PASSWORD })
+    .expect(200);
+  const scenario = await app.dataSource
+    .getRepository(ScenarioEntity)
+    .findOneOrFail({ where: {}, order: { createdAt: 'ASC' } });
   const saved = await engineer.post(`/api/scenarios/${scenario.id}/runs`).send(runBody(scenario.latestRevisionId!));
   expect(saved.status, JSON.stringify(saved.body)).toBe(201);
   runId = saved.body.id;
@@ -39,7 +44,9 @@ describe('sharing a run read-only', () => {
     shareUrl = await panel.getByLabel('Share link').inputValue();
     expect(shareUrl).toMatch(/\/shared#[A-Za-z0-9_-]{43}$/);
     await panel.getByRole('table', { name: 'Share links' }).getByText('Demo Engineer').first().waitFor();
-    await panel.screenshot({ path: await screenshot(page, 'share-01-made').then((p) => p.replace('.png', '-panel.png')) });
+    await panel.screenshot({
+      path: await screenshot(page, 'share-01-made').then((p) => p.replace('.png', '-panel.png')),
+    });
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByRole('heading', { level: 1, name: 'Sign in to Lanewright' }).waitFor();
   });
@@ -54,7 +61,9 @@ describe('sharing a run read-only', () => {
     const buttons = (await main.getByRole('button').allTextContents()).map((text) => text.trim());
     expect(buttons.filter((text) => !/↕|↑|↓|^(CSV|PNG|SVG)/.test(text))).toEqual([]);
     expect(await main.getByRole('link', { name: /revision/i }).count()).toBe(0);
-    expect(await page.getByRole('navigation', { name: 'Team and account' }).getByRole('link', { name: 'Members' }).count()).toBe(0);
+    expect(
+      await page.getByRole('navigation', { name: 'Team and account' }).getByRole('link', { name: 'Members' }).count(),
+    ).toBe(0);
     await screenshot(page, 'share-02-shared-view');
     await page.screenshot({ path: (await screenshot(page, 'share-02-shared-view')).replace('.png', '-top.png') });
   });

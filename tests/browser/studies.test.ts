@@ -36,51 +36,57 @@ async function signIn(email: string) {
 }
 
 describe('a carrier-sizing study of the demo scenario', () => {
-  it('the engineer makes the study, cancels, resumes and reads the recommendation', async () => {
-    await signIn('engineer@demo.lanewright.test');
-    await page.getByRole('link', { name: new RegExp(DEMO_PROJECT) }).click();
-    await page.getByRole('link', { name: 'Studies' }).click();
-    await page.getByRole('button', { name: 'New study' }).click();
-    const form = page.getByRole('form', { name: 'New study' });
-    await form.getByLabel('Question').selectOption('carrierSizing');
-    await expect.poll(() => form.getByLabel('Fewest carriers').inputValue()).not.toBe('1');
-    await form.getByLabel('Name', { exact: true }).fill('How many carriers?');
-    // Long enough that Cancel comes while jobs are still running, even on a quiet machine.
-    await form.getByLabel('Hours per replication').fill('60');
-    await form.getByLabel('Warm-up (min)').fill('10');
-    await form.getByLabel('Replications').fill('4');
-    await form.getByLabel('Counts to try').fill('8');
-    await screenshot(page, 'study-new-form');
-    await form.getByRole('button', { name: 'Make and run the study' }).click();
+  it(
+    'the engineer makes the study, cancels, resumes and reads the recommendation',
+    async () => {
+      await signIn('engineer@demo.lanewright.test');
+      await page.getByRole('link', { name: new RegExp(DEMO_PROJECT) }).click();
+      await page.getByRole('link', { name: 'Studies' }).click();
+      await page.getByRole('button', { name: 'New study' }).click();
+      const form = page.getByRole('form', { name: 'New study' });
+      await form.getByLabel('Question').selectOption('carrierSizing');
+      await expect.poll(() => form.getByLabel('Fewest carriers').inputValue()).not.toBe('1');
+      await form.getByLabel('Name', { exact: true }).fill('How many carriers?');
+      // Long enough that Cancel comes while jobs are still running, even on a quiet machine.
+      await form.getByLabel('Hours per replication').fill('60');
+      await form.getByLabel('Warm-up (min)').fill('10');
+      await form.getByLabel('Replications').fill('4');
+      await form.getByLabel('Counts to try').fill('8');
+      await screenshot(page, 'study-new-form');
+      await form.getByRole('button', { name: 'Make and run the study' }).click();
 
-    await page.getByRole('heading', { level: 1, name: 'How many carriers?' }).waitFor();
-    studyUrl = page.url();
-    const bar = page.getByRole('progressbar', { name: 'Study progress' });
-    await bar.waitFor();
-    await page.getByText(/[1-9]\d* of \d+ jobs done/).waitFor({ timeout: STUDY_TIMEOUT });
-    await page.getByRole('button', { name: 'Cancel study' }).click();
-    await page.getByRole('button', { name: 'Resume study' }).waitFor();
-    await screenshot(page, 'study-cancelled');
-    await expect.poll(() => page.getByText(/Status: Cancelled/).count()).toBe(1);
+      await page.getByRole('heading', { level: 1, name: 'How many carriers?' }).waitFor();
+      studyUrl = page.url();
+      const bar = page.getByRole('progressbar', { name: 'Study progress' });
+      await bar.waitFor();
+      await page.getByText(/[1-9]\d* of \d+ jobs done/).waitFor({ timeout: STUDY_TIMEOUT });
+      await page.getByRole('button', { name: 'Cancel study' }).click();
+      await page.getByRole('button', { name: 'Resume study' }).waitFor();
+      await screenshot(page, 'study-cancelled');
+      await expect.poll(() => page.getByText(/Status: Cancelled/).count()).toBe(1);
 
-    await page.getByRole('button', { name: 'Resume study' }).click();
-    const recommendation = page.getByTestId('study-recommendation');
-    await page.getByText(/Status: (Done|Done, some points failed)\./).waitFor({ timeout: STUDY_TIMEOUT });
-    await recommendation.waitFor();
-    const text = await recommendation.innerText();
-    // The demo's target takt is 10 s, 360 parts/h: either a count meets it or the limiting station is named.
-    expect(text).toMatch(/Recommended: \d+ carriers|No carrier count reaches the target/);
-    expect(text).toMatch(/parts\/h/);
-    await page.getByText('Throughput against carriers').first().waitFor();
-    expect(await page.locator('[data-chart-part="point"]').count()).toBeGreaterThan(3);
-    await screenshot(page, 'study-carrier-sizing-done');
-    await page.setViewportSize({ width: 390, height: 844 });
-    await screenshot(page, 'study-carrier-sizing-phone');
-    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
-    expect(overflow).toBeLessThanOrEqual(1);
-    await page.setViewportSize({ width: 1280, height: 900 });
-    expect(browser.pageErrors).toEqual([]);
-  }, STUDY_TIMEOUT * 2);
+      await page.getByRole('button', { name: 'Resume study' }).click();
+      const recommendation = page.getByTestId('study-recommendation');
+      await page.getByText(/Status: (Done|Done, some points failed)\./).waitFor({ timeout: STUDY_TIMEOUT });
+      await recommendation.waitFor();
+      const text = await recommendation.innerText();
+      // The demo's target takt is 10 s, 360 parts/h: either a count meets it or the limiting station is named.
+      expect(text).toMatch(/Recommended: \d+ carriers|No carrier count reaches the target/);
+      expect(text).toMatch(/parts\/h/);
+      await page.getByText('Throughput against carriers').first().waitFor();
+      expect(await page.locator('[data-chart-part="point"]').count()).toBeGreaterThan(3);
+      await screenshot(page, 'study-carrier-sizing-done');
+      await page.setViewportSize({ width: 390, height: 844 });
+      await screenshot(page, 'study-carrier-sizing-phone');
+      const overflow = await page.evaluate(
+        () => document.documentElement.scrollWidth - document.documentElement.clientWidth,
+      );
+      expect(overflow).toBeLessThanOrEqual(1);
+      await page.setViewportSize({ width: 1280, height: 900 });
+      expect(browser.pageErrors).toEqual([]);
+    },
+    STUDY_TIMEOUT * 2,
+  );
 
   it('a viewer reads the finished study without controls that run it', async () => {
     await signIn('viewer@demo.lanewright.test');

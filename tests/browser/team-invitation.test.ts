@@ -10,7 +10,11 @@ import { followMailedLink } from './support/mailbox';
 
 const OWNER = 'owner@demo.lanewright.test';
 const DEMO_PROJECT = 'Cartridge line layout study';
-const invitee = { email: `new-engineer-${randomUUID().slice(0, 8)}@example.test`, name: 'Noor Invitee', password: 'a long enough passphrase' };
+const invitee = {
+  email: `new-engineer-${randomUUID().slice(0, 8)}@example.test`,
+  name: 'Noor Invitee',
+  password: 'a long enough passphrase',
+};
 
 const session = useAppInBrowser();
 let page: Page;

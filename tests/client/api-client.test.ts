@@ -24,10 +24,18 @@ describe('api client', () => {
 
   it('turns the error shape into an ApiRequestError with status, code, message and fields', async () => {
     mockApi({
-      'POST /api/projects': { status: 400, body: apiError('bad_request', 'Check the marked fields.', [{ path: 'name', message: 'is required' }]) },
+      'POST /api/projects': {
+        status: 400,
+        body: apiError('bad_request', 'Check the marked fields.', [{ path: 'name', message: 'is required' }]),
+      },
     });
     const error = await failureOf(api.post('/api/projects', {}, projectSchema));
-    expect(error).toMatchObject({ status: 400, code: 'bad_request', message: 'Check the marked fields.', fields: [{ path: 'name', message: 'is required' }] });
+    expect(error).toMatchObject({
+      status: 400,
+      code: 'bad_request',
+      message: 'Check the marked fields.',
+      fields: [{ path: 'name', message: 'is required' }],
+    });
   });
 
   it('names the first wrong path when an answer does not match the schema', async () => {

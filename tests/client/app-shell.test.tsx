@@ -24,7 +24,10 @@ describe('app shell', () => {
   it('signs out with a POST, forgets cached data and lands on sign-in without a return address', async () => {
     let signedIn = true;
     const api = mockApi({
-      [`GET ${apiRoutes.me}`]: () => (signedIn ? { status: 200, body: me() } : { status: 401, body: apiError('unauthenticated', 'Sign in to continue.') }),
+      [`GET ${apiRoutes.me}`]: () =>
+        signedIn
+          ? { status: 200, body: me() }
+          : { status: 401, body: apiError('unauthenticated', 'Sign in to continue.') },
       [`GET ${apiRoutes.projects}`]: { status: 200, body: [project()] },
       [`POST ${apiRoutes.signOut}`]: () => {
         signedIn = false;
@@ -54,7 +57,13 @@ describe('app shell', () => {
 describe('organisation switch', () => {
   it('shows the chosen organisation with the role held there, and remembers the choice', async () => {
     const secondOrg = uuid(3);
-    const twoOrgs = { ...me('viewer'), memberships: [...me('viewer').memberships, { organisationId: secondOrg, organisationName: 'Harbour Sensors', role: 'engineer' as const }] };
+    const twoOrgs = {
+      ...me('viewer'),
+      memberships: [
+        ...me('viewer').memberships,
+        { organisationId: secondOrg, organisationName: 'Harbour Sensors', role: 'engineer' as const },
+      ],
+    };
     const api = mockApi({
       [`GET ${apiRoutes.me}`]: { status: 200, body: twoOrgs },
       [`GET ${apiRoutes.projects}`]: { status: 200, body: [] },
@@ -69,7 +78,9 @@ describe('organisation switch', () => {
 
     expect(await screen.findByRole('button', { name: 'New project' })).toBeTruthy();
     expect(screen.getByLabelText('Role: engineer')).toBeTruthy();
-    expect(api.calls.some((c) => c.path === apiRoutes.projects && c.search === `?organisationId=${secondOrg}`)).toBe(true);
+    expect(api.calls.some((c) => c.path === apiRoutes.projects && c.search === `?organisationId=${secondOrg}`)).toBe(
+      true,
+    );
     expect(window.localStorage.getItem('lanewright.organisationId')).toBe(secondOrg);
   });
 });

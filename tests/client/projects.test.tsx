@@ -51,7 +51,9 @@ describe('project list', () => {
       [`GET ${apiRoutes.projects}`]: { status: 200, body: [] },
       [`POST ${apiRoutes.projects}`]: {
         status: 409,
-        body: apiError('conflict', 'A project with this name exists.', [{ path: 'name', message: 'is already used by another project' }]),
+        body: apiError('conflict', 'A project with this name exists.', [
+          { path: 'name', message: 'is already used by another project' },
+        ]),
       },
     });
     const { user } = renderApp('/');
@@ -61,7 +63,11 @@ describe('project list', () => {
     await user.type(screen.getByLabelText('Description (optional)'), 'Hall B');
     await user.click(screen.getByRole('button', { name: 'Create project' }));
 
-    await waitFor(() => expect(descriptionOf(screen.getByLabelText('Project name'))).toContain('Project name is already used by another project'));
+    await waitFor(() =>
+      expect(descriptionOf(screen.getByLabelText('Project name'))).toContain(
+        'Project name is already used by another project',
+      ),
+    );
     expect(screen.getByLabelText<HTMLTextAreaElement>('Description (optional)').value).toBe('Hall B');
   });
 
@@ -81,7 +87,11 @@ describe('project list', () => {
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Sensor module line' })).toBeTruthy();
     expect(location()).toBe(`/projects/${created.id}`);
-    expect(api.callsTo('POST', apiRoutes.projects)[0].body).toEqual({ name: 'Sensor module line', description: '', organisationId: ORG_ID });
+    expect(api.callsTo('POST', apiRoutes.projects)[0].body).toEqual({
+      name: 'Sensor module line',
+      description: '',
+      organisationId: ORG_ID,
+    });
     expect(await screen.findByRole('heading', { name: 'No scenarios yet' })).toBeTruthy();
   });
 });

@@ -77,7 +77,9 @@ describe('project page', () => {
       ...projectRoutes('engineer', []),
       [`POST ${apiRoutes.projectScenarios(project().id)}`]: {
         status: 400,
-        body: apiError('bad_request', 'The scenario document is not valid.', [{ path: 'document.carriers.count', message: 'count must be from 1 to 2000' }]),
+        body: apiError('bad_request', 'The scenario document is not valid.', [
+          { path: 'document.carriers.count', message: 'count must be from 1 to 2000' },
+        ]),
       },
     });
     const { user } = renderApp(`/projects/${project().id}`);
@@ -97,7 +99,10 @@ describe('scenario page', () => {
   it('says plainly when the scenario does not exist', async () => {
     mockApi({
       [`GET ${apiRoutes.me}`]: { status: 200, body: me() },
-      [`GET ${apiRoutes.scenarioRevisions(scenarioSummary().id)}`]: { status: 404, body: apiError('not_found', 'No such scenario.') },
+      [`GET ${apiRoutes.scenarioRevisions(scenarioSummary().id)}`]: {
+        status: 404,
+        body: apiError('not_found', 'No such scenario.'),
+      },
     });
     renderApp(`/scenarios/${scenarioSummary().id}`);
 
@@ -123,8 +128,13 @@ describe('scenario page', () => {
 
     const history = await screen.findByRole('table', { name: 'Revision history' });
     const rows = within(history).getAllByRole('row').slice(1);
-    expect(rows.map((row) => row.textContent)).toEqual([expect.stringMatching(/^#2latestChange 2Ada Fieldhouse/), expect.stringMatching(/^#1Started from/)]);
-    expect(within(history).getByRole('link', { name: 'Open revision 1' }).getAttribute('href')).toBe(`/scenarios/${scenarioSummary().id}/revisions/1`);
+    expect(rows.map((row) => row.textContent)).toEqual([
+      expect.stringMatching(/^#2latestChange 2Ada Fieldhouse/),
+      expect.stringMatching(/^#1Started from/),
+    ]);
+    expect(within(history).getByRole('link', { name: 'Open revision 1' }).getAttribute('href')).toBe(
+      `/scenarios/${scenarioSummary().id}/revisions/1`,
+    );
 
     expect(screen.queryByRole('button', { name: /Save as revision/ })).toBeNull();
     expect(screen.queryByRole('button', { name: /Restore/ })).toBeNull();

@@ -17,7 +17,9 @@ describe('sign-in form', () => {
     await user.click(screen.getByRole('button', { name: 'Sign in' }));
 
     const email = screen.getByLabelText('E-mail');
-    await waitFor(() => expect(descriptionOf(email)).toContain('E-mail must be an e-mail address such as name@example.com'));
+    await waitFor(() =>
+      expect(descriptionOf(email)).toContain('E-mail must be an e-mail address such as name@example.com'),
+    );
     expect(email.getAttribute('aria-invalid')).toBe('true');
     expect(descriptionOf(screen.getByLabelText('Password'))).toContain('Password is required');
     expect(api.callsTo('POST', apiRoutes.signIn)).toHaveLength(0);
@@ -26,7 +28,10 @@ describe('sign-in form', () => {
   it('keeps what was typed and shows the server message when the password is wrong', async () => {
     mockApi({
       [`GET ${apiRoutes.me}`]: signedOut,
-      [`POST ${apiRoutes.signIn}`]: { status: 401, body: apiError('unauthenticated', 'That e-mail and password do not match an account.') },
+      [`POST ${apiRoutes.signIn}`]: {
+        status: 401,
+        body: apiError('unauthenticated', 'That e-mail and password do not match an account.'),
+      },
     });
     const { user, location } = renderApp('/sign-in');
 
@@ -34,7 +39,9 @@ describe('sign-in form', () => {
     await user.type(screen.getByLabelText('Password'), 'not-the-password');
     await user.click(screen.getByRole('button', { name: 'Sign in' }));
 
-    expect((await screen.findByRole('alert')).textContent).toContain('That e-mail and password do not match an account.');
+    expect((await screen.findByRole('alert')).textContent).toContain(
+      'That e-mail and password do not match an account.',
+    );
     expect(screen.getByLabelText<HTMLInputElement>('E-mail').value).toBe('ada@example.test');
     expect(screen.getByLabelText<HTMLInputElement>('Password').value).toBe('not-the-password');
     expect(screen.getByRole('button', { name: 'Sign in' }).hasAttribute('disabled')).toBe(false);
@@ -62,13 +69,19 @@ describe('sign-in form', () => {
 
     expect(await screen.findByRole('heading', { level: 1, name: project().name })).toBeTruthy();
     expect(location()).toBe(`/projects/${project().id}`);
-    expect(api.callsTo('POST', apiRoutes.signIn)[0].body).toEqual({ email: 'ada@example.test', password: 'correct-horse' });
+    expect(api.callsTo('POST', apiRoutes.signIn)[0].body).toEqual({
+      email: 'ada@example.test',
+      password: 'correct-horse',
+    });
   });
 
   it('sends the user to sign-in when any query answers 401, remembering where they were', async () => {
     mockApi({
       [`GET ${apiRoutes.me}`]: { status: 200, body: me() },
-      [`GET ${apiRoutes.project(project().id)}`]: { status: 401, body: apiError('unauthenticated', 'Your session has ended.') },
+      [`GET ${apiRoutes.project(project().id)}`]: {
+        status: 401,
+        body: apiError('unauthenticated', 'Your session has ended.'),
+      },
       [`GET ${apiRoutes.projectScenarios(project().id)}`]: { status: 200, body: [] },
     });
     const { location } = renderApp(`/projects/${project().id}`);

@@ -11,7 +11,9 @@ describe('sign-up form', () => {
       [`GET ${apiRoutes.me}`]: { status: 401, body: apiError('unauthenticated', 'Sign in to continue.') },
       [`POST ${apiRoutes.signUp}`]: {
         status: 400,
-        body: apiError('bad_request', 'Invalid input in the request body: email is not accepted here', [{ path: 'email', message: 'is not accepted here' }]),
+        body: apiError('bad_request', 'Invalid input in the request body: email is not accepted here', [
+          { path: 'email', message: 'is not accepted here' },
+        ]),
       },
     });
     const { user } = renderApp('/sign-up');
@@ -49,13 +51,17 @@ describe('sign-up form', () => {
   });
 
   it('quotes the shared password rule before anything is sent', async () => {
-    const api = mockApi({ [`GET ${apiRoutes.me}`]: { status: 401, body: apiError('unauthenticated', 'Sign in to continue.') } });
+    const api = mockApi({
+      [`GET ${apiRoutes.me}`]: { status: 401, body: apiError('unauthenticated', 'Sign in to continue.') },
+    });
     const { user } = renderApp('/sign-up');
 
     await user.type(await screen.findByLabelText('Password'), 'short');
     await user.click(screen.getByRole('button', { name: 'Create account' }));
 
-    await waitFor(() => expect(descriptionOf(screen.getByLabelText('Password'))).toContain('Password must be at least 10 characters'));
+    await waitFor(() =>
+      expect(descriptionOf(screen.getByLabelText('Password'))).toContain('Password must be at least 10 characters'),
+    );
     expect(descriptionOf(screen.getByLabelText('Your name'))).toContain('Your name is required');
     expect(api.callsTo('POST', apiRoutes.signUp)).toHaveLength(0);
   });

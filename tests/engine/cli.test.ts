@@ -9,13 +9,33 @@ import { EXAMPLES_DIR } from './helpers';
 const ROOT = join(__dirname, '../..');
 
 function simulate(...args: string[]) {
-  const r = spawnSync(process.execPath, ['--import', 'tsx', join(ROOT, 'workers/cli/simulate.ts'), ...args], { cwd: ROOT, encoding: 'utf8', timeout: 60_000 });
+  const r = spawnSync(process.execPath, ['--import', 'tsx', join(ROOT, 'workers/cli/simulate.ts'), ...args], {
+    cwd: ROOT,
+    encoding: 'utf8',
+    timeout: 60_000,
+  });
   return { status: r.status, stdout: r.stdout, stderr: r.stderr };
 }
 
 describe('simulate command line', () => {
   it('parses flags into run settings', () => {
-    expect(parseArgs(['--scenario', 'a.json', '--replications', '3', '--seed', 'x7', '--hours', '2', '--warmup-minutes', '15', '--carriers', '9', '--json'])).toEqual({
+    expect(
+      parseArgs([
+        '--scenario',
+        'a.json',
+        '--replications',
+        '3',
+        '--seed',
+        'x7',
+        '--hours',
+        '2',
+        '--warmup-minutes',
+        '15',
+        '--carriers',
+        '9',
+        '--json',
+      ]),
+    ).toEqual({
       kind: 'run',
       scenario: 'a.json',
       json: true,
@@ -26,10 +46,30 @@ describe('simulate command line', () => {
   });
 
   it('prints one JSON object with the headline numbers and exits 0', () => {
-    const r = simulate('--scenario', join(EXAMPLES_DIR, 'stacked-loop.json'), '--replications', '2', '--hours', '0.25', '--warmup-minutes', '2', '--json');
+    const r = simulate(
+      '--scenario',
+      join(EXAMPLES_DIR, 'stacked-loop.json'),
+      '--replications',
+      '2',
+      '--hours',
+      '0.25',
+      '--warmup-minutes',
+      '2',
+      '--json',
+    );
     expect(r.status).toBe(0);
     const out = JSON.parse(r.stdout) as Record<string, unknown>;
-    for (const key of ['throughputPerHour', 'taktSeconds', 'annualOutput', 'stations', 'leadTimeSeconds', 'wip', 'events', 'engineVersion']) expect(out).toHaveProperty(key);
+    for (const key of [
+      'throughputPerHour',
+      'taktSeconds',
+      'annualOutput',
+      'stations',
+      'leadTimeSeconds',
+      'wip',
+      'events',
+      'engineVersion',
+    ])
+      expect(out).toHaveProperty(key);
     expect(out.throughputPerHour).toHaveProperty('ciLow');
   }, 60_000);
 
@@ -58,10 +98,21 @@ describe('simulate command line', () => {
     const r = simulate('--schema');
     expect(r.status).toBe(0);
     const schema = JSON.parse(r.stdout) as { properties: Record<string, unknown> };
-    expect(Object.keys(schema.properties)).toEqual(expect.arrayContaining(['schemaVersion', 'lanes', 'transfers', 'steps', 'carriers', 'calendar']));
+    expect(Object.keys(schema.properties)).toEqual(
+      expect.arrayContaining(['schemaVersion', 'lanes', 'transfers', 'steps', 'carriers', 'calendar']),
+    );
   }, 60_000);
   it('prints a readable table with the four transfer shares, aligned under their headings', () => {
-    const r = simulate('--scenario', join(EXAMPLES_DIR, 'stacked-loop.json'), '--replications', '1', '--hours', '0.25', '--warmup-minutes', '2');
+    const r = simulate(
+      '--scenario',
+      join(EXAMPLES_DIR, 'stacked-loop.json'),
+      '--replications',
+      '1',
+      '--hours',
+      '0.25',
+      '--warmup-minutes',
+      '2',
+    );
     expect(r.status).toBe(0);
     const lines = r.stdout.split('\n');
     const header = lines.findIndex((l) => l.startsWith('transfer'));

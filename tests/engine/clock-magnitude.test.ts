@@ -35,41 +35,62 @@ function outputFrom(doc: ScenarioInput | Record<string, unknown>, origin: number
 /** Origins from 0 to 10^9 s, always a whole number of shifts so the break pattern lines up with t = 0. */
 function origins(shiftSeconds: number): fc.Arbitrary<number> {
   const last = Math.floor(LATEST / shiftSeconds);
-  return fc.oneof(fc.constantFrom(0, 1, Math.ceil(2 ** 22 / shiftSeconds), Math.ceil(2 ** 29 / shiftSeconds), last), fc.integer({ min: 0, max: last })).map((k) => k * shiftSeconds);
+  return fc
+    .oneof(
+      fc.constantFrom(0, 1, Math.ceil(2 ** 22 / shiftSeconds), Math.ceil(2 ** 29 / shiftSeconds), last),
+      fc.integer({ min: 0, max: last }),
+    )
+    .map((k) => k * shiftSeconds);
 }
 
 describe('the clock at any magnitude', () => {
   it('random lines started anywhere up to 10^9 s make what they make at t = 0, without overlap or stall', () => {
     fc.assert(
-      fc.property(randomScenario, fc.double({ min: 0, max: 1, noNaN: true }), fc.integer({ min: 0, max: 1000 }), (doc, at, seed) => {
-        const shift = doc.calendar.hoursPerShift * 3600;
-        const origin = Math.floor((at * LATEST) / shift) * shift;
-        const early = outputFrom(doc, 0, 0.25, seed);
-        const late = outputFrom(doc, origin, 0.25, seed);
-        // Rounding may reorder two events that fall together at one clock and not at the other, after
-        // which the runs part ways; the counts stay close.
-        expect(Math.abs(late - early)).toBeLessThanOrEqual(2 + 0.05 * early);
-      }),
+      fc.property(
+        randomScenario,
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        fc.integer({ min: 0, max: 1000 }),
+        (doc, at, seed) => {
+          const shift = doc.calendar.hoursPerShift * 3600;
+          const origin = Math.floor((at * LATEST) / shift) * shift;
+          const early = outputFrom(doc, 0, 0.25, seed);
+          const late = outputFrom(doc, origin, 0.25, seed);
+          // Rounding may reorder two events that fall together at one clock and not at the other, after
+          // which the runs part ways; the counts stay close.
+          expect(Math.abs(late - early)).toBeLessThanOrEqual(2 + 0.05 * early);
+        },
+      ),
       { numRuns: 30 },
     );
   }, 300_000);
 
-  it.each(['stacked-loop.json', 'triple-deck.json', 'belt-baseline.json'])('%s runs at chosen origins up to 10^9 s with the output of t = 0', (file) => {
-    const doc = loadExample(file);
-    const shift = (doc.calendar as { hoursPerShift: number }).hoursPerShift * 3600;
-    const early = outputFrom(doc, 0, 0.5, 7);
-    fc.assert(
-      fc.property(origins(shift), (origin) => {
-        expect(Math.abs(outputFrom(doc, origin, 0.5, 7) - early)).toBeLessThanOrEqual(2 + 0.05 * early);
-      }),
-      { numRuns: 6 },
-    );
-  }, 300_000);
+  it.each(['stacked-loop.json', 'triple-deck.json', 'belt-baseline.json'])(
+    '%s runs at chosen origins up to 10^9 s with the output of t = 0',
+    (file) => {
+      const doc = loadExample(file);
+      const shift = (doc.calendar as { hoursPerShift: number }).hoursPerShift * 3600;
+      const early = outputFrom(doc, 0, 0.5, 7);
+      fc.assert(
+        fc.property(origins(shift), (origin) => {
+          expect(Math.abs(outputFrom(doc, origin, 0.5, 7) - early)).toBeLessThanOrEqual(2 + 0.05 * early);
+        }),
+        { numRuns: 6 },
+      );
+    },
+    300_000,
+  );
 });
 
 describe('the stall message', () => {
   it('names the zero times when the scenario has some', () => {
-    const doc = serialLine({ stations: [{ cycle: { kind: 'fixed', value: 0 } }, { cycle: { kind: 'empirical', samples: [0, 2] } }, { cycle: { kind: 'fixed', value: 3 } }], carriers: 2 });
+    const doc = serialLine({
+      stations: [
+        { cycle: { kind: 'fixed', value: 0 } },
+        { cycle: { kind: 'empirical', samples: [0, 2] } },
+        { cycle: { kind: 'fixed', value: 3 } },
+      ],
+      carriers: 2,
+    });
     const line = compileLine(scenarioSchema.parse(doc));
     expect(zeroTimes(line)).toEqual(['station "S1" (cycle time)', 'station "S2" (cycle time)']);
     expect(stallMessage(line, 10, 5)).toMatch(/give these a time above zero: station "S1"/);

@@ -5,14 +5,19 @@ import { EventQueue } from '../../workers/engine/kernel/event-queue';
 describe('event queue', () => {
   it('pops events by time, then priority, then the order they were scheduled', () => {
     fc.assert(
-      fc.property(fc.array(fc.tuple(fc.integer({ min: 0, max: 20 }), fc.integer({ min: 0, max: 3 })), { maxLength: 600 }), (items) => {
-        const q = new EventQueue();
-        items.forEach(([t, p], i) => q.push(t / 4, p, 1, i, 0));
-        const expected = items.map(([t, p], i) => ({ t: t / 4, p, i })).sort((a, b) => a.t - b.t || a.p - b.p || a.i - b.i);
-        const got: number[] = [];
-        while (q.pop()) got.push(q.popA);
-        expect(got).toEqual(expected.map((e) => e.i));
-      }),
+      fc.property(
+        fc.array(fc.tuple(fc.integer({ min: 0, max: 20 }), fc.integer({ min: 0, max: 3 })), { maxLength: 600 }),
+        (items) => {
+          const q = new EventQueue();
+          items.forEach(([t, p], i) => q.push(t / 4, p, 1, i, 0));
+          const expected = items
+            .map(([t, p], i) => ({ t: t / 4, p, i }))
+            .sort((a, b) => a.t - b.t || a.p - b.p || a.i - b.i);
+          const got: number[] = [];
+          while (q.pop()) got.push(q.popA);
+          expect(got).toEqual(expected.map((e) => e.i));
+        },
+      ),
     );
   });
 

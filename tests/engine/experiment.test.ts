@@ -21,7 +21,11 @@ describe('experiments', () => {
   });
 
   it('produces a result that matches the published result schema, with engine version and seed', async () => {
-    const r = await runExperiment(loadExample('side-by-side-loop.json'), { hours: 0.25, warmupMinutes: 2, replications: 3, seed: 42 }, noWait);
+    const r = await runExperiment(
+      loadExample('side-by-side-loop.json'),
+      { hours: 0.25, warmupMinutes: 2, replications: 3, seed: 42 },
+      noWait,
+    );
     expect(runResultSchema.safeParse(r).success).toBe(true);
     expect(r.engineVersion).toBe(ENGINE_VERSION);
     expect(r.seed).toBe('42');
@@ -42,24 +46,36 @@ describe('experiments', () => {
 
   it('stops a cancelled run with a recognisable error', async () => {
     let progressCalls = 0;
-    const error = await runExperiment(loadExample('stacked-loop.json'), { hours: 200, warmupMinutes: 0, replications: 1 }, {
-      ...noWait,
-      onProgress: () => progressCalls++,
-      isCancelled: () => progressCalls > 0,
-    }).catch((e: unknown) => e);
+    const error = await runExperiment(
+      loadExample('stacked-loop.json'),
+      { hours: 200, warmupMinutes: 0, replications: 1 },
+      {
+        ...noWait,
+        onProgress: () => progressCalls++,
+        isCancelled: () => progressCalls > 0,
+      },
+    ).catch((e: unknown) => e);
     expect(isSimulationStopped(error) && error.reason).toBe('cancelled');
     expect(progressCalls).toBeGreaterThan(0);
   });
 
   it('reports progress as a growing fraction up to 1', async () => {
     const fractions: number[] = [];
-    await runExperiment(loadExample('stacked-loop.json'), { hours: 0.5, warmupMinutes: 0, replications: 2 }, { ...noWait, onProgress: (p) => fractions.push(p.fraction) });
+    await runExperiment(
+      loadExample('stacked-loop.json'),
+      { hours: 0.5, warmupMinutes: 0, replications: 2 },
+      { ...noWait, onProgress: (p) => fractions.push(p.fraction) },
+    );
     expect(fractions.at(-1)).toBe(1);
     for (let i = 1; i < fractions.length; i++) expect(fractions[i]).toBeGreaterThanOrEqual(fractions[i - 1]);
   });
 
   it('stops at the event budget with the reason', async () => {
-    const error = await runExperiment(loadExample('stacked-loop.json'), { hours: 8, replications: 1 }, { ...noWait, eventBudget: 5_000 }).catch((e: unknown) => e);
+    const error = await runExperiment(
+      loadExample('stacked-loop.json'),
+      { hours: 8, replications: 1 },
+      { ...noWait, eventBudget: 5_000 },
+    ).catch((e: unknown) => e);
     expect(isSimulationStopped(error) && error.reason).toBe('eventBudget');
   });
 
@@ -90,7 +106,11 @@ describe('experiments', () => {
   });
 
   it('uses the carrier count override', async () => {
-    const r = await runExperiment(loadExample('stacked-loop.json'), { hours: 0.2, warmupMinutes: 0, replications: 1, carriers: 6 }, noWait);
+    const r = await runExperiment(
+      loadExample('stacked-loop.json'),
+      { hours: 0.2, warmupMinutes: 0, replications: 1, carriers: 6 },
+      noWait,
+    );
     expect(r.carriers.count).toBe(6);
   });
 });

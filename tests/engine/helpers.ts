@@ -7,7 +7,9 @@ import { runExperiment } from '../../workers/engine';
 export const EXAMPLES_DIR = join(__dirname, '../../shared/examples');
 
 export function exampleFiles(): string[] {
-  return readdirSync(EXAMPLES_DIR).filter((f) => f.endsWith('.json')).sort();
+  return readdirSync(EXAMPLES_DIR)
+    .filter((f) => f.endsWith('.json'))
+    .sort();
 }
 
 export function loadExample(file: string): Record<string, unknown> {

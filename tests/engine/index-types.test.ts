@@ -3,7 +3,14 @@
 // costs nothing at run time (they are plain numbers).
 import { describe, expect, it } from 'vitest';
 import { chooseStation } from '../../workers/engine/model/dispatch';
-import { NONE, type CarrierIndex, type ConnIndex, type LaneIndex, type StationIndex, type StepIndex } from '../../workers/engine/model/indexes';
+import {
+  NONE,
+  type CarrierIndex,
+  type ConnIndex,
+  type LaneIndex,
+  type StationIndex,
+  type StepIndex,
+} from '../../workers/engine/model/indexes';
 import { attach, positionAt } from '../../workers/engine/model/lanes';
 import type { LineState } from '../../workers/engine/model/state';
 import { arriveAtStation } from '../../workers/engine/model/stations';
@@ -11,7 +18,14 @@ import { onCarried, serveLane } from '../../workers/engine/model/transfers';
 
 describe('branded indexes of the line model', () => {
   it('swapped or mixed-up indexes do not compile', () => {
-    const uses = (m: LineState, c: CarrierIndex, s: StationIndex, lane: LaneIndex, step: StepIndex, conn: ConnIndex) => {
+    const uses = (
+      m: LineState,
+      c: CarrierIndex,
+      s: StationIndex,
+      lane: LaneIndex,
+      step: StepIndex,
+      conn: ConnIndex,
+    ) => {
       arriveAtStation(m, c, s);
       // @ts-expect-error a station where the carrier is due, and the carrier where the station is
       arriveAtStation(m, s, c);

@@ -28,7 +28,10 @@ describe('line behaviour', () => {
   it('a blocked station resumes when space frees', async () => {
     // A fast press feeds a slow station directly, with no room between them: the press finishes in
     // 1 s and then holds its carrier until the slow station lets its own carrier go.
-    const doc = serialLine({ stations: [{ cycle: fixed(1) }, { cycle: fixed(1) }, { cycle: fixed(10) }, { cycle: fixed(1) }], carriers: 4 });
+    const doc = serialLine({
+      stations: [{ cycle: fixed(1) }, { cycle: fixed(1) }, { cycle: fixed(10) }, { cycle: fixed(1) }],
+      carriers: 4,
+    });
     const r = await checkedRun(doc, { hours: 1, warmupMinutes: 10, replications: 1, seed: 1 });
     const press = r.stations[1];
     expect(press.blocked).toBeGreaterThan(0.5);
@@ -43,7 +46,10 @@ describe('line behaviour', () => {
   });
 
   it('a deterministic line makes one part per cycle of its slowest station once warmed up', async () => {
-    const doc = serialLine({ stations: [{ cycle: fixed(4) }, { cycle: fixed(8), bufferBefore: 3 }, { cycle: fixed(2), bufferBefore: 3 }], carriers: 8 });
+    const doc = serialLine({
+      stations: [{ cycle: fixed(4) }, { cycle: fixed(8), bufferBefore: 3 }, { cycle: fixed(2), bufferBefore: 3 }],
+      carriers: 8,
+    });
     const r = await checkedRun(doc, { hours: 1, warmupMinutes: 10, replications: 1, seed: 1 });
     expect(Math.abs(r.parts.output - 450)).toBeLessThanOrEqual(1);
     expect(r.stations[1].processing).toBeGreaterThan(0.99);
@@ -99,10 +105,18 @@ describe('line behaviour', () => {
 
 describe('dispatch', () => {
   function parallelPositions(dispatch: 'pooled' | 'shortestQueue' | 'firstFree') {
-    const doc = serialLine({ stations: [{ cycle: fixed(1) }, { cycle: fixed(20) }, { cycle: fixed(1), bufferBefore: 2 }], carriers: 6 });
+    const doc = serialLine({
+      stations: [{ cycle: fixed(1) }, { cycle: fixed(20) }, { cycle: fixed(1), bufferBefore: 2 }],
+      carriers: 6,
+    });
     const step = doc.steps[1];
     step.dispatch = dispatch;
-    step.stations.push({ ...step.stations[0], id: 'S2b', name: 'Station S2b', positionMm: step.stations[0].positionMm + 100 });
+    step.stations.push({
+      ...step.stations[0],
+      id: 'S2b',
+      name: 'Station S2b',
+      positionMm: step.stations[0].positionMm + 100,
+    });
     return doc;
   }
 

@@ -30,7 +30,12 @@ describe('playback trace', () => {
   it('gives each station the same processing share as the run it replays', async () => {
     const settings = { hours: 0.5, warmupMinutes: 10, replications: 1, seed: 7 };
     const result = await runExperiment(stacked, settings, fast);
-    const trace = await recordPlayback(stacked, settings, { replication: 0, startMinutes: 10, windowMinutes: 30 }, fast);
+    const trace = await recordPlayback(
+      stacked,
+      settings,
+      { replication: 0, startMinutes: 10, windowMinutes: 30 },
+      fast,
+    );
     const shares = processingShares(trace, 600, 600 + 1800);
     result.stations.forEach((st, i) => {
       expect(trace.stationIds[i]).toBe(st.id);
@@ -39,7 +44,12 @@ describe('playback trace', () => {
   });
 
   it('knows where every carrier is when the window opens, and keeps changes in time order on lanes that exist', async () => {
-    const trace = await recordPlayback(stacked, { hours: 1, warmupMinutes: 5, replications: 2, seed: 3 }, { replication: 1, startMinutes: 20, windowMinutes: 5 }, fast);
+    const trace = await recordPlayback(
+      stacked,
+      { hours: 1, warmupMinutes: 5, replications: 2, seed: 3 },
+      { replication: 1, startMinutes: 20, windowMinutes: 5 },
+      fast,
+    );
     const { t, carrier, where, posMm, destMm, endT, count } = trace.carriers;
     const seenBeforeStart = new Set<number>();
     for (let i = 0; i < count; i++) {
@@ -70,15 +80,27 @@ describe('playback trace', () => {
   });
 
   it('stops with a message naming the limit when the window holds too many changes', async () => {
-    const run = recordPlayback(stacked, { hours: 1, warmupMinutes: 0, replications: 1, seed: 1 }, { windowMinutes: 30 }, fast, { carrierChangesMax: 500, stationChangesMax: 300_000 });
+    const run = recordPlayback(
+      stacked,
+      { hours: 1, warmupMinutes: 0, replications: 1, seed: 1 },
+      { windowMinutes: 30 },
+      fast,
+      { carrierChangesMax: 500, stationChangesMax: 300_000 },
+    );
     await expect(run).rejects.toBeInstanceOf(TraceLimitError);
     await expect(run).rejects.toThrow(/more than 500 carrier changes .* choose a shorter window/);
   });
 
   it('refuses a replication the run does not have and a window past its end, naming the field', async () => {
     const settings = { hours: 1, warmupMinutes: 0, replications: 2, seed: 1 };
-    await expect(recordPlayback(stacked, settings, { replication: 2 }, fast)).rejects.toThrow(/playback\.replication: the run has 2 replications/);
-    await expect(recordPlayback(stacked, settings, { startMinutes: 60 }, fast)).rejects.toThrow(/playback\.startMinutes/);
-    await expect(recordPlayback(stacked, settings, { windowMinutes: 241 }, fast)).rejects.toThrow(/playback\.windowMinutes: windowMinutes must be from 1 to 240/);
+    await expect(recordPlayback(stacked, settings, { replication: 2 }, fast)).rejects.toThrow(
+      /playback\.replication: the run has 2 replications/,
+    );
+    await expect(recordPlayback(stacked, settings, { startMinutes: 60 }, fast)).rejects.toThrow(
+      /playback\.startMinutes/,
+    );
+    await expect(recordPlayback(stacked, settings, { windowMinutes: 241 }, fast)).rejects.toThrow(
+      /playback\.windowMinutes: windowMinutes must be from 1 to 240/,
+    );
   });
 });

@@ -15,7 +15,12 @@ const profile: fc.Arbitrary<MotionProfile> = fc
   })
   .map((p) => (p.jMax === undefined ? { vMax: p.vMax, aMax: p.aMax } : { vMax: p.vMax, aMax: p.aMax, jMax: p.jMax }));
 
-const move = fc.tuple(profile, fc.double({ min: 1, max: 50_000, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }));
+const move = fc.tuple(
+  profile,
+  fc.double({ min: 1, max: 50_000, noNaN: true }),
+  fc.double({ min: 0, max: 1, noNaN: true }),
+  fc.double({ min: 0, max: 1, noNaN: true }),
+);
 
 describe('timeToReach inverts positionAt', () => {
   it('the carrier is at the asked distance at the returned time, within 1e-6 mm per metre moved', () => {
@@ -35,7 +40,9 @@ describe('timeToReach inverts positionAt', () => {
     fc.assert(
       fc.property(move, ([p, distance, a, b]) => {
         const [near, far] = a <= b ? [a, b] : [b, a];
-        expect(timeToReach(distance, p, near * distance)).toBeLessThanOrEqual(timeToReach(distance, p, far * distance) + 1e-12);
+        expect(timeToReach(distance, p, near * distance)).toBeLessThanOrEqual(
+          timeToReach(distance, p, far * distance) + 1e-12,
+        );
         expect(timeToReach(distance, p, 0)).toBe(0);
         expect(timeToReach(distance, p, distance)).toBe(moveTime(distance, p));
       }),

@@ -50,7 +50,10 @@ describe('validation refuses lines that cannot work as drawn', () => {
     fc.assert(
       fc.property(randomScenario, (scenario) => {
         const doc = structuredClone(scenario) as Doc;
-        doc.steps[0].stations[0].failures = { timeBetweenFailuresSeconds: { kind: 'fixed', value: 0 }, timeToRepairSeconds: { kind: 'fixed', value: 5 } };
+        doc.steps[0].stations[0].failures = {
+          timeBetweenFailuresSeconds: { kind: 'fixed', value: 0 },
+          timeToRepairSeconds: { kind: 'fixed', value: 5 },
+        };
         expect(issuesAt(doc, 'steps[0].stations[0].failures.timeBetweenFailuresSeconds')).toHaveLength(1);
       }),
       { seed: PROPERTY_SEED, numRuns: 50 },

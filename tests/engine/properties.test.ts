@@ -14,7 +14,8 @@ const EVENT_BUDGET = 3_000_000;
 function numbers(x: unknown, path: string, out: [string, number][]): [string, number][] {
   if (typeof x === 'number') out.push([path, x]);
   else if (Array.isArray(x)) x.forEach((v, i) => numbers(v, `${path}[${i}]`, out));
-  else if (x !== null && typeof x === 'object') for (const [k, v] of Object.entries(x)) numbers(v, path ? `${path}.${k}` : k, out);
+  else if (x !== null && typeof x === 'object')
+    for (const [k, v] of Object.entries(x)) numbers(v, path ? `${path}.${k}` : k, out);
   return out;
 }
 
@@ -61,10 +62,19 @@ describe('random valid lines keep the engine invariants', () => {
     await fc.assert(
       fc.asyncProperty(
         randomScenario,
-        fc.record({ hours: fc.double({ min: 0.1, max: 0.6, noNaN: true }), warmupMinutes: fc.integer({ min: 0, max: 10 }), replications: fc.integer({ min: 1, max: 2 }), seed: fc.nat() }),
+        fc.record({
+          hours: fc.double({ min: 0.1, max: 0.6, noNaN: true }),
+          warmupMinutes: fc.integer({ min: 0, max: 10 }),
+          replications: fc.integer({ min: 1, max: 2 }),
+          seed: fc.nat(),
+        }),
         async (scenario, settings) => {
           const carriers = (scenario.carriers as { count: number }).count;
-          const outcome = await runExperiment(scenario, settings, { checkInvariants: true, eventBudget: EVENT_BUDGET, yieldToHost: async () => undefined }).catch((e: unknown) => e);
+          const outcome = await runExperiment(scenario, settings, {
+            checkInvariants: true,
+            eventBudget: EVENT_BUDGET,
+            yieldToHost: async () => undefined,
+          }).catch((e: unknown) => e);
           if (isSimulationStopped(outcome)) throw new Error(`stopped (${outcome.reason}): ${outcome.message}`);
           if (outcome instanceof Error) throw outcome;
           checkResult(outcome as RunResult, carriers);

@@ -15,11 +15,19 @@ describe('random serial lines', () => {
       fc.asyncProperty(
         fc.array(station, { minLength: 2, maxLength: 5 }),
         fc.integer({ min: 1, max: 10 }),
-        fc.record({ vMax: fc.integer({ min: 200, max: 3000 }), aMax: fc.integer({ min: 500, max: 30_000 }), emptyFaster: fc.boolean(), gap: fc.integer({ min: 0, max: 60 }) }),
+        fc.record({
+          vMax: fc.integer({ min: 200, max: 3000 }),
+          aMax: fc.integer({ min: 500, max: 30_000 }),
+          emptyFaster: fc.boolean(),
+          gap: fc.integer({ min: 0, max: 60 }),
+        }),
         fc.integer({ min: 0, max: 1000 }),
         async (stations, carriers, motion, seed) => {
           const doc = serialLine({
-            stations: stations.map((s) => ({ cycle: { kind: 'gamma', mean: s.mean, cv: s.cv }, bufferBefore: s.bufferBefore })),
+            stations: stations.map((s) => ({
+              cycle: { kind: 'gamma', mean: s.mean, cv: s.cv },
+              bufferBefore: s.bufferBefore,
+            })),
             carriers,
             gapMm: motion.gap,
             vMaxMmPerS: motion.vMax,
@@ -30,7 +38,8 @@ describe('random serial lines', () => {
           // checkedRun throws on any overlap or conservation error after any event.
           const r = await checkedRun(doc, { hours: 0.2, warmupMinutes: 1, replications: 1, seed });
           expect(r.parts.output).toBeGreaterThan(0);
-          for (const s of r.stations) expect(s.processing + s.starved + s.blocked + s.down + s.onBreak).toBeCloseTo(1, 9);
+          for (const s of r.stations)
+            expect(s.processing + s.starved + s.blocked + s.down + s.onBreak).toBeCloseTo(1, 9);
         },
       ),
       { numRuns: 25 },

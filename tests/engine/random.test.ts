@@ -46,11 +46,19 @@ describe('random streams', () => {
     const factory = createStreamFactory('corr', 0);
     const x = factory('station:1:cycle');
     const y = factory('station:2:cycle');
-    let sx = 0, sy = 0, sxx = 0, syy = 0, sxy = 0;
+    let sx = 0,
+      sy = 0,
+      sxx = 0,
+      syy = 0,
+      sxy = 0;
     for (let i = 0; i < n; i++) {
       const a = x();
       const b = y();
-      sx += a; sy += b; sxx += a * a; syy += b * b; sxy += a * b;
+      sx += a;
+      sy += b;
+      sxx += a * a;
+      syy += b * b;
+      sxy += a * b;
     }
     const r = (n * sxy - sx * sy) / Math.sqrt((n * sxx - sx * sx) * (n * syy - sy * sy));
     // Under independence r has standard error 1/√n (R. A. Fisher, "Statistical Methods for Research
@@ -107,18 +115,21 @@ describe('samplers', () => {
     }
   });
 
-  it.each(everyKind.filter((d) => d.kind !== 'fixed' && d.kind !== 'empirical'))('$kind draws grow with the uniform (inverse transform)', (d) => {
-    let u = 0;
-    const sample = createSampler(d, () => u);
-    let previous = -Infinity;
-    for (let k = 0; k <= 1000; k++) {
-      u = Math.min(k / 1000, 1 - 2 ** -32);
-      const x = sample();
-      expect(Number.isFinite(x)).toBe(true);
-      expect(x).toBeGreaterThanOrEqual(previous);
-      previous = x;
-    }
-  });
+  it.each(everyKind.filter((d) => d.kind !== 'fixed' && d.kind !== 'empirical'))(
+    '$kind draws grow with the uniform (inverse transform)',
+    (d) => {
+      let u = 0;
+      const sample = createSampler(d, () => u);
+      let previous = -Infinity;
+      for (let k = 0; k <= 1000; k++) {
+        u = Math.min(k / 1000, 1 - 2 ** -32);
+        const x = sample();
+        expect(Number.isFinite(x)).toBe(true);
+        expect(x).toBeGreaterThanOrEqual(previous);
+        previous = x;
+      }
+    },
+  );
 
   it('the triangular inverse CDF hits min, mode and max at u = 0, the mode quantile, and u → 1', () => {
     const d = { kind: 'triangular', min: 8, mode: 9, max: 15 } as const;

@@ -28,6 +28,8 @@ describe('replication ranges', () => {
 
   it('refuses a range with a negative first index', async () => {
     const scenario = loadExample('stacked-loop.json');
-    await expect(runReplicationRange(scenario, { hours: 0.1 }, { first: -1, count: 1 }, fast)).rejects.toThrow(/whole first index/);
+    await expect(runReplicationRange(scenario, { hours: 0.1 }, { first: -1, count: 1 }, fast)).rejects.toThrow(
+      /whole first index/,
+    );
   });
 });

@@ -104,7 +104,9 @@ describe('streaming histogram', () => {
   });
 
   it('refuses a non-finite observation instead of growing forever', () => {
-    expect(() => new StreamingHistogram(1).add(Infinity)).toThrow('StreamingHistogram: observation must be finite, got Infinity');
+    expect(() => new StreamingHistogram(1).add(Infinity)).toThrow(
+      'StreamingHistogram: observation must be finite, got Infinity',
+    );
     expect(() => new StreamingHistogram(0)).toThrow(/initialBinWidth must be a positive finite number/);
     expect(() => new StreamingHistogram(1, 7)).toThrow(/binCount must be an even whole number/);
   });

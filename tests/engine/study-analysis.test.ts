@@ -8,15 +8,38 @@ import { sweepableFields } from '../../shared/studies/sweepable-fields';
 import type { ReplicationFigures } from '../../shared/studies/replication-summary-json';
 import { trackCapacity } from '../../workers/engine';
 import { rangeValues, sweepPoints } from '../../workers/studies/build-points';
-import { carrierGrid, defaultCarrierRange, recommendCarriers, type SizingPoint } from '../../workers/studies/carrier-sizing';
+import {
+  carrierGrid,
+  defaultCarrierRange,
+  recommendCarriers,
+  type SizingPoint,
+} from '../../workers/studies/carrier-sizing';
 import { pairedDifference, type PointStatistics } from '../../workers/studies/point-statistics';
 import { loadExample } from './helpers';
 
 const ID = '00000000-0000-4000-8000-00000000000a';
 
-function point(carriers: number, throughput: number, leadSeconds: number, shares: number[] = [0.1, 0.8, 0.1]): SizingPoint {
+function point(
+  carriers: number,
+  throughput: number,
+  leadSeconds: number,
+  shares: number[] = [0.1, 0.8, 0.1],
+): SizingPoint {
   const ci = (mean: number) => ({ mean, ciLow: mean * 0.99, ciHigh: mean * 1.01, halfWidth: mean * 0.01, n: 5 });
-  return { carriers, stats: { index: carriers, label: `${carriers}`, state: 'done', message: null, replications: [], throughput: ci(throughput), wip: ci(carriers), leadSeconds: ci(leadSeconds), bottleneckShares: shares } };
+  return {
+    carriers,
+    stats: {
+      index: carriers,
+      label: `${carriers}`,
+      state: 'done',
+      message: null,
+      replications: [],
+      throughput: ci(throughput),
+      wip: ci(carriers),
+      leadSeconds: ci(leadSeconds),
+      bottleneckShares: shares,
+    },
+  };
 }
 
 describe('point changes', () => {
@@ -34,13 +57,22 @@ describe('point changes', () => {
     const after = scenarioSchema.parse(changed.document);
     expect(after.carriers.count).toBe(9);
     const key = cycle.path.split('.').at(-1)!;
-    expect((after.steps[1].stations[0].cycleTimeSeconds as unknown as Record<string, number>)[key]).toBeCloseTo(cycle.value * (key === 'cv' || key === 'k' ? 1 : 0.5));
+    expect((after.steps[1].stations[0].cycleTimeSeconds as unknown as Record<string, number>)[key]).toBeCloseTo(
+      cycle.value * (key === 'cv' || key === 'k' ? 1 : 0.5),
+    );
     expect((doc.carriers as { count: number }).count).not.toBe(9);
   });
 
   it('names a path the scenario does not have', () => {
-    expect(applyPointChanges(doc, [{ path: 'carriers.colour', op: 'set', value: 1 }])).toEqual({ ok: false, path: 'carriers.colour', message: 'the scenario has no field carriers.colour' });
-    expect(applyPointChanges(doc, [{ path: 'steps.0.name', op: 'set', value: 1 }])).toMatchObject({ ok: false, message: 'steps.0.name is not a number, so it cannot be set' });
+    expect(applyPointChanges(doc, [{ path: 'carriers.colour', op: 'set', value: 1 }])).toEqual({
+      ok: false,
+      path: 'carriers.colour',
+      message: 'the scenario has no field carriers.colour',
+    });
+    expect(applyPointChanges(doc, [{ path: 'steps.0.name', op: 'set', value: 1 }])).toMatchObject({
+      ok: false,
+      message: 'steps.0.name is not a number, so it cannot be set',
+    });
   });
 
   it('lists carrier count, motion, every station time and elevators as sweepable', () => {
@@ -64,7 +96,14 @@ describe('the job plan', () => {
 
   it('cuts each point into blocks; the last takes the remainder; common random numbers share the seed', () => {
     const jobs = studyJobs(study);
-    expect(jobs.map((j) => [j.pointIndex, j.first, j.count])).toEqual([[0, 0, 2], [0, 2, 2], [0, 4, 1], [1, 0, 2], [1, 2, 2], [1, 4, 1]]);
+    expect(jobs.map((j) => [j.pointIndex, j.first, j.count])).toEqual([
+      [0, 0, 2],
+      [0, 2, 2],
+      [0, 4, 1],
+      [1, 0, 2],
+      [1, 2, 2],
+      [1, 4, 1],
+    ]);
     expect(new Set(jobs.map((j) => j.settings.seed))).toEqual(new Set([3]));
     expect(new Set(studyJobs({ ...study, commonRandomNumbers: false }).map((j) => j.settings.seed)).size).toBe(2);
     expect(JSON.parse(JSON.stringify(jobs))).toEqual(jobs);
@@ -72,7 +111,13 @@ describe('the job plan', () => {
 
   it('leaves out jobs that have a result', () => {
     const results = [{ pointIndex: 0, first: 2, count: 2, outcome: 'done' as const, message: null, figures: [] }];
-    expect(pendingJobs({ ...study, results }).map((j) => `${j.pointIndex}:${j.first}`)).toEqual(['0:0', '0:4', '1:0', '1:2', '1:4']);
+    expect(pendingJobs({ ...study, results }).map((j) => `${j.pointIndex}:${j.first}`)).toEqual([
+      '0:0',
+      '0:4',
+      '1:0',
+      '1:2',
+      '1:4',
+    ]);
   });
 });
 
@@ -93,7 +138,12 @@ describe('carrier range and grid', () => {
   it('range values are evenly spaced and whole when asked', () => {
     expect(rangeValues(1, 2, 5)).toEqual([1, 1.25, 1.5, 1.75, 2]);
     expect(rangeValues(4, 9, 4, true)).toEqual([4, 6, 7, 9]);
-    expect(sweepPoints([{ path: 'a', label: 'A', values: [1, 2] }, { path: 'b', label: 'B', values: [3, 4] }]).map((p) => p.label)).toEqual(['A 1, B 3', 'A 1, B 4', 'A 2, B 3', 'A 2, B 4']);
+    expect(
+      sweepPoints([
+        { path: 'a', label: 'A', values: [1, 2] },
+        { path: 'b', label: 'B', values: [3, 4] },
+      ]).map((p) => p.label),
+    ).toEqual(['A 1, B 3', 'A 1, B 4', 'A 2, B 3', 'A 2, B 4']);
   });
 });
 
@@ -103,30 +153,60 @@ describe('carrier recommendation', () => {
   it('picks the smallest count within the tolerance of the best and says what more would cost', () => {
     const advice = recommendCarriers(curve, null, ['LD', 'Press', 'UL']);
     expect(advice).toMatchObject({ kind: 'recommend', carriers: 14, best: 22 });
-    expect(advice.text).toBe('14 carriers make 198.0 parts/h, within 1 % of the best (200.0 parts/h at 22). Beyond 14 carriers throughput rises by 1.0 % while lead time grows 19 % (at 22).');
+    expect(advice.text).toBe(
+      '14 carriers make 198.0 parts/h, within 1 % of the best (200.0 parts/h at 22). Beyond 14 carriers throughput rises by 1.0 % while lead time grows 19 % (at 22).',
+    );
   });
 
   it('with a target, the smallest count within tolerance that also meets it', () => {
-    expect(recommendCarriers(curve, 199, ['LD', 'Press', 'UL'])).toMatchObject({ kind: 'recommend', carriers: 18, meetsTarget: true });
-    expect(recommendCarriers(curve, 150, ['LD', 'Press', 'UL'], 0.2)).toMatchObject({ kind: 'recommend', carriers: 10, meetsTarget: true });
+    expect(recommendCarriers(curve, 199, ['LD', 'Press', 'UL'])).toMatchObject({
+      kind: 'recommend',
+      carriers: 18,
+      meetsTarget: true,
+    });
+    expect(recommendCarriers(curve, 150, ['LD', 'Press', 'UL'], 0.2)).toMatchObject({
+      kind: 'recommend',
+      carriers: 10,
+      meetsTarget: true,
+    });
   });
 
   it('says plainly when no count reaches the target and which station limits the line', () => {
     const advice = recommendCarriers(curve, 240, ['LD', 'Press', 'UL']);
     expect(advice).toMatchObject({ kind: 'unreachable', best: 22, limitingStation: 'Press' });
-    expect(advice.text).toBe('No carrier count reaches the target of 240.0 parts/h: the most is 200.0 parts/h at 22 carriers. Station Press limits the line: it is the bottleneck 80 % of the time at 22 carriers, so more carriers cannot help; shorten its cycle time or add a station beside it.');
+    expect(advice.text).toBe(
+      'No carrier count reaches the target of 240.0 parts/h: the most is 200.0 parts/h at 22 carriers. Station Press limits the line: it is the bottleneck 80 % of the time at 22 carriers, so more carriers cannot help; shorten its cycle time or add a station beside it.',
+    );
   });
 
   it('skips points that failed and says when nothing has finished', () => {
-    const failed = { ...point(30, 999, 1), stats: { ...point(30, 999, 1).stats, state: 'stopped' as const, message: 'gridlock' } };
+    const failed = {
+      ...point(30, 999, 1),
+      stats: { ...point(30, 999, 1).stats, state: 'stopped' as const, message: 'gridlock' },
+    };
     expect(recommendCarriers([...curve, failed], null, [])).toMatchObject({ carriers: 14, best: 22 });
     expect(recommendCarriers([], null, []).kind).toBe('none');
   });
 });
 
 describe('paired differences (common random numbers)', () => {
-  const figures = (x: number): ReplicationFigures => ({ throughputPerHour: x, wipMean: 0, leadMeanSeconds: 0, bottleneckShares: [] });
-  const stats = (values: (number | undefined)[]): PointStatistics => ({ index: 0, label: '', state: 'done', message: null, replications: values.map((v) => (v === undefined ? undefined : figures(v))), throughput: null, wip: null, leadSeconds: null, bottleneckShares: [] });
+  const figures = (x: number): ReplicationFigures => ({
+    throughputPerHour: x,
+    wipMean: 0,
+    leadMeanSeconds: 0,
+    bottleneckShares: [],
+  });
+  const stats = (values: (number | undefined)[]): PointStatistics => ({
+    index: 0,
+    label: '',
+    state: 'done',
+    message: null,
+    replications: values.map((v) => (v === undefined ? undefined : figures(v))),
+    throughput: null,
+    wip: null,
+    leadSeconds: null,
+    bottleneckShares: [],
+  });
 
   it('pairs replication by replication, so shared noise cancels (Law 2015, §10.2.1)', () => {
     // Differences 2, 2, 2.5, 1.5: mean 2, sd 0.408, t(0.975, 3) = 3.182, half-width 0.6495.

@@ -11,11 +11,17 @@ describe('bundled examples', () => {
     it(`${file}: decks with manual stations are at a working height with room above`, () => {
       const s = scenarioSchema.parse(loadExample(file));
       const laneDeck = new Map(s.lanes.map((l) => [l.id, l.deckId]));
-      const manualDecks = new Set(s.steps.flatMap((step) => step.stations.filter((st) => st.operation === 'manual').map((st) => laneDeck.get(st.laneId))));
+      const manualDecks = new Set(
+        s.steps.flatMap((step) =>
+          step.stations.filter((st) => st.operation === 'manual').map((st) => laneDeck.get(st.laneId)),
+        ),
+      );
       for (const deck of s.decks.filter((d) => manualDecks.has(d.id))) {
         expect(deck.elevationMm, deck.id).toBeGreaterThanOrEqual(900);
         expect(deck.elevationMm, deck.id).toBeLessThanOrEqual(1100);
-        const above = s.decks.filter((d) => d.elevationMm > deck.elevationMm).map((d) => d.elevationMm - deck.elevationMm);
+        const above = s.decks
+          .filter((d) => d.elevationMm > deck.elevationMm)
+          .map((d) => d.elevationMm - deck.elevationMm);
         for (const gap of above) expect(gap, `${deck.id}: room above`).toBeGreaterThanOrEqual(700);
       }
     });

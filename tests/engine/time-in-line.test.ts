@@ -6,7 +6,8 @@ import { checkedRun } from './helpers';
 
 const fixed = (value: number) => ({ kind: 'fixed' as const, value });
 const HOURS = 1;
-const line = () => serialLine({ stations: [{ cycle: fixed(2) }, { cycle: fixed(5) }, { cycle: fixed(1) }], carriers: 3 });
+const line = () =>
+  serialLine({ stations: [{ cycle: fixed(2) }, { cycle: fixed(5) }, { cycle: fixed(1) }], carriers: 3 });
 
 /** The same line with its middle station turned into an inspection that rejects the given share. */
 function inspected(rejectShare: number) {
@@ -19,7 +20,11 @@ describe('time in line over all departures', () => {
   it('equals lead time, and departures equal throughput, when nothing is scrapped', async () => {
     const r = await checkedRun(line(), { hours: HOURS, warmupMinutes: 5, replications: 2, seed: 4 });
     expect(r.parts.scrapped).toBe(0);
-    expect(r.timeInLineSeconds).toEqual({ mean: r.leadTimeSeconds.mean, p50: r.leadTimeSeconds.p50, p95: r.leadTimeSeconds.p95 });
+    expect(r.timeInLineSeconds).toEqual({
+      mean: r.leadTimeSeconds.mean,
+      p50: r.leadTimeSeconds.p50,
+      p95: r.leadTimeSeconds.p95,
+    });
     expect(r.departuresPerHour).toEqual(r.throughputPerHour);
     for (const x of r.replications) expect(x.timeInLineMeanSeconds).toBe(x.leadTimeMeanSeconds);
   });

@@ -7,7 +7,12 @@ const fixed = (value: number) => ({ kind: 'fixed' as const, value });
 describe('transfers and conveyors', () => {
   it('an elevator that cannot hand over is blocked until the lane start clears', async () => {
     // The stacked loop queues carriers from loading back into the up elevator.
-    const r = await checkedRun(loadExample('stacked-loop.json'), { hours: 1, warmupMinutes: 10, replications: 1, seed: 2 });
+    const r = await checkedRun(loadExample('stacked-loop.json'), {
+      hours: 1,
+      warmupMinutes: 10,
+      replications: 1,
+      seed: 2,
+    });
     const up = r.transfers.find((t) => t.id === 'lift-up');
     const down = r.transfers.find((t) => t.id === 'lift-down');
     expect(up?.blocked).toBeGreaterThan(0.2);
@@ -37,7 +42,11 @@ describe('transfers and conveyors', () => {
   });
 
   it('a belt moves pallets at belt speed: a deterministic line is paced by station plus locate time', async () => {
-    const doc = serialLine({ stations: [{ cycle: fixed(3) }, { cycle: fixed(6), bufferBefore: 2 }, { cycle: fixed(2), bufferBefore: 2 }], carriers: 6, belt: { speedMmPerS: 200, stopAndLocateSeconds: 1 } });
+    const doc = serialLine({
+      stations: [{ cycle: fixed(3) }, { cycle: fixed(6), bufferBefore: 2 }, { cycle: fixed(2), bufferBefore: 2 }],
+      carriers: 6,
+      belt: { speedMmPerS: 200, stopAndLocateSeconds: 1 },
+    });
     const r = await checkedRun(doc, { hours: 1, warmupMinutes: 10, replications: 1 });
     // The 6 s station plus 1 s locate, plus the 0.5 s a 100 mm pallet needs to move in at 200 mm/s.
     expect(r.parts.output).toBeGreaterThan(3600 / 7.5 - 2);
@@ -46,7 +55,11 @@ describe('transfers and conveyors', () => {
 
   it('a failing station spends time down and fails about once per mean operating time between failures', async () => {
     const doc = serialLine({
-      stations: [{ cycle: fixed(2) }, { cycle: fixed(10), failures: { timeBetweenFailuresSeconds: fixed(600), timeToRepairSeconds: fixed(60) } }, { cycle: fixed(2), bufferBefore: 2 }],
+      stations: [
+        { cycle: fixed(2) },
+        { cycle: fixed(10), failures: { timeBetweenFailuresSeconds: fixed(600), timeToRepairSeconds: fixed(60) } },
+        { cycle: fixed(2), bufferBefore: 2 },
+      ],
       carriers: 6,
     });
     const r = await checkedRun(doc, { hours: 4, warmupMinutes: 0, replications: 1 });

@@ -10,7 +10,10 @@ const ports: MessagePort[] = [];
 function connect(): Comlink.Remote<SimulationWorkerApi> {
   const { port1, port2 } = new MessageChannel();
   ports.push(port1, port2);
-  Comlink.expose(createWorkerApi(() => performance.now()), nodeEndpoint(port1));
+  Comlink.expose(
+    createWorkerApi(() => performance.now()),
+    nodeEndpoint(port1),
+  );
   return Comlink.wrap<SimulationWorkerApi>(nodeEndpoint(port2));
 }
 
@@ -22,7 +25,11 @@ describe('worker API over comlink', () => {
   it('runs a scenario and reports progress through a proxied callback', async () => {
     const remote = connect();
     const fractions: number[] = [];
-    const outcome = await remote.run(loadExample('side-by-side-loop.json'), { hours: 0.25, warmupMinutes: 1, replications: 2 }, Comlink.proxy((p: { fraction: number }) => void fractions.push(p.fraction)));
+    const outcome = await remote.run(
+      loadExample('side-by-side-loop.json'),
+      { hours: 0.25, warmupMinutes: 1, replications: 2 },
+      Comlink.proxy((p: { fraction: number }) => void fractions.push(p.fraction)),
+    );
     expect(outcome.ok).toBe(true);
     if (outcome.ok) expect(outcome.result.throughputPerHour.mean).toBeGreaterThan(0);
     // Progress messages are fire-and-forget and may trail the result by a moment.
@@ -42,12 +49,16 @@ describe('worker API over comlink', () => {
   it('cancels a running experiment', async () => {
     const remote = connect();
     let cancelSent = false;
-    const outcome = await remote.run(loadExample('stacked-loop.json'), { hours: 2000, warmupMinutes: 0, replications: 1 }, Comlink.proxy(() => {
-      if (!cancelSent) {
-        cancelSent = true;
-        void remote.cancel();
-      }
-    }));
+    const outcome = await remote.run(
+      loadExample('stacked-loop.json'),
+      { hours: 2000, warmupMinutes: 0, replications: 1 },
+      Comlink.proxy(() => {
+        if (!cancelSent) {
+          cancelSent = true;
+          void remote.cancel();
+        }
+      }),
+    );
     expect(outcome).toMatchObject({ ok: false, kind: 'stopped', reason: 'cancelled' });
   }, 30_000);
 });

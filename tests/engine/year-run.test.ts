@@ -15,7 +15,18 @@ const ROOT = join(__dirname, '../..');
 const run = promisify(execFile);
 
 async function simulate(file: string, hours: number, replications: number): Promise<RunResult> {
-  const args = ['--import', 'tsx', join(ROOT, 'workers/cli/simulate.ts'), '--scenario', join(EXAMPLES_DIR, file), '--hours', String(hours), '--replications', String(replications), '--json'];
+  const args = [
+    '--import',
+    'tsx',
+    join(ROOT, 'workers/cli/simulate.ts'),
+    '--scenario',
+    join(EXAMPLES_DIR, file),
+    '--hours',
+    String(hours),
+    '--replications',
+    String(replications),
+    '--json',
+  ];
   const { stdout } = await run(process.execPath, args, { cwd: ROOT, maxBuffer: 64 * 1024 * 1024 });
   return JSON.parse(stdout) as RunResult;
 }

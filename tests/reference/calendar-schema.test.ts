@@ -26,18 +26,32 @@ describe('calendar schema', () => {
     [{ shiftsPerDay: 4, hoursPerShift: 5 }, 'shiftsPerDay: shiftsPerDay must be from 1 to 3'],
     [{ shiftsPerDay: 1.5 }, 'shiftsPerDay: shiftsPerDay must be a whole number'],
     [{ hoursPerShift: 0 }, 'hoursPerShift: hoursPerShift must be above zero'],
-    [{ shiftsPerDay: 3, hoursPerShift: 9 }, 'hoursPerShift: shiftsPerDay × hoursPerShift is 27 h; it must be at most 24 h: shorten the shifts or use fewer'],
+    [
+      { shiftsPerDay: 3, hoursPerShift: 9 },
+      'hoursPerShift: shiftsPerDay × hoursPerShift is 27 h; it must be at most 24 h: shorten the shifts or use fewer',
+    ],
     [{ daysPerWeek: 8 }, 'daysPerWeek: daysPerWeek must be from 1 to 7'],
     [{ weeksPerYear: 0 }, 'weeksPerYear: weeksPerYear must be from 1 to 53'],
     [{ weeksPerYear: '52' }, 'weeksPerYear: weeksPerYear must be a number'],
-    [{ breaks: [{ startMinute: 470, minutes: 20 }] }, 'breaks.0.minutes: break ends at minute 490, after the 480-minute shift; move it earlier or shorten it'],
+    [
+      { breaks: [{ startMinute: 470, minutes: 20 }] },
+      'breaks.0.minutes: break ends at minute 490, after the 480-minute shift; move it earlier or shorten it',
+    ],
     [{ breaks: [{ startMinute: -5, minutes: 20 }] }, 'breaks.0.startMinute: startMinute must be zero or more'],
     [{ breaks: [{ startMinute: 60, minutes: 0 }] }, 'breaks.0.minutes: minutes must be above zero'],
     [
-      { breaks: [{ startMinute: 240, minutes: 30 }, { startMinute: 120, minutes: 130 }] },
+      {
+        breaks: [
+          { startMinute: 240, minutes: 30 },
+          { startMinute: 120, minutes: 130 },
+        ],
+      },
       'breaks.0.startMinute: break at minute 240 overlaps the break starting at minute 120; merge them or move one',
     ],
-    [{ breaks: [{ startMinute: 0, minutes: 480 }] }, 'breaks: breaks add up to 480 minutes, the whole 480-minute shift; leave some working time'],
+    [
+      { breaks: [{ startMinute: 0, minutes: 480 }] },
+      'breaks: breaks add up to 480 minutes, the whole 480-minute shift; leave some working time',
+    ],
     [{ breaks: [3] }, 'breaks.0: each break must be an object with startMinute and minutes'],
   ])('%j is refused with a message at the field', (change, message) => {
     expect(problems({ ...base, ...change })).toEqual([message]);

@@ -24,17 +24,44 @@ const REVISION = '00000000-0000-4000-8000-000000000001';
 function line(cycles: Distribution[]): LoopLine {
   return {
     laneLengthsMm: [60_000, 60_000],
-    stations: ['LD', 'P1', 'P2', 'UL'].map((id, i) => ({ id, lane: i < 3 ? 0 : 1, positionMm: [1_000, 20_000, 40_000, 30_000][i], cycle: cycles[i] }) as LoopLine['stations'][number]),
+    stations: ['LD', 'P1', 'P2', 'UL'].map(
+      (id, i) =>
+        ({
+          id,
+          lane: i < 3 ? 0 : 1,
+          positionMm: [1_000, 20_000, 40_000, 30_000][i],
+          cycle: cycles[i],
+        }) as LoopLine['stations'][number],
+    ),
     carriers: { count: 1, lengthMm: LENGTH, minGapMm: 0, vMaxMmPerS: V, aMaxMmPerS2: A },
   };
 }
 
-const LOOP_MOVES_MM = [20_000 - 1_000, 40_000 - 20_000, 60_000 - 40_000, 30_000 - LENGTH, 60_000 - 30_000, 1_000 - LENGTH];
+const LOOP_MOVES_MM = [
+  20_000 - 1_000,
+  40_000 - 20_000,
+  60_000 - 40_000,
+  30_000 - LENGTH,
+  60_000 - 30_000,
+  1_000 - LENGTH,
+];
 const TRAVEL_SECONDS = LOOP_MOVES_MM.reduce((sum, d) => sum + trapezoidMoveSeconds(d, V, A), 0);
 
-async function sizingStudy(cycles: Distribution[], counts: number[], settings: { hours: number; warmupMinutes: number; replications: number; seed: string }) {
-  const points = carrierSizingPoints(counts).map((p, index) => ({ index, label: p.label, revisionId: REVISION, changes: p.changes ?? [] }));
-  const study = await runStudyLocally({ id: 'reference', settings, commonRandomNumbers: true, blockSize: settings.replications, points }, { [REVISION]: loopScenario(line(cycles)) });
+async function sizingStudy(
+  cycles: Distribution[],
+  counts: number[],
+  settings: { hours: number; warmupMinutes: number; replications: number; seed: string },
+) {
+  const points = carrierSizingPoints(counts).map((p, index) => ({
+    index,
+    label: p.label,
+    revisionId: REVISION,
+    changes: p.changes ?? [],
+  }));
+  const study = await runStudyLocally(
+    { id: 'reference', settings, commonRandomNumbers: true, blockSize: settings.replications, points },
+    { [REVISION]: loopScenario(line(cycles)) },
+  );
   return pointStatistics(study).map((stats, i) => ({ carriers: counts[i], stats }));
 }
 
@@ -49,11 +76,18 @@ describe('balanced deterministic loop (Hopp & Spearman 2008, ch. 7, best case)',
   it('throughput follows min(N / T0, r_b) within 0.5 %, and the recommended count is the critical WIP rounded up', async () => {
     expect(W0).toBeGreaterThan(6);
     expect(W0).toBeLessThan(7);
-    const sized = await sizingStudy([0, 1, 2, 3].map(() => ({ kind: 'fixed', value: t })), counts, { hours: 2, warmupMinutes: 20, replications: 2, seed: 'best-case' });
+    const sized = await sizingStudy(
+      [0, 1, 2, 3].map(() => ({ kind: 'fixed', value: t })),
+      counts,
+      { hours: 2, warmupMinutes: 20, replications: 2, seed: 'best-case' },
+    );
     for (const { carriers, stats } of sized) {
       expect(stats.state).toBe('done');
       const bestCase = Math.min(carriers / T0, rb) * 3600;
-      expect(Math.abs(stats.throughput!.mean / bestCase - 1), `${carriers} carriers: ${stats.throughput!.mean} against ${bestCase}`).toBeLessThan(0.005);
+      expect(
+        Math.abs(stats.throughput!.mean / bestCase - 1),
+        `${carriers} carriers: ${stats.throughput!.mean} against ${bestCase}`,
+      ).toBeLessThan(0.005);
     }
     const advice = recommendCarriers(sized, null, ['LD', 'P1', 'P2', 'UL']);
     expect(advice).toMatchObject({ kind: 'recommend', carriers: Math.ceil(W0) });
@@ -66,9 +100,16 @@ describe('exponential loop against exact MVA (Reiser & Lavenberg 1980)', () => {
 
   it('each count within its replication interval of MVA (Bonferroni over the four counts)', async () => {
     const exact = mvaThroughput(means, TRAVEL_SECONDS, 8).map((x) => x * 3600);
-    const sized = await sizingStudy(means.map((mean) => ({ kind: 'exponential', mean })), counts, { hours: 6, warmupMinutes: 30, replications: 10, seed: 'mva-study' });
+    const sized = await sizingStudy(
+      means.map((mean) => ({ kind: 'exponential', mean })),
+      counts,
+      { hours: 6, warmupMinutes: 30, replications: 10, seed: 'mva-study' },
+    );
     for (const { carriers, stats } of sized) {
-      const ci = interval(stats.replications.map((f) => f!.throughputPerHour), 1 - 0.05 / counts.length);
+      const ci = interval(
+        stats.replications.map((f) => f!.throughputPerHour),
+        1 - 0.05 / counts.length,
+      );
       expect(ci.halfWidth / ci.mean).toBeLessThan(0.02);
       expect(exact[carriers - 1]).toBeGreaterThanOrEqual(ci.low);
       expect(exact[carriers - 1]).toBeLessThanOrEqual(ci.high);

@@ -15,7 +15,10 @@ const run = promisify(execFile);
 
 async function cli(...args: string[]): Promise<{ code: number; stdout: string; stderr: string }> {
   try {
-    const { stdout, stderr } = await run(TSX, ['workers/cli/simulate.ts', ...args], { cwd: ROOT, maxBuffer: 64 * 1024 * 1024 });
+    const { stdout, stderr } = await run(TSX, ['workers/cli/simulate.ts', ...args], {
+      cwd: ROOT,
+      maxBuffer: 64 * 1024 * 1024,
+    });
     return { code: 0, stdout, stderr };
   } catch (e) {
     const failed = e as { code?: number; stdout?: string; stderr?: string };
@@ -42,7 +45,9 @@ describe('the simulate command repeats a run exactly from its seed', () => {
   }, 120_000);
 
   it('a station placed past its lane end exits 2 naming steps[1].stations[0].positionMm, without a stack trace', async () => {
-    const scenario = JSON.parse(readFileSync(join(ROOT, EXAMPLE), 'utf8')) as { steps: { stations: { positionMm: number }[] }[] };
+    const scenario = JSON.parse(readFileSync(join(ROOT, EXAMPLE), 'utf8')) as {
+      steps: { stations: { positionMm: number }[] }[];
+    };
     scenario.steps[1].stations[0].positionMm = 99_000;
     const file = join(mkdtempSync(join(tmpdir(), 'lanewright-verify-')), 'too-far.json');
     writeFileSync(file, JSON.stringify(scenario));
@@ -56,10 +61,16 @@ describe('the simulate command repeats a run exactly from its seed', () => {
   it('--schema prints a JSON Schema that describes the scenario fields', async () => {
     const r = await cli('--schema');
     expect(r.code).toBe(0);
-    const schema = JSON.parse(r.stdout) as { $schema?: string; type?: string; properties?: Record<string, unknown>; required?: string[] };
+    const schema = JSON.parse(r.stdout) as {
+      $schema?: string;
+      type?: string;
+      properties?: Record<string, unknown>;
+      required?: string[];
+    };
     expect(schema.$schema).toMatch(/json-schema\.org/);
     expect(schema.type).toBe('object');
-    for (const key of ['schemaVersion', 'track', 'decks', 'lanes', 'carriers', 'steps', 'calendar']) expect(schema.properties).toHaveProperty(key);
+    for (const key of ['schemaVersion', 'track', 'decks', 'lanes', 'carriers', 'steps', 'calendar'])
+      expect(schema.properties).toHaveProperty(key);
     expect(schema.required).toEqual(expect.arrayContaining(['schemaVersion', 'lanes', 'steps']));
   }, 60_000);
 });

@@ -38,7 +38,14 @@ function line(count: number): LoopLine {
 }
 
 /** Rest-to-rest moves of one loop: LD → P1 → P2 → work-lane end | link | → UL → return-lane end | link | → LD. */
-const LOOP_MOVES_MM = [20_000 - 1_000, 40_000 - 20_000, 60_000 - 40_000, 30_000 - LENGTH, 60_000 - 30_000, 1_000 - LENGTH];
+const LOOP_MOVES_MM = [
+  20_000 - 1_000,
+  40_000 - 20_000,
+  60_000 - 40_000,
+  30_000 - LENGTH,
+  60_000 - 30_000,
+  1_000 - LENGTH,
+];
 const TRAVEL_SECONDS = LOOP_MOVES_MM.reduce((sum, d) => sum + trapezoidMoveSeconds(d, V, A), 0);
 
 describe('closed loop of exponential stations against exact MVA (Reiser & Lavenberg 1980)', () => {
@@ -51,12 +58,21 @@ describe('closed loop of exponential stations against exact MVA (Reiser & Lavenb
 
   // Eight comparisons in one family: each interval at the Bonferroni level 1 − 0.05/8, so a correct
   // engine passes the whole family at least 95 % of the time whatever the seed.
-  it.each(Array.from({ length: MAX_N }, (_, i) => i + 1))('N = %i carriers: throughput within the replication interval of MVA', async (n) => {
-    const result = await simulate(loopScenario(line(n)), { hours: 8, warmupMinutes: 30, replications: 10, seed: 'mva' });
-    const ci = interval(replicationThroughputs(result), 1 - 0.05 / MAX_N);
-    // The check must be able to fail: the interval is narrower than 1.5 % of the mean.
-    expect(ci.halfWidth / ci.mean).toBeLessThan(0.015);
-    expect(exact[n - 1]).toBeGreaterThanOrEqual(ci.low);
-    expect(exact[n - 1]).toBeLessThanOrEqual(ci.high);
-  }, 120_000);
+  it.each(Array.from({ length: MAX_N }, (_, i) => i + 1))(
+    'N = %i carriers: throughput within the replication interval of MVA',
+    async (n) => {
+      const result = await simulate(loopScenario(line(n)), {
+        hours: 8,
+        warmupMinutes: 30,
+        replications: 10,
+        seed: 'mva',
+      });
+      const ci = interval(replicationThroughputs(result), 1 - 0.05 / MAX_N);
+      // The check must be able to fail: the interval is narrower than 1.5 % of the mean.
+      expect(ci.halfWidth / ci.mean).toBeLessThan(0.015);
+      expect(exact[n - 1]).toBeGreaterThanOrEqual(ci.low);
+      expect(exact[n - 1]).toBeLessThanOrEqual(ci.high);
+    },
+    120_000,
+  );
 });

@@ -29,7 +29,11 @@ function line(meanOfWeld: number) {
 }
 
 async function throughputs(meanOfWeld: number, seed: string): Promise<number[]> {
-  const result = await runExperiment(line(meanOfWeld), { hours: 2, warmupMinutes: 10, replications: REPLICATIONS, seed }, { yieldToHost: async () => undefined });
+  const result = await runExperiment(
+    line(meanOfWeld),
+    { hours: 2, warmupMinutes: 10, replications: REPLICATIONS, seed },
+    { yieldToHost: async () => undefined },
+  );
   return result.replications.map((r) => r.throughputPerHour);
 }
 

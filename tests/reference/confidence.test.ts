@@ -70,7 +70,9 @@ describe('t quantiles', () => {
     expect(lnGamma(0.5)).toBeCloseTo(0.5 * Math.log(Math.PI), 13);
     let factorial = 1;
     for (let n = 1; n <= 20; n++) {
-      expect(Math.abs(lnGamma(n + 1) - Math.log((factorial *= n)))).toBeLessThan(1e-12 * Math.max(1, Math.log(factorial)));
+      expect(Math.abs(lnGamma(n + 1) - Math.log((factorial *= n)))).toBeLessThan(
+        1e-12 * Math.max(1, Math.log(factorial)),
+      );
     }
   });
 });

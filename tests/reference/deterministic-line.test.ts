@@ -20,7 +20,13 @@ const IDS = ['LD', 'P1', 'P2', 'P3', 'UL'];
 function fiveStations(cycles: number[], carriers: LoopLine['carriers'], manual?: string): LoopLine {
   return {
     laneLengthsMm: [6_000, 6_000],
-    stations: cycles.map((c, i) => ({ id: IDS[i], lane: 0, positionMm: 1_000 * (i + 1), cycle: fixed(c), manual: IDS[i] === manual })),
+    stations: cycles.map((c, i) => ({
+      id: IDS[i],
+      lane: 0,
+      positionMm: 1_000 * (i + 1),
+      cycle: fixed(c),
+      manual: IDS[i] === manual,
+    })),
     carriers,
   };
 }
@@ -29,7 +35,12 @@ async function paced(spec: LoopLine, slowest: string, hours = 4) {
   const result = await simulate(loopScenario(spec), { hours, warmupMinutes: 30, replications: 2, seed: 'paced' });
   const station = result.stations.find((s) => s.id === slowest);
   if (!station) throw new Error(`no station ${slowest} in the result`);
-  return { throughput: result.throughputPerHour.mean, station, bottleneck: result.bottleneckStationId, annual: result.annualOutput.mean };
+  return {
+    throughput: result.throughputPerHour.mean,
+    station,
+    bottleneck: result.bottleneckStationId,
+    annual: result.annualOutput.mean,
+  };
 }
 
 /** Seconds of breaks inside [from, to) when every 8-hour shift has the given breaks. */
@@ -46,7 +57,13 @@ function breakSeconds(breaks: { startMinute: number; minutes: number }[], from: 
 
 describe('a deterministic line runs at its slowest station (Hopp & Spearman 2000, best case)', () => {
   it('an 8 s press with 200 mm pitch below top speed: exchange 2√(200/10 000) = 0.283 s, 434.6 parts/h', async () => {
-    const spec = fiveStations([2, 5, 8, 4, 3], { count: 8, lengthMm: 160, minGapMm: 40, vMaxMmPerS: 2_000, aMaxMmPerS2: 10_000 });
+    const spec = fiveStations([2, 5, 8, 4, 3], {
+      count: 8,
+      lengthMm: 160,
+      minGapMm: 40,
+      vMaxMmPerS: 2_000,
+      aMaxMmPerS2: 10_000,
+    });
     const exchange = trapezoidMoveSeconds(200, 2_000, 10_000);
     const { throughput, station, bottleneck } = await paced(spec, 'P2');
     expect(Math.abs(throughput / (3600 / (8 + exchange)) - 1)).toBeLessThan(0.005);
@@ -58,7 +75,13 @@ describe('a deterministic line runs at its slowest station (Hopp & Spearman 2000
   }, 60_000);
 
   it('a 6 s pitch of 500 mm that reaches top speed: exchange 500/1000 + 1000/10 000 = 0.6 s, 545.5 parts/h', async () => {
-    const spec = fiveStations([2, 3, 6, 4, 3], { count: 7, lengthMm: 400, minGapMm: 100, vMaxMmPerS: 1_000, aMaxMmPerS2: 10_000 });
+    const spec = fiveStations([2, 3, 6, 4, 3], {
+      count: 7,
+      lengthMm: 400,
+      minGapMm: 100,
+      vMaxMmPerS: 1_000,
+      aMaxMmPerS2: 10_000,
+    });
     const exchange = trapezoidMoveSeconds(500, 1_000, 10_000);
     expect(exchange).toBeCloseTo(0.6, 12);
     const { throughput } = await paced(spec, 'P2');
@@ -87,7 +110,14 @@ describe('a deterministic line runs at its slowest station (Hopp & Spearman 2000
       { startMinute: 240, minutes: 30 },
       { startMinute: 390, minutes: 15 },
     ];
-    const spec = { ...fiveStations([2, 5, 8, 4, 3], { count: 8, lengthMm: 160, minGapMm: 40, vMaxMmPerS: 2_000, aMaxMmPerS2: 10_000 }, 'P2'), breaks };
+    const spec = {
+      ...fiveStations(
+        [2, 5, 8, 4, 3],
+        { count: 8, lengthMm: 160, minGapMm: 40, vMaxMmPerS: 2_000, aMaxMmPerS2: 10_000 },
+        'P2',
+      ),
+      breaks,
+    };
     const exchange = trapezoidMoveSeconds(200, 2_000, 10_000);
     // The observed window runs from the 30-minute warm-up to 8.5 h: it holds all three breaks.
     const breakShare = breakSeconds(breaks, 1_800, 30_600) / 28_800;
@@ -103,7 +133,13 @@ describe('a deterministic line runs at its slowest station (Hopp & Spearman 2000
 
   it('belt baseline: every visit adds stop-and-locate, and the next pallet closes one pitch at belt speed', async () => {
     const spec = {
-      ...fiveStations([2, 5, 8, 4, 3], { count: 8, lengthMm: 160, minGapMm: 40, vMaxMmPerS: 2_000, aMaxMmPerS2: 10_000 }),
+      ...fiveStations([2, 5, 8, 4, 3], {
+        count: 8,
+        lengthMm: 160,
+        minGapMm: 40,
+        vMaxMmPerS: 2_000,
+        aMaxMmPerS2: 10_000,
+      }),
       belt: { speedMmPerS: 250, stopAndLocateSeconds: 1.5, pitchMm: 250 },
     };
     // 8 s work + 1.5 s locate + 250 mm / 250 mm/s = 10.5 s per part: 342.9 parts/h.

@@ -23,7 +23,10 @@ function line(k: Case): LoopLine {
         lane: 0,
         positionMm: 2_000,
         cycle: { kind: 'fixed', value: k.cycle },
-        failures: { timeBetweenFailuresSeconds: { kind: 'exponential', mean: k.mtbf }, timeToRepairSeconds: { kind: 'exponential', mean: k.mttr } },
+        failures: {
+          timeBetweenFailuresSeconds: { kind: 'exponential', mean: k.mtbf },
+          timeToRepairSeconds: { kind: 'exponential', mean: k.mttr },
+        },
       },
       { id: 'UL', lane: 0, positionMm: 2_800, cycle: { kind: 'fixed', value: 0.5 } },
     ],
@@ -32,7 +35,12 @@ function line(k: Case): LoopLine {
 }
 
 async function check(k: Case) {
-  const result = await simulate(loopScenario(line(k)), { hours: 8, warmupMinutes: 30, replications: 10, seed: 'failures' });
+  const result = await simulate(loopScenario(line(k)), {
+    hours: 8,
+    warmupMinutes: 30,
+    replications: 10,
+    seed: 'failures',
+  });
   const availability = k.mtbf / (k.mtbf + k.mttr);
   const exchange = trapezoidMoveSeconds(k.pitch, k.carriers.vMaxMmPerS, k.carriers.aMaxMmPerS2);
   const expected = 3600 / (k.cycle / availability + exchange);
@@ -44,7 +52,13 @@ async function check(k: Case) {
 
 describe('throughput of a failing station is availability over cycle time (Buzacott & Shanthikumar 1993)', () => {
   it('fast carriers (exchange 0.45 ms): TH = A / c with c = 6 s, MTBF 120 s, MTTR 12 s', async () => {
-    const k: Case = { cycle: 6, mtbf: 120, mttr: 12, pitch: 5, carriers: { count: 10, lengthMm: 5, minGapMm: 0, vMaxMmPerS: 20_000, aMaxMmPerS2: 100_000_000 } };
+    const k: Case = {
+      cycle: 6,
+      mtbf: 120,
+      mttr: 12,
+      pitch: 5,
+      carriers: { count: 10, lengthMm: 5, minGapMm: 0, vMaxMmPerS: 20_000, aMaxMmPerS2: 100_000_000 },
+    };
     const { expected, ci, station, availability } = await check(k);
     expect(ci.halfWidth / ci.mean).toBeLessThan(0.01);
     expect(expected).toBeGreaterThanOrEqual(ci.low);
@@ -59,7 +73,13 @@ describe('throughput of a failing station is availability over cycle time (Buzac
   }, 120_000);
 
   it('slow carriers (exchange 2.01 s): failures count operating time only, TH = 1 / (c / A + e)', async () => {
-    const k: Case = { cycle: 4, mtbf: 120, mttr: 12, pitch: 200, carriers: { count: 20, lengthMm: 160, minGapMm: 40, vMaxMmPerS: 100, aMaxMmPerS2: 10_000 } };
+    const k: Case = {
+      cycle: 4,
+      mtbf: 120,
+      mttr: 12,
+      pitch: 200,
+      carriers: { count: 20, lengthMm: 160, minGapMm: 40, vMaxMmPerS: 100, aMaxMmPerS2: 10_000 },
+    };
     const { expected, ci, station, availability, exchange } = await check(k);
     expect(exchange).toBeCloseTo(2.01, 10);
     expect(ci.halfWidth / ci.mean).toBeLessThan(0.01);

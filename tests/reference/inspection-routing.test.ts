@@ -18,7 +18,13 @@ const line: LoopLine = {
   stations: [
     { id: 'LD', lane: 0, positionMm: 1_000, cycle: { kind: 'fixed', value: 2 } },
     { id: 'P1', lane: 0, positionMm: 2_000, cycle: { kind: 'fixed', value: 3 } },
-    { id: 'IN', lane: 0, positionMm: 3_000, cycle: { kind: 'fixed', value: 8 }, inspect: { rejectShare: REJECT, reworkShare: REWORK, reworkTo: 'P1' } },
+    {
+      id: 'IN',
+      lane: 0,
+      positionMm: 3_000,
+      cycle: { kind: 'fixed', value: 8 },
+      inspect: { rejectShare: REJECT, reworkShare: REWORK, reworkTo: 'P1' },
+    },
     { id: 'UL', lane: 0, positionMm: 5_000, cycle: { kind: 'fixed', value: 2 } },
   ],
   carriers: { count: 10, lengthMm: 160, minGapMm: 40, vMaxMmPerS: 2_000, aMaxMmPerS2: 10_000 },
@@ -26,7 +32,12 @@ const line: LoopLine = {
 
 describe('an inspection routes parts by its reject and rework shares (Bernoulli routing)', () => {
   it('pass, scrap and rework counts match the shares; the inspection runs at 1/(c + e)', async () => {
-    const result = await simulate(loopScenario(line), { hours: 8, warmupMinutes: 30, replications: 1, seed: 'inspect' });
+    const result = await simulate(loopScenario(line), {
+      hours: 8,
+      warmupMinutes: 30,
+      replications: 1,
+      seed: 'inspect',
+    });
     const inspect = result.stations.find((s) => s.id === 'IN');
     if (!inspect) throw new Error('no station IN in the result');
     const inspections = inspect.operationsPerHour * 8;
@@ -40,6 +51,8 @@ describe('an inspection routes parts by its reject and rework shares (Bernoulli 
     within(result.parts.scrapped, REJECT);
     within(result.parts.reworked, REWORK);
     // Every inspection ends in exactly one of the three, give or take the parts at the window edges.
-    expect(Math.abs(result.parts.output + result.parts.scrapped + result.parts.reworked - inspections)).toBeLessThanOrEqual(line.carriers.count);
+    expect(
+      Math.abs(result.parts.output + result.parts.scrapped + result.parts.reworked - inspections),
+    ).toBeLessThanOrEqual(line.carriers.count);
   }, 60_000);
 });

@@ -21,7 +21,8 @@ const probabilities = [1e-6, 1e-4, 0.001, 0.0242, 0.0243, 0.1, 0.3, 0.5, 0.7, 0.
 
 describe('standard normal', () => {
   it('the CDF agrees with jstat to 1e-14', () => {
-    for (const z of [-6, -3.2, -1, -0.1, 0, 0.4, 1.96, 5]) expect(standardNormalCdf(z)).toBeCloseTo(jStat.normal.cdf(z, 0, 1), 14);
+    for (const z of [-6, -3.2, -1, -0.1, 0, 0.4, 1.96, 5])
+      expect(standardNormalCdf(z)).toBeCloseTo(jStat.normal.cdf(z, 0, 1), 14);
   });
 
   it('the CDF keeps its relative precision deep in the lower tail', () => {

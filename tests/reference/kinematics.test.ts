@@ -97,7 +97,7 @@ describe('jerk-limited (seven-segment) profile', () => {
 
   it('a 210 mm move reaches aMax but not vMax (worked by hand: peak ≈ 1609.50 mm/s, T ≈ 0.260950 s)', () => {
     // Peak v solves v² + (a²/j)v − aD = 0; each ramp lasts v/a + a/j.
-    const peak = (-(A * A) / J + Math.sqrt((A * A / J) ** 2 + 4 * A * 210)) / 2;
+    const peak = (-(A * A) / J + Math.sqrt(((A * A) / J) ** 2 + 4 * A * 210)) / 2;
     expect(Math.abs(moveTime(210, sCurve) - 2 * (peak / A + A / J))).toBeLessThan(1e-9);
     expect(Math.abs(moveTime(210, sCurve) - 0.260_950_231_097)).toBeLessThan(1e-9);
   });
@@ -118,21 +118,26 @@ describe('jerk-limited (seven-segment) profile', () => {
     [50, sCurve],
     [1000, { vMax: 500, aMax: A, jMax: J }],
     [4000, { vMax: 1800, aMax: 8000, jMax: 100_000 }],
-  ] as const)('%d mm: the textbook phases give the same time, and integrating them ends at rest at the target', (d, p) => {
-    const phases = doubleSPhases(d, p.vMax, p.aMax, p.jMax);
-    const run = integrate(phases, p.jMax, 1e-6);
-    expect(Math.abs(moveTime(d, p) - run.total)).toBeLessThan(1e-9);
-    expect(Math.abs(run.s - d)).toBeLessThan(1e-3);
-    expect(Math.abs(run.v)).toBeLessThan(1e-3);
-    expect(run.peakV).toBeLessThanOrEqual(p.vMax * (1 + 1e-6));
-    expect(run.peakA).toBeLessThanOrEqual(p.aMax * (1 + 1e-6));
-  });
+  ] as const)(
+    '%d mm: the textbook phases give the same time, and integrating them ends at rest at the target',
+    (d, p) => {
+      const phases = doubleSPhases(d, p.vMax, p.aMax, p.jMax);
+      const run = integrate(phases, p.jMax, 1e-6);
+      expect(Math.abs(moveTime(d, p) - run.total)).toBeLessThan(1e-9);
+      expect(Math.abs(run.s - d)).toBeLessThan(1e-3);
+      expect(Math.abs(run.v)).toBeLessThan(1e-3);
+      expect(run.peakV).toBeLessThanOrEqual(p.vMax * (1 + 1e-6));
+      expect(run.peakA).toBeLessThanOrEqual(p.aMax * (1 + 1e-6));
+    },
+  );
 
   it('an infinite jerk limit is the trapezoid', () => {
     const unlimited = { ...trapezoid, jMax: Infinity };
     for (const d of [50, 210, 1000]) {
       expect(moveTime(d, unlimited)).toBe(moveTime(d, trapezoid));
-      expect(positionAt(d, unlimited, moveTime(d, trapezoid) / 3)).toBe(positionAt(d, trapezoid, moveTime(d, trapezoid) / 3));
+      expect(positionAt(d, unlimited, moveTime(d, trapezoid) / 3)).toBe(
+        positionAt(d, trapezoid, moveTime(d, trapezoid) / 3),
+      );
     }
   });
 
@@ -163,7 +168,12 @@ describe('position along a move', () => {
   });
 
   it('numerical differentiation of positions stays within vMax and aMax and is continuous', () => {
-    for (const [d, p] of [[1000, sCurve], [210, sCurve], [1000, trapezoid], [210, trapezoid]] as const) {
+    for (const [d, p] of [
+      [1000, sCurve],
+      [210, sCurve],
+      [1000, trapezoid],
+      [210, trapezoid],
+    ] as const) {
       const total = moveTime(d, p);
       const h = total / 20_000;
       let previousV = 0;

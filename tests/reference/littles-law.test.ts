@@ -18,9 +18,12 @@ import type { RunResult } from '../../shared/results/run-result';
 import { simulate } from './support/run';
 
 const EXAMPLES = join(import.meta.dirname, '../../shared/examples');
-const files = readdirSync(EXAMPLES).filter((f) => f.endsWith('.json')).sort();
+const files = readdirSync(EXAMPLES)
+  .filter((f) => f.endsWith('.json'))
+  .sort();
 const HOURS = 8;
-const load = (file: string) => JSON.parse(readFileSync(join(EXAMPLES, file), 'utf8')) as { steps: { kind: string; rejectShare?: number }[] };
+const load = (file: string) =>
+  JSON.parse(readFileSync(join(EXAMPLES, file), 'utf8')) as { steps: { kind: string; rejectShare?: number }[] };
 
 function withoutScrap(file: string) {
   const scenario = load(file);
@@ -44,27 +47,37 @@ describe("Little's law on the example scenarios (Little 1961)", () => {
     expect(files.length).toBeGreaterThanOrEqual(2);
   });
 
-  it.each(files)('%s without scrap: WIP = throughput × lead time within 1 % in every replication', async (file) => {
-    const result = await simulate(withoutScrap(file), { hours: HOURS, replications: 3, seed: 'little' });
-    for (const r of perReplication(result)) {
-      expect(r.lead).toBeGreaterThan(0);
-      expect(Math.abs(r.wip / (r.outputRate * r.lead) - 1)).toBeLessThan(0.01);
-    }
-  }, 60_000);
+  it.each(files)(
+    '%s without scrap: WIP = throughput × lead time within 1 % in every replication',
+    async (file) => {
+      const result = await simulate(withoutScrap(file), { hours: HOURS, replications: 3, seed: 'little' });
+      for (const r of perReplication(result)) {
+        expect(r.lead).toBeGreaterThan(0);
+        expect(Math.abs(r.wip / (r.outputRate * r.lead) - 1)).toBeLessThan(0.01);
+      }
+    },
+    60_000,
+  );
 
-  it.each(files)('%s as shipped: WIP = departure rate × mean time in line within 1 % in every replication', async (file) => {
-    const result = await simulate(load(file), { hours: HOURS, replications: 3, seed: 'little' });
-    for (const r of perReplication(result)) {
-      expect(r.timeInLine).toBeGreaterThan(0);
-      expect(Math.abs(r.wip / (r.departureRate * r.timeInLine) - 1)).toBeLessThan(0.01);
-      // Departures are the output and scrapped parts counted over the same window.
-      expect(r.departureRate * HOURS * 3600).toBeCloseTo(r.output + r.scrapped, 6);
-    }
-    // The same law for carriers: every carrier is always somewhere in its loop, so the carrier count
-    // equals the load rate times the mean loop time (load to next load of the same carrier). The
-    // result holds means across replications, so the product of means stands in for the mean of
-    // products; with three close replications that costs well under 0.1 %.
-    const loadRate = result.parts.loaded / (HOURS * 3600);
-    expect(Math.abs((loadRate * result.carriers.loopTimeSeconds.mean) / result.carriers.count - 1)).toBeLessThan(0.01);
-  }, 60_000);
+  it.each(files)(
+    '%s as shipped: WIP = departure rate × mean time in line within 1 % in every replication',
+    async (file) => {
+      const result = await simulate(load(file), { hours: HOURS, replications: 3, seed: 'little' });
+      for (const r of perReplication(result)) {
+        expect(r.timeInLine).toBeGreaterThan(0);
+        expect(Math.abs(r.wip / (r.departureRate * r.timeInLine) - 1)).toBeLessThan(0.01);
+        // Departures are the output and scrapped parts counted over the same window.
+        expect(r.departureRate * HOURS * 3600).toBeCloseTo(r.output + r.scrapped, 6);
+      }
+      // The same law for carriers: every carrier is always somewhere in its loop, so the carrier count
+      // equals the load rate times the mean loop time (load to next load of the same carrier). The
+      // result holds means across replications, so the product of means stands in for the mean of
+      // products; with three close replications that costs well under 0.1 %.
+      const loadRate = result.parts.loaded / (HOURS * 3600);
+      expect(Math.abs((loadRate * result.carriers.loopTimeSeconds.mean) / result.carriers.count - 1)).toBeLessThan(
+        0.01,
+      );
+    },
+    60_000,
+  );
 });

@@ -35,7 +35,13 @@ const lane = (id: string, lengthMm: number, x: number, y: number) => ({
   heading: 'east',
 });
 
-const station = (id: string, laneId: string, positionMm: number, mean: number) => ({ id, name: id, laneId, positionMm, cycleTimeSeconds: { kind: 'exponential', mean } });
+const station = (id: string, laneId: string, positionMm: number, mean: number) => ({
+  id,
+  name: id,
+  laneId,
+  positionMm,
+  cycleTimeSeconds: { kind: 'exponential', mean },
+});
 
 function splitLoop(count: number, dispatch: Rule): ScenarioInput {
   return {
@@ -43,7 +49,12 @@ function splitLoop(count: number, dispatch: Rule): ScenarioInput {
     name: 'Two parallel stations behind a split',
     track: { moduleLengthsMm: [1_000, LENGTH], widthMm: 200 },
     decks: [{ id: 'deck', name: 'Deck', elevationMm: 900 }],
-    lanes: [lane('in', LANE, 0, 0), lane('a', LENGTH, LANE, 0), lane('b', LENGTH, LANE, 400), lane('out', LANE, LANE + LENGTH, 0)],
+    lanes: [
+      lane('in', LANE, 0, 0),
+      lane('a', LENGTH, LANE, 0),
+      lane('b', LENGTH, LANE, 400),
+      lane('out', LANE, LANE + LENGTH, 0),
+    ],
     links: [
       { fromLaneId: 'in', toLaneId: 'a' },
       { fromLaneId: 'in', toLaneId: 'b' },
@@ -55,7 +66,13 @@ function splitLoop(count: number, dispatch: Rule): ScenarioInput {
     carriers: { count, lengthMm: LENGTH, minGapMm: 0, loaded: { vMaxMmPerS: V, aMaxMmPerS2: A } },
     steps: [
       { id: 'load', name: 'Load', kind: 'load', stations: [station('LD', 'in', 1_000, MEANS.load)] },
-      { id: 'fit', name: 'Fit', kind: 'process', dispatch, stations: [station('FA', 'a', LENGTH, MEANS.fit), station('FB', 'b', LENGTH, MEANS.fit)] },
+      {
+        id: 'fit',
+        name: 'Fit',
+        kind: 'process',
+        dispatch,
+        stations: [station('FA', 'a', LENGTH, MEANS.fit), station('FB', 'b', LENGTH, MEANS.fit)],
+      },
       { id: 'unload', name: 'Unload', kind: 'unload', stations: [station('UL', 'out', 30_000, MEANS.unload)] },
     ],
     calendar: { shiftsPerDay: 3, hoursPerShift: 8, breaks: [], daysPerWeek: 7, weeksPerYear: 52 },
@@ -66,7 +83,9 @@ function splitLoop(count: number, dispatch: Rule): ScenarioInput {
 /** Rest-to-rest moves of one loop: LD → infeed end | link, the fitting station is the lane's only place | link | → UL → end | link | → LD. */
 const LOOP_MOVES_MM = [LANE - 1_000, 30_000 - LENGTH, LANE - 30_000, 1_000 - LENGTH];
 const TRAVEL_SECONDS = LOOP_MOVES_MM.reduce((sum, d) => sum + trapezoidMoveSeconds(d, V, A), 0);
-const exact = mvaThroughput([MEANS.load, MEANS.fit, MEANS.unload], TRAVEL_SECONDS, MAX_N, [1, 2, 1]).map((x) => x * 3600);
+const exact = mvaThroughput([MEANS.load, MEANS.fit, MEANS.unload], TRAVEL_SECONDS, MAX_N, [1, 2, 1]).map(
+  (x) => x * 3600,
+);
 const SETTINGS = { hours: 8, warmupMinutes: 30, replications: 10, seed: 'two-server' } as const;
 
 describe('two pooled parallel stations against a two-server station of exact load-dependent MVA (Reiser & Lavenberg 1980)', () => {
@@ -75,14 +94,18 @@ describe('two pooled parallel stations against a two-server station of exact loa
   });
 
   // Eight comparisons in one family: each interval at the Bonferroni level 1 − 0.05/8.
-  it.each(Array.from({ length: MAX_N }, (_, i) => i + 1))('N = %i carriers: throughput within the replication interval of MVA', async (n) => {
-    const result = await simulate(splitLoop(n, 'pooled'), SETTINGS);
-    const ci = interval(replicationThroughputs(result), 1 - 0.05 / MAX_N);
-    // The check must be able to fail: the interval is narrower than 2 % of the mean.
-    expect(ci.halfWidth / ci.mean).toBeLessThan(0.02);
-    expect(exact[n - 1]).toBeGreaterThanOrEqual(ci.low);
-    expect(exact[n - 1]).toBeLessThanOrEqual(ci.high);
-  }, 120_000);
+  it.each(Array.from({ length: MAX_N }, (_, i) => i + 1))(
+    'N = %i carriers: throughput within the replication interval of MVA',
+    async (n) => {
+      const result = await simulate(splitLoop(n, 'pooled'), SETTINGS);
+      const ci = interval(replicationThroughputs(result), 1 - 0.05 / MAX_N);
+      // The check must be able to fail: the interval is narrower than 2 % of the mean.
+      expect(ci.halfWidth / ci.mean).toBeLessThan(0.02);
+      expect(exact[n - 1]).toBeGreaterThanOrEqual(ci.low);
+      expect(exact[n - 1]).toBeLessThanOrEqual(ci.high);
+    },
+    120_000,
+  );
 
   it('choosing the station on leaving loading (shortest queue) does not pool: one station idles while a carrier waits for the other', async () => {
     const n = 4;

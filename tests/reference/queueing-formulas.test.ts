@@ -56,7 +56,11 @@ describe('two exponential machines with a buffer between them (birth–death cha
   });
 
   it('the flow balances: μ1 (1 − p_blocked) = μ2 (1 − p_starved)', () => {
-    for (const [mu1, mu2, b] of [[1, 0.8, 0], [0.7, 1.3, 2], [2, 1.5, 5]]) {
+    for (const [mu1, mu2, b] of [
+      [1, 0.8, 0],
+      [0.7, 1.3, 2],
+      [2, 1.5, 5],
+    ]) {
       const line = twoMachineLine(mu1, mu2, b);
       expect(mu1 * (1 - line.blocked)).toBeCloseTo(mu2 * (1 - line.starved), 12);
       expect(line.probabilities.reduce((a, c) => a + c, 0)).toBeCloseTo(1, 14);

@@ -7,7 +7,10 @@ import { distributionMean, distributionVariance } from '../../workers/engine/sta
 
 type Moments = { mean: (...p: number[]) => number; variance: (...p: number[]) => number };
 type JStatMoments = Record<'lognormal' | 'gamma' | 'triangular' | 'uniform' | 'exponential', Moments> & {
-  normal: { pdf: (x: number, mean: number, sd: number) => number; cdf: (x: number, mean: number, sd: number) => number };
+  normal: {
+    pdf: (x: number, mean: number, sd: number) => number;
+    cdf: (x: number, mean: number, sd: number) => number;
+  };
 };
 const { jStat } = createRequire(import.meta.url)('jstat') as { jStat: JStatMoments };
 
@@ -38,7 +41,11 @@ describe('distribution moments against jstat', () => {
   it('lognormal given by mean and cv', () => {
     const sigma = Math.sqrt(Math.log(1 + 0.3 ** 2));
     const mu = Math.log(9) - sigma ** 2 / 2;
-    expectMoments({ kind: 'lognormal', mean: 9, cv: 0.3 }, jStat.lognormal.mean(mu, sigma), jStat.lognormal.variance(mu, sigma));
+    expectMoments(
+      { kind: 'lognormal', mean: 9, cv: 0.3 },
+      jStat.lognormal.mean(mu, sigma),
+      jStat.lognormal.variance(mu, sigma),
+    );
   });
 
   it('exponential (jstat takes the rate)', () => {

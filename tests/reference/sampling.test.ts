@@ -59,7 +59,9 @@ const lognormalParams = (mean: number, cv: number) => {
 const normalTruncated = { kind: 'normal', mean: 12, sd: 3, min: 10 } as const;
 const truncatedCdf = (x: number) => {
   const below = jStat.normal.cdf(normalTruncated.min, normalTruncated.mean, normalTruncated.sd);
-  return x < normalTruncated.min ? 0 : (jStat.normal.cdf(x, normalTruncated.mean, normalTruncated.sd) - below) / (1 - below);
+  return x < normalTruncated.min
+    ? 0
+    : (jStat.normal.cdf(x, normalTruncated.mean, normalTruncated.sd) - below) / (1 - below);
 };
 
 // Parameters are invented but typical: a 9 s press, a 12 ± 3 s manual fitting, MTBF of 10 min.
@@ -73,7 +75,11 @@ const cases: { name: string; d: Distribution; cdf?: (x: number) => number }[] = 
     cdf: (x) => jStat.triangular.cdf(x, 8, 15, 9),
   },
   // Eight standard deviations above zero: the truncation removes about 6e-16 of the mass.
-  { name: 'normal (untruncated)', d: { kind: 'normal', mean: 12, sd: 1.5, min: 0 }, cdf: (x) => jStat.normal.cdf(x, 12, 1.5) },
+  {
+    name: 'normal (untruncated)',
+    d: { kind: 'normal', mean: 12, sd: 1.5, min: 0 },
+    cdf: (x) => jStat.normal.cdf(x, 12, 1.5),
+  },
   { name: 'normal truncated at 10', d: normalTruncated, cdf: truncatedCdf },
   {
     name: 'lognormal',

@@ -3,8 +3,24 @@
 import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
 import type { FittedCandidate } from '../../shared/api/time-studies';
-import { analyseTimeStudy, fitGamma, fitLognormal, fitNormal, histogram, kolmogorovSurvival, ksPValue, ksStatistic, summarise } from '../../workers/analysis';
-import { digamma, lnGamma, regularizedLowerGamma, standardNormalCdf, trigamma } from '../../workers/engine/stats/special-functions';
+import {
+  analyseTimeStudy,
+  fitGamma,
+  fitLognormal,
+  fitNormal,
+  histogram,
+  kolmogorovSurvival,
+  ksPValue,
+  ksStatistic,
+  summarise,
+} from '../../workers/analysis';
+import {
+  digamma,
+  lnGamma,
+  regularizedLowerGamma,
+  standardNormalCdf,
+  trigamma,
+} from '../../workers/engine/stats/special-functions';
 import { createSampler } from '../../workers/engine/random/sampler';
 import { createStreamFactory } from '../../workers/engine/random/streams';
 
@@ -45,8 +61,16 @@ describe('special functions against jstat 1.9.6 and Abramowitz & Stegun (1964)',
 
   it('the regularised incomplete gamma and Φ match jStat.gamma.cdf and jStat.normal.cdf', () => {
     // jstat's incomplete gamma is good to about 1e-10, which bounds how closely it can check ours.
-    for (const [a, x] of [[0.5, 0.1], [2.5, 3], [9, 4], [9, 20], [40, 38]]) expect(regularizedLowerGamma(a, x)).toBeCloseTo(jStat.gamma.cdf(x, a, 1), 9);
-    for (const z of [-6, -1.96, -0.3, 0, 0.7, 2.33, 5]) expect(standardNormalCdf(z)).toBeCloseTo(jStat.normal.cdf(z, 0, 1), 12);
+    for (const [a, x] of [
+      [0.5, 0.1],
+      [2.5, 3],
+      [9, 4],
+      [9, 20],
+      [40, 38],
+    ])
+      expect(regularizedLowerGamma(a, x)).toBeCloseTo(jStat.gamma.cdf(x, a, 1), 9);
+    for (const z of [-6, -1.96, -0.3, 0, 0.7, 2.33, 5])
+      expect(standardNormalCdf(z)).toBeCloseTo(jStat.normal.cdf(z, 0, 1), 12);
   });
 
   it('the regularised incomplete gamma matches 30-digit values of mpmath 1.3.0, gammainc(a, 0, x, regularized=True)', () => {
@@ -94,9 +118,17 @@ describe('maximum-likelihood fits', () => {
     const estimate = fitGamma(samples);
     if (!estimate.ok) throw new Error(estimate.reason);
     const { shape, scale } = estimate.parameters;
-    const logLikelihood = (k: number, theta: number) => samples.reduce((sum, x) => sum + Math.log(jStat.gamma.pdf(x, k, theta)), 0);
+    const logLikelihood = (k: number, theta: number) =>
+      samples.reduce((sum, x) => sum + Math.log(jStat.gamma.pdf(x, k, theta)), 0);
     const best = logLikelihood(shape, scale);
-    for (const [dk, dt] of [[1.01, 1], [0.99, 1], [1, 1.01], [1, 0.99], [1.01, 0.99], [0.99, 1.01]]) {
+    for (const [dk, dt] of [
+      [1.01, 1],
+      [0.99, 1],
+      [1, 1.01],
+      [1, 0.99],
+      [1.01, 0.99],
+      [0.99, 1.01],
+    ]) {
       expect(logLikelihood(shape * dk, scale * dt)).toBeLessThan(best);
     }
   });
@@ -113,7 +145,10 @@ describe('maximum-likelihood fits', () => {
   });
 
   it('gamma fits near-exponential and near-constant samples: small and large shapes converge', () => {
-    for (const [cv, key] of [[1.8, 'wide'], [0.02, 'narrow']] as const) {
+    for (const [cv, key] of [
+      [1.8, 'wide'],
+      [0.02, 'narrow'],
+    ] as const) {
       const estimate = fitGamma(seededGamma(5, cv, 5_000, key));
       if (!estimate.ok) throw new Error(estimate.reason);
       expect(estimate.parameters.cv / cv).toBeGreaterThan(0.9);
@@ -123,9 +158,15 @@ describe('maximum-likelihood fits', () => {
 
   it('refuses lognormal and gamma for zero or negative samples, and every family for a constant study, with the reason', () => {
     const zeros = analyseTimeStudy([0, 4, 5, 6]);
-    expect(zeros.candidates.map((c) => [c.kind, c.status])).toEqual([['normal', 'fitted'], ['lognormal', 'refused'], ['gamma', 'refused']]);
+    expect(zeros.candidates.map((c) => [c.kind, c.status])).toEqual([
+      ['normal', 'fitted'],
+      ['lognormal', 'refused'],
+      ['gamma', 'refused'],
+    ]);
     const refused = zeros.candidates[1];
-    expect(refused.status === 'refused' && refused.reason).toMatch(/only positive values, but 1 of 4 samples are zero or below/);
+    expect(refused.status === 'refused' && refused.reason).toMatch(
+      /only positive values, but 1 of 4 samples are zero or below/,
+    );
     const constant = analyseTimeStudy([9, 9, 9]);
     expect(constant.candidates.every((c) => c.status === 'refused' && /fixed time/.test(c.reason))).toBe(true);
   });
@@ -139,14 +180,25 @@ describe('Kolmogorov–Smirnov goodness of fit', () => {
   it('D of each fitted candidate equals a brute-force D with jstat’s CDFs', () => {
     const samples = seededGamma(10, 0.4, 300, 'ks-jstat');
     const sorted = [...samples].sort((a, b) => a - b);
-    const bruteForce = (cdf: (x: number) => number) => Math.max(...sorted.map((x, i) => Math.max((i + 1) / sorted.length - cdf(x), cdf(x) - i / sorted.length)));
+    const bruteForce = (cdf: (x: number) => number) =>
+      Math.max(...sorted.map((x, i) => Math.max((i + 1) / sorted.length - cdf(x), cdf(x) - i / sorted.length)));
     const normal = fitted(samples, 'normal');
     const lognormal = fitted(samples, 'lognormal');
     const gamma = fitted(samples, 'gamma');
-    if (normal.kind !== 'normal' || lognormal.kind !== 'lognormal' || gamma.kind !== 'gamma') throw new Error('unexpected kinds');
-    expect(normal.goodness.d).toBeCloseTo(bruteForce((x) => jStat.normal.cdf(x, normal.parameters.mean, normal.parameters.sd)), 10);
-    expect(lognormal.goodness.d).toBeCloseTo(bruteForce((x) => jStat.lognormal.cdf(x, lognormal.parameters.mu, lognormal.parameters.sigma)), 10);
-    expect(gamma.goodness.d).toBeCloseTo(bruteForce((x) => jStat.gamma.cdf(x, gamma.parameters.shape, gamma.parameters.scale)), 10);
+    if (normal.kind !== 'normal' || lognormal.kind !== 'lognormal' || gamma.kind !== 'gamma')
+      throw new Error('unexpected kinds');
+    expect(normal.goodness.d).toBeCloseTo(
+      bruteForce((x) => jStat.normal.cdf(x, normal.parameters.mean, normal.parameters.sd)),
+      10,
+    );
+    expect(lognormal.goodness.d).toBeCloseTo(
+      bruteForce((x) => jStat.lognormal.cdf(x, lognormal.parameters.mu, lognormal.parameters.sigma)),
+      10,
+    );
+    expect(gamma.goodness.d).toBeCloseTo(
+      bruteForce((x) => jStat.gamma.cdf(x, gamma.parameters.shape, gamma.parameters.scale)),
+      10,
+    );
   });
 
   it('the Kolmogorov survival function gives the tabulated critical values 1.224, 1.358 and 1.628 for 10, 5 and 1 % (Smirnov 1948 table; common trade practice)', () => {
@@ -156,7 +208,12 @@ describe('Kolmogorov–Smirnov goodness of fit', () => {
   });
 
   it('its two series agree where they meet (λ = 1.18), and it falls from 1 to 0', () => {
-    const alternating = (l: number) => 2 * Array.from({ length: 50 }, (_, j) => (j % 2 === 0 ? 1 : -1) * Math.exp(-2 * (j + 1) ** 2 * l * l)).reduce((a, b) => a + b, 0);
+    const alternating = (l: number) =>
+      2 *
+      Array.from({ length: 50 }, (_, j) => (j % 2 === 0 ? 1 : -1) * Math.exp(-2 * (j + 1) ** 2 * l * l)).reduce(
+        (a, b) => a + b,
+        0,
+      );
     for (const l of [0.9, 1.17, 1.19]) expect(kolmogorovSurvival(l)).toBeCloseTo(alternating(l), 12);
     expect(kolmogorovSurvival(0.2)).toBeCloseTo(1, 10);
     expect(kolmogorovSurvival(3)).toBeLessThan(1e-7);

@@ -36,13 +36,20 @@ describe('a transfer that paces the line sets its throughput (common trade pract
   it('elevator: handling 2 s + lift 400 mm at 200 mm/s up and back = 6 s, 600 parts/h', async () => {
     const lift = DECK_DROP_MM / 200;
     const cycle = 2 + 2 * lift;
-    const th = await throughput(line([{ kind: 'elevator', handlingSeconds: 2, liftSpeedMmPerS: 200 }, { kind: 'elevator', handlingSeconds: 0.5, liftSpeedMmPerS: 2_000 }]));
+    const th = await throughput(
+      line([
+        { kind: 'elevator', handlingSeconds: 2, liftSpeedMmPerS: 200 },
+        { kind: 'elevator', handlingSeconds: 0.5, liftSpeedMmPerS: 2_000 },
+      ]),
+    );
     expect(Math.abs(th / (3600 / cycle) - 1)).toBeLessThan(0.005);
   }, 60_000);
 
   it('lateral transfer: handling 1.5 s + 600 mm at 300 mm/s there and back = 5.5 s, 654.5 parts/h', async () => {
     const cycle = 1.5 + 2 * (600 / 300);
-    const th = await throughput(line([{ kind: 'lateral', handlingSeconds: 1.5, shiftDistanceMm: 600, shiftSpeedMmPerS: 300 }, FAST_RETURN]));
+    const th = await throughput(
+      line([{ kind: 'lateral', handlingSeconds: 1.5, shiftDistanceMm: 600, shiftSpeedMmPerS: 300 }, FAST_RETURN]),
+    );
     expect(Math.abs(th / (3600 / cycle) - 1)).toBeLessThan(0.005);
   }, 60_000);
 
@@ -58,7 +65,12 @@ describe('what a transfer reports: carrying, returning empty, blocked, idle', ()
   const QUICK: LoopJoin = { kind: 'elevator', handlingSeconds: 0.5, liftSpeedMmPerS: 2_000 };
 
   it('a pacing elevator carries (2 s + 2 s lift) / 6 s of the time, returns 2 s / 6 s, and holds the line', async () => {
-    const r = await simulate(loopScenario(line([SLOW, QUICK])), { hours: 2, warmupMinutes: 15, replications: 1, seed: 'transfer' });
+    const r = await simulate(loopScenario(line([SLOW, QUICK])), {
+      hours: 2,
+      warmupMinutes: 15,
+      replications: 1,
+      seed: 'transfer',
+    });
     const pacing = transferShares(r.transfers[0]);
     expect(pacing.carrying).toBeCloseTo(4 / 6, 2);
     expect(pacing.returning).toBeCloseTo(2 / 6, 2);
@@ -66,7 +78,9 @@ describe('what a transfer reports: carrying, returning empty, blocked, idle', ()
     expect(pacing.busy).toBeCloseTo((pacing.carrying ?? 0) + (pacing.returning ?? 0), 12);
     expect((pacing.carrying ?? 0) + (pacing.returning ?? 0) + pacing.blocked + pacing.idle).toBeCloseTo(1, 9);
     expect(r.bottleneckTransferId).toBe('join-0');
-    expect(r.transfers[0].bottleneckShare ?? 0).toBeGreaterThan(Math.max(...r.stations.map((st) => st.bottleneckShare)));
+    expect(r.transfers[0].bottleneckShare ?? 0).toBeGreaterThan(
+      Math.max(...r.stations.map((st) => st.bottleneckShare)),
+    );
   }, 60_000);
 
   it('an elevator kept waiting by a slow station is blocked, and the station, not the elevator, holds the line', async () => {

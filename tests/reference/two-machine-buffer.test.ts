@@ -24,7 +24,12 @@ function line(mean1: number, mean2: number, placesBetween: number): LoopLine {
     laneLengthsMm: [2_000, 2_000],
     stations: [
       { id: 'M1', lane: 0, positionMm: LOAD_AT, cycle: { kind: 'exponential', mean: mean1 } },
-      { id: 'M2', lane: 0, positionMm: LOAD_AT + (placesBetween + 1) * PITCH, cycle: { kind: 'exponential', mean: mean2 } },
+      {
+        id: 'M2',
+        lane: 0,
+        positionMm: LOAD_AT + (placesBetween + 1) * PITCH,
+        cycle: { kind: 'exponential', mean: mean2 },
+      },
     ],
     carriers: { count: placesBetween + 8, lengthMm: 4, minGapMm: 1, vMaxMmPerS: 20_000, aMaxMmPerS2: 100_000_000 },
   };
@@ -38,20 +43,29 @@ const CASES: [number, number, number][] = [
 
 describe('two stations with a finite buffer, blocking after service (Buzacott & Shanthikumar 1993; Gershwin 1994)', () => {
   // Three comparisons in one family: Bonferroni level 1 − 0.05/3 each.
-  it.each(CASES)('means %d s and %d s with %i places between: throughput, blocking and starving as the birth–death chain', async (mean1, mean2, b) => {
-    const exact = twoMachineLine(1 / mean1, 1 / mean2, b);
-    const result = await simulate(loopScenario(line(mean1, mean2, b)), { hours: 8, warmupMinutes: 30, replications: 10, seed: 'two-machine' });
-    const ci = interval(replicationThroughputs(result), 1 - 0.05 / CASES.length);
-    expect(ci.halfWidth / ci.mean).toBeLessThan(0.015);
-    expect(exact.throughput * 3600).toBeGreaterThanOrEqual(ci.low);
-    expect(exact.throughput * 3600).toBeLessThanOrEqual(ci.high);
-    const [m1, m2] = result.stations;
-    // Time shares, averaged over replications: within 0.01 of the chain's probabilities.
-    expect(Math.abs(m1.blocked - exact.blocked)).toBeLessThan(0.01);
-    expect(Math.abs(m2.starved - exact.starved)).toBeLessThan(0.01);
-    expect(m1.starved).toBeLessThan(0.005);
-    expect(m2.blocked).toBeLessThan(0.005);
-  }, 120_000);
+  it.each(CASES)(
+    'means %d s and %d s with %i places between: throughput, blocking and starving as the birth–death chain',
+    async (mean1, mean2, b) => {
+      const exact = twoMachineLine(1 / mean1, 1 / mean2, b);
+      const result = await simulate(loopScenario(line(mean1, mean2, b)), {
+        hours: 8,
+        warmupMinutes: 30,
+        replications: 10,
+        seed: 'two-machine',
+      });
+      const ci = interval(replicationThroughputs(result), 1 - 0.05 / CASES.length);
+      expect(ci.halfWidth / ci.mean).toBeLessThan(0.015);
+      expect(exact.throughput * 3600).toBeGreaterThanOrEqual(ci.low);
+      expect(exact.throughput * 3600).toBeLessThanOrEqual(ci.high);
+      const [m1, m2] = result.stations;
+      // Time shares, averaged over replications: within 0.01 of the chain's probabilities.
+      expect(Math.abs(m1.blocked - exact.blocked)).toBeLessThan(0.01);
+      expect(Math.abs(m2.starved - exact.starved)).toBeLessThan(0.01);
+      expect(m1.starved).toBeLessThan(0.005);
+      expect(m2.blocked).toBeLessThan(0.005);
+    },
+    120_000,
+  );
 
   it('the check can tell the buffer size: one place more or less changes throughput beyond the interval', () => {
     const [mean1, mean2, b] = CASES[1];

@@ -16,12 +16,25 @@ describe('what-if ranking of a serial line with one bottleneck', () => {
   it('only the 6 s press gains significantly, by about 1/0.9 − 1 = 11 %', async () => {
     const doc = loopScenario({
       laneLengthsMm: [6_000, 6_000],
-      stations: ['LD', 'P1', 'P2', 'P3', 'UL'].map((id, i) => ({ id, lane: 0, positionMm: 1_000 * (i + 1), cycle: { kind: 'gamma', mean: MEANS[i], cv: 0.1 } })),
+      stations: ['LD', 'P1', 'P2', 'P3', 'UL'].map((id, i) => ({
+        id,
+        lane: 0,
+        positionMm: 1_000 * (i + 1),
+        cycle: { kind: 'gamma', mean: MEANS[i], cv: 0.1 },
+      })),
       carriers: { count: 12, lengthMm: 160, minGapMm: 40, vMaxMmPerS: 2_000, aMaxMmPerS2: 10_000 },
     });
-    const points = whatIfPoints(scenarioSchema.parse(doc), 0.1).map((p, index) => ({ index, label: p.label, revisionId: REVISION, changes: p.changes ?? [] }));
+    const points = whatIfPoints(scenarioSchema.parse(doc), 0.1).map((p, index) => ({
+      index,
+      label: p.label,
+      revisionId: REVISION,
+      changes: p.changes ?? [],
+    }));
     const settings = { hours: 2, warmupMinutes: 20, replications: 5, seed: 'what-if' };
-    const study = await runStudyLocally({ id: 'what-if', settings, commonRandomNumbers: true, blockSize: 5, points }, { [REVISION]: doc });
+    const study = await runStudyLocally(
+      { id: 'what-if', settings, commonRandomNumbers: true, blockSize: 5, points },
+      { [REVISION]: doc },
+    );
     const rows = rankWhatIf(pointStatistics(study));
     expect(rows[0].label).toBe('Station P2');
     expect(rows.filter((r) => r.significant).map((r) => r.label)).toEqual(['Station P2']);

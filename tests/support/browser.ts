@@ -55,14 +55,18 @@ function freePort(): Promise<number> {
     probe.once('error', reject);
     probe.listen(0, HOST, () => {
       const address = probe.address();
-      probe.close(() => (typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port'))));
+      probe.close(() =>
+        typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port')),
+      );
     });
   });
 }
 
 export async function startTestApp(databaseUrl: string = browserDatabaseUrl()): Promise<TestApp> {
   if (!existsSync(join(clientOutDir, 'index.html'))) {
-    throw new Error(`${clientOutDir} holds no client build: run the tests with \`npm test\` (it builds it) or \`npm run build\` first`);
+    throw new Error(
+      `${clientOutDir} holds no client build: run the tests with \`npm test\` (it builds it) or \`npm run build\` first`,
+    );
   }
   const dataSource = createDataSource(databaseUrl);
   await dataSource.initialize();
@@ -71,7 +75,13 @@ export async function startTestApp(databaseUrl: string = browserDatabaseUrl()): 
     // The browser tests sign in as the demo accounts, whatever LANEWRIGHT_DEMO says.
     await seedDemo(dataSource, { LANEWRIGHT_DEMO: 'on' });
     await seedDemoPrices(dataSource);
-    const server = await startServer({ dataSource, port: await freePort(), host: HOST, clientDir: clientOutDir, fakeSmtpPort: 0 });
+    const server = await startServer({
+      dataSource,
+      port: await freePort(),
+      host: HOST,
+      clientDir: clientOutDir,
+      fakeSmtpPort: 0,
+    });
     if (!server.mailbox) throw new Error('the browser tests need the fake mailbox: unset SMTP_HOST');
     return {
       url: server.url,
@@ -90,7 +100,9 @@ export async function startTestApp(databaseUrl: string = browserDatabaseUrl()): 
 
 export async function launchBrowser(): Promise<TestBrowser> {
   if (!existsSync(CHROMIUM_PATH)) {
-    throw new Error(`Chromium is not installed at ${CHROMIUM_PATH}: apt-get install -y chromium (npm test does this when run as root)`);
+    throw new Error(
+      `Chromium is not installed at ${CHROMIUM_PATH}: apt-get install -y chromium (npm test does this when run as root)`,
+    );
   }
   const profileDir = await mkdtemp(join(tmpdir(), 'lanewright-chromium-'));
   const context = await chromium.launchPersistentContext(profileDir, {

@@ -32,7 +32,12 @@ export async function truncateAllTables(dataSource: DataSource): Promise<void> {
   const tables = new Set(
     dataSource.entityMetadatas
       .filter((metadata) => metadata.tableType !== 'view')
-      .map((metadata) => metadata.tablePath.split('.').map((part) => `"${part.replace(/"/g, '""')}"`).join('.')),
+      .map((metadata) =>
+        metadata.tablePath
+          .split('.')
+          .map((part) => `"${part.replace(/"/g, '""')}"`)
+          .join('.'),
+      ),
   );
   if (tables.size > 0) await dataSource.query(`TRUNCATE ${[...tables].join(', ')} RESTART IDENTITY CASCADE`);
 }

@@ -32,8 +32,19 @@ export function maximalScenario(): Record<string, unknown> {
     const stations = Array.from({ length: stationsOfStep(s) }, () => {
       const n = station++;
       const lane = Math.floor(n / 3);
-      const cycleTimeSeconds = n < studies ? { kind: 'empirical', samples: Array.from({ length: samplesPerStudy }, (_, k) => precise(k + n)) } : { kind: 'fixed', value: precise(n) };
-      return { id: id('st', n), name: label(`Station ${n}`), laneId: id('lane', lane), positionMm: 1000 + (n % 3) * 1000, cycleTimeSeconds, operation: 'automatic', pausesForBreaks: false };
+      const cycleTimeSeconds =
+        n < studies
+          ? { kind: 'empirical', samples: Array.from({ length: samplesPerStudy }, (_, k) => precise(k + n)) }
+          : { kind: 'fixed', value: precise(n) };
+      return {
+        id: id('st', n),
+        name: label(`Station ${n}`),
+        laneId: id('lane', lane),
+        positionMm: 1000 + (n % 3) * 1000,
+        cycleTimeSeconds,
+        operation: 'automatic',
+        pausesForBreaks: false,
+      };
     });
     return { id: id('step', s), name: label(`Step ${s}`), kind, dispatch: 'firstFree', stations };
   });
@@ -41,8 +52,15 @@ export function maximalScenario(): Record<string, unknown> {
     schemaVersion: 1,
     name: label('Maximal line'),
     description: 'd'.repeat(2000),
-    track: { moduleLengthsMm: Array.from({ length: TRACK_LIMITS.moduleLengthsMax }, (_, i) => moduleMm + i * 10), widthMm: 200 },
-    decks: Array.from({ length: TRACK_LIMITS.decksMax }, (_, i) => ({ id: id('deck', i), name: label(`Deck ${i}`), elevationMm: 500 + i * 100 })),
+    track: {
+      moduleLengthsMm: Array.from({ length: TRACK_LIMITS.moduleLengthsMax }, (_, i) => moduleMm + i * 10),
+      widthMm: 200,
+    },
+    decks: Array.from({ length: TRACK_LIMITS.decksMax }, (_, i) => ({
+      id: id('deck', i),
+      name: label(`Deck ${i}`),
+      elevationMm: 500 + i * 100,
+    })),
     lanes: Array.from({ length: lanes }, (_, i) => ({
       id: id('lane', i),
       name: label(`Lane ${i}`),
@@ -51,14 +69,26 @@ export function maximalScenario(): Record<string, unknown> {
       start: { xMm: (i % 20) * 1000 - 500_000, yMm: Math.floor(i / 20) * 1000 - 500_000 },
       heading: 'east',
     })),
-    links: Array.from({ length: lanes }, (_, i) => ({ fromLaneId: id('lane', i), toLaneId: id('lane', (i + 1) % lanes) })),
+    links: Array.from({ length: lanes }, (_, i) => ({
+      fromLaneId: id('lane', i),
+      toLaneId: id('lane', (i + 1) % lanes),
+    })),
     transfers: [],
-    carriers: { count: CARRIER_LIMITS.countMax, lengthMm: 160, minGapMm: 40, loaded: { vMaxMmPerS: 2000, aMaxMmPerS2: 10000 }, empty: { vMaxMmPerS: 2500, aMaxMmPerS2: 20000 } },
+    carriers: {
+      count: CARRIER_LIMITS.countMax,
+      lengthMm: 160,
+      minGapMm: 40,
+      loaded: { vMaxMmPerS: 2000, aMaxMmPerS2: 10000 },
+      empty: { vMaxMmPerS: 2500, aMaxMmPerS2: 20000 },
+    },
     steps,
     calendar: {
       shiftsPerDay: 1,
       hoursPerShift: 8,
-      breaks: Array.from({ length: CALENDAR_LIMITS.breaksPerShiftMax }, (_, i) => ({ startMinute: i * 20, minutes: 5 })),
+      breaks: Array.from({ length: CALENDAR_LIMITS.breaksPerShiftMax }, (_, i) => ({
+        startMinute: i * 20,
+        minutes: 5,
+      })),
       daysPerWeek: 5,
       weeksPerYear: 46,
     },

@@ -22,7 +22,10 @@ function errorsOutsideTests(module: TestModule): number {
   return moduleFailedWithoutFailingTest ? 1 : 0;
 }
 
-export function countResults(testModules: ReadonlyArray<TestModule>, unhandledErrors: ReadonlyArray<SerializedError>): RunCounts {
+export function countResults(
+  testModules: ReadonlyArray<TestModule>,
+  unhandledErrors: ReadonlyArray<SerializedError>,
+): RunCounts {
   const counts: RunCounts = { passed: 0, failed: unhandledErrors.length, skipped: 0 };
   for (const module of testModules) {
     for (const test of module.children.allTests()) {

@@ -28,10 +28,20 @@ function runCheck(check: StaticCheck): Promise<StaticCheckResult> {
   const started = Date.now();
   const bin = join(projectRoot, 'node_modules', '.bin', check.command);
   return new Promise((resolve) => {
-    execFile(bin, check.args, { cwd: projectRoot, maxBuffer: 64 * 1024 * 1024, env: { ...process.env, NO_COLOR: '1' } }, (error, stdout, stderr) => {
-      const output = `${stdout}${stderr}`.trim();
-      resolve({ check, ok: !error && output === '', seconds: (Date.now() - started) / 1000, output: output || (error?.message ?? '') });
-    });
+    execFile(
+      bin,
+      check.args,
+      { cwd: projectRoot, maxBuffer: 64 * 1024 * 1024, env: { ...process.env, NO_COLOR: '1' } },
+      (error, stdout, stderr) => {
+        const output = `${stdout}${stderr}`.trim();
+        resolve({
+          check,
+          ok: !error && output === '',
+          seconds: (Date.now() - started) / 1000,
+          output: output || (error?.message ?? ''),
+        });
+      },
+    );
   });
 }
 

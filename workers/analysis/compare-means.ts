@@ -37,12 +37,30 @@ function sampleVariance(xs: readonly number[], m: number): number {
 function interval(method: DifferenceMethod, difference: number, standardError: number, df: number): MeanDifference {
   if (standardError === 0) {
     // No spread at all (deterministic lines): the difference is exact, significant unless zero.
-    return { method, difference, ciLow: difference, ciHigh: difference, halfWidth: 0, degreesOfFreedom: df, significant: difference !== 0, unavailable: null };
+    return {
+      method,
+      difference,
+      ciLow: difference,
+      ciHigh: difference,
+      halfWidth: 0,
+      degreesOfFreedom: df,
+      significant: difference !== 0,
+      unavailable: null,
+    };
   }
   const halfWidth = tQuantile(0.975, df) * standardError;
   const ciLow = difference - halfWidth;
   const ciHigh = difference + halfWidth;
-  return { method, difference, ciLow, ciHigh, halfWidth, degreesOfFreedom: df, significant: ciLow > 0 || ciHigh < 0, unavailable: null };
+  return {
+    method,
+    difference,
+    ciLow,
+    ciHigh,
+    halfWidth,
+    degreesOfFreedom: df,
+    significant: ciLow > 0 || ciHigh < 0,
+    unavailable: null,
+  };
 }
 
 function tooFew(method: DifferenceMethod, difference: number): MeanDifference {
@@ -60,7 +78,10 @@ function tooFew(method: DifferenceMethod, difference: number): MeanDifference {
 
 /** Paired-t interval on b − a; a[i] and b[i] come from the same replication index (same streams). */
 export function pairedDifference(a: readonly number[], b: readonly number[]): MeanDifference {
-  if (a.length !== b.length) throw new RangeError(`pairedDifference: both samples need one value per replication (got ${a.length} and ${b.length})`);
+  if (a.length !== b.length)
+    throw new RangeError(
+      `pairedDifference: both samples need one value per replication (got ${a.length} and ${b.length})`,
+    );
   if (a.length === 0) throw new RangeError('pairedDifference: needs at least one replication');
   const differences = a.map((x, i) => b[i] - x);
   const d = mean(differences);
@@ -71,7 +92,8 @@ export function pairedDifference(a: readonly number[], b: readonly number[]): Me
 
 /** Welch interval on mean(b) − mean(a) for independent samples of possibly different sizes. */
 export function welchDifference(a: readonly number[], b: readonly number[]): MeanDifference {
-  if (a.length === 0 || b.length === 0) throw new RangeError('welchDifference: needs at least one replication of each run');
+  if (a.length === 0 || b.length === 0)
+    throw new RangeError('welchDifference: needs at least one replication of each run');
   const ma = mean(a);
   const mb = mean(b);
   if (a.length < 2 || b.length < 2) return tooFew('welch', mb - ma);
@@ -79,6 +101,7 @@ export function welchDifference(a: readonly number[], b: readonly number[]): Mea
   const vb = sampleVariance(b, mb) / b.length;
   const se2 = va + vb;
   // Welch–Satterthwaite; with both variances zero the df is irrelevant (the interval has no width).
-  const df = se2 === 0 ? a.length + b.length - 2 : (se2 * se2) / ((va * va) / (a.length - 1) + (vb * vb) / (b.length - 1));
+  const df =
+    se2 === 0 ? a.length + b.length - 2 : (se2 * se2) / ((va * va) / (a.length - 1) + (vb * vb) / (b.length - 1));
   return interval('welch', mb - ma, Math.sqrt(se2), df);
 }

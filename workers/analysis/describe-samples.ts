@@ -58,7 +58,8 @@ export function histogramRule(sorted: readonly number[]): { rule: HistogramRule;
   const n = sorted.length;
   const range = sorted[n - 1] - sorted[0];
   const iqr = n > 1 ? quantile(sorted, 0.75) - quantile(sorted, 0.25) : 0;
-  if (iqr > 0) return { rule: 'freedman-diaconis', binCount: Math.max(1, Math.ceil((range * Math.cbrt(n)) / (2 * iqr))) };
+  if (iqr > 0)
+    return { rule: 'freedman-diaconis', binCount: Math.max(1, Math.ceil((range * Math.cbrt(n)) / (2 * iqr))) };
   return { rule: 'sturges', binCount: Math.ceil(Math.log2(Math.max(1, n))) + 1 };
 }
 

@@ -1,7 +1,12 @@
 // Density and distribution functions of the three candidate families, in the parameters the fits
 // produce. The Kolmogorov–Smirnov check uses the CDFs; the client draws the densities over the histogram.
 import type { FittedCandidate } from '../../shared/api/time-studies';
-import { lnGamma, regularizedLowerGamma, standardNormalCdf, standardNormalPdf } from '../engine/stats/special-functions';
+import {
+  lnGamma,
+  regularizedLowerGamma,
+  standardNormalCdf,
+  standardNormalPdf,
+} from '../engine/stats/special-functions';
 
 export interface FittedLaw {
   pdf: (x: number) => number;
@@ -27,7 +32,8 @@ export function lognormalLaw(mu: number, sigma: number): FittedLaw {
 export function gammaLaw(shape: number, scale: number): FittedLaw {
   const lnNorm = lnGamma(shape) + shape * Math.log(scale);
   return {
-    pdf: (x) => (x > 0 ? Math.exp((shape - 1) * Math.log(x) - x / scale - lnNorm) : x === 0 && shape === 1 ? 1 / scale : 0),
+    pdf: (x) =>
+      x > 0 ? Math.exp((shape - 1) * Math.log(x) - x / scale - lnNorm) : x === 0 && shape === 1 ? 1 / scale : 0,
     cdf: (x) => regularizedLowerGamma(shape, x / scale),
   };
 }

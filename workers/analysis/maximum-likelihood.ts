@@ -26,7 +26,8 @@ export interface GammaParameters {
 function spreadProblem(samples: readonly number[]): string | null {
   if (samples.length < 2) return `needs at least two measured times; the study has ${samples.length}`;
   const first = samples[0];
-  if (samples.every((v) => v === first)) return `needs at least two different times; every sample is ${first} s, which is better given as a fixed time`;
+  if (samples.every((v) => v === first))
+    return `needs at least two different times; every sample is ${first} s, which is better given as a fixed time`;
   return null;
 }
 
@@ -79,7 +80,11 @@ export function fitGamma(samples: readonly number[]): Estimate<GammaParameters> 
   if (problem) return { ok: false, reason: problem };
   const m = mean(samples);
   const s = Math.log(m) - mean(samples.map(Math.log));
-  if (!(s > 0)) return { ok: false, reason: 'the samples are too close together for the shape to be estimated in double precision' };
+  if (!(s > 0))
+    return {
+      ok: false,
+      reason: 'the samples are too close together for the shape to be estimated in double precision',
+    };
   let k = (3 - s + Math.sqrt((s - 3) * (s - 3) + 24 * s)) / (12 * s);
   for (let step = 0; step < NEWTON_MAX_STEPS; step += 1) {
     const f = Math.log(k) - digamma(k) - s;

@@ -34,7 +34,10 @@ const TRACKER_COPIES = [1, 5] as const;
 const EXAMPLES_DIR = join(import.meta.dirname, '../../shared/examples');
 const SHIFT = { hours: 8, warmupMinutes: 0 } as const;
 
-async function scenarioRow(name: string, scenario: unknown): Promise<{ name: string; single: Measurement; thirty: Measurement }> {
+async function scenarioRow(
+  name: string,
+  scenario: unknown,
+): Promise<{ name: string; single: Measurement; thirty: Measurement }> {
   const single = await measure(scenario, { ...SHIFT, replications: 1, seed: 1 });
   const thirty = await measure(scenario, { ...SHIFT, replications: 30, seed: 1 });
   return { name, single, thirty };
@@ -43,9 +46,12 @@ async function scenarioRow(name: string, scenario: unknown): Promise<{ name: str
 async function main(): Promise<void> {
   const json = process.argv.includes('--json');
   const loadBefore = loadavg();
-  const examples = readdirSync(EXAMPLES_DIR).filter((f) => f.endsWith('.json')).sort();
+  const examples = readdirSync(EXAMPLES_DIR)
+    .filter((f) => f.endsWith('.json'))
+    .sort();
   const rows = [];
-  for (const file of examples) rows.push(await scenarioRow(file, JSON.parse(readFileSync(join(EXAMPLES_DIR, file), 'utf8'))));
+  for (const file of examples)
+    rows.push(await scenarioRow(file, JSON.parse(readFileSync(join(EXAMPLES_DIR, file), 'utf8'))));
   const large = largeLine();
   const shift = await warmMedian(large, { ...SHIFT, replications: 1, seed: 1 }, 5);
   const largeRow = await scenarioRow('large line (built in)', large);
@@ -58,7 +64,13 @@ async function main(): Promise<void> {
   const trackerCostRatio = trackers[trackers.length - 1].nsPerEvent / trackers[0].nsPerEvent;
   const cold = coldShift();
   const report: BenchReport = {
-    machine: { node: process.version, cpus: cpus().length, cpuModel: cpus()[0]?.model ?? 'unknown', loadAverageBefore: loadBefore[0], loadAverageAfter: loadavg()[0] },
+    machine: {
+      node: process.version,
+      cpus: cpus().length,
+      cpuModel: cpus()[0]?.model ?? 'unknown',
+      loadAverageBefore: loadBefore[0],
+      loadAverageAfter: loadavg()[0],
+    },
     scenarios: rows,
     large: {
       eventsPerSecond: largeRow.thirty.eventsPerSecond,
@@ -74,11 +86,31 @@ async function main(): Promise<void> {
     queues,
     trackers,
     targets: {
-      eventsPerSecond: { target: TARGETS.eventsPerSecond, measured: largeRow.thirty.eventsPerSecond, met: largeRow.thirty.eventsPerSecond >= TARGETS.eventsPerSecond },
-      wallMsPerShift: { target: TARGETS.wallMsPerShift, measured: shift.median.wallMs, met: shift.median.wallMs < TARGETS.wallMsPerShift },
-      heapGrowthMb: { target: TARGETS.heapGrowthMb, measured: heapGrowthMb, met: heapGrowthMb < TARGETS.heapGrowthMb && memory.long.resultNumbers === memory.short.resultNumbers },
-      queueEventsRatio: { target: TARGETS.queueEventsRatio, measured: queueEventsRatio, met: queueEventsRatio <= TARGETS.queueEventsRatio },
-      trackerCostRatio: { target: TARGETS.trackerCostRatio, measured: trackerCostRatio, met: trackerCostRatio <= TARGETS.trackerCostRatio },
+      eventsPerSecond: {
+        target: TARGETS.eventsPerSecond,
+        measured: largeRow.thirty.eventsPerSecond,
+        met: largeRow.thirty.eventsPerSecond >= TARGETS.eventsPerSecond,
+      },
+      wallMsPerShift: {
+        target: TARGETS.wallMsPerShift,
+        measured: shift.median.wallMs,
+        met: shift.median.wallMs < TARGETS.wallMsPerShift,
+      },
+      heapGrowthMb: {
+        target: TARGETS.heapGrowthMb,
+        measured: heapGrowthMb,
+        met: heapGrowthMb < TARGETS.heapGrowthMb && memory.long.resultNumbers === memory.short.resultNumbers,
+      },
+      queueEventsRatio: {
+        target: TARGETS.queueEventsRatio,
+        measured: queueEventsRatio,
+        met: queueEventsRatio <= TARGETS.queueEventsRatio,
+      },
+      trackerCostRatio: {
+        target: TARGETS.trackerCostRatio,
+        measured: trackerCostRatio,
+        met: trackerCostRatio <= TARGETS.trackerCostRatio,
+      },
     },
   };
   process.stdout.write(json ? `${JSON.stringify(report)}\n` : `${formatReport(report)}\n`);

@@ -8,7 +8,14 @@ import { BottleneckTracker } from '../engine/observe/bottleneck';
 import { createStreamFactory } from '../engine/random/streams';
 import { validateScenario } from '../engine/validate';
 
-export type TrackerShare = { stations: number; events: number; runMs: number; replayMs: number; share: number; nsPerEvent: number };
+export type TrackerShare = {
+  stations: number;
+  events: number;
+  runMs: number;
+  replayMs: number;
+  share: number;
+  nsPerEvent: number;
+};
 
 type Trace = { station: Int32Array; active: Uint8Array; t: Float64Array; length: number };
 
@@ -20,7 +27,12 @@ function runOnce(scenario: unknown, trace: Trace | null): { events: number; ms: 
   const line = compileLine(checked.scenario);
   const original = BottleneckTracker.prototype.setActive;
   if (trace) {
-    BottleneckTracker.prototype.setActive = function record(this: BottleneckTracker, station: number, active: boolean, t: number) {
+    BottleneckTracker.prototype.setActive = function record(
+      this: BottleneckTracker,
+      station: number,
+      active: boolean,
+      t: number,
+    ) {
       if (trace.length === trace.t.length) grow(trace);
       trace.station[trace.length] = station;
       trace.active[trace.length] = active ? 1 : 0;
@@ -30,7 +42,13 @@ function runOnce(scenario: unknown, trace: Trace | null): { events: number; ms: 
   }
   try {
     const started = performance.now();
-    const rep = new Replication(line, createStreamFactory('tracker', 0), { warmupSeconds: 0, endSeconds: HOURS * 3600, timeBins: 96, positionBins: 48, eventBudget: Infinity });
+    const rep = new Replication(line, createStreamFactory('tracker', 0), {
+      warmupSeconds: 0,
+      endSeconds: HOURS * 3600,
+      timeBins: 96,
+      positionBins: 48,
+      eventBudget: Infinity,
+    });
     rep.run(() => false);
     return { events: rep.events, ms: performance.now() - started, tracker: rep.recorder.bottleneck };
   } finally {
@@ -55,7 +73,12 @@ function median(xs: number[]): number {
 }
 
 export function trackerShare(scenario: unknown, repeats = 5): TrackerShare {
-  const trace: Trace = { station: new Int32Array(1 << 16), active: new Uint8Array(1 << 16), t: new Float64Array(1 << 16), length: 0 };
+  const trace: Trace = {
+    station: new Int32Array(1 << 16),
+    active: new Uint8Array(1 << 16),
+    t: new Float64Array(1 << 16),
+    length: 0,
+  };
   const recorded = runOnce(scenario, trace);
   const template = recorded.tracker;
   const stations = template.sole.length;
@@ -71,5 +94,12 @@ export function trackerShare(scenario: unknown, repeats = 5): TrackerShare {
   }
   const runMs = median(runs);
   const replayMs = median(replays);
-  return { stations, events: recorded.events, runMs, replayMs, share: replayMs / runMs, nsPerEvent: (replayMs * 1e6) / recorded.events };
+  return {
+    stations,
+    events: recorded.events,
+    runMs,
+    replayMs,
+    share: replayMs / runMs,
+    nsPerEvent: (replayMs * 1e6) / recorded.events,
+  };
 }

@@ -8,7 +8,9 @@ export type ColdShift = { run: Measurement; processMs: number };
 
 export function coldShift(): ColdShift {
   const started = performance.now();
-  const child = spawnSync(process.execPath, [...process.execArgv, join(import.meta.dirname, 'cold-shift.ts')], { encoding: 'utf8' });
+  const child = spawnSync(process.execPath, [...process.execArgv, join(import.meta.dirname, 'cold-shift.ts')], {
+    encoding: 'utf8',
+  });
   const processMs = performance.now() - started;
   if (child.status !== 0) throw new Error(`the cold run failed: ${child.stderr}`);
   return { run: JSON.parse(child.stdout.trim().split('\n').pop() ?? '{}') as Measurement, processMs };

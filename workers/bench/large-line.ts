@@ -9,7 +9,12 @@ import type { Distribution } from '../../shared/scenario/distribution';
 import type { ScenarioInput } from '../../shared/scenario/scenario';
 
 type StationSpec = { id: string; lane: string; at: number; cycle: Distribution; manual?: boolean; fails?: boolean };
-type StepSpec = { id: string; kind: 'load' | 'process' | 'inspect' | 'unload'; stations: StationSpec[]; dispatch?: 'firstFree' | 'shortestQueue' | 'roundRobin' };
+type StepSpec = {
+  id: string;
+  kind: 'load' | 'process' | 'inspect' | 'unload';
+  stations: StationSpec[];
+  dispatch?: 'firstFree' | 'shortestQueue' | 'roundRobin';
+};
 
 const LANE_MM = 12_000;
 const lane = (id: string, deckId: string, x: number, y: number, heading: 'east' | 'west', copies = 1) => ({
@@ -24,7 +29,14 @@ const lane = (id: string, deckId: string, x: number, y: number, heading: 'east' 
 const tri = (min: number, mode: number, max: number): Distribution => ({ kind: 'triangular', min, mode, max });
 
 /** A manual step done at several positions of one lane: stations <prefix>1, <prefix>2, … */
-const parallel = (id: string, dispatch: StepSpec['dispatch'], lane: string, prefix: string, positions: number[], cycle: Distribution): StepSpec => ({
+const parallel = (
+  id: string,
+  dispatch: StepSpec['dispatch'],
+  lane: string,
+  prefix: string,
+  positions: number[],
+  cycle: Distribution,
+): StepSpec => ({
   id,
   kind: 'process',
   dispatch,
@@ -32,23 +44,90 @@ const parallel = (id: string, dispatch: StepSpec['dispatch'], lane: string, pref
 });
 
 const STEPS: StepSpec[] = [
-  { id: 'load', kind: 'load', stations: [{ id: 'LD', lane: 'top', at: 600, cycle: { kind: 'normal', mean: 4, sd: 0.8, min: 2.5 }, manual: true }] },
-  { id: 'base', kind: 'process', stations: [{ id: 'BS', lane: 'top', at: 1_600, cycle: { kind: 'fixed', value: 4.5 }, fails: true }] },
-  { id: 'seal', kind: 'process', stations: [{ id: 'SL', lane: 'top', at: 2_600, cycle: { kind: 'lognormal', mean: 4, cv: 0.2 }, fails: true }] },
+  {
+    id: 'load',
+    kind: 'load',
+    stations: [{ id: 'LD', lane: 'top', at: 600, cycle: { kind: 'normal', mean: 4, sd: 0.8, min: 2.5 }, manual: true }],
+  },
+  {
+    id: 'base',
+    kind: 'process',
+    stations: [{ id: 'BS', lane: 'top', at: 1_600, cycle: { kind: 'fixed', value: 4.5 }, fails: true }],
+  },
+  {
+    id: 'seal',
+    kind: 'process',
+    stations: [{ id: 'SL', lane: 'top', at: 2_600, cycle: { kind: 'lognormal', mean: 4, cv: 0.2 }, fails: true }],
+  },
   parallel('wind', 'shortestQueue', 'top', 'WD', [3_800, 4_800], tri(8, 10, 14)),
-  { id: 'glue', kind: 'process', stations: [{ id: 'GL', lane: 'top', at: 6_000, cycle: { kind: 'erlang', mean: 4, k: 4 }, fails: true }] },
-  { id: 'cure', kind: 'process', stations: [{ id: 'CU', lane: 'top', at: 7_200, cycle: { kind: 'fixed', value: 4.8 } }] },
-  { id: 'pins', kind: 'process', stations: [{ id: 'PN', lane: 'top', at: 8_400, cycle: { kind: 'gamma', mean: 3.5, cv: 0.3 }, fails: true }] },
-  { id: 'probe', kind: 'inspect', stations: [{ id: 'PB', lane: 'top', at: 9_600, cycle: { kind: 'uniform', min: 3, max: 5 } }] },
-  { id: 'press', kind: 'process', stations: [{ id: 'PR', lane: 'top', at: 10_800, cycle: { kind: 'fixed', value: 4.6 }, fails: true }] },
+  {
+    id: 'glue',
+    kind: 'process',
+    stations: [{ id: 'GL', lane: 'top', at: 6_000, cycle: { kind: 'erlang', mean: 4, k: 4 }, fails: true }],
+  },
+  {
+    id: 'cure',
+    kind: 'process',
+    stations: [{ id: 'CU', lane: 'top', at: 7_200, cycle: { kind: 'fixed', value: 4.8 } }],
+  },
+  {
+    id: 'pins',
+    kind: 'process',
+    stations: [{ id: 'PN', lane: 'top', at: 8_400, cycle: { kind: 'gamma', mean: 3.5, cv: 0.3 }, fails: true }],
+  },
+  {
+    id: 'probe',
+    kind: 'inspect',
+    stations: [{ id: 'PB', lane: 'top', at: 9_600, cycle: { kind: 'uniform', min: 3, max: 5 } }],
+  },
+  {
+    id: 'press',
+    kind: 'process',
+    stations: [{ id: 'PR', lane: 'top', at: 10_800, cycle: { kind: 'fixed', value: 4.6 }, fails: true }],
+  },
   parallel('fit', 'roundRobin', 'mid', 'FT', [1_200, 2_400, 3_600], tri(9, 12, 16)),
-  { id: 'screw', kind: 'process', stations: [{ id: 'SC', lane: 'mid', at: 5_000, cycle: { kind: 'lognormal', mean: 3.8, cv: 0.15 }, fails: true }] },
-  { id: 'label', kind: 'process', stations: [{ id: 'LB', lane: 'mid', at: 6_400, cycle: { kind: 'empirical', samples: [3.1, 3.4, 3.2, 3.9, 3.3, 3.6, 4.4, 3.2] } }] },
-  { id: 'leak', kind: 'inspect', stations: [{ id: 'LK', lane: 'mid', at: 7_800, cycle: { kind: 'fixed', value: 4.2 }, fails: true }] },
-  { id: 'flash', kind: 'process', stations: [{ id: 'FL', lane: 'mid', at: 9_200, cycle: { kind: 'exponential', mean: 2 } }] },
-  { id: 'final', kind: 'inspect', stations: [{ id: 'FI', lane: 'mid', at: 10_600, cycle: tri(3, 4, 5), manual: true }] },
-  { id: 'mark', kind: 'process', stations: [{ id: 'MK', lane: 'low-out', at: 1_000, cycle: { kind: 'fixed', value: 2.5 } }] },
-  { id: 'unload', kind: 'unload', stations: [{ id: 'UL', lane: 'low-out', at: 2_400, cycle: { kind: 'fixed', value: 3 } }] },
+  {
+    id: 'screw',
+    kind: 'process',
+    stations: [{ id: 'SC', lane: 'mid', at: 5_000, cycle: { kind: 'lognormal', mean: 3.8, cv: 0.15 }, fails: true }],
+  },
+  {
+    id: 'label',
+    kind: 'process',
+    stations: [
+      {
+        id: 'LB',
+        lane: 'mid',
+        at: 6_400,
+        cycle: { kind: 'empirical', samples: [3.1, 3.4, 3.2, 3.9, 3.3, 3.6, 4.4, 3.2] },
+      },
+    ],
+  },
+  {
+    id: 'leak',
+    kind: 'inspect',
+    stations: [{ id: 'LK', lane: 'mid', at: 7_800, cycle: { kind: 'fixed', value: 4.2 }, fails: true }],
+  },
+  {
+    id: 'flash',
+    kind: 'process',
+    stations: [{ id: 'FL', lane: 'mid', at: 9_200, cycle: { kind: 'exponential', mean: 2 } }],
+  },
+  {
+    id: 'final',
+    kind: 'inspect',
+    stations: [{ id: 'FI', lane: 'mid', at: 10_600, cycle: tri(3, 4, 5), manual: true }],
+  },
+  {
+    id: 'mark',
+    kind: 'process',
+    stations: [{ id: 'MK', lane: 'low-out', at: 1_000, cycle: { kind: 'fixed', value: 2.5 } }],
+  },
+  {
+    id: 'unload',
+    kind: 'unload',
+    stations: [{ id: 'UL', lane: 'low-out', at: 2_400, cycle: { kind: 'fixed', value: 3 } }],
+  },
 ];
 
 /** Steps of the work decks (upper and middle lane), which a larger bench line repeats. */
@@ -57,13 +136,18 @@ const REPEATED = new Set(['top', 'mid']);
 /** Copy k of a work-deck step: ids suffixed, positions 12 m further along its lane. */
 function copyOf(s: StepSpec, k: number): StepSpec {
   if (k === 0) return s;
-  return { ...s, id: `${s.id}-${k}`, stations: s.stations.map((st) => ({ ...st, id: `${st.id}-${k}`, at: st.at + k * LANE_MM })) };
+  return {
+    ...s,
+    id: `${s.id}-${k}`,
+    stations: s.stations.map((st) => ({ ...st, id: `${st.id}-${k}`, at: st.at + k * LANE_MM })),
+  };
 }
 
 function stepsFor(copies: number): StepSpec[] {
   const load = STEPS.filter((s) => s.kind === 'load');
   const onLane = (lane: string) => STEPS.filter((s) => s.kind !== 'load' && s.stations[0].lane === lane);
-  const repeated = (lane: string) => Array.from({ length: copies }, (_, k) => onLane(lane).map((s) => copyOf(s, k))).flat();
+  const repeated = (lane: string) =>
+    Array.from({ length: copies }, (_, k) => onLane(lane).map((s) => copyOf(s, k))).flat();
   const rest = STEPS.filter((s) => s.kind !== 'load' && !REPEATED.has(s.stations[0].lane));
   return [...load, ...repeated('top'), ...repeated('mid'), ...rest];
 }
@@ -84,7 +168,12 @@ function step(s: StepSpec, index: number) {
       operation: st.manual ? 'manual' : 'automatic',
       pausesForBreaks: st.manual === true,
       ...(st.fails
-        ? { failures: { timeBetweenFailuresSeconds: { kind: 'exponential', mean: 3_600 + 600 * index }, timeToRepairSeconds: { kind: 'lognormal', mean: 150, cv: 0.6 } } }
+        ? {
+            failures: {
+              timeBetweenFailuresSeconds: { kind: 'exponential', mean: 3_600 + 600 * index },
+              timeToRepairSeconds: { kind: 'lognormal', mean: 150, cv: 0.6 },
+            },
+          }
         : {}),
     })),
   };
@@ -115,10 +204,43 @@ export function largeLine(carriers = 50, copies = 1): ScenarioInput {
     ],
     links: [],
     transfers: [
-      { id: 'lift-east', name: 'Elevator east', kind: 'elevator', fromLaneId: 'top', toLaneId: 'mid', handlingSeconds: 1.2, liftSpeedMmPerS: 600 },
-      { id: 'lift-west', name: 'Elevator west', kind: 'elevator', fromLaneId: 'mid', toLaneId: 'low-out', handlingSeconds: 1.2, liftSpeedMmPerS: 600 },
-      { id: 'shift-east', name: 'Lateral east', kind: 'lateral', fromLaneId: 'low-out', toLaneId: 'low-back', handlingSeconds: 1, shiftDistanceMm: 600, shiftSpeedMmPerS: 500 },
-      { id: 'lift-return', name: 'Return elevator', kind: 'elevator', fromLaneId: 'low-back', toLaneId: 'top', handlingSeconds: 1.2, liftSpeedMmPerS: 800 },
+      {
+        id: 'lift-east',
+        name: 'Elevator east',
+        kind: 'elevator',
+        fromLaneId: 'top',
+        toLaneId: 'mid',
+        handlingSeconds: 1.2,
+        liftSpeedMmPerS: 600,
+      },
+      {
+        id: 'lift-west',
+        name: 'Elevator west',
+        kind: 'elevator',
+        fromLaneId: 'mid',
+        toLaneId: 'low-out',
+        handlingSeconds: 1.2,
+        liftSpeedMmPerS: 600,
+      },
+      {
+        id: 'shift-east',
+        name: 'Lateral east',
+        kind: 'lateral',
+        fromLaneId: 'low-out',
+        toLaneId: 'low-back',
+        handlingSeconds: 1,
+        shiftDistanceMm: 600,
+        shiftSpeedMmPerS: 500,
+      },
+      {
+        id: 'lift-return',
+        name: 'Return elevator',
+        kind: 'elevator',
+        fromLaneId: 'low-back',
+        toLaneId: 'top',
+        handlingSeconds: 1.2,
+        liftSpeedMmPerS: 800,
+      },
     ],
     carriers: {
       count: carriers,

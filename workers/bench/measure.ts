@@ -48,7 +48,11 @@ export async function measure(scenario: unknown, settings: RunSettingsInput): Pr
 }
 
 /** The median of n single runs after one untimed run that lets the JIT compile the hot path. */
-export async function warmMedian(scenario: unknown, settings: RunSettingsInput, n: number): Promise<{ cold: Measurement; median: Measurement }> {
+export async function warmMedian(
+  scenario: unknown,
+  settings: RunSettingsInput,
+  n: number,
+): Promise<{ cold: Measurement; median: Measurement }> {
   const cold = await measure(scenario, settings);
   const runs: Measurement[] = [];
   for (let i = 0; i < n; i++) runs.push(await measure(scenario, { ...settings, seed: `warm-${i}` }));

@@ -8,7 +8,15 @@ import { runExperiment } from '../engine/index';
 setFlagsFromString('--expose-gc');
 const collect = runInNewContext('gc') as () => void;
 
-export type MemoryPoint = { hours: number; events: number; heapUsedMb: number; rssMb: number; peakHeapMb: number; resultBytes: number; resultNumbers: number };
+export type MemoryPoint = {
+  hours: number;
+  events: number;
+  heapUsedMb: number;
+  rssMb: number;
+  peakHeapMb: number;
+  resultBytes: number;
+  resultNumbers: number;
+};
 
 const MB = 1024 * 1024;
 
@@ -23,21 +31,37 @@ function countNumbers(x: unknown): number {
 async function point(scenario: unknown, hours: number): Promise<MemoryPoint> {
   collect();
   let peakHeap = process.memoryUsage().heapUsed;
-  const result = await runExperiment(scenario, { hours, warmupMinutes: 0, replications: 1, seed: 'memory' }, {
-    now: () => performance.now(),
-    yieldToHost: async () => {
-      const heap = process.memoryUsage().heapUsed;
-      if (heap > peakHeap) peakHeap = heap;
+  const result = await runExperiment(
+    scenario,
+    { hours, warmupMinutes: 0, replications: 1, seed: 'memory' },
+    {
+      now: () => performance.now(),
+      yieldToHost: async () => {
+        const heap = process.memoryUsage().heapUsed;
+        if (heap > peakHeap) peakHeap = heap;
+      },
     },
-  });
+  );
   const resultBytes = JSON.stringify(result).length;
   const resultNumbers = countNumbers(result);
   collect();
   const usage = process.memoryUsage();
-  return { hours, events: result.events, heapUsedMb: usage.heapUsed / MB, rssMb: usage.rss / MB, peakHeapMb: peakHeap / MB, resultBytes, resultNumbers };
+  return {
+    hours,
+    events: result.events,
+    heapUsedMb: usage.heapUsed / MB,
+    rssMb: usage.rss / MB,
+    peakHeapMb: peakHeap / MB,
+    resultBytes,
+    resultNumbers,
+  };
 }
 
-export async function memoryGrowth(scenario: unknown, shortHours: number, longHours: number): Promise<{ short: MemoryPoint; long: MemoryPoint }> {
+export async function memoryGrowth(
+  scenario: unknown,
+  shortHours: number,
+  longHours: number,
+): Promise<{ short: MemoryPoint; long: MemoryPoint }> {
   await point(scenario, shortHours);
   const short = await point(scenario, shortHours);
   const long = await point(scenario, longHours);

@@ -14,7 +14,13 @@ export async function queueCosts(): Promise<QueueCost[]> {
     await measure(queueLoop(carriers), settings);
     const m = await measure(queueLoop(carriers), { ...settings, seed: 2 });
     const parts = m.throughputPerHour * HOURS;
-    out.push({ carriers, parts, events: m.events, eventsPerPart: m.events / parts, usPerPart: (m.wallMs * 1000) / parts });
+    out.push({
+      carriers,
+      parts,
+      events: m.events,
+      eventsPerPart: m.events / parts,
+      usPerPart: (m.wallMs * 1000) / parts,
+    });
   }
   return out;
 }

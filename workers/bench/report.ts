@@ -23,7 +23,13 @@ export type BenchReport = {
   memory: { short: MemoryPoint; long: MemoryPoint; heapGrowthMb: number };
   queues: QueueCost[];
   trackers: TrackerShare[];
-  targets: { eventsPerSecond: Target; wallMsPerShift: Target; heapGrowthMb: Target; queueEventsRatio: Target; trackerCostRatio: Target };
+  targets: {
+    eventsPerSecond: Target;
+    wallMsPerShift: Target;
+    heapGrowthMb: Target;
+    queueEventsRatio: Target;
+    trackerCostRatio: Target;
+  };
 };
 
 const int = (x: number) => Math.round(x).toLocaleString('en-US');
@@ -31,7 +37,8 @@ const fixed = (x: number, d = 1) => x.toFixed(d);
 
 function table(head: string[], rows: string[][]): string {
   const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i].length)));
-  const line = (cells: string[]) => cells.map((c, i) => (i === 0 ? c.padEnd(widths[i]) : c.padStart(widths[i]))).join('  ');
+  const line = (cells: string[]) =>
+    cells.map((c, i) => (i === 0 ? c.padEnd(widths[i]) : c.padStart(widths[i]))).join('  ');
   return [line(head), widths.map((w) => '-'.repeat(w)).join('  '), ...rows.map(line)].join('\n');
 }
 
@@ -39,7 +46,17 @@ const verdict = (t: Target) => (t.met ? 'met' : 'MISSED');
 
 export function formatReport(r: BenchReport): string {
   const runs = table(
-    ['scenario (8 h, no warm-up)', 'reps', 'events', 'wall ms', 'events/s', 'CPU ms', 'events/CPU s', 'peak RSS MB', 'parts/h'],
+    [
+      'scenario (8 h, no warm-up)',
+      'reps',
+      'events',
+      'wall ms',
+      'events/s',
+      'CPU ms',
+      'events/CPU s',
+      'peak RSS MB',
+      'parts/h',
+    ],
     r.scenarios.flatMap((s) =>
       [s.single, s.thirty].map((m) => [
         s.name,
@@ -56,15 +73,36 @@ export function formatReport(r: BenchReport): string {
   );
   const mem = table(
     ['run length', 'events', 'heap MB (after GC)', 'peak heap MB', 'RSS MB', 'result numbers', 'result bytes'],
-    [r.memory.short, r.memory.long].map((p) => [`${p.hours} h`, int(p.events), fixed(p.heapUsedMb), fixed(p.peakHeapMb), fixed(p.rssMb), int(p.resultNumbers), int(p.resultBytes)]),
+    [r.memory.short, r.memory.long].map((p) => [
+      `${p.hours} h`,
+      int(p.events),
+      fixed(p.heapUsedMb),
+      fixed(p.peakHeapMb),
+      fixed(p.rssMb),
+      int(p.resultNumbers),
+      int(p.resultBytes),
+    ]),
   );
   const queues = table(
     ['queue loop (8 h)', 'parts', 'events', 'events/part', 'µs/part'],
-    r.queues.map((q) => [`${q.carriers} carriers`, int(q.parts), int(q.events), fixed(q.eventsPerPart), fixed(q.usPerPart)]),
+    r.queues.map((q) => [
+      `${q.carriers} carriers`,
+      int(q.parts),
+      int(q.events),
+      fixed(q.eventsPerPart),
+      fixed(q.usPerPart),
+    ]),
   );
   const trackers = table(
     ['bottleneck tracker (8 h)', 'events', 'run ms', 'tracker ms', 'share', 'ns/event'],
-    r.trackers.map((x) => [`${x.stations} stations`, int(x.events), int(x.runMs), fixed(x.replayMs), `${fixed(100 * x.share)} %`, fixed(x.nsPerEvent)]),
+    r.trackers.map((x) => [
+      `${x.stations} stations`,
+      int(x.events),
+      int(x.runMs),
+      fixed(x.replayMs),
+      `${fixed(100 * x.share)} %`,
+      fixed(x.nsPerEvent),
+    ]),
   );
   const t = r.targets;
   return [

@@ -7,7 +7,13 @@ export type SimulateArgs =
       kind: 'run';
       scenario: string;
       json: boolean;
-      settings: { replications?: number; seed?: string | number; hours?: number; warmupMinutes?: number; carriers?: number };
+      settings: {
+        replications?: number;
+        seed?: string | number;
+        hours?: number;
+        warmupMinutes?: number;
+        carriers?: number;
+      };
     };
 
 export class UsageError extends Error {
@@ -43,7 +49,8 @@ export function parseArgs(argv: string[]): SimulateArgs {
     if (value === undefined || value.startsWith('--')) throw new UsageError(`${flag} needs a value`);
     i++;
     if (flag === '--scenario') scenario = value;
-    else if (flag === '--seed') settings.seed = /^\d+$/.test(value) && Number.isSafeInteger(Number(value)) ? Number(value) : value;
+    else if (flag === '--seed')
+      settings.seed = /^\d+$/.test(value) && Number.isSafeInteger(Number(value)) ? Number(value) : value;
     else {
       const n = Number(value);
       if (value.trim() === '' || !Number.isFinite(n)) throw new UsageError(`${flag} must be a number, got "${value}"`);

@@ -49,10 +49,14 @@ async function main(): Promise<void> {
   }
   const scenario = readScenario(args.scenario);
   try {
-    const result = await runExperiment(scenario, args.settings, { now: () => performance.now(), yieldToHost: async () => undefined });
+    const result = await runExperiment(scenario, args.settings, {
+      now: () => performance.now(),
+      yieldToHost: async () => undefined,
+    });
     process.stdout.write(args.json ? `${JSON.stringify(result)}\n` : `${formatTable(result)}\n`);
   } catch (e) {
-    if (e instanceof InvalidInputError) fail(2, `invalid input in ${args.scenario}:\n${e.issues.map((i) => `  ${i.path}: ${i.message}`).join('\n')}`);
+    if (e instanceof InvalidInputError)
+      fail(2, `invalid input in ${args.scenario}:\n${e.issues.map((i) => `  ${i.path}: ${i.message}`).join('\n')}`);
     if (isSimulationStopped(e)) {
       const detail = e.gridlock.map((g) => `  carrier ${g.carrier} at ${g.at}, waiting for ${g.waitingFor}`).join('\n');
       fail(3, `simulation stopped (${e.reason}): ${e.message}${detail ? `\n${detail}` : ''}`);

@@ -3,7 +3,8 @@ import { transferShares, type RunResult } from '../../shared/results/run-result'
 
 const pct = (x: number) => `${(x * 100).toFixed(1)}%`.padStart(7);
 const num = (x: number, digits = 1) => x.toFixed(digits);
-const interval = (i: { mean: number; ciLow: number; ciHigh: number }, digits = 1) => `${num(i.mean, digits)}  (95% CI ${num(i.ciLow, digits)} to ${num(i.ciHigh, digits)})`;
+const interval = (i: { mean: number; ciLow: number; ciHigh: number }, digits = 1) =>
+  `${num(i.mean, digits)}  (95% CI ${num(i.ciLow, digits)} to ${num(i.ciHigh, digits)})`;
 
 export function formatTable(r: RunResult): string {
   const lines = [
@@ -19,16 +20,28 @@ export function formatTable(r: RunResult): string {
     `breaks         ${r.breakMinutesPerShift === 0 ? 'none' : r.breakMode === 'wholeLine' ? 'stop the whole line' : 'stop manual stations only'}`,
     '',
     `${'station'.padEnd(12)} ${'process'.padStart(7)} ${'starved'.padStart(7)} ${'blocked'.padStart(7)} ${'down'.padStart(7)} ${'break'.padStart(7)} ${'bottlnk'.padStart(7)}  cycle s`,
-    ...r.stations.map((s) => `${s.id.padEnd(12)} ${pct(s.processing)} ${pct(s.starved)} ${pct(s.blocked)} ${pct(s.down)} ${pct(s.onBreak)} ${pct(s.bottleneckShare)}  ${num(s.meanCycleSeconds, 2)}`),
+    ...r.stations.map(
+      (s) =>
+        `${s.id.padEnd(12)} ${pct(s.processing)} ${pct(s.starved)} ${pct(s.blocked)} ${pct(s.down)} ${pct(s.onBreak)} ${pct(s.bottleneckShare)}  ${num(s.meanCycleSeconds, 2)}`,
+    ),
   ];
   if (r.transfers.length > 0) {
     const share = (x: number | null) => (x === null ? '      –' : pct(x));
-    lines.push('', `${'transfer'.padEnd(12)} ${'carry'.padStart(7)} ${'return'.padStart(7)} ${'blocked'.padStart(7)} ${'idle'.padStart(7)} ${'busy'.padStart(7)}  queue`);
+    lines.push(
+      '',
+      `${'transfer'.padEnd(12)} ${'carry'.padStart(7)} ${'return'.padStart(7)} ${'blocked'.padStart(7)} ${'idle'.padStart(7)} ${'busy'.padStart(7)}  queue`,
+    );
     for (const t of r.transfers) {
       const s = transferShares(t);
-      lines.push(`${t.id.padEnd(12)} ${share(s.carrying)} ${share(s.returning)} ${pct(s.blocked)} ${pct(s.idle)} ${pct(s.busy)}  ${num(t.meanQueue, 2)}`);
+      lines.push(
+        `${t.id.padEnd(12)} ${share(s.carrying)} ${share(s.returning)} ${pct(s.blocked)} ${pct(s.idle)} ${pct(s.busy)}  ${num(t.meanQueue, 2)}`,
+      );
     }
   }
-  lines.push('', `events ${r.events}`, 'Throughput planning only: not a safety sign-off. Guarding, risk assessment and electrical work follow local codes and the machine safety standards.');
+  lines.push(
+    '',
+    `events ${r.events}`,
+    'Throughput planning only: not a safety sign-off. Guarding, risk assessment and electrical work follow local codes and the machine safety standards.',
+  );
   return lines.join('\n');
 }

@@ -16,7 +16,13 @@ import { checkCarrierCount, validateScenario, type ValidationIssue } from './val
 import { ENGINE_VERSION } from './version';
 import { formatIssuePath } from '../../shared/scenario/issue-path';
 
-export type Progress = { replication: number; replications: number; simulatedSeconds: number; totalSeconds: number; fraction: number };
+export type Progress = {
+  replication: number;
+  replications: number;
+  simulatedSeconds: number;
+  totalSeconds: number;
+  fraction: number;
+};
 
 export type RunHooks = {
   onProgress?(p: Progress): void;
@@ -52,7 +58,9 @@ export function prepare(scenarioInput: unknown, settingsInput: unknown): { scena
   if (!checked.ok) throw new InvalidInputError(checked.issues);
   const parsed = runSettingsSchema.safeParse(settingsInput ?? {});
   if (!parsed.success) {
-    throw new InvalidInputError(parsed.error.issues.map((i) => ({ path: `settings.${formatIssuePath(i.path)}`, message: i.message })));
+    throw new InvalidInputError(
+      parsed.error.issues.map((i) => ({ path: `settings.${formatIssuePath(i.path)}`, message: i.message })),
+    );
   }
   const settings = parsed.data;
   if (settings.carriers !== undefined) {
@@ -89,9 +97,19 @@ export async function runReplicationRange(
   return runRange(scenario, settings, range, hooks);
 }
 
-async function runRange(scenario: Scenario, settings: RunSettings, range: ReplicationRange, hooks: RunHooks): Promise<ReplicationBlock> {
+async function runRange(
+  scenario: Scenario,
+  settings: RunSettings,
+  range: ReplicationRange,
+  hooks: RunHooks,
+): Promise<ReplicationBlock> {
   if (!Number.isInteger(range.first) || range.first < 0 || !Number.isInteger(range.count) || range.count < 1) {
-    throw new InvalidInputError([{ path: 'range', message: `a replication range needs a whole first index of 0 or more and a count of 1 or more (got first ${range.first}, count ${range.count})` }]);
+    throw new InvalidInputError([
+      {
+        path: 'range',
+        message: `a replication range needs a whole first index of 0 or more and a count of 1 or more (got first ${range.first}, count ${range.count})`,
+      },
+    ]);
   }
   const now = hooks.now ?? (() => Date.now());
   const started = now();
@@ -105,11 +123,21 @@ async function runRange(scenario: Scenario, settings: RunSettings, range: Replic
   const yieldToHost = hooks.yieldToHost ?? defaultYield;
   const checkStop = () => {
     if (hooks.isCancelled?.()) throw new SimulationStoppedError('cancelled', 'the run was cancelled');
-    if (now() - started > wallBudget) throw new SimulationStoppedError('wallClockBudget', `stopped after ${Math.round(wallBudget / 1000)} s of wall time, the budget for this run; use fewer replications or hours`);
+    if (now() - started > wallBudget)
+      throw new SimulationStoppedError(
+        'wallClockBudget',
+        `stopped after ${Math.round(wallBudget / 1000)} s of wall time, the budget for this run; use fewer replications or hours`,
+      );
   };
   const report = (done: number, simulatedInBlock: number) => {
     const simulatedSeconds = done * endSeconds + simulatedInBlock;
-    hooks.onProgress?.({ replication: range.first + done, replications: range.count, simulatedSeconds, totalSeconds, fraction: simulatedSeconds / totalSeconds });
+    hooks.onProgress?.({
+      replication: range.first + done,
+      replications: range.count,
+      simulatedSeconds,
+      totalSeconds,
+      fraction: simulatedSeconds / totalSeconds,
+    });
   };
   for (let k = 0; k < range.count; k++) {
     const replication = new Replication(line, createStreamFactory(settings.seed, range.first + k), {
@@ -136,7 +164,11 @@ async function runRange(scenario: Scenario, settings: RunSettings, range: Replic
 }
 
 /** Merges blocks (in any order, without gaps or overlaps) into the run result of the whole experiment. */
-export function combineBlocks(scenarioInput: Scenario | unknown, settingsInput: RunSettings | unknown, blocks: ReplicationBlock[]): RunResult {
+export function combineBlocks(
+  scenarioInput: Scenario | unknown,
+  settingsInput: RunSettings | unknown,
+  blocks: ReplicationBlock[],
+): RunResult {
   const { scenario, settings } = prepare(scenarioInput, settingsInput);
   return combine(scenario, settings, blocks);
 }
@@ -146,12 +178,22 @@ function combine(scenario: Scenario, settings: RunSettings, blocks: ReplicationB
   let next = 0;
   for (const block of ordered) {
     if (block.first !== next) {
-      throw new InvalidInputError([{ path: 'blocks', message: `replication ${next} is ${block.first > next ? 'missing' : 'present twice'}; blocks must cover 0 .. ${settings.replications - 1} once each` }]);
+      throw new InvalidInputError([
+        {
+          path: 'blocks',
+          message: `replication ${next} is ${block.first > next ? 'missing' : 'present twice'}; blocks must cover 0 .. ${settings.replications - 1} once each`,
+        },
+      ]);
     }
     next += block.summaries.length;
   }
   if (next !== settings.replications) {
-    throw new InvalidInputError([{ path: 'blocks', message: `the blocks hold ${next} replications but the settings ask for ${settings.replications}` }]);
+    throw new InvalidInputError([
+      {
+        path: 'blocks',
+        message: `the blocks hold ${next} replications but the settings ask for ${settings.replications}`,
+      },
+    ]);
   }
   const line = compileLine(scenario, settings.carriers ?? scenario.carriers.count);
   return combineReplications({
@@ -165,7 +207,11 @@ function combine(scenario: Scenario, settings: RunSettings, blocks: ReplicationB
   });
 }
 
-export async function runExperiment(scenarioInput: Scenario | unknown, settingsInput: RunSettings | unknown, hooks: RunHooks = {}): Promise<RunResult> {
+export async function runExperiment(
+  scenarioInput: Scenario | unknown,
+  settingsInput: RunSettings | unknown,
+  hooks: RunHooks = {},
+): Promise<RunResult> {
   const { scenario, settings } = prepare(scenarioInput, settingsInput);
   const block = await runRange(scenario, settings, { first: 0, count: settings.replications }, hooks);
   return combine(scenario, settings, [block]);

@@ -14,16 +14,33 @@ import { createStreamFactory } from './random/streams';
 const SLICE_MS = 50;
 const DEFAULT_EVENT_BUDGET = 5_000_000_000;
 
-export async function recordPlayback(scenarioInput: unknown, settingsInput: unknown, requestInput: unknown, hooks: RunHooks = {}, limits: { carrierChangesMax: number; stationChangesMax: number } = PLAYBACK_LIMITS): Promise<PlaybackTrace> {
+export async function recordPlayback(
+  scenarioInput: unknown,
+  settingsInput: unknown,
+  requestInput: unknown,
+  hooks: RunHooks = {},
+  limits: { carrierChangesMax: number; stationChangesMax: number } = PLAYBACK_LIMITS,
+): Promise<PlaybackTrace> {
   const { scenario, settings } = prepare(scenarioInput, settingsInput);
   const parsed = playbackRequestSchema.safeParse(requestInput ?? {});
-  if (!parsed.success) throw new InvalidInputError(parsed.error.issues.map((i) => ({ path: `playback.${formatIssuePath(i.path)}`, message: i.message })));
+  if (!parsed.success)
+    throw new InvalidInputError(
+      parsed.error.issues.map((i) => ({ path: `playback.${formatIssuePath(i.path)}`, message: i.message })),
+    );
   const request = parsed.data;
   const endSeconds = settings.warmupMinutes * 60 + settings.hours * 3600;
   const issues = [];
-  if (request.replication >= settings.replications) issues.push({ path: 'playback.replication', message: `the run has ${settings.replications} replication${settings.replications === 1 ? '' : 's'}, numbered from 1 to ${settings.replications}` });
+  if (request.replication >= settings.replications)
+    issues.push({
+      path: 'playback.replication',
+      message: `the run has ${settings.replications} replication${settings.replications === 1 ? '' : 's'}, numbered from 1 to ${settings.replications}`,
+    });
   const windowStart = request.startMinutes * 60;
-  if (windowStart >= endSeconds) issues.push({ path: 'playback.startMinutes', message: `the window must start before the run ends, at ${endSeconds / 60} min` });
+  if (windowStart >= endSeconds)
+    issues.push({
+      path: 'playback.startMinutes',
+      message: `the window must start before the run ends, at ${endSeconds / 60} min`,
+    });
   if (issues.length > 0) throw new InvalidInputError(issues);
   const windowEnd = Math.min(windowStart + request.windowMinutes * 60, endSeconds);
 
@@ -46,7 +63,13 @@ export async function recordPlayback(scenarioInput: unknown, settingsInput: unkn
     const sliceEnd = now() + SLICE_MS;
     // Asked every 1024 events: stop the slice once the window is behind us as well.
     const finished = replication.run(() => trace.done || now() >= sliceEnd);
-    hooks.onProgress?.({ replication: request.replication, replications: settings.replications, simulatedSeconds: Math.min(replication.state.now, windowEnd), totalSeconds: windowEnd, fraction: Math.min(replication.state.now / windowEnd, 1) });
+    hooks.onProgress?.({
+      replication: request.replication,
+      replications: settings.replications,
+      simulatedSeconds: Math.min(replication.state.now, windowEnd),
+      totalSeconds: windowEnd,
+      fraction: Math.min(replication.state.now / windowEnd, 1),
+    });
     if (finished || trace.done) break;
     await yieldToHost();
   }

@@ -6,16 +6,36 @@
 import type { PlaybackTrace } from '../../shared/results/playback';
 import type { RunResult } from '../../shared/results/run-result';
 import { runStudyJob, type StudyJobInput, type StudyJobOutcome } from '../studies/run-study-job';
-import { combineBlocks, ENGINE_VERSION, InvalidInputError, isSimulationStopped, recordPlayback, runExperiment, runReplicationRange, TraceLimitError, validateScenario, type GridlockEntry, type Progress, type ReplicationBlock, type ReplicationRange, type RunHooks, type StopReason, type ValidationIssue } from './index';
+import {
+  combineBlocks,
+  ENGINE_VERSION,
+  InvalidInputError,
+  isSimulationStopped,
+  recordPlayback,
+  runExperiment,
+  runReplicationRange,
+  TraceLimitError,
+  validateScenario,
+  type GridlockEntry,
+  type Progress,
+  type ReplicationBlock,
+  type ReplicationRange,
+  type RunHooks,
+  type StopReason,
+  type ValidationIssue,
+} from './index';
 
-type Failure = { ok: false; kind: 'invalid'; message: string; issues: ValidationIssue[] } | { ok: false; kind: 'stopped'; reason: StopReason; message: string; gridlock: GridlockEntry[] };
+type Failure =
+  | { ok: false; kind: 'invalid'; message: string; issues: ValidationIssue[] }
+  | { ok: false; kind: 'stopped'; reason: StopReason; message: string; gridlock: GridlockEntry[] };
 
 export type WorkerOutcome = { ok: true; result: RunResult } | Failure;
 export type RangeOutcome = { ok: true; block: ReplicationBlock } | Failure;
 
 function asFailure(e: unknown): Failure {
   if (e instanceof InvalidInputError) return { ok: false, kind: 'invalid', message: e.message, issues: e.issues };
-  if (isSimulationStopped(e)) return { ok: false, kind: 'stopped', reason: e.reason, message: e.message, gridlock: e.gridlock };
+  if (isSimulationStopped(e))
+    return { ok: false, kind: 'stopped', reason: e.reason, message: e.message, gridlock: e.gridlock };
   throw e;
 }
 
@@ -48,7 +68,12 @@ export function createWorkerApi(now: () => number) {
       }
     },
     /** One block of an experiment's replications; typed arrays travel by structured clone. */
-    async runRange(scenario: unknown, settings: unknown, range: ReplicationRange, onProgress?: (p: Progress) => unknown): Promise<RangeOutcome> {
+    async runRange(
+      scenario: unknown,
+      settings: unknown,
+      range: ReplicationRange,
+      onProgress?: (p: Progress) => unknown,
+    ): Promise<RangeOutcome> {
       try {
         return { ok: true, block: await runReplicationRange(scenario, settings, range, hooks(onProgress)) };
       } catch (e) {
@@ -62,11 +87,20 @@ export function createWorkerApi(now: () => number) {
         return asFailure(e);
       }
     },
-    runStudyJob(document: unknown, job: StudyJobInput, onProgress?: (p: Progress) => unknown): Promise<StudyJobOutcome> {
+    runStudyJob(
+      document: unknown,
+      job: StudyJobInput,
+      onProgress?: (p: Progress) => unknown,
+    ): Promise<StudyJobOutcome> {
       return runStudyJob(document, job, hooks(onProgress));
     },
     /** Replays one replication of a run and records a window of it for the player. */
-    async playback(scenario: unknown, settings: unknown, request: unknown, onProgress?: (p: Progress) => unknown): Promise<PlaybackOutcome> {
+    async playback(
+      scenario: unknown,
+      settings: unknown,
+      request: unknown,
+      onProgress?: (p: Progress) => unknown,
+    ): Promise<PlaybackOutcome> {
       cancelled = false;
       try {
         const trace = await recordPlayback(scenario, settings, request, {
@@ -78,7 +112,8 @@ export function createWorkerApi(now: () => number) {
       } catch (e) {
         if (e instanceof InvalidInputError) return { ok: false, kind: 'invalid', message: e.message, issues: e.issues };
         if (e instanceof TraceLimitError) return { ok: false, kind: 'tooLarge', message: e.message };
-        if (isSimulationStopped(e)) return { ok: false, kind: 'stopped', reason: e.reason, message: e.message, gridlock: e.gridlock };
+        if (isSimulationStopped(e))
+          return { ok: false, kind: 'stopped', reason: e.reason, message: e.message, gridlock: e.gridlock };
         throw e;
       }
     },

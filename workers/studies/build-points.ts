@@ -16,7 +16,8 @@ export function sweepPoints(axes: SweepAxis[]): StudyPointInput[] {
   const [x, y] = axes;
   if (!x) return [];
   const show = (v: number) => String(Number(v.toPrecision(6)));
-  if (!y) return x.values.map((v) => ({ label: `${x.label} ${show(v)}`, changes: [{ path: x.path, op: 'set', value: v }] }));
+  if (!y)
+    return x.values.map((v) => ({ label: `${x.label} ${show(v)}`, changes: [{ path: x.path, op: 'set', value: v }] }));
   return x.values.flatMap((vx) =>
     y.values.map((vy) => ({
       label: `${x.label} ${show(vx)}, ${y.label} ${show(vy)}`,
@@ -40,7 +41,10 @@ export function whatIfPoints(s: Scenario, reduction: number): StudyPointInput[] 
   const points: StudyPointInput[] = [{ label: 'Line as it is', changes: [] }];
   s.steps.forEach((step, i) =>
     step.stations.forEach((station, j) => {
-      points.push({ label: station.name, changes: [{ path: `steps.${i}.stations.${j}.cycleTimeSeconds`, op: 'scale', value: 1 - reduction }] });
+      points.push({
+        label: station.name,
+        changes: [{ path: `steps.${i}.stations.${j}.cycleTimeSeconds`, op: 'scale', value: 1 - reduction }],
+      });
     }),
   );
   return points;

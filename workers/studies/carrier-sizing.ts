@@ -40,9 +40,17 @@ const perHour = (x: number) => `${x.toFixed(1)} parts/h`;
  * @param targetPerHour the rate the target takt asks for (3600 / takt), or null without a target
  * @param stationNames names in the order of the points' bottleneck shares
  */
-export function recommendCarriers(points: SizingPoint[], targetPerHour: number | null, stationNames: string[], tolerance: number = SIZING_DEFAULTS.tolerance): SizingAdvice {
-  const usable = points.filter((p) => p.stats.throughput && (p.stats.state === 'done' || p.stats.state === 'partial')).sort((a, b) => a.carriers - b.carriers);
-  if (usable.length === 0) return { kind: 'none', text: 'No carrier count has finished yet, so there is nothing to recommend.' };
+export function recommendCarriers(
+  points: SizingPoint[],
+  targetPerHour: number | null,
+  stationNames: string[],
+  tolerance: number = SIZING_DEFAULTS.tolerance,
+): SizingAdvice {
+  const usable = points
+    .filter((p) => p.stats.throughput && (p.stats.state === 'done' || p.stats.state === 'partial'))
+    .sort((a, b) => a.carriers - b.carriers);
+  if (usable.length === 0)
+    return { kind: 'none', text: 'No carrier count has finished yet, so there is nothing to recommend.' };
   const rate = (p: SizingPoint) => p.stats.throughput!.mean;
   const best = usable.reduce((a, b) => (rate(b) > rate(a) ? b : a));
   const meets = (p: SizingPoint) => targetPerHour !== null && rate(p) >= targetPerHour;
@@ -51,7 +59,9 @@ export function recommendCarriers(points: SizingPoint[], targetPerHour: number |
     const shares = best.stats.bottleneckShares;
     const top = shares.length > 0 ? shares.indexOf(Math.max(...shares)) : -1;
     const limitingStation = top >= 0 ? (stationNames[top] ?? null) : null;
-    const limit = limitingStation ? ` Station ${limitingStation} limits the line: it is the bottleneck ${pct(shares[top])} of the time at ${best.carriers} carriers, so more carriers cannot help; shorten its cycle time or add a station beside it.` : '';
+    const limit = limitingStation
+      ? ` Station ${limitingStation} limits the line: it is the bottleneck ${pct(shares[top])} of the time at ${best.carriers} carriers, so more carriers cannot help; shorten its cycle time or add a station beside it.`
+      : '';
     return {
       kind: 'unreachable',
       best: best.carriers,
@@ -62,7 +72,9 @@ export function recommendCarriers(points: SizingPoint[], targetPerHour: number |
   }
   const pick = usable.find((p) => rate(p) >= rate(best) * (1 - tolerance) && (!anyMeets || meets(p)))!;
   const beyond = usable.filter((p) => p.carriers > pick.carriers);
-  const parts = [`${pick.carriers} carriers make ${perHour(rate(pick))}, within ${pct(tolerance)} of the best (${perHour(rate(best))} at ${best.carriers})`];
+  const parts = [
+    `${pick.carriers} carriers make ${perHour(rate(pick))}, within ${pct(tolerance)} of the best (${perHour(rate(best))} at ${best.carriers})`,
+  ];
   if (targetPerHour !== null) parts[0] += ` and meet the target of ${perHour(targetPerHour)}`;
   parts[0] += '.';
   if (beyond.length > 0) {
@@ -72,7 +84,15 @@ export function recommendCarriers(points: SizingPoint[], targetPerHour: number |
     const leadLast = last.stats.leadSeconds?.mean;
     const leadGrowth = leadPick && leadLast ? leadLast / leadPick - 1 : null;
     const gainText = gain < tolerance ? `by less than ${pct(tolerance)}` : `by ${(gain * 100).toFixed(1)} %`;
-    parts.push(`Beyond ${pick.carriers} carriers throughput rises ${gainText}${leadGrowth !== null ? ` while lead time ${leadGrowth >= 0 ? 'grows' : 'falls'} ${pct(Math.abs(leadGrowth))} (at ${last.carriers})` : ''}.`);
+    parts.push(
+      `Beyond ${pick.carriers} carriers throughput rises ${gainText}${leadGrowth !== null ? ` while lead time ${leadGrowth >= 0 ? 'grows' : 'falls'} ${pct(Math.abs(leadGrowth))} (at ${last.carriers})` : ''}.`,
+    );
   }
-  return { kind: 'recommend', carriers: pick.carriers, best: best.carriers, meetsTarget: targetPerHour === null ? null : meets(pick), text: parts.join(' ') };
+  return {
+    kind: 'recommend',
+    carriers: pick.carriers,
+    best: best.carriers,
+    meetsTarget: targetPerHour === null ? null : meets(pick),
+    text: parts.join(' '),
+  };
 }

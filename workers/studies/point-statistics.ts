@@ -31,7 +31,9 @@ function pointState(jobs: JobResult[], jobsPerPoint: number): { state: PointStat
 
 const interval = (values: number[]) => (values.length > 0 ? studentT95(values) : null);
 
-export function pointStatistics(study: Pick<StudyDetail, 'points' | 'results' | 'settings' | 'blockSize'>): PointStatistics[] {
+export function pointStatistics(
+  study: Pick<StudyDetail, 'points' | 'results' | 'settings' | 'blockSize'>,
+): PointStatistics[] {
   const jobsPerPoint = Math.ceil(study.settings.replications / study.blockSize);
   return study.points.map((point) => {
     const jobs = study.results.filter((r) => r.pointIndex === point.index);
@@ -47,7 +49,10 @@ export function pointStatistics(study: Pick<StudyDetail, 'points' | 'results' | 
       throughput: interval(figures.map((f) => f.throughputPerHour)),
       wip: interval(figures.map((f) => f.wipMean)),
       leadSeconds: interval(figures.map((f) => f.leadMeanSeconds)),
-      bottleneckShares: Array.from({ length: stations }, (_, s) => figures.reduce((sum, f) => sum + f.bottleneckShares[s], 0) / figures.length),
+      bottleneckShares: Array.from(
+        { length: stations },
+        (_, s) => figures.reduce((sum, f) => sum + f.bottleneckShares[s], 0) / figures.length,
+      ),
     };
   });
 }
@@ -57,7 +62,11 @@ export function pointStatistics(study: Pick<StudyDetail, 'points' | 'results' | 
  * numbers replication r of every point draws from the same streams, so the pairs share their noise and
  * the interval on the differences is much narrower than two separate ones (Law 2015, §10.2.1).
  */
-export function pairedDifference(a: PointStatistics, b: PointStatistics, pick: (f: ReplicationFigures) => number): ConfidenceInterval | null {
+export function pairedDifference(
+  a: PointStatistics,
+  b: PointStatistics,
+  pick: (f: ReplicationFigures) => number,
+): ConfidenceInterval | null {
   const differences: number[] = [];
   a.replications.forEach((fa, r) => {
     const fb = b.replications[r];

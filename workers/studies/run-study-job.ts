@@ -15,15 +15,26 @@ export type StudyJobOutcome =
 /** The job as it travels to a runner: the study's job plus the revision's document it needs. */
 export type StudyJobInput = Pick<StudyJob, 'changes' | 'settings' | 'first' | 'count'>;
 
-export async function runStudyJob(document: unknown, job: StudyJobInput, hooks: RunHooks = {}): Promise<StudyJobOutcome> {
+export async function runStudyJob(
+  document: unknown,
+  job: StudyJobInput,
+  hooks: RunHooks = {},
+): Promise<StudyJobOutcome> {
   const changed = applyPointChanges(document, job.changes);
   if (!changed.ok) return { outcome: 'invalid', message: `${changed.path}: ${changed.message}` };
   try {
-    const block = await runReplicationRange(changed.document, job.settings, { first: job.first, count: job.count }, hooks);
+    const block = await runReplicationRange(
+      changed.document,
+      job.settings,
+      { first: job.first, count: job.count },
+      hooks,
+    );
     return { outcome: 'done', engineVersion: ENGINE_VERSION, block: blockToJson(block) };
   } catch (e) {
-    if (e instanceof InvalidInputError) return { outcome: 'invalid', message: e.issues.map((i) => `${i.path}: ${i.message}`).join('; ') };
-    if (isSimulationStopped(e)) return e.reason === 'cancelled' ? { outcome: 'cancelled' } : { outcome: 'stopped', message: e.message };
+    if (e instanceof InvalidInputError)
+      return { outcome: 'invalid', message: e.issues.map((i) => `${i.path}: ${i.message}`).join('; ') };
+    if (isSimulationStopped(e))
+      return e.reason === 'cancelled' ? { outcome: 'cancelled' } : { outcome: 'stopped', message: e.message };
     throw e;
   }
 }

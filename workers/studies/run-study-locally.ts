@@ -8,13 +8,21 @@ import { runStudyJob } from './run-study-job';
 
 export type LocalStudy = Pick<StudyDetail, 'id' | 'settings' | 'commonRandomNumbers' | 'blockSize' | 'points'>;
 
-export async function runStudyLocally(study: LocalStudy, documents: Record<string, unknown>, hooks: RunHooks = {}): Promise<LocalStudy & { results: JobResult[] }> {
+export async function runStudyLocally(
+  study: LocalStudy,
+  documents: Record<string, unknown>,
+  hooks: RunHooks = {},
+): Promise<LocalStudy & { results: JobResult[] }> {
   const results: JobResult[] = [];
   for (const job of studyJobs(study)) {
     const answer = await runStudyJob(documents[job.revisionId], job, hooks);
     if (answer.outcome === 'cancelled') break;
     const key = { pointIndex: job.pointIndex, first: job.first, count: job.count };
-    results.push(answer.outcome === 'done' ? { ...key, outcome: 'done', message: null, figures: answer.block.summaries.map(figuresOf) } : { ...key, outcome: answer.outcome, message: answer.message, figures: [] });
+    results.push(
+      answer.outcome === 'done'
+        ? { ...key, outcome: 'done', message: null, figures: answer.block.summaries.map(figuresOf) }
+        : { ...key, outcome: answer.outcome, message: answer.message, figures: [] },
+    );
   }
   return { ...study, results };
 }

@@ -20,7 +20,14 @@ export function rankWhatIf(points: PointStatistics[]): WhatIfRow[] {
   if (!base) return [];
   const rows = changed.map((p, s): WhatIfRow => {
     const gain = pairedDifference(base, p, (f) => f.throughputPerHour);
-    return { stationIndex: s, label: p.label, gain, significant: gain !== null && gain.ciLow > 0, bottleneckShare: base.bottleneckShares[s] ?? 0, message: p.message };
+    return {
+      stationIndex: s,
+      label: p.label,
+      gain,
+      significant: gain !== null && gain.ciLow > 0,
+      bottleneckShare: base.bottleneckShares[s] ?? 0,
+      message: p.message,
+    };
   });
   return rows.sort((a, b) => (b.gain?.mean ?? -Infinity) - (a.gain?.mean ?? -Infinity));
 }

@@ -1,5 +1,15 @@
 // A user's role in one organisation; the pair is the primary key, so a user holds one role per organisation.
-import { Check, Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import {
+  Check,
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryColumn,
+  UpdateDateColumn,
+} from 'typeorm';
 import type { Role } from '../../../shared/api/roles';
 import { OrganisationEntity } from './organisation.entity';
 import { UserEntity } from './user.entity';

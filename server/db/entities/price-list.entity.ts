@@ -1,6 +1,15 @@
 // An organisation's price list: one row per organisation, one money column per priced item. Money is
 // numeric(14,2) (exact cents); the transformer hands the API numbers, never strings.
-import { Column, Entity, JoinColumn, ManyToOne, OneToOne, PrimaryColumn, UpdateDateColumn, type ValueTransformer } from 'typeorm';
+import {
+  Column,
+  Entity,
+  JoinColumn,
+  ManyToOne,
+  OneToOne,
+  PrimaryColumn,
+  UpdateDateColumn,
+  type ValueTransformer,
+} from 'typeorm';
 import { OrganisationEntity } from './organisation.entity';
 import { UserEntity } from './user.entity';
 

@@ -6,10 +6,18 @@ export class TimeStudies1796193256066 implements MigrationInterface {
   name = 'TimeStudies1796193256066';
 
   public async up(queryRunner: QueryRunner): Promise<void> {
-    await queryRunner.query(`CREATE TABLE "time_studies" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "created_by_id" uuid, "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), "scenario_id" uuid NOT NULL, "station_id" text NOT NULL, "name" text NOT NULL, "file_name" text NOT NULL, "sample_column" text NOT NULL, "sample_count" integer NOT NULL, "mean" double precision NOT NULL, "sd" double precision NOT NULL, "samples" double precision array NOT NULL, CONSTRAINT "PK_1504a7e8a93f121b37cc567dd8b" PRIMARY KEY ("id"))`);
-    await queryRunner.query(`CREATE INDEX "IDX_time_studies_scenario_station_created" ON "time_studies"  ("scenario_id", "station_id", "created_at") `);
-    await queryRunner.query(`ALTER TABLE "time_studies" ADD CONSTRAINT "FK_bda8b981eeaffc6ed7913dfe40e" FOREIGN KEY ("created_by_id") REFERENCES "users"("id") ON DELETE SET NULL ON UPDATE NO ACTION`);
-    await queryRunner.query(`ALTER TABLE "time_studies" ADD CONSTRAINT "FK_131b7468ff848a8cb5367339773" FOREIGN KEY ("scenario_id") REFERENCES "scenarios"("id") ON DELETE CASCADE ON UPDATE NO ACTION`);
+    await queryRunner.query(
+      `CREATE TABLE "time_studies" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "created_by_id" uuid, "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), "scenario_id" uuid NOT NULL, "station_id" text NOT NULL, "name" text NOT NULL, "file_name" text NOT NULL, "sample_column" text NOT NULL, "sample_count" integer NOT NULL, "mean" double precision NOT NULL, "sd" double precision NOT NULL, "samples" double precision array NOT NULL, CONSTRAINT "PK_1504a7e8a93f121b37cc567dd8b" PRIMARY KEY ("id"))`,
+    );
+    await queryRunner.query(
+      `CREATE INDEX "IDX_time_studies_scenario_station_created" ON "time_studies"  ("scenario_id", "station_id", "created_at") `,
+    );
+    await queryRunner.query(
+      `ALTER TABLE "time_studies" ADD CONSTRAINT "FK_bda8b981eeaffc6ed7913dfe40e" FOREIGN KEY ("created_by_id") REFERENCES "users"("id") ON DELETE SET NULL ON UPDATE NO ACTION`,
+    );
+    await queryRunner.query(
+      `ALTER TABLE "time_studies" ADD CONSTRAINT "FK_131b7468ff848a8cb5367339773" FOREIGN KEY ("scenario_id") REFERENCES "scenarios"("id") ON DELETE CASCADE ON UPDATE NO ACTION`,
+    );
   }
 
   public async down(queryRunner: QueryRunner): Promise<void> {

@@ -7,9 +7,13 @@ export class StoredChecks1796210000001 implements MigrationInterface {
 
   public async up(queryRunner: QueryRunner): Promise<void> {
     await queryRunner.query(`ALTER TABLE "projects" ADD "client_id" uuid`);
-    await queryRunner.query(`ALTER TABLE "projects" ADD CONSTRAINT "UQ_projects_organisation_client" UNIQUE ("organisation_id", "client_id")`);
+    await queryRunner.query(
+      `ALTER TABLE "projects" ADD CONSTRAINT "UQ_projects_organisation_client" UNIQUE ("organisation_id", "client_id")`,
+    );
     await queryRunner.query(`ALTER TABLE "scenarios" ADD "client_id" uuid`);
-    await queryRunner.query(`ALTER TABLE "scenarios" ADD CONSTRAINT "UQ_scenarios_project_client" UNIQUE ("project_id", "client_id")`);
+    await queryRunner.query(
+      `ALTER TABLE "scenarios" ADD CONSTRAINT "UQ_scenarios_project_client" UNIQUE ("project_id", "client_id")`,
+    );
     await queryRunner.query(`ALTER TABLE "runs" ADD "server_checked" boolean NOT NULL DEFAULT false`);
     await queryRunner.query(`ALTER TABLE "time_studies" ADD "analysis" jsonb`);
   }

@@ -7,19 +7,39 @@ export class TeamAndSharing1796216390870 implements MigrationInterface {
   name = 'TeamAndSharing1796216390870';
 
   public async up(queryRunner: QueryRunner): Promise<void> {
-    await queryRunner.query(`CREATE TABLE "invitations" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "organisation_id" uuid NOT NULL, "email" text NOT NULL, "role" text NOT NULL, "token_hash" text NOT NULL, "invited_by_id" uuid, "expires_at" TIMESTAMP WITH TIME ZONE NOT NULL, "sent_at" TIMESTAMP WITH TIME ZONE NOT NULL, "accepted_at" TIMESTAMP WITH TIME ZONE, "revoked_at" TIMESTAMP WITH TIME ZONE, "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), CONSTRAINT "UQ_872ac94a64b3d44fc4b554780cd" UNIQUE ("token_hash"), CONSTRAINT "CHK_invitations_role" CHECK (role IN ('owner', 'engineer', 'viewer')), CONSTRAINT "PK_5dec98cfdfd562e4ad3648bbb07" PRIMARY KEY ("id"))`);
-    await queryRunner.query(`CREATE INDEX "IDX_invitations_organisation_created" ON "invitations"  ("organisation_id", "created_at") `);
-    await queryRunner.query(`CREATE TABLE "one_time_tokens" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "purpose" text NOT NULL, "token_hash" text NOT NULL, "email" text NOT NULL, "user_id" uuid, "payload" jsonb NOT NULL DEFAULT '{}', "expires_at" TIMESTAMP WITH TIME ZONE NOT NULL, "used_at" TIMESTAMP WITH TIME ZONE, "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), CONSTRAINT "UQ_22e595d22f108ce4f2843e043ae" UNIQUE ("token_hash"), CONSTRAINT "CHK_one_time_tokens_purpose" CHECK (purpose IN ('password-reset', 'sign-up')), CONSTRAINT "PK_8e470cc9ffc1b2afa054304db17" PRIMARY KEY ("id"))`);
-    await queryRunner.query(`CREATE INDEX "IDX_one_time_tokens_email_created" ON "one_time_tokens"  ("email", "created_at") `);
-    await queryRunner.query(`CREATE TABLE "share_links" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "organisation_id" uuid NOT NULL, "kind" text NOT NULL, "subject_id" uuid NOT NULL, "token_hash" text NOT NULL, "created_by_id" uuid, "expires_at" TIMESTAMP WITH TIME ZONE NOT NULL, "revoked_at" TIMESTAMP WITH TIME ZONE, "last_opened_at" TIMESTAMP WITH TIME ZONE, "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), CONSTRAINT "UQ_9e5c29ce5b3cab482e85d7f8138" UNIQUE ("token_hash"), CONSTRAINT "CHK_share_links_kind" CHECK (kind IN ('run')), CONSTRAINT "PK_70320b79ecd8acab96419fcdd6d" PRIMARY KEY ("id"))`);
+    await queryRunner.query(
+      `CREATE TABLE "invitations" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "organisation_id" uuid NOT NULL, "email" text NOT NULL, "role" text NOT NULL, "token_hash" text NOT NULL, "invited_by_id" uuid, "expires_at" TIMESTAMP WITH TIME ZONE NOT NULL, "sent_at" TIMESTAMP WITH TIME ZONE NOT NULL, "accepted_at" TIMESTAMP WITH TIME ZONE, "revoked_at" TIMESTAMP WITH TIME ZONE, "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), CONSTRAINT "UQ_872ac94a64b3d44fc4b554780cd" UNIQUE ("token_hash"), CONSTRAINT "CHK_invitations_role" CHECK (role IN ('owner', 'engineer', 'viewer')), CONSTRAINT "PK_5dec98cfdfd562e4ad3648bbb07" PRIMARY KEY ("id"))`,
+    );
+    await queryRunner.query(
+      `CREATE INDEX "IDX_invitations_organisation_created" ON "invitations"  ("organisation_id", "created_at") `,
+    );
+    await queryRunner.query(
+      `CREATE TABLE "one_time_tokens" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "purpose" text NOT NULL, "token_hash" text NOT NULL, "email" text NOT NULL, "user_id" uuid, "payload" jsonb NOT NULL DEFAULT '{}', "expires_at" TIMESTAMP WITH TIME ZONE NOT NULL, "used_at" TIMESTAMP WITH TIME ZONE, "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), CONSTRAINT "UQ_22e595d22f108ce4f2843e043ae" UNIQUE ("token_hash"), CONSTRAINT "CHK_one_time_tokens_purpose" CHECK (purpose IN ('password-reset', 'sign-up')), CONSTRAINT "PK_8e470cc9ffc1b2afa054304db17" PRIMARY KEY ("id"))`,
+    );
+    await queryRunner.query(
+      `CREATE INDEX "IDX_one_time_tokens_email_created" ON "one_time_tokens"  ("email", "created_at") `,
+    );
+    await queryRunner.query(
+      `CREATE TABLE "share_links" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "organisation_id" uuid NOT NULL, "kind" text NOT NULL, "subject_id" uuid NOT NULL, "token_hash" text NOT NULL, "created_by_id" uuid, "expires_at" TIMESTAMP WITH TIME ZONE NOT NULL, "revoked_at" TIMESTAMP WITH TIME ZONE, "last_opened_at" TIMESTAMP WITH TIME ZONE, "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), CONSTRAINT "UQ_9e5c29ce5b3cab482e85d7f8138" UNIQUE ("token_hash"), CONSTRAINT "CHK_share_links_kind" CHECK (kind IN ('run')), CONSTRAINT "PK_70320b79ecd8acab96419fcdd6d" PRIMARY KEY ("id"))`,
+    );
     await queryRunner.query(`CREATE INDEX "IDX_share_links_organisation" ON "share_links"  ("organisation_id") `);
     await queryRunner.query(`CREATE INDEX "IDX_share_links_subject" ON "share_links"  ("kind", "subject_id") `);
     await queryRunner.query(`ALTER TABLE "users" ADD "last_sign_in_at" TIMESTAMP WITH TIME ZONE`);
-    await queryRunner.query(`ALTER TABLE "invitations" ADD CONSTRAINT "FK_db8eb6da8f383cb3443217d8536" FOREIGN KEY ("organisation_id") REFERENCES "organisations"("id") ON DELETE CASCADE ON UPDATE NO ACTION`);
-    await queryRunner.query(`ALTER TABLE "invitations" ADD CONSTRAINT "FK_d4de0403dd012cf87b430af70ef" FOREIGN KEY ("invited_by_id") REFERENCES "users"("id") ON DELETE SET NULL ON UPDATE NO ACTION`);
-    await queryRunner.query(`ALTER TABLE "one_time_tokens" ADD CONSTRAINT "FK_0dc2deee64e514ad6f7e69504e1" FOREIGN KEY ("user_id") REFERENCES "users"("id") ON DELETE CASCADE ON UPDATE NO ACTION`);
-    await queryRunner.query(`ALTER TABLE "share_links" ADD CONSTRAINT "FK_469481fc34ca0c5c739c21507d5" FOREIGN KEY ("organisation_id") REFERENCES "organisations"("id") ON DELETE CASCADE ON UPDATE NO ACTION`);
-    await queryRunner.query(`ALTER TABLE "share_links" ADD CONSTRAINT "FK_e356d0e03d9b804f11b7f3391a8" FOREIGN KEY ("created_by_id") REFERENCES "users"("id") ON DELETE SET NULL ON UPDATE NO ACTION`);
+    await queryRunner.query(
+      `ALTER TABLE "invitations" ADD CONSTRAINT "FK_db8eb6da8f383cb3443217d8536" FOREIGN KEY ("organisation_id") REFERENCES "organisations"("id") ON DELETE CASCADE ON UPDATE NO ACTION`,
+    );
+    await queryRunner.query(
+      `ALTER TABLE "invitations" ADD CONSTRAINT "FK_d4de0403dd012cf87b430af70ef" FOREIGN KEY ("invited_by_id") REFERENCES "users"("id") ON DELETE SET NULL ON UPDATE NO ACTION`,
+    );
+    await queryRunner.query(
+      `ALTER TABLE "one_time_tokens" ADD CONSTRAINT "FK_0dc2deee64e514ad6f7e69504e1" FOREIGN KEY ("user_id") REFERENCES "users"("id") ON DELETE CASCADE ON UPDATE NO ACTION`,
+    );
+    await queryRunner.query(
+      `ALTER TABLE "share_links" ADD CONSTRAINT "FK_469481fc34ca0c5c739c21507d5" FOREIGN KEY ("organisation_id") REFERENCES "organisations"("id") ON DELETE CASCADE ON UPDATE NO ACTION`,
+    );
+    await queryRunner.query(
+      `ALTER TABLE "share_links" ADD CONSTRAINT "FK_e356d0e03d9b804f11b7f3391a8" FOREIGN KEY ("created_by_id") REFERENCES "users"("id") ON DELETE SET NULL ON UPDATE NO ACTION`,
+    );
   }
 
   public async down(queryRunner: QueryRunner): Promise<void> {

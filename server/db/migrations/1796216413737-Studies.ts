@@ -4,38 +4,57 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
 
 export class Studies1796216413737 implements MigrationInterface {
-    name = 'Studies1796216413737';
+  name = 'Studies1796216413737';
 
-    public async up(queryRunner: QueryRunner): Promise<void> {
-        await queryRunner.query(`CREATE TABLE "studies" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "created_by_id" uuid, "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), "updated_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), "project_id" uuid NOT NULL, "revision_id" uuid NOT NULL, "name" text NOT NULL, "kind" text NOT NULL, "settings" jsonb NOT NULL, "common_random_numbers" boolean NOT NULL, "block_size" integer NOT NULL, "reduction" double precision, "axes" jsonb NOT NULL, "status" text NOT NULL, "point_count" integer NOT NULL, "job_count" integer NOT NULL, CONSTRAINT "PK_b100ff0c4a0ad02a9c2270d45b6" PRIMARY KEY ("id"))`);
-        await queryRunner.query(`CREATE INDEX "IDX_studies_created_by" ON "studies"  ("created_by_id") `);
-        await queryRunner.query(`CREATE INDEX "IDX_studies_revision" ON "studies"  ("revision_id") `);
-        await queryRunner.query(`CREATE INDEX "IDX_studies_project_created" ON "studies"  ("project_id", "created_at") `);
-        await queryRunner.query(`CREATE TABLE "study_job_results" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "created_by_id" uuid, "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), "study_id" uuid NOT NULL, "point_index" integer NOT NULL, "first_replication" integer NOT NULL, "replication_count" integer NOT NULL, "outcome" text NOT NULL, "message" text, "engine_version" text, "figures" jsonb NOT NULL, "summaries" jsonb, "events" jsonb, CONSTRAINT "UQ_study_job_results_job" UNIQUE ("study_id", "point_index", "first_replication"), CONSTRAINT "PK_dba45fea37ba4073b73120f1407" PRIMARY KEY ("id"))`);
-        await queryRunner.query(`CREATE TABLE "study_points" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "study_id" uuid NOT NULL, "index" integer NOT NULL, "revision_id" uuid NOT NULL, "label" text NOT NULL, "changes" jsonb NOT NULL, CONSTRAINT "UQ_study_points_study_index" UNIQUE ("study_id", "index"), CONSTRAINT "PK_609aacd72e8040dbb7d0f8ee3f1" PRIMARY KEY ("id"))`);
-        await queryRunner.query(`ALTER TABLE "studies" ADD CONSTRAINT "FK_ee54dd325b02c77f11b9ae290fb" FOREIGN KEY ("created_by_id") REFERENCES "users"("id") ON DELETE SET NULL ON UPDATE NO ACTION`);
-        await queryRunner.query(`ALTER TABLE "studies" ADD CONSTRAINT "FK_85e360590ffcda0eaa05d3a7143" FOREIGN KEY ("project_id") REFERENCES "projects"("id") ON DELETE CASCADE ON UPDATE NO ACTION`);
-        await queryRunner.query(`ALTER TABLE "studies" ADD CONSTRAINT "FK_56e99de2ceb8e27584c6bc50bb2" FOREIGN KEY ("revision_id") REFERENCES "scenario_revisions"("id") ON DELETE CASCADE ON UPDATE NO ACTION`);
-        await queryRunner.query(`ALTER TABLE "study_job_results" ADD CONSTRAINT "FK_2a7362dc2caa640ed2b12afa98b" FOREIGN KEY ("created_by_id") REFERENCES "users"("id") ON DELETE SET NULL ON UPDATE NO ACTION`);
-        await queryRunner.query(`ALTER TABLE "study_job_results" ADD CONSTRAINT "FK_83d5547b7704ff3b17d4c95708c" FOREIGN KEY ("study_id") REFERENCES "studies"("id") ON DELETE CASCADE ON UPDATE NO ACTION`);
-        await queryRunner.query(`ALTER TABLE "study_points" ADD CONSTRAINT "FK_7adf06ebea0dafd208eb871e504" FOREIGN KEY ("study_id") REFERENCES "studies"("id") ON DELETE CASCADE ON UPDATE NO ACTION`);
-        await queryRunner.query(`ALTER TABLE "study_points" ADD CONSTRAINT "FK_a301b7ac305e8b8d0b753964c54" FOREIGN KEY ("revision_id") REFERENCES "scenario_revisions"("id") ON DELETE CASCADE ON UPDATE NO ACTION`);
-    }
+  public async up(queryRunner: QueryRunner): Promise<void> {
+    await queryRunner.query(
+      `CREATE TABLE "studies" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "created_by_id" uuid, "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), "updated_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), "project_id" uuid NOT NULL, "revision_id" uuid NOT NULL, "name" text NOT NULL, "kind" text NOT NULL, "settings" jsonb NOT NULL, "common_random_numbers" boolean NOT NULL, "block_size" integer NOT NULL, "reduction" double precision, "axes" jsonb NOT NULL, "status" text NOT NULL, "point_count" integer NOT NULL, "job_count" integer NOT NULL, CONSTRAINT "PK_b100ff0c4a0ad02a9c2270d45b6" PRIMARY KEY ("id"))`,
+    );
+    await queryRunner.query(`CREATE INDEX "IDX_studies_created_by" ON "studies"  ("created_by_id") `);
+    await queryRunner.query(`CREATE INDEX "IDX_studies_revision" ON "studies"  ("revision_id") `);
+    await queryRunner.query(`CREATE INDEX "IDX_studies_project_created" ON "studies"  ("project_id", "created_at") `);
+    await queryRunner.query(
+      `CREATE TABLE "study_job_results" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "created_by_id" uuid, "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), "study_id" uuid NOT NULL, "point_index" integer NOT NULL, "first_replication" integer NOT NULL, "replication_count" integer NOT NULL, "outcome" text NOT NULL, "message" text, "engine_version" text, "figures" jsonb NOT NULL, "summaries" jsonb, "events" jsonb, CONSTRAINT "UQ_study_job_results_job" UNIQUE ("study_id", "point_index", "first_replication"), CONSTRAINT "PK_dba45fea37ba4073b73120f1407" PRIMARY KEY ("id"))`,
+    );
+    await queryRunner.query(
+      `CREATE TABLE "study_points" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "study_id" uuid NOT NULL, "index" integer NOT NULL, "revision_id" uuid NOT NULL, "label" text NOT NULL, "changes" jsonb NOT NULL, CONSTRAINT "UQ_study_points_study_index" UNIQUE ("study_id", "index"), CONSTRAINT "PK_609aacd72e8040dbb7d0f8ee3f1" PRIMARY KEY ("id"))`,
+    );
+    await queryRunner.query(
+      `ALTER TABLE "studies" ADD CONSTRAINT "FK_ee54dd325b02c77f11b9ae290fb" FOREIGN KEY ("created_by_id") REFERENCES "users"("id") ON DELETE SET NULL ON UPDATE NO ACTION`,
+    );
+    await queryRunner.query(
+      `ALTER TABLE "studies" ADD CONSTRAINT "FK_85e360590ffcda0eaa05d3a7143" FOREIGN KEY ("project_id") REFERENCES "projects"("id") ON DELETE CASCADE ON UPDATE NO ACTION`,
+    );
+    await queryRunner.query(
+      `ALTER TABLE "studies" ADD CONSTRAINT "FK_56e99de2ceb8e27584c6bc50bb2" FOREIGN KEY ("revision_id") REFERENCES "scenario_revisions"("id") ON DELETE CASCADE ON UPDATE NO ACTION`,
+    );
+    await queryRunner.query(
+      `ALTER TABLE "study_job_results" ADD CONSTRAINT "FK_2a7362dc2caa640ed2b12afa98b" FOREIGN KEY ("created_by_id") REFERENCES "users"("id") ON DELETE SET NULL ON UPDATE NO ACTION`,
+    );
+    await queryRunner.query(
+      `ALTER TABLE "study_job_results" ADD CONSTRAINT "FK_83d5547b7704ff3b17d4c95708c" FOREIGN KEY ("study_id") REFERENCES "studies"("id") ON DELETE CASCADE ON UPDATE NO ACTION`,
+    );
+    await queryRunner.query(
+      `ALTER TABLE "study_points" ADD CONSTRAINT "FK_7adf06ebea0dafd208eb871e504" FOREIGN KEY ("study_id") REFERENCES "studies"("id") ON DELETE CASCADE ON UPDATE NO ACTION`,
+    );
+    await queryRunner.query(
+      `ALTER TABLE "study_points" ADD CONSTRAINT "FK_a301b7ac305e8b8d0b753964c54" FOREIGN KEY ("revision_id") REFERENCES "scenario_revisions"("id") ON DELETE CASCADE ON UPDATE NO ACTION`,
+    );
+  }
 
-    public async down(queryRunner: QueryRunner): Promise<void> {
-        await queryRunner.query(`ALTER TABLE "study_points" DROP CONSTRAINT "FK_a301b7ac305e8b8d0b753964c54"`);
-        await queryRunner.query(`ALTER TABLE "study_points" DROP CONSTRAINT "FK_7adf06ebea0dafd208eb871e504"`);
-        await queryRunner.query(`ALTER TABLE "study_job_results" DROP CONSTRAINT "FK_83d5547b7704ff3b17d4c95708c"`);
-        await queryRunner.query(`ALTER TABLE "study_job_results" DROP CONSTRAINT "FK_2a7362dc2caa640ed2b12afa98b"`);
-        await queryRunner.query(`ALTER TABLE "studies" DROP CONSTRAINT "FK_56e99de2ceb8e27584c6bc50bb2"`);
-        await queryRunner.query(`ALTER TABLE "studies" DROP CONSTRAINT "FK_85e360590ffcda0eaa05d3a7143"`);
-        await queryRunner.query(`ALTER TABLE "studies" DROP CONSTRAINT "FK_ee54dd325b02c77f11b9ae290fb"`);
-        await queryRunner.query(`DROP TABLE "study_points"`);
-        await queryRunner.query(`DROP TABLE "study_job_results"`);
-        await queryRunner.query(`DROP INDEX "public"."IDX_studies_project_created"`);
-        await queryRunner.query(`DROP INDEX "public"."IDX_studies_revision"`);
-        await queryRunner.query(`DROP INDEX "public"."IDX_studies_created_by"`);
-        await queryRunner.query(`DROP TABLE "studies"`);
-    }
-
+  public async down(queryRunner: QueryRunner): Promise<void> {
+    await queryRunner.query(`ALTER TABLE "study_points" DROP CONSTRAINT "FK_a301b7ac305e8b8d0b753964c54"`);
+    await queryRunner.query(`ALTER TABLE "study_points" DROP CONSTRAINT "FK_7adf06ebea0dafd208eb871e504"`);
+    await queryRunner.query(`ALTER TABLE "study_job_results" DROP CONSTRAINT "FK_83d5547b7704ff3b17d4c95708c"`);
+    await queryRunner.query(`ALTER TABLE "study_job_results" DROP CONSTRAINT "FK_2a7362dc2caa640ed2b12afa98b"`);
+    await queryRunner.query(`ALTER TABLE "studies" DROP CONSTRAINT "FK_56e99de2ceb8e27584c6bc50bb2"`);
+    await queryRunner.query(`ALTER TABLE "studies" DROP CONSTRAINT "FK_85e360590ffcda0eaa05d3a7143"`);
+    await queryRunner.query(`ALTER TABLE "studies" DROP CONSTRAINT "FK_ee54dd325b02c77f11b9ae290fb"`);
+    await queryRunner.query(`DROP TABLE "study_points"`);
+    await queryRunner.query(`DROP TABLE "study_job_results"`);
+    await queryRunner.query(`DROP INDEX "public"."IDX_studies_project_created"`);
+    await queryRunner.query(`DROP INDEX "public"."IDX_studies_revision"`);
+    await queryRunner.query(`DROP INDEX "public"."IDX_studies_created_by"`);
+    await queryRunner.query(`DROP TABLE "studies"`);
+  }
 }

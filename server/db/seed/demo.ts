@@ -23,8 +23,16 @@ export const DEMO_ACCOUNTS: ReadonlyArray<{ email: string; name: string; role: R
 ];
 
 const DEMO_SCENARIOS = [
-  { example: stackedLoop, name: 'Stacked loop', description: 'Work deck above, return deck below, an elevator at each end.' },
-  { example: sideBySideLoop, name: 'Side-by-side loop', description: 'Work and return lanes next to each other, joined at both ends.' },
+  {
+    example: stackedLoop,
+    name: 'Stacked loop',
+    description: 'Work deck above, return deck below, an elevator at each end.',
+  },
+  {
+    example: sideBySideLoop,
+    name: 'Side-by-side loop',
+    description: 'Work and return lanes next to each other, joined at both ends.',
+  },
 ];
 
 function parseExample(name: string, example: unknown) {
@@ -37,7 +45,10 @@ function parseExample(name: string, example: unknown) {
 }
 
 /** Seeds the demo unless the configuration turns it off (LANEWRIGHT_DEMO=off). */
-export async function seedDemo(ds: DataSource, config: Pick<ServerConfig, 'LANEWRIGHT_DEMO'> = loadConfig()): Promise<void> {
+export async function seedDemo(
+  ds: DataSource,
+  config: Pick<ServerConfig, 'LANEWRIGHT_DEMO'> = loadConfig(),
+): Promise<void> {
   if (config.LANEWRIGHT_DEMO === 'off') return;
   if (await ds.getRepository(OrganisationEntity).existsBy({ id: DEMO_ORGANISATION_ID })) return;
   const documents = DEMO_SCENARIOS.map((s) => ({ ...s, document: parseExample(s.name, s.example) }));
@@ -50,25 +61,46 @@ export async function seedDemo(ds: DataSource, config: Pick<ServerConfig, 'LANEW
     const users = manager.getRepository(UserEntity);
     const taken = await users.findBy(DEMO_ACCOUNTS.map((a) => ({ email: a.email })));
     if (taken.length > 0) {
-      throw new Error(`cannot seed the demo: ${taken.map((u) => u.email).join(', ')} already belong(s) to other accounts; set LANEWRIGHT_DEMO=off`);
+      throw new Error(
+        `cannot seed the demo: ${taken.map((u) => u.email).join(', ')} already belong(s) to other accounts; set LANEWRIGHT_DEMO=off`,
+      );
     }
-    const organisation = await manager.getRepository(OrganisationEntity).save({ id: DEMO_ORGANISATION_ID, name: 'Demo valve-cartridge plant' });
+    const organisation = await manager
+      .getRepository(OrganisationEntity)
+      .save({ id: DEMO_ORGANISATION_ID, name: 'Demo valve-cartridge plant' });
     const accounts = [];
     for (const account of DEMO_ACCOUNTS) {
       const user = await users.save({ email: account.email, name: account.name, passwordHash });
-      await manager.getRepository(MembershipEntity).insert({ organisationId: organisation.id, userId: user.id, role: account.role });
+      await manager
+        .getRepository(MembershipEntity)
+        .insert({ organisationId: organisation.id, userId: user.id, role: account.role });
       accounts.push(user);
     }
     const engineer = accounts[1];
     const project = await manager.getRepository(ProjectEntity).save({
       organisationId: organisation.id,
       name: 'Cartridge line layout study',
-      description: 'Invented demo: which layout reaches the takt for the VC-20 valve cartridge with the fewest carriers.',
+      description:
+        'Invented demo: which layout reaches the takt for the VC-20 valve cartridge with the fewest carriers.',
       createdById: engineer.id,
     });
     for (const { name, description, document } of documents) {
-      await createScenarioWithFirstRevision(manager, { projectId: project.id, name, description, document, message: 'Demo layout', createdById: engineer.id });
+      await createScenarioWithFirstRevision(manager, {
+        projectId: project.id,
+        name,
+        description,
+        document,
+        message: 'Demo layout',
+        createdById: engineer.id,
+      });
     }
-    await recordAudit(manager, { organisationId: organisation.id, actorId: null, action: 'create', entity: 'organisation', entityId: organisation.id, detail: { seeded: 'demo' } });
+    await recordAudit(manager, {
+      organisationId: organisation.id,
+      actorId: null,
+      action: 'create',
+      entity: 'organisation',
+      entityId: organisation.id,
+      detail: { seeded: 'demo' },
+    });
   });
 }

@@ -24,7 +24,11 @@ export function AppFrame() {
           {session && <UserMenu session={session} />}
         </div>
       </header>
-      <main id="main" tabIndex={-1} className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 focus:outline-none sm:px-6 sm:py-10 print:max-w-none print:p-0">
+      <main
+        id="main"
+        tabIndex={-1}
+        className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 focus:outline-none sm:px-6 sm:py-10 print:max-w-none print:p-0"
+      >
         <Outlet />
       </main>
       <SafetyNote />

@@ -4,7 +4,8 @@ import { NavLink } from 'react-router-dom';
 import type { Session } from '../../lib/session/session-context';
 import { MailboxLink } from '../../features/mailbox/components/mailbox-link';
 
-const linkClass = ({ isActive }: { isActive: boolean }) => `rounded px-1 text-paper underline-offset-4 hover:underline ${isActive ? 'underline' : ''}`;
+const linkClass = ({ isActive }: { isActive: boolean }) =>
+  `rounded px-1 text-paper underline-offset-4 hover:underline ${isActive ? 'underline' : ''}`;
 
 export function TeamNav({ session }: { session: Session | null }) {
   const membership = session?.activeMembership;

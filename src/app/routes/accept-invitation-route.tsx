@@ -18,7 +18,11 @@ export function AcceptInvitationRoute() {
   const navigate = useNavigate();
   const location = useLocation();
   return (
-    <AuthPanel title="You are invited" intro="Join an organisation on Lanewright to plan its lines together." footer="Nobody is added to an organisation until they accept.">
+    <AuthPanel
+      title="You are invited"
+      intro="Join an organisation on Lanewright to plan its lines together."
+      footer="Nobody is added to an organisation until they accept."
+    >
       {me.isPending ? null : (
         <AcceptInvitation
           token={token}

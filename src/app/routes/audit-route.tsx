@@ -17,7 +17,12 @@ export function AuditRoute() {
   const membership = useSession().membershipFor(organisationId);
   if (!membership) return <NotFoundMessage what="organisation" />;
   if (membership.role !== 'owner') {
-    return <EmptyState title="Owners only">The audit trail of {membership.organisationName} is open to its owners. Ask one of them if you need something from it.</EmptyState>;
+    return (
+      <EmptyState title="Owners only">
+        The audit trail of {membership.organisationName} is open to its owners. Ask one of them if you need something
+        from it.
+      </EmptyState>
+    );
   }
   return <OwnersAudit organisationId={organisationId} organisationName={membership.organisationName} />;
 }

@@ -20,7 +20,8 @@ import { usePlaybackRecording } from '../../features/runs/simulation/hooks/use-p
 type FieldErrors = Partial<Record<'replication' | 'startMinutes' | 'windowMinutes', string>>;
 
 /** Reads a number typed with either decimal separator; anything else becomes NaN and a message. */
-const typed = (value: FormDataEntryValue | null) => (typeof value === 'string' && value.trim() !== '' ? Number(value.trim().replace(',', '.')) : NaN);
+const typed = (value: FormDataEntryValue | null) =>
+  typeof value === 'string' && value.trim() !== '' ? Number(value.trim().replace(',', '.')) : NaN;
 
 export function PlaybackRoute() {
   const { runId = '' } = useParams();
@@ -38,11 +39,21 @@ export function PlaybackRoute() {
     event.preventDefault();
     if (!revision.data) return;
     const form = new FormData(event.currentTarget);
-    const input = { replication: typed(form.get('replication')) - 1, startMinutes: typed(form.get('startMinutes')), windowMinutes: typed(form.get('windowMinutes')) };
+    const input = {
+      replication: typed(form.get('replication')) - 1,
+      startMinutes: typed(form.get('startMinutes')),
+      windowMinutes: typed(form.get('windowMinutes')),
+    };
     const parsed = playbackRequestSchema.safeParse(input);
     const next: FieldErrors = {};
-    if (!parsed.success) for (const issue of parsed.error.issues) next[issue.path[0] as keyof FieldErrors] ??= issue.message.replace(/replication must be from 0 to \d+/, `replication must be from 1 to ${settings.replications}`);
-    else if (parsed.data.replication >= settings.replications) next.replication = `replication must be from 1 to ${settings.replications}`;
+    if (!parsed.success)
+      for (const issue of parsed.error.issues)
+        next[issue.path[0] as keyof FieldErrors] ??= issue.message.replace(
+          /replication must be from 0 to \d+/,
+          `replication must be from 1 to ${settings.replications}`,
+        );
+    else if (parsed.data.replication >= settings.replications)
+      next.replication = `replication must be from 1 to ${settings.replications}`;
     setErrors(next);
     if (parsed.success && Object.keys(next).length === 0) void record(revision.data.document, settings, parsed.data);
   };
@@ -51,14 +62,37 @@ export function PlaybackRoute() {
     <div className="flex flex-col gap-8">
       <PageHeader
         title={`Playback of ${data.name}`}
-        trail={<Breadcrumbs items={[{ label: 'Projects', to: '/' }, { label: data.scenarioName, to: `/scenarios/${data.scenarioId}` }, { label: 'Run', to: `/runs/${data.id}` }, { label: 'Playback' }]} />}
+        trail={
+          <Breadcrumbs
+            items={[
+              { label: 'Projects', to: '/' },
+              { label: data.scenarioName, to: `/scenarios/${data.scenarioId}` },
+              { label: 'Run', to: `/runs/${data.id}` },
+              { label: 'Playback' },
+            ]}
+          />
+        }
         description="Replays one replication of this run in your browser, from the same revision, seed and settings, and shows a window of it on the layout."
       />
       <Card aria-labelledby="playback-request-title" className="flex flex-col gap-4">
         <CardTitle id="playback-request-title">Window to watch</CardTitle>
         <form className="grid grid-cols-1 gap-4 sm:grid-cols-4 sm:items-end" onSubmit={onSubmit} noValidate>
-          <TextField label="Replication" name="replication" inputMode="numeric" defaultValue="1" hint={`1 to ${settings.replications}`} error={errors.replication} />
-          <TextField label="Start (minutes)" name="startMinutes" inputMode="decimal" defaultValue={String(settings.warmupMinutes)} hint="from the start, warm-up included" error={errors.startMinutes} />
+          <TextField
+            label="Replication"
+            name="replication"
+            inputMode="numeric"
+            defaultValue="1"
+            hint={`1 to ${settings.replications}`}
+            error={errors.replication}
+          />
+          <TextField
+            label="Start (minutes)"
+            name="startMinutes"
+            inputMode="decimal"
+            defaultValue={String(settings.warmupMinutes)}
+            hint="from the start, warm-up included"
+            error={errors.startMinutes}
+          />
           <TextField
             label="Length (minutes)"
             name="windowMinutes"
@@ -68,7 +102,13 @@ export function PlaybackRoute() {
             error={errors.windowMinutes}
           />
           <div className="flex gap-2 pb-7">
-            <Button type="submit" pending={state.status === 'recording'} pendingLabel="Recording…" disabled={!revision.data} data-playback-record>
+            <Button
+              type="submit"
+              pending={state.status === 'recording'}
+              pendingLabel="Recording…"
+              disabled={!revision.data}
+              data-playback-record
+            >
               Record window
             </Button>
             {state.status === 'recording' && (
@@ -88,13 +128,20 @@ export function PlaybackRoute() {
             {state.issues.length > 0 ? state.issues.map((i) => i.message).join('; ') : state.message}
           </p>
         )}
-        {revision.isError && <LoadError what="the scenario revision of this run" error={revision.error} onRetry={() => void revision.refetch()} />}
+        {revision.isError && (
+          <LoadError
+            what="the scenario revision of this run"
+            error={revision.error}
+            onRetry={() => void revision.refetch()}
+          />
+        )}
       </Card>
       {state.status === 'ready' && revision.data && (
         <Card aria-labelledby="playback-title" className="flex flex-col gap-4">
           <CardTitle id="playback-title">Replication {state.trace.replication + 1}</CardTitle>
           <p className="max-w-prose text-sm text-ink-soft">
-            Carriers are drawn where the simulation had them, moving at an even speed between the stops it recorded (acceleration and braking are not shown). Stations are ringed in the colour of their state.
+            Carriers are drawn where the simulation had them, moving at an even speed between the stops it recorded
+            (acceleration and braking are not shown). Stations are ringed in the colour of their state.
           </p>
           <PlaybackPlayer document={revision.data.document} trace={state.trace} />
         </Card>

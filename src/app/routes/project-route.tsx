@@ -46,7 +46,9 @@ export function ProjectRoute() {
           <>
             <ButtonLink to={`/projects/${projectId}/runs`}>All runs</ButtonLink>
             <ButtonLink to={`/projects/${projectId}/studies`}>Studies</ButtonLink>
-            {scenarios.data && scenarios.data.length > 1 && <ButtonLink to={`/projects/${projectId}/compare`}>Compare layouts</ButtonLink>}
+            {scenarios.data && scenarios.data.length > 1 && (
+              <ButtonLink to={`/projects/${projectId}/compare`}>Compare layouts</ButtonLink>
+            )}
             {scenarios.data && scenarios.data.length > 0 ? startButton : null}
           </>
         }
@@ -66,7 +68,9 @@ export function ProjectRoute() {
           Scenarios
         </h2>
         {scenarios.isPending && <PageSpinner label="Loading scenarios…" />}
-        {scenarios.isError && <LoadError what="the scenarios" error={scenarios.error} onRetry={() => void scenarios.refetch()} />}
+        {scenarios.isError && (
+          <LoadError what="the scenarios" error={scenarios.error} onRetry={() => void scenarios.refetch()} />
+        )}
         {scenarios.data && scenarios.data.length === 0 && !creating && (
           <EmptyState title="No scenarios yet" action={startButton}>
             {mayEdit

@@ -22,10 +22,22 @@ export function ProjectRunsRoute() {
     <div className="flex flex-col gap-8">
       <PageHeader
         title={`Runs of ${project.data.name}`}
-        trail={<Breadcrumbs items={[{ label: 'Projects', to: '/' }, { label: project.data.name, to: `/projects/${projectId}` }, { label: 'Runs' }]} />}
+        trail={
+          <Breadcrumbs
+            items={[
+              { label: 'Projects', to: '/' },
+              { label: project.data.name, to: `/projects/${projectId}` },
+              { label: 'Runs' },
+            ]}
+          />
+        }
         description="Every saved run of this project's scenarios. Sort by any column; filter to compare like with like."
       />
-      <RunListSection scope={{ projectId }} organisationId={project.data.organisationId} caption="Runs in this project" />
+      <RunListSection
+        scope={{ projectId }}
+        organisationId={project.data.organisationId}
+        caption="Runs in this project"
+      />
     </div>
   );
 }

@@ -27,7 +27,12 @@ export function ProjectStudiesRoute() {
   const [creating, setCreating] = useState(false);
   const [picked, setPicked] = useState('');
   const navigate = useNavigate();
-  const choices = (scenarios.data ?? []).map((s) => ({ id: s.id, name: s.name, revisionId: s.latestRevision.id, revisionNumber: s.latestRevision.number }));
+  const choices = (scenarios.data ?? []).map((s) => ({
+    id: s.id,
+    name: s.name,
+    revisionId: s.latestRevision.id,
+    revisionNumber: s.latestRevision.number,
+  }));
   const chosen = choices.find((c) => c.id === picked) ?? choices[0];
 
   if (project.isPending) return <PageSpinner label="Loading the project…" />;
@@ -35,7 +40,9 @@ export function ProjectStudiesRoute() {
     if (isApiRequestError(project.error) && project.error.status === 404) return <NotFoundMessage what="project" />;
     return <LoadError what="the project" error={project.error} onRetry={() => void project.refetch()} />;
   }
-  const startButton = mayEdit && !creating && choices.length > 0 && <Button onClick={() => setCreating(true)}>New study</Button>;
+  const startButton = mayEdit && !creating && choices.length > 0 && (
+    <Button onClick={() => setCreating(true)}>New study</Button>
+  );
 
   return (
     <div className="flex flex-col gap-8">
@@ -52,7 +59,14 @@ export function ProjectStudiesRoute() {
       />
       {creating && chosen && (
         <TitledCard title="New study" className="max-w-3xl">
-          <NewStudy projectId={projectId} choices={choices} chosen={chosen} onPick={setPicked} onCancel={() => setCreating(false)} onCreated={(id) => navigate(`/studies/${id}`)} />
+          <NewStudy
+            projectId={projectId}
+            choices={choices}
+            chosen={chosen}
+            onPick={setPicked}
+            onCancel={() => setCreating(false)}
+            onCreated={(id) => navigate(`/studies/${id}`)}
+          />
         </TitledCard>
       )}
       {studies.isPending && <PageSpinner label="Loading studies…" />}

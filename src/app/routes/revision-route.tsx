@@ -76,17 +76,24 @@ export function RevisionRoute() {
         description={
           <p className="text-sm">
             Saved by {formatPerson(revision.data.createdBy)} on {formatDateTime(revision.data.createdAt)}
-            {revision.data.message ? `: “${revision.data.message}”` : ''}. {isLatest ? 'This is the latest revision.' : `The latest is revision ${latestNumber}.`}
+            {revision.data.message ? `: “${revision.data.message}”` : ''}.{' '}
+            {isLatest ? 'This is the latest revision.' : `The latest is revision ${latestNumber}.`}
           </p>
         }
         actions={
-          <Link to={`/scenarios/${scenarioId}`} className="text-sm font-semibold text-accent-strong underline underline-offset-4">
+          <Link
+            to={`/scenarios/${scenarioId}`}
+            className="text-sm font-semibold text-accent-strong underline underline-offset-4"
+          >
             Back to the scenario
           </Link>
         }
       />
       <Card aria-label="Revision actions" className="flex flex-col gap-3">
-        <p className="text-sm text-ink-soft">Saved revisions never change. Restoring saves this document again as a new revision with the note “Restored revision {revisionNumber}”.</p>
+        <p className="text-sm text-ink-soft">
+          Saved revisions never change. Restoring saves this document again as a new revision with the note “Restored
+          revision {revisionNumber}”.
+        </p>
         {error && <ErrorBanner title="Not restored">{error}</ErrorBanner>}
         <div className="flex flex-wrap gap-3">
           {mayEdit && !isLatest && (

@@ -10,5 +10,7 @@ function RunSharing({ runId, organisationId }: { runId: string; organisationId: 
 }
 
 export function RunPageRoute() {
-  return <RunRoute renderAside={(run, organisationId) => <RunSharing runId={run.id} organisationId={organisationId} />} />;
+  return (
+    <RunRoute renderAside={(run, organisationId) => <RunSharing runId={run.id} organisationId={organisationId} />} />
+  );
 }

@@ -36,7 +36,10 @@ export function RunRoute({ renderAside }: RunRouteProps = {}) {
   const project = useProject(scenario.data?.projectId);
   const revision = useScenarioRevision(scenarioId, run.data?.revisionNumber);
   const { mayChange } = useRunPermissions(project.data?.organisationId);
-  const stepNames = useMemo(() => (revision.data ? new Map(revision.data.document.steps.map((step) => [step.id, step.name])) : undefined), [revision.data]);
+  const stepNames = useMemo(
+    () => (revision.data ? new Map(revision.data.document.steps.map((step) => [step.id, step.name])) : undefined),
+    [revision.data],
+  );
 
   if (run.isPending) return <PageSpinner label="Loading the run…" />;
   if (run.isError) {
@@ -57,7 +60,14 @@ export function RunRoute({ renderAside }: RunRouteProps = {}) {
           <Breadcrumbs
             items={[
               { label: 'Projects', to: '/' },
-              ...(scenario.data ? [{ label: project.data ? `Runs of ${project.data.name}` : 'Project runs', to: `/projects/${scenario.data.projectId}/runs` }] : []),
+              ...(scenario.data
+                ? [
+                    {
+                      label: project.data ? `Runs of ${project.data.name}` : 'Project runs',
+                      to: `/projects/${scenario.data.projectId}/runs`,
+                    },
+                  ]
+                : []),
               { label: data.scenarioName, to: `/scenarios/${data.scenarioId}` },
               { label: 'Run' },
             ]}
@@ -69,7 +79,12 @@ export function RunRoute({ renderAside }: RunRouteProps = {}) {
             <ButtonLink variant="secondary" to={`/runs/${data.id}/playback`} data-watch-run>
               Watch the line run
             </ButtonLink>
-            <RunRowActions run={data} mayRerun={false} mayDelete={mayChange(data)} onDeleted={() => navigate(`/scenarios/${data.scenarioId}`, { replace: true })} />
+            <RunRowActions
+              run={data}
+              mayRerun={false}
+              mayDelete={mayChange(data)}
+              onDeleted={() => navigate(`/scenarios/${data.scenarioId}`, { replace: true })}
+            />
           </>
         }
       />
@@ -78,8 +93,15 @@ export function RunRoute({ renderAside }: RunRouteProps = {}) {
       {renderAside?.(data, project.data?.organisationId)}
       <Card aria-labelledby="exports-title" className="flex flex-col gap-3">
         <CardTitle id="exports-title">Exports</CardTitle>
-        <p className="text-sm text-ink-soft">Every table above has a CSV button, every chart PNG, SVG and CSV buttons in its corner.</p>
-        <ControlsExport document={revision.data?.document} loading={revision.isPending} failed={revision.isError} fileBase={fileBase} />
+        <p className="text-sm text-ink-soft">
+          Every table above has a CSV button, every chart PNG, SVG and CSV buttons in its corner.
+        </p>
+        <ControlsExport
+          document={revision.data?.document}
+          loading={revision.isPending}
+          failed={revision.isError}
+          fileBase={fileBase}
+        />
       </Card>
     </div>
   );

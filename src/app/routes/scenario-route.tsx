@@ -26,7 +26,8 @@ export function ScenarioRoute() {
   const { ready, mayEdit } = useEditPermission(organisationId);
   const [engineIssues, setEngineIssues] = useState<FieldIssue[]>([]);
 
-  if (!ready || scenario.isPending || (scenario.data && project.isPending)) return <PageSpinner label="Loading the scenario…" />;
+  if (!ready || scenario.isPending || (scenario.data && project.isPending))
+    return <PageSpinner label="Loading the scenario…" />;
   if (scenario.isError) {
     if (isApiRequestError(scenario.error) && scenario.error.status === 404) return <NotFoundMessage what="scenario" />;
     return <LoadError what="the scenario" error={scenario.error} onRetry={() => void scenario.refetch()} />;
@@ -58,9 +59,21 @@ export function ScenarioRoute() {
         }
       />
       <div>
-        <ScenarioWorkspace key={`${data.id}:${mayEdit}`} scenario={data} mayEdit={mayEdit} engineIssues={engineIssues} stationStudies={stationStudies} />
+        <ScenarioWorkspace
+          key={`${data.id}:${mayEdit}`}
+          scenario={data}
+          mayEdit={mayEdit}
+          engineIssues={engineIssues}
+          stationStudies={stationStudies}
+        />
       </div>
-      <RunPanel scenarioId={data.id} organisationId={organisationId} revision={{ id: latest.id, number: latest.number, document: data.document }} onScenarioIssues={setEngineIssues} openResultWhenSaved={false} />
+      <RunPanel
+        scenarioId={data.id}
+        organisationId={organisationId}
+        revision={{ id: latest.id, number: latest.number, document: data.document }}
+        onScenarioIssues={setEngineIssues}
+        openResultWhenSaved={false}
+      />
       <ScenarioRuns scenarioId={data.id} organisationId={organisationId} />
     </div>
   );

@@ -18,9 +18,7 @@ export function SharedRoute() {
   const fileBase = useMemo(() => (run ? `shared-run-${run.id.slice(0, 8)}` : 'shared'), [run]);
 
   if (!token) {
-    return (
-      <IncompleteLink from="the message you were sent" />
-    );
+    return <IncompleteLink from="the message you were sent" />;
   }
   if (view.isPending) return <PageSpinner label="Opening the shared view…" />;
   if (view.isError) {

@@ -29,7 +29,10 @@ export function StudyRoute() {
       <PageHeader
         title={study.data.name}
         trail={
-          <Link className="underline underline-offset-4 hover:text-ink" to={`/projects/${study.data.projectId}/studies`}>
+          <Link
+            className="underline underline-offset-4 hover:text-ink"
+            to={`/projects/${study.data.projectId}/studies`}
+          >
             ← All studies{project.data ? ` of ${project.data.name}` : ''}
           </Link>
         }
@@ -41,7 +44,15 @@ export function StudyRoute() {
 
 function StudyWithScenario({ study, mayRun }: { study: StudyDetail; mayRun: boolean }) {
   const revision = useScenarioRevision(study.scenarioId, study.revisionNumber);
-  if (revision.isError) return <LoadError what="the scenario revision" error={revision.error} onRetry={() => void revision.refetch()} />;
+  if (revision.isError)
+    return <LoadError what="the scenario revision" error={revision.error} onRetry={() => void revision.refetch()} />;
   if (revision.isPending) return <PageSpinner label="Loading the scenario…" />;
-  return <StudyView study={study} scenario={revision.data.document} documents={{ [study.revisionId]: revision.data.document }} mayRun={mayRun} />;
+  return (
+    <StudyView
+      study={study}
+      scenario={revision.data.document}
+      documents={{ [study.revisionId]: revision.data.document }}
+      mayRun={mayRun}
+    />
+  );
 }

@@ -11,7 +11,11 @@ export interface Tick {
 export const TICK_FONT = 12;
 export const AXIS_LABEL_FONT = 13;
 
-export function linearTicks(scale: ScaleLinear<number, number>, count: number, format: (value: number) => string = formatNumber): Tick[] {
+export function linearTicks(
+  scale: ScaleLinear<number, number>,
+  count: number,
+  format: (value: number) => string = formatNumber,
+): Tick[] {
   return scale.ticks(Math.max(2, Math.round(count))).map((value) => ({ position: scale(value), label: format(value) }));
 }
 
@@ -40,7 +44,13 @@ export function AxisBottom({ ticks, width, plotHeight, label, grid, tilt, labelO
           {grid && <line y2={-plotHeight} stroke={ink.faint} strokeOpacity={0.35} />}
           <line y2={5} stroke={ink.soft} />
           {tilt ? (
-            <text transform="translate(0,9) rotate(-35)" textAnchor="end" dy="0.35em" fontSize={TICK_FONT} fill={ink.soft}>
+            <text
+              transform="translate(0,9) rotate(-35)"
+              textAnchor="end"
+              dy="0.35em"
+              fontSize={TICK_FONT}
+              fill={ink.soft}
+            >
               {tick.label}
             </text>
           ) : (
@@ -50,7 +60,15 @@ export function AxisBottom({ ticks, width, plotHeight, label, grid, tilt, labelO
           )}
         </g>
       ))}
-      <text x={width / 2} y={labelOffset} dy="0.71em" textAnchor="middle" fontSize={AXIS_LABEL_FONT} fill={ink.DEFAULT} data-axis-label="x">
+      <text
+        x={width / 2}
+        y={labelOffset}
+        dy="0.71em"
+        textAnchor="middle"
+        fontSize={AXIS_LABEL_FONT}
+        fill={ink.DEFAULT}
+        data-axis-label="x"
+      >
         {label}
       </text>
     </g>

@@ -42,17 +42,34 @@ export function ChartExportMenu({ svgRef, fileBase, title, csv }: ChartExportMen
   return (
     <div className="flex flex-col items-end gap-1" data-chart-part="export-menu">
       <div className="flex gap-1">
-        <button type="button" className={BUTTON} aria-label={`Save ${title} as PNG`} onClick={withSvg((svg) => downloadPng(svg, fileBase))}>
+        <button
+          type="button"
+          className={BUTTON}
+          aria-label={`Save ${title} as PNG`}
+          onClick={withSvg((svg) => downloadPng(svg, fileBase))}
+        >
           PNG
         </button>
-        <button type="button" className={BUTTON} aria-label={`Save ${title} as SVG`} onClick={withSvg((svg) => downloadSvg(svg, fileBase))}>
+        <button
+          type="button"
+          className={BUTTON}
+          aria-label={`Save ${title} as SVG`}
+          onClick={withSvg((svg) => downloadSvg(svg, fileBase))}
+        >
           SVG
         </button>
         {csv && (
-          <button type="button" className={BUTTON} aria-label={`Save the data of ${title} as CSV`} onClick={() => run(() => {
-              const table = csv();
-              downloadCsv(fileBase, table.rows, tableColumns(table));
-            })}>
+          <button
+            type="button"
+            className={BUTTON}
+            aria-label={`Save the data of ${title} as CSV`}
+            onClick={() =>
+              run(() => {
+                const table = csv();
+                downloadCsv(fileBase, table.rows, tableColumns(table));
+              })
+            }
+          >
             CSV
           </button>
         )}

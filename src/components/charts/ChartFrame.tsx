@@ -74,7 +74,10 @@ export function ChartFrame(props: ChartFrameProps) {
 
   return (
     <figure className="relative m-0 w-full" ref={shell.containerRef} data-chart={exportName}>
-      <div className={menuBesideTitle ? 'absolute right-1 top-1' : 'flex justify-end'} style={{ maxWidth: menuBesideTitle ? MENU_ROOM : undefined }}>
+      <div
+        className={menuBesideTitle ? 'absolute right-1 top-1' : 'flex justify-end'}
+        style={{ maxWidth: menuBesideTitle ? MENU_ROOM : undefined }}
+      >
         <ChartExportMenu svgRef={svgRef} fileBase={exportName} title={title} csv={props.csv ?? (() => table)} />
       </div>
       <svg
@@ -97,7 +100,13 @@ export function ChartFrame(props: ChartFrameProps) {
           ))}
         </text>
         {subtitleLines.map((line, i) => (
-          <text key={i} x={PAD} y={PAD + TITLE_BLOCK + extraTitle + 8 + i * SUBTITLE_BLOCK} fontSize={12} fill={ink.soft}>
+          <text
+            key={i}
+            x={PAD}
+            y={PAD + TITLE_BLOCK + extraTitle + 8 + i * SUBTITLE_BLOCK}
+            fontSize={12}
+            fill={ink.soft}
+          >
             {line}
           </text>
         ))}
@@ -118,27 +127,27 @@ export function ChartFrame(props: ChartFrameProps) {
 function ScreenReaderTable({ table }: { table: ChartTable }) {
   return (
     <div className="sr-only" data-chart-table>
-    <table>
-      <caption>{table.caption}</caption>
-      <thead>
-        <tr>
-          {table.columns.map((column) => (
-            <th key={column} scope="col">
-              {column}
-            </th>
-          ))}
-        </tr>
-      </thead>
-      <tbody>
-        {table.rows.map((row, r) => (
-          <tr key={r}>
-            {row.map((cell, c) => (
-              <td key={c}>{cell}</td>
+      <table>
+        <caption>{table.caption}</caption>
+        <thead>
+          <tr>
+            {table.columns.map((column) => (
+              <th key={column} scope="col">
+                {column}
+              </th>
             ))}
           </tr>
-        ))}
-      </tbody>
-    </table>
+        </thead>
+        <tbody>
+          {table.rows.map((row, r) => (
+            <tr key={r}>
+              {row.map((cell, c) => (
+                <td key={c}>{cell}</td>
+              ))}
+            </tr>
+          ))}
+        </tbody>
+      </table>
     </div>
   );
 }
@@ -148,7 +157,10 @@ export function ChartMessage({ title, message, tone }: { title: string; message:
   return (
     <figure className="m-0 w-full rounded border border-ink-faint/40 bg-paper-raised p-4" data-chart-state={tone}>
       <figcaption className="text-base font-semibold text-ink">{title}</figcaption>
-      <p role={tone === 'problem' ? 'alert' : 'status'} className={tone === 'problem' ? 'mt-2 text-sm text-danger' : 'mt-2 text-sm text-ink-soft'}>
+      <p
+        role={tone === 'problem' ? 'alert' : 'status'}
+        className={tone === 'problem' ? 'mt-2 text-sm text-danger' : 'mt-2 text-sm text-ink-soft'}
+      >
         {message}
       </p>
     </figure>

@@ -42,12 +42,22 @@ export function ChartGallery() {
         <SpaceTimeHeatmap lanes={lanes} timeBinSeconds={120} warmupMinutes={60} />
       </Panel>
       <Panel>
-        <StationStateTimeline stations={galleryStations} timeBinSeconds={240} states={galleryStates} shares={timeline} warmupMinutes={60} />
+        <StationStateTimeline
+          stations={galleryStations}
+          timeBinSeconds={240}
+          states={galleryStates}
+          shares={timeline}
+          warmupMinutes={60}
+        />
       </Panel>
       <Panel>
         <label className="mb-2 flex items-center gap-2 text-sm text-ink-soft">
           Sort stations by
-          <select className="rounded border border-ink-faint/50 bg-paper-raised px-1" value={sortBy} onChange={(event) => setSortBy(event.target.value as StationSortKey)}>
+          <select
+            className="rounded border border-ink-faint/50 bg-paper-raised px-1"
+            value={sortBy}
+            onChange={(event) => setSortBy(event.target.value as StationSortKey)}
+          >
             {SORTS.map((key) => (
               <option key={key} value={key}>
                 {key}
@@ -114,7 +124,14 @@ export function ChartGallery() {
                   {step.meanCycleSeconds} ± {step.sdCycleSeconds} s
                 </td>
                 <td>
-                  <DistributionPreview label={`Cycle time of ${step.name}`} density={normalLaw(step.meanCycleSeconds, step.sdCycleSeconds).pdf} domain={[step.meanCycleSeconds - 4 * step.sdCycleSeconds, step.meanCycleSeconds + 4 * step.sdCycleSeconds]} />
+                  <DistributionPreview
+                    label={`Cycle time of ${step.name}`}
+                    density={normalLaw(step.meanCycleSeconds, step.sdCycleSeconds).pdf}
+                    domain={[
+                      step.meanCycleSeconds - 4 * step.sdCycleSeconds,
+                      step.meanCycleSeconds + 4 * step.sdCycleSeconds,
+                    ]}
+                  />
                 </td>
               </tr>
             ))}

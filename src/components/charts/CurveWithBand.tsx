@@ -45,31 +45,64 @@ function curveProblem(props: CurveWithBandProps): Problem {
   const { points } = props;
   const xs = points.map((p) => p.x);
   return firstProblem(
-    ...(['x', 'mean', 'lower', 'upper'] as const).map((key) => () => checkNumbers(points.map((p) => p[key]), `points[].${key}`)),
+    ...(['x', 'mean', 'lower', 'upper'] as const).map(
+      (key) => () =>
+        checkNumbers(
+          points.map((p) => p[key]),
+          `points[].${key}`,
+        ),
+    ),
     () => ascendingProblem(xs, 'points[].x'),
     () => {
       const i = points.findIndex((p) => p.lower > p.mean || p.upper < p.mean);
-      return i < 0 ? null : `points[${i}] has its mean ${points[i].mean} outside its band ${points[i].lower}–${points[i].upper}`;
+      return i < 0
+        ? null
+        : `points[${i}] has its mean ${points[i].mean} outside its band ${points[i].lower}–${points[i].upper}`;
     },
-    () => (props.recommendedX !== undefined && !xs.includes(props.recommendedX) ? `recommendedX ${props.recommendedX} is not one of the swept points` : null),
+    () =>
+      props.recommendedX !== undefined && !xs.includes(props.recommendedX)
+        ? `recommendedX ${props.recommendedX} is not one of the swept points`
+        : null,
   );
 }
 
 export function CurveWithBand(props: CurveWithBandProps) {
-  const { points, xQuantity, xUnit, yQuantity, yUnit, recommendedX, reference, title = `${yQuantity} against ${xQuantity.toLowerCase()}`, plotHeight = 260 } = props;
+  const {
+    points,
+    xQuantity,
+    xUnit,
+    yQuantity,
+    yUnit,
+    recommendedX,
+    reference,
+    title = `${yQuantity} against ${xQuantity.toLowerCase()}`,
+    plotHeight = 260,
+  } = props;
   const shell = useChartShell(props.width);
   const [hover, setHover] = useState<number | null>(null);
   const problem = curveProblem(props);
   if (problem) return <ChartMessage title={title} tone="problem" message={`This chart cannot be drawn: ${problem}.`} />;
-  if (points.length === 0) return <ChartMessage title={title} tone="empty" message="The sweep has no finished points yet; they appear here as each setting's replications complete." />;
+  if (points.length === 0)
+    return (
+      <ChartMessage
+        title={title}
+        tone="empty"
+        message="The sweep has no finished points yet; they appear here as each setting's replications complete."
+      />
+    );
 
   const plotWidth = plotWidthOf(shell.width, MARGIN);
   const xs = points.map((p) => p.x);
   const [x0, x1] = extent(xs) as [number, number];
-  const x = scaleLinear().domain(x0 === x1 ? [x0 - 1, x1 + 1] : [x0, x1]).range([0, plotWidth]);
+  const x = scaleLinear()
+    .domain(x0 === x1 ? [x0 - 1, x1 + 1] : [x0, x1])
+    .range([0, plotWidth]);
   const lows = [...points.map((p) => p.lower), ...(reference ? [reference.value] : [])];
   const highs = [...points.map((p) => p.upper), ...(reference ? [reference.value] : [])];
-  const y = scaleLinear().domain([Math.min(0, min(lows) ?? 0), (max(highs) ?? 1) * 1.08 || 1]).nice().range([plotHeight, 0]);
+  const y = scaleLinear()
+    .domain([Math.min(0, min(lows) ?? 0), (max(highs) ?? 1) * 1.08 || 1])
+    .nice()
+    .range([plotHeight, 0]);
   const recommended = points.find((p) => p.x === recommendedX);
   const recommendedText = recommended ? (props.recommendedLabel ?? `recommended: ${formatNumber(recommended.x)}`) : '';
 
@@ -77,7 +110,9 @@ export function CurveWithBand(props: CurveWithBandProps) {
     { label: `mean ${yQuantity.toLowerCase()}`, swatch: { kind: 'line', colour: COLOUR } },
     { label: props.bandLabel ?? '95 % confidence interval', swatch: { kind: 'box', fill: COLOUR, opacity: 0.18 } },
     ...(recommended ? [{ label: 'recommended setting', swatch: { kind: 'diamond' as const, colour: MARK } }] : []),
-    ...(reference ? [{ label: reference.label, swatch: { kind: 'line' as const, colour: ink.soft, dash: '4 3', strokeWidth: 1.5 } }] : []),
+    ...(reference
+      ? [{ label: reference.label, swatch: { kind: 'line' as const, colour: ink.soft, dash: '4 3', strokeWidth: 1.5 } }]
+      : []),
   ];
 
   const onMove = (event: MouseEvent<SVGRectElement>) => {
@@ -106,15 +141,41 @@ export function CurveWithBand(props: CurveWithBandProps) {
       plotHeight={plotHeight}
       table={{
         caption: `${yQuantity} (${yUnit}) for each setting of ${xQuantity.toLowerCase()}`,
-        columns: [`${xQuantity}${xUnit === 'count' ? '' : ` (${xUnit})`}`, `Mean (${yUnit})`, `Lower (${yUnit})`, `Upper (${yUnit})`, 'Recommended'],
-        rows: points.map((p) => [formatNumber(p.x), formatNumber(p.mean), formatNumber(p.lower), formatNumber(p.upper), p.x === recommendedX ? 'yes' : '']),
+        columns: [
+          `${xQuantity}${xUnit === 'count' ? '' : ` (${xUnit})`}`,
+          `Mean (${yUnit})`,
+          `Lower (${yUnit})`,
+          `Upper (${yUnit})`,
+          'Recommended',
+        ],
+        rows: points.map((p) => [
+          formatNumber(p.x),
+          formatNumber(p.mean),
+          formatNumber(p.lower),
+          formatNumber(p.upper),
+          p.x === recommendedX ? 'yes' : '',
+        ]),
       }}
-      csv={() => ({ caption: yQuantity, columns: ['x', 'mean', 'lower', 'upper', 'recommended'], rows: points.map((p) => [p.x, p.mean, p.lower, p.upper, p.x === recommendedX ? 'yes' : '']) })}
+      csv={() => ({
+        caption: yQuantity,
+        columns: ['x', 'mean', 'lower', 'upper', 'recommended'],
+        rows: points.map((p) => [p.x, p.mean, p.lower, p.upper, p.x === recommendedX ? 'yes' : '']),
+      })}
       exportName={props.exportName ?? 'sweep-curve'}
     >
-      <AxisLeft ticks={linearTicks(y, plotHeight / 45)} height={plotHeight} label={`${yQuantity} (${yUnit})`} gridWidth={plotWidth} labelOffset={54} />
+      <AxisLeft
+        ticks={linearTicks(y, plotHeight / 45)}
+        height={plotHeight}
+        label={`${yQuantity} (${yUnit})`}
+        gridWidth={plotWidth}
+        labelOffset={54}
+      />
       <AxisBottom
-        ticks={linearTicks(x, Math.min(plotWidth / 70, xUnit === 'count' ? x1 - x0 : Infinity), xUnit === 'count' ? (v) => (Number.isInteger(v) ? formatNumber(v) : '') : formatNumber)}
+        ticks={linearTicks(
+          x,
+          Math.min(plotWidth / 70, xUnit === 'count' ? x1 - x0 : Infinity),
+          xUnit === 'count' ? (v) => (Number.isInteger(v) ? formatNumber(v) : '') : formatNumber,
+        )}
         width={plotWidth}
         plotHeight={plotHeight}
         label={`${xQuantity} (${xUnit})`}
@@ -127,22 +188,68 @@ export function CurveWithBand(props: CurveWithBandProps) {
           </text>
         </g>
       )}
-      <LineWithBand xs={xs} values={points.map((p) => p.mean)} lower={points.map((p) => p.lower)} upper={points.map((p) => p.upper)} x={x} y={y} colour={COLOUR} name={yQuantity} />
+      <LineWithBand
+        xs={xs}
+        values={points.map((p) => p.mean)}
+        lower={points.map((p) => p.lower)}
+        upper={points.map((p) => p.upper)}
+        x={x}
+        y={y}
+        colour={COLOUR}
+        name={yQuantity}
+      />
       <g pointerEvents="none">
         {points.map((p, i) => (
-          <circle key={p.x} cx={x(p.x)} cy={y(p.mean)} r={hover === i && shell.tooltip ? 5 : 3} fill={COLOUR} data-chart-part="point" />
+          <circle
+            key={p.x}
+            cx={x(p.x)}
+            cy={y(p.mean)}
+            r={hover === i && shell.tooltip ? 5 : 3}
+            fill={COLOUR}
+            data-chart-part="point"
+          />
         ))}
       </g>
       {recommended && (
         <g pointerEvents="none" data-chart-part="recommended">
-          <line x1={x(recommended.x)} x2={x(recommended.x)} y1={y(recommended.mean)} y2={plotHeight} stroke={MARK} strokeDasharray="3 3" />
-          <path d={`M${x(recommended.x)},${y(recommended.mean) - 9} l9,9 l-9,9 l-9,-9 Z`} fill="white" fillOpacity={0.6} stroke={MARK} strokeWidth={2.5} />
-          <text x={labelX} y={y(recommended.upper) - 12} textAnchor="middle" fontSize={12} fontWeight={600} fill={ink.DEFAULT} paintOrder="stroke" stroke="white" strokeWidth={3}>
+          <line
+            x1={x(recommended.x)}
+            x2={x(recommended.x)}
+            y1={y(recommended.mean)}
+            y2={plotHeight}
+            stroke={MARK}
+            strokeDasharray="3 3"
+          />
+          <path
+            d={`M${x(recommended.x)},${y(recommended.mean) - 9} l9,9 l-9,9 l-9,-9 Z`}
+            fill="white"
+            fillOpacity={0.6}
+            stroke={MARK}
+            strokeWidth={2.5}
+          />
+          <text
+            x={labelX}
+            y={y(recommended.upper) - 12}
+            textAnchor="middle"
+            fontSize={12}
+            fontWeight={600}
+            fill={ink.DEFAULT}
+            paintOrder="stroke"
+            stroke="white"
+            strokeWidth={3}
+          >
             {recommendedText}
           </text>
         </g>
       )}
-      <rect width={plotWidth} height={plotHeight} fill="transparent" data-chart-part="hit-area" onMouseMove={onMove} onMouseLeave={shell.hideTooltip} />
+      <rect
+        width={plotWidth}
+        height={plotHeight}
+        fill="transparent"
+        data-chart-part="hit-area"
+        onMouseMove={onMove}
+        onMouseLeave={shell.hideTooltip}
+      />
     </ChartFrame>
   );
 }

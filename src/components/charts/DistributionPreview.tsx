@@ -33,7 +33,10 @@ const PREVIEW_SAMPLES = 4000;
 function thinned(samples: readonly number[]): readonly number[] {
   if (samples.length <= PREVIEW_SAMPLES) return samples;
   const sorted = [...samples].sort((a, b) => a - b);
-  return Array.from({ length: PREVIEW_SAMPLES }, (_, i) => sorted[Math.floor(((i + 0.5) * sorted.length) / PREVIEW_SAMPLES)]);
+  return Array.from(
+    { length: PREVIEW_SAMPLES },
+    (_, i) => sorted[Math.floor(((i + 0.5) * sorted.length) / PREVIEW_SAMPLES)],
+  );
 }
 
 function shapeOf(props: DistributionPreviewProps): Shape | string | null {
@@ -52,7 +55,10 @@ function shapeOf(props: DistributionPreviewProps): Shape | string | null {
   }
   if (density) {
     if (!domain) return 'domain is needed to draw a density function';
-    const problem = firstProblem(() => checkNumbers(domain, 'domain'), () => checkPositive(domain[1] - domain[0], 'domain[1] − domain[0]'));
+    const problem = firstProblem(
+      () => checkNumbers(domain, 'domain'),
+      () => checkPositive(domain[1] - domain[0], 'domain[1] − domain[0]'),
+    );
     if (problem) return problem;
     const points = sampleCurve(density, domain[0], domain[1], 80);
     const mass = points.reduce((sum, [, d]) => sum + d, 0);
@@ -74,28 +80,68 @@ export function DistributionPreview(props: DistributionPreviewProps) {
   }
   if (!shape) {
     return (
-      <span role="img" aria-label={`${label}: no data`} className="inline-block text-xs text-ink-faint" style={{ width }}>
+      <span
+        role="img"
+        aria-label={`${label}: no data`}
+        className="inline-block text-xs text-ink-faint"
+        style={{ width }}
+      >
         no data
       </span>
     );
   }
   const description = `${label}: from ${formatNumber(shape.lo)} to ${formatNumber(shape.hi)} ${unit}, mean ${formatNumber(shape.mean)} ${unit}`;
   const xs = shape.points.map(([v]) => v);
-  const x = scaleLinear().domain([Math.min(...xs), Math.max(...xs)]).range([2, width - 2]);
+  const x = scaleLinear()
+    .domain([Math.min(...xs), Math.max(...xs)])
+    .range([2, width - 2]);
   const top = Math.max(...shape.points.map(([, d]) => d)) || 1;
-  const y = scaleLinear().domain([0, top]).range([height - 2, 3]);
+  const y = scaleLinear()
+    .domain([0, top])
+    .range([height - 2, 3]);
   const single = shape.points.length === 1;
-  const path = area<[number, number]>().x(([v]) => x(v)).y0(height - 2).y1(([, d]) => y(d))(shape.points) ?? '';
+  const path =
+    area<[number, number]>()
+      .x(([v]) => x(v))
+      .y0(height - 2)
+      .y1(([, d]) => y(d))(shape.points) ?? '';
   return (
-    <svg role="img" aria-label={description} width={width} height={height} viewBox={`0 0 ${width} ${height}`} className="inline-block align-middle" data-chart="distribution-preview">
+    <svg
+      role="img"
+      aria-label={description}
+      width={width}
+      height={height}
+      viewBox={`0 0 ${width} ${height}`}
+      className="inline-block align-middle"
+      data-chart="distribution-preview"
+    >
       <title>{description}</title>
       {single ? (
-        <line x1={width / 2} x2={width / 2} y1={3} y2={height - 2} stroke={accent.DEFAULT} strokeWidth={2} data-chart-part="shape" />
+        <line
+          x1={width / 2}
+          x2={width / 2}
+          y1={3}
+          y2={height - 2}
+          stroke={accent.DEFAULT}
+          strokeWidth={2}
+          data-chart-part="shape"
+        />
       ) : (
         <path d={path} fill={accent.soft} stroke={accent.DEFAULT} strokeWidth={1.5} data-chart-part="shape" />
       )}
       <line x1={1} x2={width - 1} y1={height - 1.5} y2={height - 1.5} stroke={ink.faint} />
-      {!single && <line x1={x(shape.mean)} x2={x(shape.mean)} y1={2} y2={height - 2} stroke={ink.DEFAULT} strokeWidth={1} strokeDasharray="2 2" data-chart-part="mean" />}
+      {!single && (
+        <line
+          x1={x(shape.mean)}
+          x2={x(shape.mean)}
+          y1={2}
+          y2={height - 2}
+          stroke={ink.DEFAULT}
+          strokeWidth={1}
+          strokeDasharray="2 2"
+          data-chart-part="mean"
+        />
+      )}
     </svg>
   );
 }

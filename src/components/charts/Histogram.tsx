@@ -43,12 +43,26 @@ export function Histogram(props: HistogramProps) {
   const shell = useChartShell(props.width);
   const problem = firstProblem(
     () => checkNumbers(values, 'values'),
-    () => (props.binCount !== undefined && !(Number.isInteger(props.binCount) && props.binCount >= 1) ? `binCount must be a whole number of at least 1, got ${props.binCount}` : null),
+    () =>
+      props.binCount !== undefined && !(Number.isInteger(props.binCount) && props.binCount >= 1)
+        ? `binCount must be a whole number of at least 1, got ${props.binCount}`
+        : null,
   );
   const given = props.bins;
-  const bins = useMemo(() => (problem ? [] : given && given.length > 0 ? given : histogramBins(values, props.binCount)), [values, props.binCount, given, problem]);
-  if (problem) return <ChartMessage title={title} tone="problem" message={`This histogram cannot be drawn: ${problem}.`} />;
-  if (values.length === 0) return <ChartMessage title={title} tone="empty" message={`No ${quantity.toLowerCase()} samples to show yet: nothing was measured or no part finished after warm-up.`} />;
+  const bins = useMemo(
+    () => (problem ? [] : given && given.length > 0 ? given : histogramBins(values, props.binCount)),
+    [values, props.binCount, given, problem],
+  );
+  if (problem)
+    return <ChartMessage title={title} tone="problem" message={`This histogram cannot be drawn: ${problem}.`} />;
+  if (values.length === 0)
+    return (
+      <ChartMessage
+        title={title}
+        tone="empty"
+        message={`No ${quantity.toLowerCase()} samples to show yet: nothing was measured or no part finished after warm-up.`}
+      />
+    );
 
   const plotWidth = plotWidthOf(shell.width, MARGIN);
   const lo = bins[0].x0;
@@ -58,13 +72,21 @@ export function Histogram(props: HistogramProps) {
   const curves = fits.map((fit) => sampleCurve((x) => fit.pdf(x) * n * binWidth, lo, hi));
   const yMax = max([...bins.map((b) => b.count), ...curves.flatMap((curve) => curve.map(([, c]) => c))]) ?? 1;
   const x = scaleLinear().domain([lo, hi]).range([0, plotWidth]);
-  const y = scaleLinear().domain([0, yMax * 1.05]).nice().range([plotHeight, 0]);
-  const path = line<[number, number]>().x(([v]) => x(v)).y(([, c]) => y(c));
+  const y = scaleLinear()
+    .domain([0, yMax * 1.05])
+    .nice()
+    .range([plotHeight, 0]);
+  const path = line<[number, number]>()
+    .x(([v]) => x(v))
+    .y(([, c]) => y(c));
   const mean = values.reduce((a, b) => a + b, 0) / n;
 
   const legendItems: LegendItem[] = [
     { label: `samples (n = ${formatNumber(n)})`, swatch: { kind: 'box', fill: BAR_FILL, stroke: BAR_STROKE } },
-    ...fits.map((fit, i) => ({ label: fit.label, swatch: { kind: 'line' as const, colour: seriesStyle(i + 1).colour, dash: seriesStyle(i + 1).dash } })),
+    ...fits.map((fit, i) => ({
+      label: fit.label,
+      swatch: { kind: 'line' as const, colour: seriesStyle(i + 1).colour, dash: seriesStyle(i + 1).dash },
+    })),
   ];
 
   const show = (event: MouseEvent<SVGRectElement>, b: (typeof bins)[number]) =>
@@ -73,7 +95,9 @@ export function Histogram(props: HistogramProps) {
       rows: [
         ['Samples', formatNumber(b.count)],
         ['Share of samples', formatShare(b.count / n)],
-        ...fits.map((fit) => [`${fit.label} expects`, formatNumber(fit.pdf((b.x0 + b.x1) / 2) * n * binWidth)] as const),
+        ...fits.map(
+          (fit) => [`${fit.label} expects`, formatNumber(fit.pdf((b.x0 + b.x1) / 2) * n * binWidth)] as const,
+        ),
       ],
     });
 
@@ -91,11 +115,26 @@ export function Histogram(props: HistogramProps) {
         columns: [`From (${unit})`, `To (${unit})`, 'Samples'],
         rows: bins.map((b) => [formatNumber(b.x0), formatNumber(b.x1), b.count]),
       }}
-      csv={() => ({ caption: quantity, columns: [`bin_from_${unit}`, `bin_to_${unit}`, 'samples'], rows: bins.map((b) => [b.x0, b.x1, b.count]) })}
+      csv={() => ({
+        caption: quantity,
+        columns: [`bin_from_${unit}`, `bin_to_${unit}`, 'samples'],
+        rows: bins.map((b) => [b.x0, b.x1, b.count]),
+      })}
       exportName={props.exportName ?? `${quantity.toLowerCase().replace(/\s+/g, '-')}-histogram`}
     >
-      <AxisLeft ticks={linearTicks(y, plotHeight / 45)} height={plotHeight} label="Samples (count)" gridWidth={plotWidth} labelOffset={48} />
-      <AxisBottom ticks={linearTicks(x, plotWidth / 80)} width={plotWidth} plotHeight={plotHeight} label={`${quantity} (${unit})`} />
+      <AxisLeft
+        ticks={linearTicks(y, plotHeight / 45)}
+        height={plotHeight}
+        label="Samples (count)"
+        gridWidth={plotWidth}
+        labelOffset={48}
+      />
+      <AxisBottom
+        ticks={linearTicks(x, plotWidth / 80)}
+        width={plotWidth}
+        plotHeight={plotHeight}
+        label={`${quantity} (${unit})`}
+      />
       <g data-chart-part="marks">
         {bins.map((b) => (
           <rect
@@ -114,7 +153,16 @@ export function Histogram(props: HistogramProps) {
         ))}
       </g>
       {curves.map((curve, i) => (
-        <path key={fits[i].label} d={path(curve) ?? ''} fill="none" stroke={seriesStyle(i + 1).colour} strokeWidth={2.5} strokeDasharray={seriesStyle(i + 1).dash || undefined} pointerEvents="none" data-chart-part="fit" />
+        <path
+          key={fits[i].label}
+          d={path(curve) ?? ''}
+          fill="none"
+          stroke={seriesStyle(i + 1).colour}
+          strokeWidth={2.5}
+          strokeDasharray={seriesStyle(i + 1).dash || undefined}
+          pointerEvents="none"
+          data-chart-part="fit"
+        />
       ))}
     </ChartFrame>
   );

@@ -39,7 +39,10 @@ interface PlacedItem extends LegendItem {
 }
 
 /** Flows swatch items left to right, wrapping to new rows within the available width. */
-export function layoutSwatches(items: readonly LegendItem[], maxWidth: number): { placed: PlacedItem[]; height: number } {
+export function layoutSwatches(
+  items: readonly LegendItem[],
+  maxWidth: number,
+): { placed: PlacedItem[]; height: number } {
   const placed: PlacedItem[] = [];
   let x = 0;
   let y = 0;
@@ -80,12 +83,34 @@ function Swatch({ swatch }: { swatch: LegendSwatch }) {
       );
     case 'line':
       return (
-        <line x1={0} x2={SWATCH + 4} y1={mid} y2={mid} stroke={swatch.colour} strokeWidth={swatch.strokeWidth ?? 2.5} strokeDasharray={swatch.dash || undefined} />
+        <line
+          x1={0}
+          x2={SWATCH + 4}
+          y1={mid}
+          y2={mid}
+          stroke={swatch.colour}
+          strokeWidth={swatch.strokeWidth ?? 2.5}
+          strokeDasharray={swatch.dash || undefined}
+        />
       );
     case 'diamond':
-      return <path d={`M${mid},1 L${SWATCH - 1},${mid} L${mid},${SWATCH - 1} L1,${mid} Z`} fill="white" stroke={swatch.colour} strokeWidth={1.5} />;
+      return (
+        <path
+          d={`M${mid},1 L${SWATCH - 1},${mid} L${mid},${SWATCH - 1} L1,${mid} Z`}
+          fill="white"
+          stroke={swatch.colour}
+          strokeWidth={1.5}
+        />
+      );
     case 'whisker':
-      return <path d={`M${mid},1 V${SWATCH - 1} M${mid - 4},1 H${mid + 4} M${mid - 4},${SWATCH - 1} H${mid + 4}`} stroke={swatch.colour} strokeWidth={1.5} fill="none" />;
+      return (
+        <path
+          d={`M${mid},1 V${SWATCH - 1} M${mid - 4},1 H${mid + 4} M${mid - 4},${SWATCH - 1} H${mid + 4}`}
+          stroke={swatch.colour}
+          strokeWidth={1.5}
+          fill="none"
+        />
+      );
   }
 }
 
@@ -136,7 +161,13 @@ function SwatchItems({ items, maxWidth }: { items: readonly LegendItem[]; maxWid
   return layoutSwatches(items, maxWidth).placed.map((item) => (
     <g key={item.label} transform={`translate(${item.x},${item.y})`} data-legend-item={item.label}>
       <Swatch swatch={item.swatch} />
-      <text x={SWATCH + 6 + (item.swatch.kind === 'line' ? 4 : 0)} y={SWATCH / 2} dy="0.35em" fontSize={FONT} fill={ink.DEFAULT}>
+      <text
+        x={SWATCH + 6 + (item.swatch.kind === 'line' ? 4 : 0)}
+        y={SWATCH / 2}
+        dy="0.35em"
+        fontSize={FONT}
+        fill={ink.DEFAULT}
+      >
         {item.label}
       </text>
     </g>

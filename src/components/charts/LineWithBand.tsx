@@ -15,12 +15,27 @@ interface LineWithBandProps {
 
 export function LineWithBand({ xs, values, lower, upper, x, y, colour, dash, name }: LineWithBandProps) {
   const indices = xs.map((_, i) => i);
-  const band = lower && upper ? area<number>().x((i) => x(xs[i])).y0((i) => y(lower[i])).y1((i) => y(upper[i]))(indices) : null;
-  const path = line<number>().x((i) => x(xs[i])).y((i) => y(values[i]))(indices);
+  const band =
+    lower && upper
+      ? area<number>()
+          .x((i) => x(xs[i]))
+          .y0((i) => y(lower[i]))
+          .y1((i) => y(upper[i]))(indices)
+      : null;
+  const path = line<number>()
+    .x((i) => x(xs[i]))
+    .y((i) => y(values[i]))(indices);
   return (
     <g data-series={name} pointerEvents="none">
       {band && <path d={band} fill={colour} fillOpacity={0.18} stroke="none" data-chart-part="band" />}
-      <path d={path ?? ''} fill="none" stroke={colour} strokeWidth={2} strokeDasharray={dash || undefined} data-chart-part="line" />
+      <path
+        d={path ?? ''}
+        fill="none"
+        stroke={colour}
+        strokeWidth={2}
+        strokeDasharray={dash || undefined}
+        data-chart-part="line"
+      />
     </g>
   );
 }
@@ -38,6 +53,8 @@ export function nearestIndex(xs: readonly number[], value: number): number {
 }
 
 export function ascendingProblem(xs: readonly number[], path: string): string | null {
-  for (let i = 1; i < xs.length; i++) if (!(xs[i] > xs[i - 1])) return `${path}[${i}] is ${xs[i]}, not above ${path}[${i - 1}] (${xs[i - 1]}); values must rise`;
+  for (let i = 1; i < xs.length; i++)
+    if (!(xs[i] > xs[i - 1]))
+      return `${path}[${i}] is ${xs[i]}, not above ${path}[${i - 1}] (${xs[i - 1]}); values must rise`;
   return null;
 }

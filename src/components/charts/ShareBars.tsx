@@ -29,7 +29,10 @@ const CATEGORIES: readonly (ShareCategory & { key: 'moving' | 'waiting' | 'worki
 function shareBarsProblem(items: readonly CarrierShareItem[]): Problem {
   for (const [i, item] of items.entries()) {
     const values = CATEGORIES.map((c) => item[c.key]);
-    const problem = checkNamedShares(CATEGORIES.map((c) => [c.key, item[c.key]] as const), `items[${i}]`);
+    const problem = checkNamedShares(
+      CATEGORIES.map((c) => [c.key, item[c.key]] as const),
+      `items[${i}]`,
+    );
     if (problem) return problem;
     const sum = values.reduce((a, b) => a + b, 0);
     if (sum > 1.005) return `items[${i}] (${item.label}) shares add up to ${sum}, more than 1`;
@@ -41,7 +44,14 @@ export function ShareBars(props: ShareBarsProps) {
   const { items, title = 'How carriers spend their time' } = props;
   const problem = shareBarsProblem(items);
   if (problem) return <ChartMessage title={title} tone="problem" message={`These bars cannot be drawn: ${problem}.`} />;
-  if (items.length === 0) return <ChartMessage title={title} tone="empty" message="No carrier statistics to show: the run moved no carriers after warm-up." />;
+  if (items.length === 0)
+    return (
+      <ChartMessage
+        title={title}
+        tone="empty"
+        message="No carrier statistics to show: the run moved no carriers after warm-up."
+      />
+    );
   const first = items[0];
   return (
     <StackedShareBars

@@ -9,7 +9,15 @@ import type { ChartTable } from './chart-table';
 import { formatNumber, formatOne, formatShare } from './format';
 import { HatchPattern, useSvgId } from './patterns';
 import { ink } from './palette';
-import { laneGrid, laneImage, occupancyColour, positionBinsOf, spaceTimeProblem, type LaneGrid, type SpaceTimeLane } from './space-time-grid';
+import {
+  laneGrid,
+  laneImage,
+  occupancyColour,
+  positionBinsOf,
+  spaceTimeProblem,
+  type LaneGrid,
+  type SpaceTimeLane,
+} from './space-time-grid';
 import { localPoint, useChartShell } from './useChartShell';
 
 export type { SpaceTimeLane } from './space-time-grid';
@@ -32,17 +40,34 @@ const MARGIN: Margin = { top: 22, right: 16, bottom: 56, left: 70 };
 const LANE_GAP = 30;
 
 export function SpaceTimeHeatmap(props: SpaceTimeHeatmapProps) {
-  const { lanes, timeBinSeconds, startMinutes = 0, warmupMinutes, title = 'Carriers along the track over time', laneHeight = 130 } = props;
+  const {
+    lanes,
+    timeBinSeconds,
+    startMinutes = 0,
+    warmupMinutes,
+    title = 'Carriers along the track over time',
+    laneHeight = 130,
+  } = props;
   const shell = useChartShell(props.width);
   const warmupId = useSvgId('warmup');
   const plotWidth = plotWidthOf(shell.width, MARGIN);
   const problem = useMemo(() => spaceTimeProblem(lanes, timeBinSeconds), [lanes, timeBinSeconds]);
-  const grids = useMemo(() => (problem ? [] : lanes.map((lane) => laneGrid(lane, plotWidth))), [lanes, plotWidth, problem]);
+  const grids = useMemo(
+    () => (problem ? [] : lanes.map((lane) => laneGrid(lane, plotWidth))),
+    [lanes, plotWidth, problem],
+  );
   const images = useMemo(() => grids.map(laneImage), [grids]);
 
-  if (problem) return <ChartMessage title={title} tone="problem" message={`This heatmap cannot be drawn: ${problem}.`} />;
+  if (problem)
+    return <ChartMessage title={title} tone="problem" message={`This heatmap cannot be drawn: ${problem}.`} />;
   if (grids.length === 0 || grids[0].timeBins === 0) {
-    return <ChartMessage title={title} tone="empty" message="No track occupancy was recorded: the run has no lanes or ended before its first time bin." />;
+    return (
+      <ChartMessage
+        title={title}
+        tone="empty"
+        message="No track occupancy was recorded: the run has no lanes or ended before its first time bin."
+      />
+    );
   }
 
   const binMinutes = timeBinSeconds / 60;
@@ -50,7 +75,8 @@ export function SpaceTimeHeatmap(props: SpaceTimeHeatmapProps) {
   const x = scaleLinear().domain([startMinutes, endMinutes]).range([0, plotWidth]);
   const panelTop = (i: number) => i * (laneHeight + LANE_GAP);
   const plotHeight = panelTop(grids.length) - LANE_GAP;
-  const warmupEnd = warmupMinutes !== undefined && warmupMinutes > startMinutes ? Math.min(warmupMinutes, endMinutes) : null;
+  const warmupEnd =
+    warmupMinutes !== undefined && warmupMinutes > startMinutes ? Math.min(warmupMinutes, endMinutes) : null;
 
   const showCell = (event: MouseEvent<SVGRectElement>, grid: LaneGrid) => {
     const point = localPoint(event);
@@ -66,7 +92,10 @@ export function SpaceTimeHeatmap(props: SpaceTimeHeatmapProps) {
       rows: [
         ['Time', `${formatOne(t0)}–${formatOne(t1)} min`],
         ['Position', `${formatNumber(p0)}–${formatNumber(p1)} mm`],
-        [grid.merge > 1 ? `Occupied (mean of ${grid.merge} bins)` : 'Occupied', formatShare(grid.cells[column * grid.positions + position])],
+        [
+          grid.merge > 1 ? `Occupied (mean of ${grid.merge} bins)` : 'Occupied',
+          formatShare(grid.cells[column * grid.positions + position]),
+        ],
       ],
     });
   };
@@ -75,7 +104,10 @@ export function SpaceTimeHeatmap(props: SpaceTimeHeatmapProps) {
     <ChartFrame
       shell={shell}
       title={title}
-      subtitle={`${grids.length} lane${grids.length > 1 ? 's' : ''}, ${formatNumber(binMinutes)} min × ${lanes.map((l) => `${formatNumber(l.positionBinMm)} mm`).filter((v, i, all) => all.indexOf(v) === i).join(' / ')} cells`}
+      subtitle={`${grids.length} lane${grids.length > 1 ? 's' : ''}, ${formatNumber(binMinutes)} min × ${lanes
+        .map((l) => `${formatNumber(l.positionBinMm)} mm`)
+        .filter((v, i, all) => all.indexOf(v) === i)
+        .join(' / ')} cells`}
       summary={spaceTimeSummary(grids, startMinutes, endMinutes)}
       legend={{
         kind: 'ramp',
@@ -83,7 +115,15 @@ export function SpaceTimeHeatmap(props: SpaceTimeHeatmapProps) {
         interpolate: occupancyColour,
         domain: [0, 1],
         tickFormat: (v) => formatShare(v).replace('.0%', '%'),
-        extras: warmupEnd === null ? [] : [{ label: `warm-up, ${formatNumber(warmupEnd - startMinutes)} min (not in statistics)`, swatch: { kind: 'box', fill: `url(#${warmupId})`, stroke: ink.DEFAULT } }],
+        extras:
+          warmupEnd === null
+            ? []
+            : [
+                {
+                  label: `warm-up, ${formatNumber(warmupEnd - startMinutes)} min (not in statistics)`,
+                  swatch: { kind: 'box', fill: `url(#${warmupId})`, stroke: ink.DEFAULT },
+                },
+              ],
       }}
       margin={MARGIN}
       plotHeight={plotHeight}
@@ -116,7 +156,12 @@ export function SpaceTimeHeatmap(props: SpaceTimeHeatmapProps) {
               </g>
             )}
             <rect width={plotWidth} height={laneHeight} fill="none" stroke={ink.faint} />
-            <AxisLeft ticks={linearTicks(y, laneHeight / 35)} height={laneHeight} label={i === 0 ? 'Position (mm)' : ''} labelOffset={56} />
+            <AxisLeft
+              ticks={linearTicks(y, laneHeight / 35)}
+              height={laneHeight}
+              label={i === 0 ? 'Position (mm)' : ''}
+              labelOffset={56}
+            />
             <rect
               width={plotWidth}
               height={laneHeight}
@@ -128,7 +173,12 @@ export function SpaceTimeHeatmap(props: SpaceTimeHeatmapProps) {
           </g>
         );
       })}
-      <AxisBottom ticks={linearTicks(x, plotWidth / 80)} width={plotWidth} plotHeight={plotHeight} label="Simulated time (min)" />
+      <AxisBottom
+        ticks={linearTicks(x, plotWidth / 80)}
+        width={plotWidth}
+        plotHeight={plotHeight}
+        label="Simulated time (min)"
+      />
     </ChartFrame>
   );
 }
@@ -149,7 +199,12 @@ function spaceTimeSummary(grids: readonly LaneGrid[], start: number, end: number
 }
 
 /** Per lane and position: the mean after warm-up and the highest share, which is what a reader scans for. */
-function occupancyTable(grids: readonly LaneGrid[], start: number, binMinutes: number, warmupEnd: number | null): ChartTable {
+function occupancyTable(
+  grids: readonly LaneGrid[],
+  start: number,
+  binMinutes: number,
+  warmupEnd: number | null,
+): ChartTable {
   const rows: (string | number)[][] = [];
   for (const { lane, positions, timeBins } of grids) {
     const firstBin = warmupEnd === null ? 0 : Math.min(timeBins, Math.ceil((warmupEnd - start) / binMinutes - 1e-9));
@@ -188,5 +243,9 @@ function occupancyCsv(lanes: readonly SpaceTimeLane[], start: number, binMinutes
       rows.push([lane.laneName, start + t * binMinutes, (index % positions) * lane.positionBinMm, share]);
     });
   }
-  return { caption: 'Track occupancy', columns: ['lane', 'time_start_min', 'position_start_mm', 'occupied_share'], rows };
+  return {
+    caption: 'Track occupancy',
+    columns: ['lane', 'time_start_min', 'position_start_mm', 'occupied_share'],
+    rows,
+  };
 }

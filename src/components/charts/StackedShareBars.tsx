@@ -46,15 +46,25 @@ const textOn = (fill: string) => (lab(fill).l < 55 ? '#ffffff' : ink.DEFAULT);
 export function StackedShareBars(props: StackedShareBarsProps) {
   const { categories, barHeight = 28 } = props;
   const shell = useChartShell(props.width);
-  const labelWidth = Math.min(180, Math.max(...props.items.map((item) => estimateTextWidth(item.label, TICK_FONT))) + 14);
-  const notesWidth = (list: readonly ShareItem[]) => Math.max(0, ...list.map((item) => (item.note ? estimateTextWidth(item.note, TICK_FONT) + 12 : 0)));
+  const labelWidth = Math.min(
+    180,
+    Math.max(...props.items.map((item) => estimateTextWidth(item.label, TICK_FONT))) + 14,
+  );
+  const notesWidth = (list: readonly ShareItem[]) =>
+    Math.max(0, ...list.map((item) => (item.note ? estimateTextWidth(item.note, TICK_FONT) + 12 : 0)));
   // Bars keep at least half the room; past that a long note gives way to its short form.
-  const items = notesWidth(props.items) > (shell.width - labelWidth) / 2 ? props.items.map((item) => ({ ...item, note: item.shortNote ?? item.note })) : props.items;
+  const items =
+    notesWidth(props.items) > (shell.width - labelWidth) / 2
+      ? props.items.map((item) => ({ ...item, note: item.shortNote ?? item.note }))
+      : props.items;
   const noteWidth = notesWidth(items);
   const margin: Margin = { top: 4, right: Math.max(16, noteWidth), bottom: 50, left: labelWidth };
   const plotWidth = plotWidthOf(shell.width, margin);
   const x = scaleLinear().domain([0, 1]).range([0, plotWidth]);
-  const y = scaleBand<string>().domain(items.map((item) => item.id)).range([0, items.length * barHeight]).paddingInner(0.25);
+  const y = scaleBand<string>()
+    .domain(items.map((item) => item.id))
+    .range([0, items.length * barHeight])
+    .paddingInner(0.25);
   const plotHeight = items.length * barHeight;
 
   const show = (event: MouseEvent<SVGRectElement>, item: ShareItem) =>
@@ -69,7 +79,13 @@ export function StackedShareBars(props: StackedShareBarsProps) {
       title={props.title}
       subtitle={props.subtitle}
       summary={props.summary}
-      legend={{ kind: 'swatches', items: categories.map((category) => ({ label: category.label, swatch: { kind: 'box', fill: category.colour } })) }}
+      legend={{
+        kind: 'swatches',
+        items: categories.map((category) => ({
+          label: category.label,
+          swatch: { kind: 'box', fill: category.colour },
+        })),
+      }}
       margin={margin}
       plotHeight={plotHeight}
       table={{
@@ -84,13 +100,27 @@ export function StackedShareBars(props: StackedShareBarsProps) {
       })}
       exportName={props.exportName}
     >
-      <AxisBottom ticks={linearTicks(x, plotWidth / 90, (v) => formatShare(v).replace('.0%', '%'))} width={plotWidth} plotHeight={plotHeight} label={props.axisLabel} grid />
+      <AxisBottom
+        ticks={linearTicks(x, plotWidth / 90, (v) => formatShare(v).replace('.0%', '%'))}
+        width={plotWidth}
+        plotHeight={plotHeight}
+        label={props.axisLabel}
+        grid
+      />
       {items.map((item) => {
         const top = y(item.id) ?? 0;
         let start = 0;
         return (
           <g key={item.id} data-item={item.id}>
-            <text x={-8} y={top + y.bandwidth() / 2} dy="0.35em" textAnchor="end" fontSize={TICK_FONT} fontWeight={item.emphasis ? 700 : 400} fill={ink.DEFAULT}>
+            <text
+              x={-8}
+              y={top + y.bandwidth() / 2}
+              dy="0.35em"
+              textAnchor="end"
+              fontSize={TICK_FONT}
+              fontWeight={item.emphasis ? 700 : 400}
+              fill={ink.DEFAULT}
+            >
               {item.label}
             </text>
             {categories.map((category, c) => {
@@ -113,16 +143,43 @@ export function StackedShareBars(props: StackedShareBarsProps) {
                     onMouseLeave={shell.hideTooltip}
                   />
                   {width > estimateTextWidth(text, 11) + 6 && (
-                    <text x={left + width / 2} y={top + y.bandwidth() / 2} dy="0.35em" textAnchor="middle" fontSize={11} fill={textOn(category.colour)} pointerEvents="none">
+                    <text
+                      x={left + width / 2}
+                      y={top + y.bandwidth() / 2}
+                      dy="0.35em"
+                      textAnchor="middle"
+                      fontSize={11}
+                      fill={textOn(category.colour)}
+                      pointerEvents="none"
+                    >
                       {text}
                     </text>
                   )}
                 </g>
               );
             })}
-            {item.emphasis && <rect x={-1} y={top - 1} width={x(start) + 2} height={y.bandwidth() + 2} fill="none" stroke={ink.DEFAULT} strokeWidth={2} pointerEvents="none" />}
+            {item.emphasis && (
+              <rect
+                x={-1}
+                y={top - 1}
+                width={x(start) + 2}
+                height={y.bandwidth() + 2}
+                fill="none"
+                stroke={ink.DEFAULT}
+                strokeWidth={2}
+                pointerEvents="none"
+              />
+            )}
             {item.note && (
-              <text x={x(start) + 6} y={top + y.bandwidth() / 2} dy="0.35em" fontSize={TICK_FONT} fontWeight={600} fill={ink.DEFAULT} data-chart-part="note">
+              <text
+                x={x(start) + 6}
+                y={top + y.bandwidth() / 2}
+                dy="0.35em"
+                fontSize={TICK_FONT}
+                fontWeight={600}
+                fill={ink.DEFAULT}
+                data-chart-part="note"
+              >
                 {item.note}
               </text>
             )}

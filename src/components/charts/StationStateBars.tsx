@@ -6,7 +6,8 @@ import { stateColour, stateCsvName, stateLabel, type StationState } from './pale
 import { StackedShareBars, type ShareItem } from './StackedShareBars';
 import { checkNamedShares, type Problem } from './validate';
 
-export type StateShares = Partial<Record<StationState, number>> & Record<'processing' | 'starved' | 'blocked' | 'down', number>;
+export type StateShares = Partial<Record<StationState, number>> &
+  Record<'processing' | 'starved' | 'blocked' | 'down', number>;
 
 export interface StationStateBarsStation {
   id: string;
@@ -33,7 +34,10 @@ const BASE_STATES = ['processing', 'starved', 'blocked', 'down'] as const;
 /** Rounding in time-weighted sums leaves shares a hair off 1; past this the data is wrong. */
 const SUM_TOLERANCE = 0.005;
 
-export function sortStations(stations: readonly StationStateBarsStation[], sortBy: StationSortKey): StationStateBarsStation[] {
+export function sortStations(
+  stations: readonly StationStateBarsStation[],
+  sortBy: StationSortKey,
+): StationStateBarsStation[] {
   const sorted = [...stations];
   if (sortBy === 'name') sorted.sort((a, b) => a.name.localeCompare(b.name));
   else if (sortBy !== 'line-order') sorted.sort((a, b) => (b.shares[sortBy] ?? 0) - (a.shares[sortBy] ?? 0));
@@ -43,23 +47,39 @@ export function sortStations(stations: readonly StationStateBarsStation[], sortB
 function barsProblem(stations: readonly StationStateBarsStation[], states: readonly StationState[]): Problem {
   for (const [i, station] of stations.entries()) {
     const values = states.map((state) => station.shares[state] ?? 0);
-    const problem = checkNamedShares(states.map((state, s) => [state, values[s]] as const), `stations[${i}].shares`);
+    const problem = checkNamedShares(
+      states.map((state, s) => [state, values[s]] as const),
+      `stations[${i}].shares`,
+    );
     if (problem) return problem;
     const sum = values.reduce((a, b) => a + b, 0);
-    if (Math.abs(sum - 1) > SUM_TOLERANCE) return `stations[${i}].shares (${station.name}) add up to ${sum}; the states must cover the whole time, adding up to 1`;
+    if (Math.abs(sum - 1) > SUM_TOLERANCE)
+      return `stations[${i}].shares (${station.name}) add up to ${sum}; the states must cover the whole time, adding up to 1`;
   }
   return null;
 }
 
 export function StationStateBars(props: StationStateBarsProps) {
-  const { stations, bottleneckId, bottleneckShare, sortBy = 'line-order', title = 'Where each station spends its time' } = props;
-  const states: StationState[] = stations.some((s) => (s.shares.onBreak ?? 0) > 0) ? [...BASE_STATES, 'onBreak'] : [...BASE_STATES];
+  const {
+    stations,
+    bottleneckId,
+    bottleneckShare,
+    sortBy = 'line-order',
+    title = 'Where each station spends its time',
+  } = props;
+  const states: StationState[] = stations.some((s) => (s.shares.onBreak ?? 0) > 0)
+    ? [...BASE_STATES, 'onBreak']
+    : [...BASE_STATES];
   const problem = barsProblem(stations, states);
   if (problem) return <ChartMessage title={title} tone="problem" message={`These bars cannot be drawn: ${problem}.`} />;
-  if (stations.length === 0) return <ChartMessage title={title} tone="empty" message="No station states to show: the line has no stations yet." />;
+  if (stations.length === 0)
+    return (
+      <ChartMessage title={title} tone="empty" message="No station states to show: the line has no stations yet." />
+    );
 
   const bottleneck = stations.find((s) => s.id === bottleneckId);
-  const note = bottleneckShare === undefined ? '◀ bottleneck' : `◀ bottleneck (${formatShare(bottleneckShare)} of the time)`;
+  const note =
+    bottleneckShare === undefined ? '◀ bottleneck' : `◀ bottleneck (${formatShare(bottleneckShare)} of the time)`;
   const items: ShareItem[] = sortStations(stations, sortBy).map((station) => ({
     id: station.id,
     label: station.name,
@@ -73,9 +93,18 @@ export function StationStateBars(props: StationStateBarsProps) {
   return (
     <StackedShareBars
       title={title}
-      subtitle={sortBy === 'line-order' ? 'In line order' : `Sorted by ${sortBy === 'name' ? 'name' : `${stateLabel[sortBy]} share`}`}
+      subtitle={
+        sortBy === 'line-order'
+          ? 'In line order'
+          : `Sorted by ${sortBy === 'name' ? 'name' : `${stateLabel[sortBy]} share`}`
+      }
       summary={`${stations.length} stations. ${bottleneck ? `The bottleneck is ${bottleneck.name}, processing ${formatShare(bottleneck.shares.processing)} of the time. ` : ''}Busiest: ${busiest.name} (${formatShare(busiest.shares.processing)} processing).`}
-      categories={states.map((state) => ({ key: state, label: stateLabel[state], colour: stateColour[state], csvName: stateCsvName(state) }))}
+      categories={states.map((state) => ({
+        key: state,
+        label: stateLabel[state],
+        colour: stateColour[state],
+        csvName: stateCsvName(state),
+      }))}
       items={items}
       axisLabel="Share of simulated time after warm-up (%)"
       tableCaption="Share of time each station spent in each state"

@@ -34,7 +34,12 @@ export interface StateRun {
   state: StationState;
 }
 
-export function stateRuns(stationCount: number, binCount: number, states: readonly StationState[], shares: readonly number[]): StateRun[] {
+export function stateRuns(
+  stationCount: number,
+  binCount: number,
+  states: readonly StationState[],
+  shares: readonly number[],
+): StateRun[] {
   const runs: StateRun[] = [];
   for (let station = 0; station < stationCount; station++) {
     let open: StateRun | null = null;
@@ -69,14 +74,34 @@ function timelineProblem(props: StationStateTimelineProps) {
 }
 
 export function StationStateTimeline(props: StationStateTimelineProps) {
-  const { stations, states, shares, timeBinSeconds, startMinutes = 0, warmupMinutes, title = 'Station states over time', rowHeight = 26 } = props;
+  const {
+    stations,
+    states,
+    shares,
+    timeBinSeconds,
+    startMinutes = 0,
+    warmupMinutes,
+    title = 'Station states over time',
+    rowHeight = 26,
+  } = props;
   const shell = useChartShell(props.width);
   const problem = useMemo(() => timelineProblem(props), [props]);
   const bins = problem || stations.length === 0 ? 0 : shares.length / (stations.length * states.length);
-  const runs = useMemo(() => (bins ? stateRuns(stations.length, bins, states, shares) : []), [bins, stations.length, states, shares]);
+  const runs = useMemo(
+    () => (bins ? stateRuns(stations.length, bins, states, shares) : []),
+    [bins, stations.length, states, shares],
+  );
 
-  if (problem) return <ChartMessage title={title} tone="problem" message={`This timeline cannot be drawn: ${problem}.`} />;
-  if (bins === 0) return <ChartMessage title={title} tone="empty" message="No station states were recorded: the line has no stations or the run ended before its first time bin." />;
+  if (problem)
+    return <ChartMessage title={title} tone="problem" message={`This timeline cannot be drawn: ${problem}.`} />;
+  if (bins === 0)
+    return (
+      <ChartMessage
+        title={title}
+        tone="empty"
+        message="No station states were recorded: the line has no stations or the run ended before its first time bin."
+      />
+    );
 
   const nameWidth = Math.min(170, Math.max(...stations.map((s) => estimateTextWidth(s.name, TICK_FONT))) + 14);
   const margin: Margin = { top: 4, right: 16, bottom: 56, left: nameWidth };
@@ -84,7 +109,10 @@ export function StationStateTimeline(props: StationStateTimelineProps) {
   const binMinutes = timeBinSeconds / 60;
   const endMinutes = startMinutes + bins * binMinutes;
   const x = scaleLinear().domain([startMinutes, endMinutes]).range([0, plotWidth]);
-  const y = scaleBand<string>().domain(stations.map((_, i) => String(i))).range([0, stations.length * rowHeight]).paddingInner(0.18);
+  const y = scaleBand<string>()
+    .domain(stations.map((_, i) => String(i)))
+    .range([0, stations.length * rowHeight])
+    .paddingInner(0.18);
   const plotHeight = stations.length * rowHeight;
   const showWarmup = warmupMinutes !== undefined && warmupMinutes > startMinutes && warmupMinutes < endMinutes;
   const binX = (bin: number) => x(startMinutes + bin * binMinutes);
@@ -108,8 +136,18 @@ export function StationStateTimeline(props: StationStateTimelineProps) {
       legend={{
         kind: 'swatches',
         items: [
-          ...states.map((state): LegendItem => ({ label: stateLabel[state], swatch: { kind: 'box', fill: stateColour[state] } })),
-          ...(showWarmup ? [{ label: 'end of warm-up', swatch: { kind: 'line', colour: ink.DEFAULT, dash: '4 3', strokeWidth: 1.5 } } as LegendItem] : []),
+          ...states.map((state): LegendItem => ({
+            label: stateLabel[state],
+            swatch: { kind: 'box', fill: stateColour[state] },
+          })),
+          ...(showWarmup
+            ? [
+                {
+                  label: 'end of warm-up',
+                  swatch: { kind: 'line', colour: ink.DEFAULT, dash: '4 3', strokeWidth: 1.5 },
+                } as LegendItem,
+              ]
+            : []),
         ],
       }}
       margin={margin}
@@ -131,7 +169,19 @@ export function StationStateTimeline(props: StationStateTimelineProps) {
           />
         ))}
       </g>
-      {showWarmup && <line x1={x(warmupMinutes)} x2={x(warmupMinutes)} y1={-3} y2={plotHeight + 3} stroke={ink.DEFAULT} strokeWidth={1.5} strokeDasharray="4 3" pointerEvents="none" data-chart-part="warmup" />}
+      {showWarmup && (
+        <line
+          x1={x(warmupMinutes)}
+          x2={x(warmupMinutes)}
+          y1={-3}
+          y2={plotHeight + 3}
+          stroke={ink.DEFAULT}
+          strokeWidth={1.5}
+          strokeDasharray="4 3"
+          pointerEvents="none"
+          data-chart-part="warmup"
+        />
+      )}
       {stations.map((station, i) => (
         <rect
           key={station.id}
@@ -147,17 +197,36 @@ export function StationStateTimeline(props: StationStateTimelineProps) {
       ))}
       <g data-chart-part="y-axis">
         {bandTicks(y, (key) => stations[Number(key)].name).map((tick) => (
-          <text key={tick.label + tick.position} x={-8} y={tick.position} dy="0.35em" textAnchor="end" fontSize={TICK_FONT} fill={ink.DEFAULT}>
+          <text
+            key={tick.label + tick.position}
+            x={-8}
+            y={tick.position}
+            dy="0.35em"
+            textAnchor="end"
+            fontSize={TICK_FONT}
+            fill={ink.DEFAULT}
+          >
             {tick.label}
           </text>
         ))}
       </g>
-      <AxisBottom ticks={linearTicks(x, plotWidth / 80)} width={plotWidth} plotHeight={plotHeight} label="Simulated time (min)" labelOffset={34} />
+      <AxisBottom
+        ticks={linearTicks(x, plotWidth / 80)}
+        width={plotWidth}
+        plotHeight={plotHeight}
+        label="Simulated time (min)"
+        labelOffset={34}
+      />
     </ChartFrame>
   );
 }
 
-function meanShares(states: readonly StationState[], shares: readonly number[], bins: number, station: number): number[] {
+function meanShares(
+  states: readonly StationState[],
+  shares: readonly number[],
+  bins: number,
+  station: number,
+): number[] {
   return states.map((_, s) => {
     let sum = 0;
     for (let bin = 0; bin < bins; bin++) sum += shares[(station * bins + bin) * states.length + s];
@@ -165,7 +234,12 @@ function meanShares(states: readonly StationState[], shares: readonly number[], 
   });
 }
 
-function timelineSummary(stations: readonly StationRef[], states: readonly StationState[], shares: readonly number[], bins: number): string {
+function timelineSummary(
+  stations: readonly StationRef[],
+  states: readonly StationState[],
+  shares: readonly number[],
+  bins: number,
+): string {
   const parts = stations.map((station, i) => {
     const means = meanShares(states, shares, bins, i);
     const top = means.indexOf(Math.max(...means));
@@ -174,7 +248,12 @@ function timelineSummary(stations: readonly StationRef[], states: readonly Stati
   return `States of ${stations.length} stations over ${bins} time bins. ${parts.join('; ')}.`;
 }
 
-function stateTotalsTable(stations: readonly StationRef[], states: readonly StationState[], shares: readonly number[], bins: number): ChartTable {
+function stateTotalsTable(
+  stations: readonly StationRef[],
+  states: readonly StationState[],
+  shares: readonly number[],
+  bins: number,
+): ChartTable {
   return {
     caption: 'Share of the whole run each station spent in each state',
     columns: ['Station', ...states.map((state) => stateLabel[state])],
@@ -182,7 +261,14 @@ function stateTotalsTable(stations: readonly StationRef[], states: readonly Stat
   };
 }
 
-export function timelineCsv(stations: readonly StationRef[], states: readonly StationState[], shares: readonly number[], bins: number, start: number, binMinutes: number): ChartTable {
+export function timelineCsv(
+  stations: readonly StationRef[],
+  states: readonly StationState[],
+  shares: readonly number[],
+  bins: number,
+  start: number,
+  binMinutes: number,
+): ChartTable {
   const rows: (string | number)[][] = [];
   stations.forEach((station, i) => {
     for (let bin = 0; bin < bins; bin++) {
@@ -190,5 +276,9 @@ export function timelineCsv(stations: readonly StationRef[], states: readonly St
       rows.push([station.id, station.name, start + bin * binMinutes, ...states.map((_, s) => shares[offset + s])]);
     }
   });
-  return { caption: 'Station states', columns: ['station_id', 'station', 'time_start_min', ...states.map((s) => `${stateCsvName(s)}_share`)], rows };
+  return {
+    caption: 'Station states',
+    columns: ['station_id', 'station', 'time_start_min', ...states.map((s) => `${stateCsvName(s)}_share`)],
+    rows,
+  };
 }

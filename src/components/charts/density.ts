@@ -44,12 +44,20 @@ export function silvermanBandwidth(samples: readonly number[]): number {
 }
 
 /** The Gaussian kernel density of the samples at Silverman's bandwidth unless one is given. */
-export function gaussianKde(samples: readonly number[], bandwidth = silvermanBandwidth(samples)): (x: number) => number {
+export function gaussianKde(
+  samples: readonly number[],
+  bandwidth = silvermanBandwidth(samples),
+): (x: number) => number {
   return kernelDensityEstimation([...samples], 'gaussian', bandwidth);
 }
 
 /** Evenly spaced points of a density over a range, ready for a line or an area. */
-export function sampleCurve(density: (x: number) => number, lo: number, hi: number, points = 120): Array<[number, number]> {
+export function sampleCurve(
+  density: (x: number) => number,
+  lo: number,
+  hi: number,
+  points = 120,
+): Array<[number, number]> {
   return Array.from({ length: points }, (_, i) => {
     const x = lo + ((hi - lo) * i) / (points - 1);
     const value = density(x);

@@ -1,7 +1,14 @@
 // Lanewright's chart components: plain typed props in, SVG out. They fetch nothing.
 export { SpaceTimeHeatmap, type SpaceTimeHeatmapProps, type SpaceTimeLane } from './SpaceTimeHeatmap';
 export { StationStateTimeline, stateRuns, type StationStateTimelineProps } from './StationStateTimeline';
-export { StationStateBars, sortStations, type StationStateBarsProps, type StationStateBarsStation, type StationSortKey, type StateShares } from './StationStateBars';
+export {
+  StationStateBars,
+  sortStations,
+  type StationStateBarsProps,
+  type StationStateBarsStation,
+  type StationSortKey,
+  type StateShares,
+} from './StationStateBars';
 export { LineBalanceChart, effectiveCycle, type LineBalanceChartProps, type BalanceStep } from './LineBalanceChart';
 export { Histogram, type HistogramProps, type FittedDensity } from './Histogram';
 export { TimeSeriesChart, type TimeSeriesChartProps, type TimeSeries } from './TimeSeriesChart';

@@ -23,7 +23,8 @@ export const stateLabel: Record<StationState, string> = {
 };
 
 /** A state's column name in CSV exports: snake case, and the break state under its meaning. */
-export const stateCsvName = (state: string): string => (state === 'idle' ? 'on_break' : state.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`));
+export const stateCsvName = (state: string): string =>
+  state === 'idle' ? 'on_break' : state.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`);
 
 /**
  * Series colours for lines and fitted curves: the Okabe–Ito set (Okabe & Ito, "Color Universal

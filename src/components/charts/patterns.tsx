@@ -6,7 +6,17 @@ export function useSvgId(prefix: string): string {
   return `${prefix}-${useId().replace(/[^a-zA-Z0-9_-]/g, '')}`;
 }
 
-export function HatchPattern({ id, colour, background = 'none', spacing = 6 }: { id: string; colour: string; background?: string; spacing?: number }) {
+export function HatchPattern({
+  id,
+  colour,
+  background = 'none',
+  spacing = 6,
+}: {
+  id: string;
+  colour: string;
+  background?: string;
+  spacing?: number;
+}) {
   return (
     <pattern id={id} patternUnits="userSpaceOnUse" width={spacing} height={spacing} patternTransform="rotate(45)">
       <rect width={spacing} height={spacing} fill={background} />

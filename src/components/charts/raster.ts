@@ -60,14 +60,27 @@ function storedZlib(raw: Uint8Array): Uint8Array {
 
 /** RGB pixels, row by row from the top, as a PNG file (Boutell et al., PNG Specification, W3C 2003). */
 export function encodePng(width: number, height: number, rgb: Uint8Array): Uint8Array {
-  if (rgb.length !== width * height * 3) throw new Error(`raster: ${rgb.length} bytes given for ${width} × ${height} RGB pixels`);
+  if (rgb.length !== width * height * 3)
+    throw new Error(`raster: ${rgb.length} bytes given for ${width} × ${height} RGB pixels`);
   const raw = new Uint8Array(height * (1 + width * 3));
   for (let y = 0; y < height; y++) {
     raw[y * (1 + width * 3)] = 0; // filter type "none" for every scanline
     raw.set(rgb.subarray(y * width * 3, (y + 1) * width * 3), y * (1 + width * 3) + 1);
   }
   const header = new Uint8Array([...u32(width), ...u32(height), 8, 2, 0, 0, 0]);
-  const bytes = [137, 80, 78, 71, 13, 10, 26, 10, ...chunk('IHDR', header), ...chunk('IDAT', storedZlib(raw)), ...chunk('IEND', new Uint8Array(0))];
+  const bytes = [
+    137,
+    80,
+    78,
+    71,
+    13,
+    10,
+    26,
+    10,
+    ...chunk('IHDR', header),
+    ...chunk('IDAT', storedZlib(raw)),
+    ...chunk('IEND', new Uint8Array(0)),
+  ];
   return Uint8Array.from(bytes);
 }
 

@@ -17,7 +17,11 @@ export function statesProblem(states: readonly StationState[], path = 'states'):
 }
 
 /** Shares of one group (a station, or a station in one time bin) must not add up to more than 1. */
-export function groupSumProblem(shares: readonly number[], groupSize: number, describe: (group: number) => string): Problem {
+export function groupSumProblem(
+  shares: readonly number[],
+  groupSize: number,
+  describe: (group: number) => string,
+): Problem {
   return firstProblem(
     () => checkShares(shares, 'shares'),
     () => {
@@ -32,7 +36,11 @@ export function groupSumProblem(shares: readonly number[], groupSize: number, de
 }
 
 /** The state holding the largest share; null when nothing was recorded (all shares zero). */
-export function dominantState(shares: readonly number[], offset: number, states: readonly StationState[]): StationState | null {
+export function dominantState(
+  shares: readonly number[],
+  offset: number,
+  states: readonly StationState[],
+): StationState | null {
   let best: StationState | null = null;
   let bestShare = 0;
   states.forEach((state, s) => {

@@ -22,9 +22,12 @@ export function checkFinite(value: number, path: string): Problem {
 export function checkNumbers(values: readonly number[], path: string, range?: { min?: number; max?: number }): Problem {
   for (let i = 0; i < values.length; i++) {
     const value = values[i];
-    if (typeof value !== 'number' || !Number.isFinite(value)) return `${path}[${i}] must be a finite number, got ${value}`;
-    if (range?.min !== undefined && value < range.min) return `${path}[${i}] is ${value}, below the lowest allowed value ${range.min}`;
-    if (range?.max !== undefined && value > range.max) return `${path}[${i}] is ${value}, above the highest allowed value ${range.max}`;
+    if (typeof value !== 'number' || !Number.isFinite(value))
+      return `${path}[${i}] must be a finite number, got ${value}`;
+    if (range?.min !== undefined && value < range.min)
+      return `${path}[${i}] is ${value}, below the lowest allowed value ${range.min}`;
+    if (range?.max !== undefined && value > range.max)
+      return `${path}[${i}] is ${value}, above the highest allowed value ${range.max}`;
   }
   return null;
 }
@@ -37,10 +40,15 @@ export function checkShares(values: readonly number[], path: string): Problem {
 }
 
 /** Named shares, so a message points at `stations[2].shares.blocked` rather than an index. */
-export function checkNamedShares(entries: ReadonlyArray<readonly [name: string, value: number]>, path: string): Problem {
+export function checkNamedShares(
+  entries: ReadonlyArray<readonly [name: string, value: number]>,
+  path: string,
+): Problem {
   for (const [name, value] of entries) {
-    if (typeof value !== 'number' || !Number.isFinite(value)) return `${path}.${name} must be a finite number, got ${value}`;
-    if (value < -SHARE_TOLERANCE || value > 1 + SHARE_TOLERANCE) return `${path}.${name} is ${value}; a share lies between 0 and 1`;
+    if (typeof value !== 'number' || !Number.isFinite(value))
+      return `${path}.${name} must be a finite number, got ${value}`;
+    if (value < -SHARE_TOLERANCE || value > 1 + SHARE_TOLERANCE)
+      return `${path}.${name} is ${value}; a share lies between 0 and 1`;
   }
   return null;
 }

@@ -69,7 +69,8 @@ export function planLane(lane: DraftLane, index: number, widthMm: number): PlanL
   if (!lane.start || !finite(lane.start.xMm) || !finite(lane.start.yMm) || !isHeading(lane.heading)) return null;
   const modules: { lengthMm: number; count: number }[] = [];
   for (const module of lane.modules ?? []) {
-    if (!module || !finite(module.lengthMm) || !finite(module.count) || module.lengthMm <= 0 || module.count < 1) return null;
+    if (!module || !finite(module.lengthMm) || !finite(module.count) || module.lengthMm <= 0 || module.count < 1)
+      return null;
     modules.push({ lengthMm: module.lengthMm, count: module.count });
   }
   const lengthMm = laneLengthMm({ modules });
@@ -95,7 +96,19 @@ export function planLane(lane: DraftLane, index: number, widthMm: number): PlanL
     minY: Math.min(start.y, end.y) - (alongX ? half : 0),
     maxY: Math.max(start.y, end.y) + (alongX ? half : 0),
   };
-  return { index, id: lane.id ?? `lane ${index + 1}`, name: lane.name ?? '', deckId: lane.deckId ?? '', heading, lengthMm, moduleCount, start, end, jointsMm, box };
+  return {
+    index,
+    id: lane.id ?? `lane ${index + 1}`,
+    name: lane.name ?? '',
+    deckId: lane.deckId ?? '',
+    heading,
+    lengthMm,
+    moduleCount,
+    start,
+    end,
+    jointsMm,
+    box,
+  };
 }
 
 export function planLanes(lanes: readonly (DraftLane | undefined)[] | undefined, widthMm: unknown): PlanLane[] {

@@ -22,7 +22,8 @@ export interface DrawingOverlay {
   elevation: (frame: ElevationFrame) => ReactNode;
 }
 
-const metres = (mm: number) => `${(mm / 1000).toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m`;
+const metres = (mm: number) =>
+  `${(mm / 1000).toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m`;
 
 function Fact({ label, value, name }: { label: string; value: string; name: string }) {
   return (
@@ -48,24 +49,46 @@ export function LayoutDrawing({ document, selection = null, onSelect, overlay }:
         </p>
       )}
       <dl className="grid grid-cols-2 gap-4 sm:grid-cols-4">
-        <Fact name="footprint" label="Footprint" value={print ? `${metres(print.lengthMm)} × ${metres(print.widthMm)}` : '—'} />
-        <Fact name="area" label="Floor area" value={print ? `${print.areaM2.toLocaleString('en-GB', { maximumFractionDigits: 2 })} m²` : '—'} />
+        <Fact
+          name="footprint"
+          label="Footprint"
+          value={print ? `${metres(print.lengthMm)} × ${metres(print.widthMm)}` : '—'}
+        />
+        <Fact
+          name="area"
+          label="Floor area"
+          value={print ? `${print.areaM2.toLocaleString('en-GB', { maximumFractionDigits: 2 })} m²` : '—'}
+        />
         <Fact name="modules" label="Track modules" value={model.moduleCount.toLocaleString('en-GB')} />
         <Fact name="track-length" label="Track length" value={formatLengthMm(model.trackLengthMm)} />
       </dl>
       {model.undrawnLanes.length > 0 && (
         <p className="text-sm text-caution">
-          {formatCount(model.undrawnLanes.length, 'lane')} not drawn until {model.undrawnLanes.length === 1 ? 'its' : 'their'} modules, start point and heading are complete.
+          {formatCount(model.undrawnLanes.length, 'lane')} not drawn until{' '}
+          {model.undrawnLanes.length === 1 ? 'its' : 'their'} modules, start point and heading are complete.
         </p>
       )}
       {frame ? (
-        model.decks.map((deck) => <PlanView key={deck.id} model={model} deck={deck} frame={frame} selection={selection} onSelect={onSelect} overlay={overlay?.plan} />)
+        model.decks.map((deck) => (
+          <PlanView
+            key={deck.id}
+            model={model}
+            deck={deck}
+            frame={frame}
+            selection={selection}
+            onSelect={onSelect}
+            overlay={overlay?.plan}
+          />
+        ))
       ) : (
-        <p className="rounded-md border border-dashed border-ink-faint p-6 text-center text-ink-soft">Nothing to draw yet: add a lane with modules, a start point and a heading.</p>
+        <p className="rounded-md border border-dashed border-ink-faint p-6 text-center text-ink-soft">
+          Nothing to draw yet: add a lane with modules, a start point and a heading.
+        </p>
       )}
       <ElevationView model={model} overlay={overlay?.elevation} />
       <p className="text-xs text-ink-soft">
-        Filled circles are automatic stations, hollow ones manual. Joint ticks mark module ends; chevrons show the direction of travel; squares mark elevator ends and lateral transfers.
+        Filled circles are automatic stations, hollow ones manual. Joint ticks mark module ends; chevrons show the
+        direction of travel; squares mark elevator ends and lateral transfers.
       </p>
     </div>
   );

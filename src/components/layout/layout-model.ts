@@ -9,7 +9,16 @@ export interface LayoutDraft {
   lanes?: (DraftLane | undefined)[];
   links?: ({ fromLaneId?: string; toLaneId?: string } | undefined)[];
   transfers?: ({ id?: string; name?: string; kind?: string; fromLaneId?: string; toLaneId?: string } | undefined)[];
-  steps?: ({ id?: string; name?: string; stations?: ({ id?: string; name?: string; laneId?: string; positionMm?: unknown; operation?: string } | undefined)[] } | undefined)[];
+  steps?: (
+    | {
+        id?: string;
+        name?: string;
+        stations?: (
+          { id?: string; name?: string; laneId?: string; positionMm?: unknown; operation?: string } | undefined
+        )[];
+      }
+    | undefined
+  )[];
 }
 
 export interface PlanDeck {
@@ -63,17 +72,19 @@ function stationsOf(draft: LayoutDraft, lanes: readonly PlanLane[]): PlanStation
       const position = station?.positionMm;
       if (!station || !lane || typeof position !== 'number' || !Number.isFinite(position)) return [];
       const along = Math.min(Math.max(position, 0), lane.lengthMm);
-      return [{
-        stepIndex,
-        stationIndex,
-        id: station.id ?? '',
-        name: station.name ?? '',
-        stepName: step?.name ?? '',
-        laneIndex: lane.index,
-        deckId: lane.deckId,
-        manual: station.operation === 'manual',
-        point: pointAlong(lane, along),
-      }];
+      return [
+        {
+          stepIndex,
+          stationIndex,
+          id: station.id ?? '',
+          name: station.name ?? '',
+          stepName: step?.name ?? '',
+          laneIndex: lane.index,
+          deckId: lane.deckId,
+          manual: station.operation === 'manual',
+          point: pointAlong(lane, along),
+        },
+      ];
     }),
   );
 }
@@ -90,7 +101,13 @@ function joinsOf(draft: LayoutDraft, lanes: readonly PlanLane[]): PlanJoin[] {
     const from = transfer?.fromLaneId === undefined ? undefined : laneById.get(transfer.fromLaneId);
     const to = transfer?.toLaneId === undefined ? undefined : laneById.get(transfer.toLaneId);
     if (!transfer || !from || !to || !JOIN_KINDS.includes(transfer.kind ?? '')) return;
-    joins.push({ key: `transfer-${i}`, kind: transfer.kind as JoinKind, name: transfer.name || transfer.id || `transfer ${i + 1}`, from, to });
+    joins.push({
+      key: `transfer-${i}`,
+      kind: transfer.kind as JoinKind,
+      name: transfer.name || transfer.id || `transfer ${i + 1}`,
+      from,
+      to,
+    });
   });
   return joins;
 }
@@ -103,7 +120,13 @@ export function layoutModel(draft: LayoutDraft): LayoutModel {
   const decks = (draft.decks ?? []).flatMap((deck) => {
     if (!deck?.id) return [];
     const elevation = deck.elevationMm;
-    return [{ id: deck.id, name: deck.name || deck.id, elevationMm: typeof elevation === 'number' && Number.isFinite(elevation) ? elevation : null }];
+    return [
+      {
+        id: deck.id,
+        name: deck.name || deck.id,
+        elevationMm: typeof elevation === 'number' && Number.isFinite(elevation) ? elevation : null,
+      },
+    ];
   });
   return {
     widthMm,

@@ -3,9 +3,23 @@
 // they move.
 import type { ReactNode } from 'react';
 
-export function OverlayLayer({ widthPx, heightPx, children }: { widthPx: number; heightPx: number; children: ReactNode }) {
+export function OverlayLayer({
+  widthPx,
+  heightPx,
+  children,
+}: {
+  widthPx: number;
+  heightPx: number;
+  children: ReactNode;
+}) {
   return (
-    <svg viewBox={`0 0 ${widthPx} ${heightPx}`} className="pointer-events-none absolute inset-0 h-full w-full" style={{ willChange: 'transform' }} aria-hidden="true" data-drawing-overlay>
+    <svg
+      viewBox={`0 0 ${widthPx} ${heightPx}`}
+      className="pointer-events-none absolute inset-0 h-full w-full"
+      style={{ willChange: 'transform' }}
+      aria-hidden="true"
+      data-drawing-overlay
+    >
       {children}
     </svg>
   );

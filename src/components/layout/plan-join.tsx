@@ -28,11 +28,35 @@ export function PlanJoinShape({ join, frame }: { join: PlanJoin; frame: PlanFram
   return (
     <g data-join={join.kind} aria-label={label}>
       <title>{label}</title>
-      <line x1={a.x} y1={a.y} x2={b.x} y2={b.y} stroke={colour.join} strokeWidth={join.kind === 'link' ? 1.5 : 3} strokeDasharray={join.kind === 'link' ? '4 3' : undefined} />
+      <line
+        x1={a.x}
+        y1={a.y}
+        x2={b.x}
+        y2={b.y}
+        stroke={colour.join}
+        strokeWidth={join.kind === 'link' ? 1.5 : 3}
+        strokeDasharray={join.kind === 'link' ? '4 3' : undefined}
+      />
       {join.kind === 'lateral' && (
         <>
-          <rect x={a.x - 4} y={a.y - 4} width={8} height={8} fill={colour.paper} stroke={colour.join} strokeWidth={1.5} />
-          <rect x={b.x - 4} y={b.y - 4} width={8} height={8} fill={colour.paper} stroke={colour.join} strokeWidth={1.5} />
+          <rect
+            x={a.x - 4}
+            y={a.y - 4}
+            width={8}
+            height={8}
+            fill={colour.paper}
+            stroke={colour.join}
+            strokeWidth={1.5}
+          />
+          <rect
+            x={b.x - 4}
+            y={b.y - 4}
+            width={8}
+            height={8}
+            fill={colour.paper}
+            stroke={colour.join}
+            strokeWidth={1.5}
+          />
         </>
       )}
     </g>
@@ -40,7 +64,17 @@ export function PlanJoinShape({ join, frame }: { join: PlanJoin; frame: PlanFram
 }
 
 /** The end of an elevator that lies on this deck, labelled with where a carrier there goes next. */
-export function ElevatorEnd({ join, frame, deckId, decks }: { join: PlanJoin; frame: PlanFrame; deckId: string; decks: readonly PlanDeck[] }) {
+export function ElevatorEnd({
+  join,
+  frame,
+  deckId,
+  decks,
+}: {
+  join: PlanJoin;
+  frame: PlanFrame;
+  deckId: string;
+  decks: readonly PlanDeck[];
+}) {
   const { colour } = DRAWING;
   const leaving = join.from.deckId === deckId;
   const point = leaving ? join.from.end : join.to.start;
@@ -62,7 +96,12 @@ export function ElevatorEnd({ join, frame, deckId, decks }: { join: PlanJoin; fr
     <g data-join="elevator" data-elevator-end={leaving ? 'leave' : 'arrive'} aria-label={`Elevator ${text}`}>
       <title>{`Elevator ${text}`}</title>
       <rect x={x - 9} y={y - 9} width={18} height={18} fill={colour.paper} stroke={colour.join} strokeWidth={2} />
-      <path d={`M${x},${y - tip} L${x},${y + tip} M${x - 4},${y + tip / 2} L${x},${y + tip} L${x + 4},${y + tip / 2}`} stroke={colour.join} fill="none" strokeWidth={1.8} />
+      <path
+        d={`M${x},${y - tip} L${x},${y + tip} M${x - 4},${y + tip / 2} L${x},${y + tip} L${x + 4},${y + tip / 2}`}
+        stroke={colour.join}
+        fill="none"
+        strokeWidth={1.8}
+      />
       <text x={x} y={y + 24} fontSize={10} fill={colour.join} textAnchor={anchorFor(x)}>
         {words}
       </text>

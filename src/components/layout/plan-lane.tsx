@@ -51,11 +51,7 @@ export function PlanLaneShape({ lane, frame, widthMm, selected, onSelect }: Plan
   const label = `Lane ${lane.id}${lane.name ? ` (${lane.name})` : ''}, ${formatLengthMm(lane.lengthMm)}, heading ${lane.heading}`;
   const entry = { x: frame.x(lane.start.x), y: frame.y(lane.start.y) };
   return (
-    <g
-      data-lane-id={lane.id}
-      data-length-mm={lane.lengthMm}
-      {...selectable(label, selected, onSelect)}
-    >
+    <g data-lane-id={lane.id} data-length-mm={lane.lengthMm} {...selectable(label, selected, onSelect)}>
       <title>{label}</title>
       <rect
         data-lane-body
@@ -67,12 +63,24 @@ export function PlanLaneShape({ lane, frame, widthMm, selected, onSelect }: Plan
         stroke={selected ? colour.accent : colour.inkSoft}
         strokeWidth={selected ? 3 : 1}
       />
-      {lane.jointsMm.filter((_, i) => i % tickEvery === tickEvery - 1).map((mm) => {
-        const p = pointAlong(lane, mm);
-        const px = frame.x(p.x);
-        const py = frame.y(p.y);
-        return <line key={mm} x1={px - dy * across} x2={px + dy * across} y1={py - dx * across} y2={py + dx * across} stroke={colour.faint} strokeWidth={1} />;
-      })}
+      {lane.jointsMm
+        .filter((_, i) => i % tickEvery === tickEvery - 1)
+        .map((mm) => {
+          const p = pointAlong(lane, mm);
+          const px = frame.x(p.x);
+          const py = frame.y(p.y);
+          return (
+            <line
+              key={mm}
+              x1={px - dy * across}
+              x2={px + dy * across}
+              y1={py - dx * across}
+              y2={py + dx * across}
+              stroke={colour.faint}
+              strokeWidth={1}
+            />
+          );
+        })}
       {Array.from({ length: arrows }, (_, i) => {
         const p = pointAlong(lane, ((i + 0.5) / arrows) * lane.lengthMm);
         const cx = frame.x(p.x);
@@ -84,7 +92,9 @@ export function PlanLaneShape({ lane, frame, widthMm, selected, onSelect }: Plan
         const tip = `${cx + ux * size},${cy + uy * size}`;
         const left = `${cx - ux * size - uy * size},${cy - uy * size + ux * size}`;
         const right = `${cx - ux * size + uy * size},${cy - uy * size - ux * size}`;
-        return <polyline key={i} points={`${left} ${tip} ${right}`} fill="none" stroke={colour.inkSoft} strokeWidth={1.5} />;
+        return (
+          <polyline key={i} points={`${left} ${tip} ${right}`} fill="none" stroke={colour.inkSoft} strokeWidth={1.5} />
+        );
       })}
       <circle cx={entry.x} cy={entry.y} r={3} fill={colour.ink} />
       {/* The id sits just before the entry, away from the station labels above and below the lane. */}

@@ -1,8 +1,6 @@
 // What the user has picked in the drawing or the editor's lists; both show it highlighted.
 export type LayoutSelection =
-  | { kind: 'lane'; index: number }
-  | { kind: 'station'; stepIndex: number; stationIndex: number }
-  | null;
+  { kind: 'lane'; index: number } | { kind: 'station'; stepIndex: number; stationIndex: number } | null;
 
 export function isLaneSelected(selection: LayoutSelection, index: number): boolean {
   return selection?.kind === 'lane' && selection.index === index;

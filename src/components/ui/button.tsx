@@ -26,9 +26,24 @@ interface ButtonProps extends ComponentProps<'button'> {
   pendingLabel?: string;
 }
 
-export function Button({ variant = 'primary', pending = false, pendingLabel, type = 'button', disabled, className, children, ...rest }: ButtonProps) {
+export function Button({
+  variant = 'primary',
+  pending = false,
+  pendingLabel,
+  type = 'button',
+  disabled,
+  className,
+  children,
+  ...rest
+}: ButtonProps) {
   return (
-    <button type={type} disabled={disabled || pending} aria-busy={pending || undefined} className={buttonClasses(variant, className)} {...rest}>
+    <button
+      type={type}
+      disabled={disabled || pending}
+      aria-busy={pending || undefined}
+      className={buttonClasses(variant, className)}
+      {...rest}
+    >
       {pending && <Spinner />}
       {pending && pendingLabel ? pendingLabel : children}
     </button>

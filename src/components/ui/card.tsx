@@ -2,7 +2,12 @@
 import { useId, type ComponentProps, type ReactNode } from 'react';
 
 export function Card({ className = '', ...rest }: ComponentProps<'section'>) {
-  return <section className={`rounded-lg border border-paper-sunk bg-paper-raised p-5 shadow-sm sm:p-6 ${className}`} {...rest} />;
+  return (
+    <section
+      className={`rounded-lg border border-paper-sunk bg-paper-raised p-5 shadow-sm sm:p-6 ${className}`}
+      {...rest}
+    />
+  );
 }
 
 export function CardTitle({ className = '', ...rest }: ComponentProps<'h2'>) {
@@ -10,7 +15,15 @@ export function CardTitle({ className = '', ...rest }: ComponentProps<'h2'>) {
 }
 
 /** A card headed by its own title, which also names the region for screen readers. */
-export function TitledCard({ title, children, className = '' }: { title: string; children: ReactNode; className?: string }) {
+export function TitledCard({
+  title,
+  children,
+  className = '',
+}: {
+  title: string;
+  children: ReactNode;
+  className?: string;
+}) {
   const id = useId();
   return (
     <Card aria-labelledby={id} className={className}>

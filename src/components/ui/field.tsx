@@ -50,7 +50,13 @@ export function TextField({ label, hint, error, ...input }: TextFieldProps) {
   return (
     <FieldFrame id={id} label={label} hint={hint} error={error}>
       {(describedBy, invalid) => (
-        <input id={id} aria-invalid={invalid || undefined} aria-describedby={describedBy} className={controlClasses(invalid)} {...input} />
+        <input
+          id={id}
+          aria-invalid={invalid || undefined}
+          aria-describedby={describedBy}
+          className={controlClasses(invalid)}
+          {...input}
+        />
       )}
     </FieldFrame>
   );
@@ -67,7 +73,14 @@ export function TextAreaField({ label, hint, error, rows = 3, ...textarea }: Tex
   return (
     <FieldFrame id={id} label={label} hint={hint} error={error}>
       {(describedBy, invalid) => (
-        <textarea id={id} rows={rows} aria-invalid={invalid || undefined} aria-describedby={describedBy} className={controlClasses(invalid)} {...textarea} />
+        <textarea
+          id={id}
+          rows={rows}
+          aria-invalid={invalid || undefined}
+          aria-describedby={describedBy}
+          className={controlClasses(invalid)}
+          {...textarea}
+        />
       )}
     </FieldFrame>
   );
@@ -84,7 +97,13 @@ export function SelectField({ label, hint, error, children, ...select }: SelectF
   return (
     <FieldFrame id={id} label={label} hint={hint} error={error}>
       {(describedBy, invalid) => (
-        <select id={id} aria-invalid={invalid || undefined} aria-describedby={describedBy} className={controlClasses(invalid)} {...select}>
+        <select
+          id={id}
+          aria-invalid={invalid || undefined}
+          aria-describedby={describedBy}
+          className={controlClasses(invalid)}
+          {...select}
+        >
           {children}
         </select>
       )}

@@ -11,7 +11,11 @@ interface PageHeaderProps {
 export function PageHeader({ title, trail, description, actions }: PageHeaderProps) {
   return (
     <div className="flex flex-col gap-3 border-b border-paper-sunk pb-6">
-      {trail && <nav aria-label="Breadcrumb" className="text-sm text-ink-soft">{trail}</nav>}
+      {trail && (
+        <nav aria-label="Breadcrumb" className="text-sm text-ink-soft">
+          {trail}
+        </nav>
+      )}
       <div className="flex flex-col gap-4 sm:flex-row sm:items-start sm:justify-between">
         <div className="flex min-w-0 flex-col gap-2">
           <h1 className="text-2xl font-semibold break-words text-ink sm:text-3xl">{title}</h1>

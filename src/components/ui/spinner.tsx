@@ -8,7 +8,10 @@ interface SpinnerProps {
 export function Spinner({ label, className = '' }: SpinnerProps) {
   return (
     <span className={`inline-flex items-center gap-2 ${className}`} role={label ? 'status' : undefined}>
-      <span aria-hidden="true" className="size-4 animate-spin rounded-full border-2 border-current border-r-transparent" />
+      <span
+        aria-hidden="true"
+        className="size-4 animate-spin rounded-full border-2 border-current border-r-transparent"
+      />
       {label && <span className="text-ink-soft">{label}</span>}
     </span>
   );

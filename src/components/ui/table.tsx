@@ -14,7 +14,13 @@ export function Table({ caption, className = '', children, ...rest }: ComponentP
 }
 
 export function Th({ className = '', ...rest }: ComponentProps<'th'>) {
-  return <th scope="col" className={`border-b border-ink-faint/40 px-3 py-2 font-semibold text-ink-soft ${className}`} {...rest} />;
+  return (
+    <th
+      scope="col"
+      className={`border-b border-ink-faint/40 px-3 py-2 font-semibold text-ink-soft ${className}`}
+      {...rest}
+    />
+  );
 }
 
 export function Td({ className = '', ...rest }: ComponentProps<'td'>) {

@@ -32,10 +32,15 @@ export function defaultPoolSize(): number {
 }
 
 export function createEngineWorker(): EngineWorker {
-  const worker = new Worker(new URL('../../../workers/simulation.worker.ts', import.meta.url), { type: 'module', name: 'lanewright-simulation' });
+  const worker = new Worker(new URL('../../../workers/simulation.worker.ts', import.meta.url), {
+    type: 'module',
+    name: 'lanewright-simulation',
+  });
   const api = Comlink.wrap<SimulationWorkerApi>(worker);
   const crashed = new Promise<never>((_, reject) => {
-    worker.addEventListener('error', (event) => reject(new Error(event.message || 'a simulation worker stopped unexpectedly')));
+    worker.addEventListener('error', (event) =>
+      reject(new Error(event.message || 'a simulation worker stopped unexpectedly')),
+    );
   });
   crashed.catch(() => undefined);
   return {
@@ -48,7 +53,12 @@ export function createEngineWorker(): EngineWorker {
   };
 }
 
-type Task = { session: PoolSession; run: (api: EngineApi) => Promise<unknown>; resolve: (v: unknown) => void; reject: (e: unknown) => void };
+type Task = {
+  session: PoolSession;
+  run: (api: EngineApi) => Promise<unknown>;
+  resolve: (v: unknown) => void;
+  reject: (e: unknown) => void;
+};
 type Slot = { worker: EngineWorker | null; task: Task | null };
 
 export class EnginePool {

@@ -20,10 +20,16 @@ export function splitReplications(replications: number, parts: number): { first:
   return ranges;
 }
 
-export async function runAcrossPool(session: PoolSession, scenario: unknown, settings: unknown, onProgress: (p: Progress) => void): Promise<WorkerOutcome> {
+export async function runAcrossPool(
+  session: PoolSession,
+  scenario: unknown,
+  settings: unknown,
+  onProgress: (p: Progress) => void,
+): Promise<WorkerOutcome> {
   const parsed = runSettingsSchema.safeParse(settings ?? {});
   // Invalid settings: let one worker answer with the engine's own messages and field paths.
-  if (!parsed.success) return session.submit<WorkerOutcome>(async (api) => (await api.run(scenario, settings)) as WorkerOutcome);
+  if (!parsed.success)
+    return session.submit<WorkerOutcome>(async (api) => (await api.run(scenario, settings)) as WorkerOutcome);
   const { replications } = parsed.data;
   const ranges = splitReplications(replications, session.size);
   const simulated = ranges.map(() => 0);
@@ -32,21 +38,28 @@ export async function runAcrossPool(session: PoolSession, scenario: unknown, set
     const simulatedSeconds = simulated.reduce((a, b) => a + b, 0);
     const totalSeconds = totals.reduce((a, b) => a + b, 0) || 1;
     const perReplication = totalSeconds / replications;
-    onProgress({ replication: Math.min(replications - 1, Math.floor(simulatedSeconds / perReplication)), replications, simulatedSeconds, totalSeconds, fraction: simulatedSeconds / totalSeconds });
+    onProgress({
+      replication: Math.min(replications - 1, Math.floor(simulatedSeconds / perReplication)),
+      replications,
+      simulatedSeconds,
+      totalSeconds,
+      fraction: simulatedSeconds / totalSeconds,
+    });
   };
   const outcomes = await Promise.all(
     ranges.map((range, i) =>
-      session.submit<RangeOutcome>(async (api) =>
-        (await api.runRange(
-          scenario,
-          settings,
-          range,
-          Comlink.proxy((p: Progress) => {
-            simulated[i] = p.simulatedSeconds;
-            totals[i] = p.totalSeconds;
-            report();
-          }),
-        )) as RangeOutcome,
+      session.submit<RangeOutcome>(
+        async (api) =>
+          (await api.runRange(
+            scenario,
+            settings,
+            range,
+            Comlink.proxy((p: Progress) => {
+              simulated[i] = p.simulatedSeconds;
+              totals[i] = p.totalSeconds;
+              report();
+            }),
+          )) as RangeOutcome,
       ),
     ),
   );

@@ -19,7 +19,8 @@ export const TEMPLATE_NOTES: Record<string, { title: string; summary: string }> 
   },
   'side-by-side-loop': {
     title: 'Side-by-side loop',
-    summary: 'Work and return lanes next to each other on one deck, joined by lateral transfers. Easy access, wider footprint.',
+    summary:
+      'Work and return lanes next to each other on one deck, joined by lateral transfers. Easy access, wider footprint.',
   },
   'multi-lane-split': {
     title: 'Multi-lane split and merge',
@@ -27,7 +28,8 @@ export const TEMPLATE_NOTES: Record<string, { title: string; summary: string }> 
   },
   'triple-deck': {
     title: 'Triple deck',
-    summary: 'Automatic work on top, manual work in the middle, an empty-carrier store at the bottom; elevators at both ends.',
+    summary:
+      'Automatic work on top, manual work in the middle, an empty-carrier store at the bottom; elevators at both ends.',
   },
   'belt-baseline': {
     title: 'Belt baseline',

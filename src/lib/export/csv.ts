@@ -6,8 +6,7 @@ import { downloadBlob, safeFilename } from './download';
 export type CsvValue = string | number | boolean | Date | null | undefined;
 
 export type CsvColumn<T> =
-  | { header: string; key: keyof T & (string | number) }
-  | { header: string; get: (row: T) => CsvValue };
+  { header: string; key: keyof T & (string | number) } | { header: string; get: (row: T) => CsvValue };
 
 /**
  * A text cell starting with one of these is read as a formula by spreadsheet programs, so it is
@@ -38,7 +37,10 @@ export function csvField(value: CsvValue, path = 'value'): string {
     return value.toISOString();
   }
   if (typeof value !== 'string') {
-    throw new CsvError(path, `cannot be written to CSV: expected text, a number, a boolean or a date, got ${typeof value}`);
+    throw new CsvError(
+      path,
+      `cannot be written to CSV: expected text, a number, a boolean or a date, got ${typeof value}`,
+    );
   }
   const guarded = FORMULA_TRIGGERS.some((trigger) => value.startsWith(trigger)) ? `'${value}` : value;
   return NEEDS_QUOTES.test(guarded) ? `"${guarded.replace(/"/g, '""')}"` : guarded;
@@ -59,7 +61,9 @@ export function toCsv<T>(rows: readonly T[], columns: readonly CsvColumn<T>[]): 
   const lines = [columns.map((column, c) => csvField(column.header, `columns[${c}].header`)).join(',')];
   rows.forEach((row, r) => {
     if (row === null || typeof row !== 'object') throw new CsvError(`rows[${r}]`, 'must be an object or an array');
-    lines.push(columns.map((column, c) => csvField(cellOf(row, column), `rows[${r}].${columnName(column, c)}`)).join(','));
+    lines.push(
+      columns.map((column, c) => csvField(cellOf(row, column), `rows[${r}].${columnName(column, c)}`)).join(','),
+    );
   });
   return lines.map((line) => `${line}\r\n`).join('');
 }

@@ -56,7 +56,9 @@ export async function collectFontCss(): Promise<string> {
     try {
       const dataUrl = await toDataUrl(new URL(match[1], rule.parentStyleSheet?.href ?? document.baseURI).href);
       const weight = rule.style.getPropertyValue('font-weight').trim() || '400';
-      parts.push(`@font-face{font-family:"${CHART_FAMILY}";font-style:normal;font-weight:${weight};src:url(${dataUrl}) format("woff2");}`);
+      parts.push(
+        `@font-face{font-family:"${CHART_FAMILY}";font-style:normal;font-weight:${weight};src:url(${dataUrl}) format("woff2");}`,
+      );
     } catch {
       // One missing font file only costs the typeface, never the export.
     }

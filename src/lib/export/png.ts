@@ -17,11 +17,14 @@ export async function svgToPngBlob(svg: SVGSVGElement, scale = 2): Promise<Blob>
   }
   const width = Number(svg.getAttribute('width')) || svg.getBoundingClientRect().width;
   const height = Number(svg.getAttribute('height')) || svg.getBoundingClientRect().height;
-  if (!(width > 0 && height > 0)) throw new PngExportError('svg: the chart has no size yet; export it once it is shown');
+  if (!(width > 0 && height > 0))
+    throw new PngExportError('svg: the chart has no size yet; export it once it is shown');
   const pixelWidth = Math.round(width * scale);
   const pixelHeight = Math.round(height * scale);
   if (pixelWidth > MAX_CANVAS_SIDE || pixelHeight > MAX_CANVAS_SIDE) {
-    throw new PngExportError(`scale: ${scale} makes a ${pixelWidth} × ${pixelHeight} px image, more than ${MAX_CANVAS_SIDE} px a side; choose a smaller scale`);
+    throw new PngExportError(
+      `scale: ${scale} makes a ${pixelWidth} × ${pixelHeight} px image, more than ${MAX_CANVAS_SIDE} px a side; choose a smaller scale`,
+    );
   }
 
   const text = svgToString(svg, { fontCss: await collectFontCss(), background: '#ffffff' });
@@ -39,7 +42,10 @@ export async function svgToPngBlob(svg: SVGSVGElement, scale = 2): Promise<Blob>
     context.fillRect(0, 0, pixelWidth, pixelHeight);
     context.drawImage(image, 0, 0, pixelWidth, pixelHeight);
     return await new Promise<Blob>((resolve, reject) =>
-      canvas.toBlob((blob) => (blob ? resolve(blob) : reject(new PngExportError('canvas: the PNG could not be encoded'))), 'image/png'),
+      canvas.toBlob(
+        (blob) => (blob ? resolve(blob) : reject(new PngExportError('canvas: the PNG could not be encoded'))),
+        'image/png',
+      ),
     );
   } finally {
     URL.revokeObjectURL(url);

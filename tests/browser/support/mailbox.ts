@@ -5,7 +5,11 @@ import type { Page } from 'playwright-core';
 export async function followMailedLink(page: Page, appUrl: string, to: string, subject: RegExp): Promise<void> {
   await page.goto(`${appUrl}/dev/mailbox`);
   await page.getByRole('heading', { level: 1, name: 'Development mailbox' }).waitFor();
-  const mail = page.getByRole('listitem').filter({ hasText: to }).filter({ has: page.getByRole('heading', { name: subject }) }).first();
+  const mail = page
+    .getByRole('listitem')
+    .filter({ hasText: to })
+    .filter({ has: page.getByRole('heading', { name: subject }) })
+    .first();
   await mail.waitFor();
   await mail.getByRole('link').first().click();
 }

@@ -21,7 +21,9 @@ export function tooltipRows(): Record<string, string> {
 }
 
 export function legendLabels(container: Element): string[] {
-  return Array.from(container.querySelectorAll('[data-chart-part="legend"] [data-legend-item]')).map((item) => item.getAttribute('data-legend-item') ?? '');
+  return Array.from(container.querySelectorAll('[data-chart-part="legend"] [data-legend-item]')).map(
+    (item) => item.getAttribute('data-legend-item') ?? '',
+  );
 }
 
 export function axisLabel(container: Element, axis: 'x' | 'y'): string[] {

@@ -33,7 +33,9 @@ describe('histogram bins and densities', () => {
 
 describe('Histogram', () => {
   it('draws one bar per bin with heights proportional to the counts', () => {
-    const { container } = render(<Histogram values={samples} quantity="Lead time" unit="min" binCount={4} width={WIDTH} />);
+    const { container } = render(
+      <Histogram values={samples} quantity="Lead time" unit="min" binCount={4} width={WIDTH} />,
+    );
     const bars = Array.from(container.querySelectorAll('[data-chart-part="marks"] rect'));
     const bins = histogramBins(samples, 4);
     expect(bars).toHaveLength(bins.length);
@@ -45,7 +47,16 @@ describe('Histogram', () => {
 
   it('overlays fitted densities at count scale with a legend entry each', () => {
     const uniform = (x: number) => (x >= 4 && x <= 8 ? 0.25 : 0);
-    const { container } = render(<Histogram values={samples} quantity="Lead time" unit="min" binCount={4} fits={[{ label: 'uniform 4–8 min', pdf: uniform }]} width={WIDTH} />);
+    const { container } = render(
+      <Histogram
+        values={samples}
+        quantity="Lead time"
+        unit="min"
+        binCount={4}
+        fits={[{ label: 'uniform 4–8 min', pdf: uniform }]}
+        width={WIDTH}
+      />,
+    );
     expect(container.querySelectorAll('[data-chart-part="fit"]')).toHaveLength(1);
     expect(legendLabels(container)).toEqual(['samples (n = 10)', 'uniform 4–8 min']);
     const bar = container.querySelector('[data-chart-part="marks"] rect')!;

@@ -15,7 +15,9 @@ describe('LineBalanceChart', () => {
     expect(container.querySelectorAll('[data-chart-part="bar"]')).toHaveLength(3);
     expect(container.querySelectorAll('[data-chart-part="whisker"]')).toHaveLength(2);
     expect(container.querySelectorAll('[data-chart-part="raw-mean"]')).toHaveLength(1);
-    const heights = Array.from(container.querySelectorAll('[data-chart-part="bar"]')).map((bar) => Number(bar.getAttribute('height')));
+    const heights = Array.from(container.querySelectorAll('[data-chart-part="bar"]')).map((bar) =>
+      Number(bar.getAttribute('height')),
+    );
     // Bars stand on a common baseline, so their heights are proportional to 9, 4 and 24 / 2 = 12 s.
     expect(heights[0] / heights[1]).toBeCloseTo(9 / 4, 6);
     expect(heights[2] / heights[0]).toBeCloseTo(12 / 9, 6);
@@ -29,7 +31,13 @@ describe('LineBalanceChart', () => {
     expect(over[0].getAttribute('fill')).toMatch(/^url\(#over-takt-/);
     expect(over[0].getAttribute('stroke-width')).toBe('2');
     expect(container.querySelector('[data-chart-part="takt"]')!.textContent).toBe('takt 10.00 s');
-    expect(legendLabels(container)).toEqual(['mean cycle ÷ parallel stations', 'over takt', '±1 sd (÷ parallel stations)', 'mean cycle of one station', 'takt']);
+    expect(legendLabels(container)).toEqual([
+      'mean cycle ÷ parallel stations',
+      'over takt',
+      '±1 sd (÷ parallel stations)',
+      'mean cycle of one station',
+      'takt',
+    ]);
     expect(axisLabel(container, 'y')).toEqual(['Cycle time (s)']);
     expect(screen.getByText('Manual fitting ×2')).toBeTruthy();
   });
@@ -54,6 +62,8 @@ describe('LineBalanceChart', () => {
     rerender(<LineBalanceChart steps={steps} taktSeconds={-1} />);
     expect(screen.getByRole('alert').textContent).toMatch(/taktSeconds must be a number above zero, got -1/);
     rerender(<LineBalanceChart steps={[steps[0], { ...steps[1], parallelStations: 1.5 }]} taktSeconds={10} />);
-    expect(screen.getByRole('alert').textContent).toMatch(/steps\[1\]\.parallelStations must be a whole number of at least 1, got 1\.5/);
+    expect(screen.getByRole('alert').textContent).toMatch(
+      /steps\[1\]\.parallelStations must be a whole number of at least 1, got 1\.5/,
+    );
   });
 });

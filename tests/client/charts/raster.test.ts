@@ -6,7 +6,7 @@ import { encodePng } from '../../../src/components/charts/raster';
 function chunks(png: Uint8Array) {
   const bytes = Buffer.from(png);
   const found: Array<{ type: string; data: Buffer; crc: number }> = [];
-  for (let at = 8; at < bytes.length; ) {
+  for (let at = 8; at < bytes.length;) {
     const length = bytes.readUInt32BE(at);
     const type = bytes.toString('latin1', at + 4, at + 8);
     found.push({ type, data: bytes.subarray(at + 8, at + 8 + length), crc: bytes.readUInt32BE(at + 8 + length) });
@@ -24,7 +24,8 @@ describe('heatmap raster PNG', () => {
     expect(parts.map((c) => c.type)).toEqual(['IHDR', 'IDAT', 'IEND']);
     const ihdr = parts[0].data;
     expect([ihdr.readUInt32BE(0), ihdr.readUInt32BE(4), ihdr[8], ihdr[9]]).toEqual([2, 1, 8, 2]);
-    for (const part of parts) expect(part.crc).toBe(crc32(Buffer.concat([Buffer.from(part.type, 'latin1'), part.data])));
+    for (const part of parts)
+      expect(part.crc).toBe(crc32(Buffer.concat([Buffer.from(part.type, 'latin1'), part.data])));
     expect(Array.from(inflateSync(parts[1].data))).toEqual([0, 255, 0, 0, 0, 0, 255]);
   });
 

@@ -19,7 +19,11 @@ describe('ShareBars', () => {
     expect(legendLabels(container)).toEqual(['working (in a station)', 'moving', 'waiting (queued or blocked)']);
     expect(axisLabel(container, 'x')).toEqual(['Share of carrier time after warm-up (%)']);
     hoverAt(container.querySelector('[data-item="all"] rect[data-category="moving"]')!, 1, 1);
-    expect(tooltipRows()).toEqual({ 'working (in a station)': '45.0%', moving: '30.0%', 'waiting (queued or blocked)': '25.0%' });
+    expect(tooltipRows()).toEqual({
+      'working (in a station)': '45.0%',
+      moving: '30.0%',
+      'waiting (queued or blocked)': '25.0%',
+    });
   });
 
   it('explains missing statistics and names an impossible share', () => {
@@ -54,7 +58,7 @@ describe('DistributionPreview', () => {
 });
 
 describe('DistributionPreview with a large time study', () => {
-  it("keeps the exact range and mean of all samples (mean 12.495) while drawing the shape from a thinned set", () => {
+  it('keeps the exact range and mean of all samples (mean 12.495) while drawing the shape from a thinned set', () => {
     const samples = Array.from({ length: 100_000 }, (_, i) => 10 + (i % 500) / 100);
     render(<DistributionPreview label="Study" samples={samples} />);
     expect(screen.getByRole('img').getAttribute('aria-label')).toBe('Study: from 10 to 14.99 s, mean 12.49 s');

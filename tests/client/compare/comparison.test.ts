@@ -71,9 +71,18 @@ describe('comparing runs', () => {
       ['a', { capitalCost: 400_000, perHourlyPart: 1200, currency: 'EUR' }],
       ['b', { capitalCost: 410_000, perHourlyPart: 900, currency: 'EUR' }],
     ]);
-    const answer = answerOf(comparison, costs, new Map([['a', 1.6], ['b', 1.6]]));
+    const answer = answerOf(
+      comparison,
+      costs,
+      new Map([
+        ['a', 1.6],
+        ['b', 1.6],
+      ]),
+    );
     expect(answer.winnerId).toBe('b');
-    expect(answer.sentence).toMatch(/^Faster press makes more: .* parts\/h more \(95 % paired interval .*\), a significant difference\. Capital cost: Faster press EUR 410,000 \(EUR 900 per part\/h\) against Stacked EUR 400,000/);
+    expect(answer.sentence).toMatch(
+      /^Faster press makes more: .* parts\/h more \(95 % paired interval .*\), a significant difference\. Capital cost: Faster press EUR 410,000 \(EUR 900 per part\/h\) against Stacked EUR 400,000/,
+    );
     expect(answer.sentence).toMatch(/Floor area: Faster press 1\.6 m² against Stacked 1\.6 m²\.$/);
   });
 
@@ -84,7 +93,9 @@ describe('comparing runs', () => {
 
   it('refuses fewer than two or more than four runs', () => {
     expect(() => compareRuns([run('a', 'Stacked', stacked)])).toThrow(/compare 2 to 4 runs/);
-    expect(() => compareRuns(Array.from({ length: 5 }, (_, i) => run(String(i), `Run ${i}`, stacked)))).toThrow(/got 5/);
+    expect(() => compareRuns(Array.from({ length: 5 }, (_, i) => run(String(i), `Run ${i}`, stacked)))).toThrow(
+      /got 5/,
+    );
   });
 });
 
@@ -95,7 +106,8 @@ describe('aligning what the runs drew', () => {
     expect(rows[1].name).toBe('Press seat ring');
     expect(rows[3].shares[0]?.stations).toBe(2);
     for (const row of rows) {
-      for (const s of row.shares) expect(s!.processing + s!.starved + s!.blocked + s!.down + s!.onBreak).toBeCloseTo(1, 3);
+      for (const s of row.shares)
+        expect(s!.processing + s!.starved + s!.blocked + s!.down + s!.onBreak).toBeCloseTo(1, 3);
     }
   });
 
@@ -105,6 +117,11 @@ describe('aligning what the runs drew', () => {
       { label: 'Side by side', result: sideBySide },
     ]);
     expect(groups).toHaveLength(1);
-    expect(groups[0].lanes.map((l) => l.laneName)).toEqual(['Stacked: Work lane', 'Stacked: Return lane', 'Side by side: Work lane', 'Side by side: Return lane']);
+    expect(groups[0].lanes.map((l) => l.laneName)).toEqual([
+      'Stacked: Work lane',
+      'Stacked: Return lane',
+      'Side by side: Work lane',
+      'Side by side: Return lane',
+    ]);
   });
 });

@@ -18,7 +18,7 @@ afterEach(() => window.sessionStorage.clear());
 
 const STUDY_ID = uuid(21);
 /** Invented press times, skewed to the right around 9.5 s. */
-const SAMPLES = Array.from({ length: 60 }, (_, i) => Math.round((8 + 3 * ((i * 29) % 61) ** 2 / 3721) * 100) / 100);
+const SAMPLES = Array.from({ length: 60 }, (_, i) => Math.round((8 + (3 * ((i * 29) % 61) ** 2) / 3721) * 100) / 100);
 
 function pressStudy(): TimeStudyDetail {
   const analysis = analyseTimeStudy(SAMPLES);
@@ -39,7 +39,10 @@ function pressStudy(): TimeStudyDetail {
   };
 }
 
-const section = (name: string) => within(screen.getByRole('navigation', { name: 'Scenario sections' })).getByRole('button', { name: new RegExp(`^${name}`) });
+const section = (name: string) =>
+  within(screen.getByRole('navigation', { name: 'Scenario sections' })).getByRole('button', {
+    name: new RegExp(`^${name}`),
+  });
 
 async function openPressStation(role: 'engineer' | 'viewer') {
   const detail = pressStudy();
@@ -64,7 +67,9 @@ describe('time studies in the station form', () => {
     const fitted = detail.analysis.candidates.find((c) => c.kind === 'gamma');
     const gamma = fitted?.status === 'fitted' ? fitted.distribution : null;
     if (gamma?.kind !== 'gamma') throw new Error('the sample set should admit a gamma fit');
-    const cycleTime = document.querySelector('[data-distribution="steps.1.stations.0.cycleTimeSeconds"]') as HTMLElement;
+    const cycleTime = document.querySelector(
+      '[data-distribution="steps.1.stations.0.cycleTimeSeconds"]',
+    ) as HTMLElement;
     await waitFor(() => expect(within(cycleTime).getByLabelText<HTMLSelectElement>('Kind').value).toBe('gamma'));
     expect(Number(within(cycleTime).getByLabelText<HTMLInputElement>('Mean (s)').value)).toBeCloseTo(gamma.mean, 6);
     expect(Number(within(cycleTime).getByLabelText<HTMLInputElement>('CV').value)).toBeCloseTo(gamma.cv, 6);

@@ -12,13 +12,21 @@ describe('CSV after RFC 4180', () => {
   ];
 
   it('ends each record with CRLF and puts the header first (rules 1 and 3)', () => {
-    expect(toCsv([{ a: 'aaa', b: 'bbb', c: 'ccc' }, { a: 'zzz', b: 'yyy', c: 'xxx' }], columns)).toBe(
-      'field_name,field_name,field_name\r\naaa,bbb,ccc\r\nzzz,yyy,xxx\r\n',
-    );
+    expect(
+      toCsv(
+        [
+          { a: 'aaa', b: 'bbb', c: 'ccc' },
+          { a: 'zzz', b: 'yyy', c: 'xxx' },
+        ],
+        columns,
+      ),
+    ).toBe('field_name,field_name,field_name\r\naaa,bbb,ccc\r\nzzz,yyy,xxx\r\n');
   });
 
   it('encloses fields holding line breaks in double quotes (rule 6: "b CRLF bb")', () => {
-    expect(toCsv([{ a: 'aaa', b: 'b\r\nbb', c: 'ccc' }], columns)).toBe('field_name,field_name,field_name\r\naaa,"b\r\nbb",ccc\r\n');
+    expect(toCsv([{ a: 'aaa', b: 'b\r\nbb', c: 'ccc' }], columns)).toBe(
+      'field_name,field_name,field_name\r\naaa,"b\r\nbb",ccc\r\n',
+    );
   });
 
   it('doubles a double quote inside a quoted field (rule 7: "b""bb")', () => {
@@ -32,7 +40,13 @@ describe('CSV after RFC 4180', () => {
   });
 
   it('writes numbers, booleans, dates and empty cells plainly', () => {
-    expect([csvField(-3.5), csvField(0.1 + 0.2), csvField(true), csvField(null), csvField(undefined)]).toEqual(['-3.5', '0.30000000000000004', 'true', '', '']);
+    expect([csvField(-3.5), csvField(0.1 + 0.2), csvField(true), csvField(null), csvField(undefined)]).toEqual([
+      '-3.5',
+      '0.30000000000000004',
+      'true',
+      '',
+      '',
+    ]);
     expect(csvField(new Date(Date.UTC(2026, 0, 2, 3, 4, 5)))).toBe('2026-01-02T03:04:05.000Z');
   });
 });
@@ -63,19 +77,40 @@ describe('formula-injection guard', () => {
 
 describe('bad CSV input', () => {
   it('names the row and column of a value that cannot be written', () => {
-    const rows = [{ name: 'Press', extra: 1 }, { name: 'Test', extra: { nested: true } }] as unknown as Array<{ name: string; extra: number }>;
-    expect(() => toCsv(rows, [{ header: 'Name', key: 'name' }, { header: 'Extra', key: 'extra' }])).toThrow(
-      new CsvError('rows[1].extra', 'cannot be written to CSV: expected text, a number, a boolean or a date, got object'),
+    const rows = [
+      { name: 'Press', extra: 1 },
+      { name: 'Test', extra: { nested: true } },
+    ] as unknown as Array<{ name: string; extra: number }>;
+    expect(() =>
+      toCsv(rows, [
+        { header: 'Name', key: 'name' },
+        { header: 'Extra', key: 'extra' },
+      ]),
+    ).toThrow(
+      new CsvError(
+        'rows[1].extra',
+        'cannot be written to CSV: expected text, a number, a boolean or a date, got object',
+      ),
     );
   });
 
   it('refuses an empty column list and an invalid date', () => {
     expect(() => toCsv([{}], [])).toThrow('columns: at least one column is needed');
-    expect(() => toCsv([{ at: new Date(Number.NaN) }], [{ header: 'At', key: 'at' }])).toThrow('rows[0].at: is an invalid date');
+    expect(() => toCsv([{ at: new Date(Number.NaN) }], [{ header: 'At', key: 'at' }])).toThrow(
+      'rows[0].at: is an invalid date',
+    );
   });
 
   it('takes arrays as rows with getter columns', () => {
-    const rows: Array<[string, number]> = [['Press', 9], ['Leak, test', 8.4]];
-    expect(toCsv(rows, [{ header: 'Step', key: 0 }, { header: 'Cycle (s)', get: (row) => row[1] }])).toBe('Step,Cycle (s)\r\nPress,9\r\n"Leak, test",8.4\r\n');
+    const rows: Array<[string, number]> = [
+      ['Press', 9],
+      ['Leak, test', 8.4],
+    ];
+    expect(
+      toCsv(rows, [
+        { header: 'Step', key: 0 },
+        { header: 'Cycle (s)', get: (row) => row[1] },
+      ]),
+    ).toBe('Step,Cycle (s)\r\nPress,9\r\n"Leak, test",8.4\r\n');
   });
 });

@@ -31,7 +31,9 @@ describe('ChartExportMenu', () => {
     expect(saved[0].name).toBe('carrier-shares-run-12.csv');
     const bytes = new Uint8Array(await saved[0].blob.arrayBuffer());
     expect(Array.from(bytes.subarray(0, 3))).toEqual([0xef, 0xbb, 0xbf]);
-    expect(new TextDecoder().decode(bytes.subarray(3))).toBe('id,name,working_share,moving_share,waiting_share,note\r\nall,"All carriers, fleet",0.45,0.3,0.25,\r\n');
+    expect(new TextDecoder().decode(bytes.subarray(3))).toBe(
+      'id,name,working_share,moving_share,waiting_share,note\r\nall,"All carriers, fleet",0.45,0.3,0.25,\r\n',
+    );
   });
 
   it('saves the picture as a stand-alone SVG file', async () => {

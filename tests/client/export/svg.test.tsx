@@ -19,7 +19,11 @@ function parseXml(text: string): Parsed {
     throw error;
   });
   parser.on('opentag', (tag) => {
-    if (!parsed.root.name) parsed.root = { name: tag.local, attributes: Object.fromEntries(Object.values(tag.attributes).map((a) => [a.name, a.value])) };
+    if (!parsed.root.name)
+      parsed.root = {
+        name: tag.local,
+        attributes: Object.fromEntries(Object.values(tag.attributes).map((a) => [a.name, a.value])),
+      };
     parsed.elements.push(tag.local);
   });
   parser.on('text', (text) => parsed.texts.push(text));

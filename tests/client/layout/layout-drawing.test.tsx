@@ -18,7 +18,8 @@ describe('layout drawing', () => {
 
     const lanes = [...document.querySelectorAll('[data-lane-id]')];
     expect(lanes.map((lane) => lane.getAttribute('data-lane-id'))).toEqual(['work', 'return']);
-    const widthOf = (id: string) => Number(document.querySelector(`[data-lane-id="${id}"] rect[data-lane-body]`)?.getAttribute('width'));
+    const widthOf = (id: string) =>
+      Number(document.querySelector(`[data-lane-id="${id}"] rect[data-lane-body]`)?.getAttribute('width'));
     expect(widthOf('work') / widthOf('return')).toBeCloseTo(8000 / 4000, 6);
     expect(lanes.map((lane) => Number(lane.getAttribute('data-length-mm')))).toEqual([8000, 4000]);
   });
@@ -29,7 +30,9 @@ describe('layout drawing', () => {
     render(<LayoutDrawing document={stacked()} onSelect={onSelect} />);
 
     const stationIds = stackedLoop.steps.flatMap((step) => step.stations.map((station) => station.id));
-    expect([...document.querySelectorAll('[data-station-id]')].map((s) => s.getAttribute('data-station-id'))).toEqual(stationIds);
+    expect([...document.querySelectorAll('[data-station-id]')].map((s) => s.getAttribute('data-station-id'))).toEqual(
+      stationIds,
+    );
     await user.click(document.querySelector('[data-station-id="FT2"]') as Element);
     // FT2 is the second station of the fourth step ("fit").
     expect(onSelect).toHaveBeenLastCalledWith({ kind: 'station', stepIndex: 3, stationIndex: 1 });

@@ -34,6 +34,8 @@ describe('belt conveyor baseline marks', () => {
       </>,
     );
     expect(screen.getByText('Belt conveyor baseline')).toBeTruthy();
-    expect(screen.getByTestId('belt-cycle-note').textContent).toMatch(/mean cycle includes the time to stop and locate/);
+    expect(screen.getByTestId('belt-cycle-note').textContent).toMatch(
+      /mean cycle includes the time to stop and locate/,
+    );
   });
 });

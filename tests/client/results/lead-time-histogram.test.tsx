@@ -28,6 +28,8 @@ describe('lead-time histogram clipping', () => {
     expect(container.querySelector('[data-overflow-label]')?.textContent).toBe('≥ 40 s');
     // The subtitle wraps onto lines of its own, so spaces at the breaks are not in the text.
     const squeeze = (text: string | null) => (text ?? '').replace(/\s+/g, '');
-    expect(squeeze(container.textContent)).toContain(squeeze('the axis stops at the 99th percentile and the last bar gathers the 5 parts at 40 s or more'));
+    expect(squeeze(container.textContent)).toContain(
+      squeeze('the axis stops at the 99th percentile and the last bar gathers the 5 parts at 40 s or more'),
+    );
   });
 });

@@ -70,8 +70,12 @@ describe('run result page', { timeout: 60_000 }, () => {
     const target = result.targetTaktSeconds;
     expect(target).not.toBeNull();
     const verdict = document.querySelector('[data-verdict]')?.textContent ?? '';
-    if (result.taktSeconds.mean <= (target ?? 0)) expect(verdict).toContain(`Meets the target takt of ${(target ?? 0).toFixed(2)} s`);
-    else expect(verdict).toContain(`Misses the target takt of ${(target ?? 0).toFixed(2)} s by ${(result.taktSeconds.mean - (target ?? 0)).toFixed(2)} s`);
+    if (result.taktSeconds.mean <= (target ?? 0))
+      expect(verdict).toContain(`Meets the target takt of ${(target ?? 0).toFixed(2)} s`);
+    else
+      expect(verdict).toContain(
+        `Misses the target takt of ${(target ?? 0).toFixed(2)} s by ${(result.taktSeconds.mean - (target ?? 0)).toFixed(2)} s`,
+      );
   });
 
   it('names the bottleneck, draws both heatmaps and states the safety caution', async () => {
@@ -81,8 +85,12 @@ describe('run result page', { timeout: 60_000 }, () => {
 
     const bottleneck = result.stations.find((s) => s.id === result.bottleneckStationId);
     expect(bottleneck).toBeDefined();
-    expect(screen.getByTestId('bottleneck-sentence').textContent).toContain(`${bottleneck?.name} is the bottleneck: the sole bottleneck ${(100 * (bottleneck?.soleBottleneckShare ?? 0)).toFixed(1)} %`);
-    const stationRows = within(screen.getByRole('table', { name: 'Station time shares and bottleneck' })).getAllByRole('row');
+    expect(screen.getByTestId('bottleneck-sentence').textContent).toContain(
+      `${bottleneck?.name} is the bottleneck: the sole bottleneck ${(100 * (bottleneck?.soleBottleneckShare ?? 0)).toFixed(1)} %`,
+    );
+    const stationRows = within(screen.getByRole('table', { name: 'Station time shares and bottleneck' })).getAllByRole(
+      'row',
+    );
     expect(stationRows).toHaveLength(result.stations.length + 1);
     const workTable = screen.getByRole('table', { name: 'Station cycle, output and queue' });
     expect(await within(workTable).findByText('Press seat ring')).toBeTruthy();
@@ -91,7 +99,9 @@ describe('run result page', { timeout: 60_000 }, () => {
       const frame = document.querySelector(`[data-chart="run-${run.id.slice(0, 8)}-${chart}"]`);
       expect(frame?.querySelector('svg[role="img"]')).not.toBeNull();
     }
-    expect(screen.getByRole('complementary', { name: 'Safety caution' }).textContent).toContain('not a safety sign-off');
+    expect(screen.getByRole('complementary', { name: 'Safety caution' }).textContent).toContain(
+      'not a safety sign-off',
+    );
     expect(screen.getByText(/Scenario revision/).parentElement?.textContent).toContain('revision 2');
     expect(screen.getByText(String(result.seed), { selector: 'code' })).toBeTruthy();
   });

@@ -20,7 +20,11 @@ function panel() {
   return (
     <>
       <p>Scenario page</p>
-      <RunPanel scenarioId={scenarioSummary().id} organisationId={ORG_ID} revision={{ id: latest.id, number: latest.number, document }} />
+      <RunPanel
+        scenarioId={scenarioSummary().id}
+        organisationId={ORG_ID}
+        revision={{ id: latest.id, number: latest.number, document }}
+      />
     </>
   );
 }
@@ -43,9 +47,15 @@ describe('run panel', () => {
     await setField(user, 'Warm-up (minutes)', '-5');
     await user.click(screen.getByRole('button', { name: 'Run simulation' }));
 
-    await waitFor(() => expect(descriptionOf(screen.getByLabelText('Hours simulated'))).toContain('Hours simulated must be from 0.01 to 8760'));
+    await waitFor(() =>
+      expect(descriptionOf(screen.getByLabelText('Hours simulated'))).toContain(
+        'Hours simulated must be from 0.01 to 8760',
+      ),
+    );
     expect(descriptionOf(screen.getByLabelText('Replications'))).toContain('Replications must be a whole number');
-    expect(descriptionOf(screen.getByLabelText('Warm-up (minutes)'))).toContain('Warm-up (minutes) must be from 0 to 525600');
+    expect(descriptionOf(screen.getByLabelText('Warm-up (minutes)'))).toContain(
+      'Warm-up (minutes) must be from 0 to 525600',
+    );
     expect(ports.runs).toHaveLength(0);
   });
 
@@ -58,7 +68,11 @@ describe('run panel', () => {
     await setField(user, 'Carrier count', '500');
     await user.click(screen.getByRole('button', { name: 'Run simulation' }));
 
-    await waitFor(() => expect(descriptionOf(screen.getByLabelText('Carrier count'))).toMatch(/500 carriers do not fit: the track holds \d+/));
+    await waitFor(() =>
+      expect(descriptionOf(screen.getByLabelText('Carrier count'))).toMatch(
+        /500 carriers do not fit: the track holds \d+/,
+      ),
+    );
     expect(ports.runs).toHaveLength(1);
   });
 
@@ -68,7 +82,9 @@ describe('run panel', () => {
     const api = mockApi({
       [`GET ${apiRoutes.me}`]: { status: 200, body: me('engineer') },
       [`POST ${apiRoutes.scenarioRuns(scenarioSummary().id)}`]: () =>
-        ++attempts === 1 ? { status: 503, body: apiError('internal', 'The database is restarting.') } : { status: 201, body: saved },
+        ++attempts === 1
+          ? { status: 503, body: apiError('internal', 'The database is restarting.') }
+          : { status: 201, body: saved },
     });
     const ports = inProcessPorts();
     const { user, path } = renderWithSession(panel(), ports.open);
@@ -87,7 +103,9 @@ describe('run panel', () => {
 
     await screen.findByRole('heading', { name: `Result of run ${saved.id}` });
     expect(path()).toBe(`/runs/${saved.id}`);
-    const posts = api.callsTo('POST', apiRoutes.scenarioRuns(scenarioSummary().id)).map((call) => call.body as CreateRunInput);
+    const posts = api
+      .callsTo('POST', apiRoutes.scenarioRuns(scenarioSummary().id))
+      .map((call) => call.body as CreateRunInput);
     expect(posts).toHaveLength(2);
     expect(posts[0].clientRunId).toMatch(/^[0-9a-f]{8}-[0-9a-f]{4}-4[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/);
     expect(posts[1].clientRunId).toBe(posts[0].clientRunId);
@@ -125,7 +143,9 @@ describe('run panel', () => {
     const confirm = vi.fn(() => false);
     vi.stubGlobal('confirm', confirm);
     await router.navigate('/runs/elsewhere');
-    await waitFor(() => expect(confirm).toHaveBeenCalledWith(expect.stringMatching(/Leaving stops it and nothing is saved/)));
+    await waitFor(() =>
+      expect(confirm).toHaveBeenCalledWith(expect.stringMatching(/Leaving stops it and nothing is saved/)),
+    );
     expect(path()).toBe('/under-test');
     vi.unstubAllGlobals();
   });

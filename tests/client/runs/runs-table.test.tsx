@@ -18,7 +18,10 @@ const runs = [
 
 function renderTable(role: Role) {
   mockApi({ [`GET ${apiRoutes.me}`]: { status: 200, body: me(role) } });
-  return renderWithSession(<RunsTable runs={runs} organisationId={ORG_ID} caption="Runs of this scenario" />, inProcessPorts().open);
+  return renderWithSession(
+    <RunsTable runs={runs} organisationId={ORG_ID} caption="Runs of this scenario" />,
+    inProcessPorts().open,
+  );
 }
 
 const runOrder = () =>
@@ -57,7 +60,11 @@ describe('runs table', () => {
     await screen.findByRole('table', { name: 'Runs of this scenario' });
     const since = screen.getByLabelText('Run on or after');
     // The fixtures make runs 1–4 on 11–14 Nov 2026 at 09:00 UTC.
-    expect(within(since).getAllByRole('option').map((o) => o.textContent)).toEqual(['Any day', '14 Nov 2026', '13 Nov 2026', '12 Nov 2026', '11 Nov 2026']);
+    expect(
+      within(since)
+        .getAllByRole('option')
+        .map((o) => o.textContent),
+    ).toEqual(['Any day', '14 Nov 2026', '13 Nov 2026', '12 Nov 2026', '11 Nov 2026']);
     await user.selectOptions(since, '13 Nov 2026');
     expect(runOrder()).toEqual(['Run 4', 'Run 3']);
   });
@@ -74,8 +81,14 @@ describe('runs table', () => {
     renderTable('engineer');
     await screen.findByRole('table', { name: 'Runs of this scenario' });
     expect(screen.getAllByRole('button', { name: /^Rerun/ })).toHaveLength(4);
-    expect(screen.getAllByRole('button', { name: /^Rename/ }).map((b) => b.getAttribute('aria-label'))).toEqual(['Rename Run 3', 'Rename Run 1']);
-    expect(screen.getAllByRole('button', { name: /^Delete/ }).map((b) => b.getAttribute('aria-label'))).toEqual(['Delete Run 3', 'Delete Run 1']);
+    expect(screen.getAllByRole('button', { name: /^Rename/ }).map((b) => b.getAttribute('aria-label'))).toEqual([
+      'Rename Run 3',
+      'Rename Run 1',
+    ]);
+    expect(screen.getAllByRole('button', { name: /^Delete/ }).map((b) => b.getAttribute('aria-label'))).toEqual([
+      'Delete Run 3',
+      'Delete Run 1',
+    ]);
   });
 
   it('lets an owner delete anyone’s run after confirming', async () => {
@@ -83,10 +96,15 @@ describe('runs table', () => {
       [`GET ${apiRoutes.me}`]: { status: 200, body: me('owner') },
       [`DELETE ${apiRoutes.run(runs[1].id)}`]: { status: 200, body: { ok: true } },
     });
-    const { user } = renderWithSession(<RunsTable runs={runs} organisationId={ORG_ID} caption="Runs of this scenario" />, inProcessPorts().open);
+    const { user } = renderWithSession(
+      <RunsTable runs={runs} organisationId={ORG_ID} caption="Runs of this scenario" />,
+      inProcessPorts().open,
+    );
     await user.click(await screen.findByRole('button', { name: 'Delete Run 2' }));
     expect(api.callsTo('DELETE', apiRoutes.run(runs[1].id))).toHaveLength(0);
-    await user.click(within(screen.getByRole('group', { name: 'Confirm deleting Run 2' })).getByRole('button', { name: 'Delete run' }));
+    await user.click(
+      within(screen.getByRole('group', { name: 'Confirm deleting Run 2' })).getByRole('button', { name: 'Delete run' }),
+    );
     await vi.waitFor(() => expect(api.callsTo('DELETE', apiRoutes.run(runs[1].id))).toHaveLength(1));
   });
 
@@ -95,13 +113,20 @@ describe('runs table', () => {
       [`GET ${apiRoutes.me}`]: { status: 200, body: me('engineer') },
       [`PATCH ${apiRoutes.run(runs[0].id)}`]: { status: 200, body: { ...runs[0], name: 'Baseline, 20 carriers' } },
     });
-    const { user } = renderWithSession(<RunsTable runs={runs} organisationId={ORG_ID} caption="Runs of this scenario" />, inProcessPorts().open);
+    const { user } = renderWithSession(
+      <RunsTable runs={runs} organisationId={ORG_ID} caption="Runs of this scenario" />,
+      inProcessPorts().open,
+    );
     await user.click(await screen.findByRole('button', { name: 'Rename Run 1' }));
     const input = screen.getByLabelText('New run name');
     await user.clear(input);
     await user.click(screen.getByRole('button', { name: 'Save' }));
     expect((await screen.findByRole('alert')).textContent).toContain('The name is required');
     await user.type(input, 'Baseline, 20 carriers{Enter}');
-    await vi.waitFor(() => expect(api.callsTo('PATCH', apiRoutes.run(runs[0].id)).map((c) => c.body)).toEqual([{ name: 'Baseline, 20 carriers' }]));
+    await vi.waitFor(() =>
+      expect(api.callsTo('PATCH', apiRoutes.run(runs[0].id)).map((c) => c.body)).toEqual([
+        { name: 'Baseline, 20 carriers' },
+      ]),
+    );
   });
 });

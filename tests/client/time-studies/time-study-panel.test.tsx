@@ -18,7 +18,10 @@ const STUDY_ID = uuid(11);
 const NEW_STUDY_ID = uuid(12);
 
 /** A right-skewed set of press times around 10 s, the kind a manual station produces. */
-const SAMPLES = Array.from({ length: 120 }, (_, i) => Math.round((8.5 + 3 * ((i * 37) % 101) ** 2 / 10_201) * 100) / 100);
+const SAMPLES = Array.from(
+  { length: 120 },
+  (_, i) => Math.round((8.5 + (3 * ((i * 37) % 101) ** 2) / 10_201) * 100) / 100,
+);
 
 function study(id = STUDY_ID, samples = SAMPLES, name = 'Press, week 12'): TimeStudyDetail {
   const analysis = analyseTimeStudy(samples);
@@ -49,7 +52,13 @@ function renderPanel(canEdit: boolean, stationId = 'press') {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   render(
     <QueryClientProvider client={queryClient}>
-      <TimeStudyPanel scenarioId={SCENARIO_ID} stationId={stationId} stationName="Press" canEdit={canEdit} onUse={onUse} />
+      <TimeStudyPanel
+        scenarioId={SCENARIO_ID}
+        stationId={stationId}
+        stationName="Press"
+        canEdit={canEdit}
+        onUse={onUse}
+      />
     </QueryClientProvider>,
   );
   return { onUse, user: userEvent.setup() };
@@ -71,16 +80,24 @@ describe('TimeStudyPanel', () => {
     await screen.findByText('Standard deviation');
     expect(api.calls[0].search).toBe('?stationId=press');
     expect(statValue('Samples')).toBe('120');
-    expect(statValue('Mean')).toBe(`${new Intl.NumberFormat('en-GB', { maximumSignificantDigits: 4 }).format(detail.analysis.summary.mean)} s`);
-    expect(statValue('Coefficient of variation')).toBe(new Intl.NumberFormat('en-GB', { maximumSignificantDigits: 4 }).format(detail.analysis.summary.cv ?? 0));
+    expect(statValue('Mean')).toBe(
+      `${new Intl.NumberFormat('en-GB', { maximumSignificantDigits: 4 }).format(detail.analysis.summary.mean)} s`,
+    );
+    expect(statValue('Coefficient of variation')).toBe(
+      new Intl.NumberFormat('en-GB', { maximumSignificantDigits: 4 }).format(detail.analysis.summary.cv ?? 0),
+    );
     expect(document.querySelectorAll('[data-chart-part="fit"]')).toHaveLength(3);
     // The chart draws the server's Freedman–Diaconis bins, the same number the caption quotes.
     const bars = Array.from(document.querySelectorAll('[data-chart-part="marks"] rect'));
     expect(bars).toHaveLength(detail.analysis.histogram.bins.length);
-    expect(screen.getByText(new RegExp(`${detail.analysis.histogram.bins.length} bins by the Freedman–Diaconis rule`))).toBeTruthy();
+    expect(
+      screen.getByText(new RegExp(`${detail.analysis.histogram.bins.length} bins by the Freedman–Diaconis rule`)),
+    ).toBeTruthy();
     const table = screen.getByRole('table', { name: /Fitted distributions/ });
     const rows = within(table).getAllByRole('row').slice(1);
-    expect(rows.map((r) => (r as HTMLTableRowElement).cells[0].textContent?.replace('closest', ''))).toEqual(detail.analysis.candidates.map((c) => ({ normal: 'Normal', lognormal: 'Lognormal', gamma: 'Gamma' })[c.kind]));
+    expect(rows.map((r) => (r as HTMLTableRowElement).cells[0].textContent?.replace('closest', ''))).toEqual(
+      detail.analysis.candidates.map((c) => ({ normal: 'Normal', lognormal: 'Lognormal', gamma: 'Gamma' })[c.kind]),
+    );
   });
 
   it('hands the form the measured samples as an empirical distribution, or a chosen fit, both valid scenario distributions', async () => {
@@ -122,7 +139,15 @@ describe('TimeStudyPanel', () => {
     mockApi({
       [`GET ${apiRoutes.scenarioTimeStudies(SCENARIO_ID)}`]: () => ({ status: 200, body: listed.map(listItem) }),
       [`POST ${apiRoutes.scenarioTimeStudies(SCENARIO_ID)}`]: () => {
-        if (!accept) return { status: 400, body: apiError('bad_request', 'One row could not be read: row 4, column "cycle_s": "abc" is not a number.', [{ path: 'file', message: 'row 4, column "cycle_s": "abc" is not a number' }]) };
+        if (!accept)
+          return {
+            status: 400,
+            body: apiError(
+              'bad_request',
+              'One row could not be read: row 4, column "cycle_s": "abc" is not a number.',
+              [{ path: 'file', message: 'row 4, column "cycle_s": "abc" is not a number' }],
+            ),
+          };
         listed = [created];
         return { status: 201, body: created };
       },
@@ -145,16 +170,26 @@ describe('TimeStudyPanel', () => {
   });
 
   it('states each problem of a refused upload once', async () => {
-    const rowProblems = ['row 3, column "cycle_s": "abc" is not a number', 'row 5, column "cycle_s": "-2" is below zero'];
+    const rowProblems = [
+      'row 3, column "cycle_s": "abc" is not a number',
+      'row 5, column "cycle_s": "-2" is below zero',
+    ];
     mockApi({
       [`GET ${apiRoutes.scenarioTimeStudies(SCENARIO_ID)}`]: { status: 200, body: [] },
       [`POST ${apiRoutes.scenarioTimeStudies(SCENARIO_ID)}`]: {
         status: 400,
-        body: apiError('bad_request', `2 rows could not be read: ${rowProblems.join('; ')}.`, rowProblems.map((message) => ({ path: 'file', message }))),
+        body: apiError(
+          'bad_request',
+          `2 rows could not be read: ${rowProblems.join('; ')}.`,
+          rowProblems.map((message) => ({ path: 'file', message })),
+        ),
       },
     });
     const { user } = renderPanel(true);
-    await user.upload(await screen.findByLabelText('Upload a time study (CSV)'), new File(['cycle_s\n9\nabc\n9\n-2\n'], 'bad.csv', { type: 'text/csv' }));
+    await user.upload(
+      await screen.findByLabelText('Upload a time study (CSV)'),
+      new File(['cycle_s\n9\nabc\n9\n-2\n'], 'bad.csv', { type: 'text/csv' }),
+    );
     const alert = await screen.findByRole('alert');
     for (const problem of rowProblems) expect(alert.textContent?.split(problem)).toHaveLength(2);
   });
@@ -173,7 +208,9 @@ describe('TimeStudyPanel', () => {
     const { user } = renderPanel(true);
     await user.click(await screen.findByRole('button', { name: 'Delete time study Press, week 12' }));
     expect(api.callsTo('DELETE', apiRoutes.timeStudy(STUDY_ID))).toHaveLength(0);
-    await user.click(screen.getByRole('button', { name: 'Confirm: delete the 120 samples of Press, week 12 for everyone' }));
+    await user.click(
+      screen.getByRole('button', { name: 'Confirm: delete the 120 samples of Press, week 12 for everyone' }),
+    );
     await screen.findByText(/No time study yet/);
     expect(api.callsTo('DELETE', apiRoutes.timeStudy(STUDY_ID))).toHaveLength(1);
   });
@@ -193,7 +230,9 @@ describe('TimeStudyPanel', () => {
     expect((await screen.findByRole('alert')).textContent).toContain('The file is 3.2 MB; the limit is 1 MB.');
     // The picker's accept list is only a hint: "All files" and drag-and-drop let anything through.
     await userEvent.setup({ applyAccept: false }).upload(input, new File(['x'], 'times.xlsx'));
-    await waitFor(() => expect(screen.getByRole('alert').textContent).toContain('"times.xlsx" is not a CSV or text file'));
+    await waitFor(() =>
+      expect(screen.getByRole('alert').textContent).toContain('"times.xlsx" is not a CSV or text file'),
+    );
     expect(api.calls.filter((c) => c.method === 'POST')).toHaveLength(0);
   });
 });

@@ -30,7 +30,14 @@ export type LoopLine = {
   joins?: [LoopJoin, LoopJoin];
   /** In process order: the first is the load step, the last the unload step, the rest process steps. */
   stations: LoopStation[];
-  carriers: { count: number; lengthMm: number; minGapMm: number; vMaxMmPerS: number; aMaxMmPerS2: number; empty?: { vMaxMmPerS: number; aMaxMmPerS2: number } };
+  carriers: {
+    count: number;
+    lengthMm: number;
+    minGapMm: number;
+    vMaxMmPerS: number;
+    aMaxMmPerS2: number;
+    empty?: { vMaxMmPerS: number; aMaxMmPerS2: number };
+  };
   /** The belt baseline instead of independent carriers. */
   belt?: { speedMmPerS: number; stopAndLocateSeconds: number; pitchMm: number };
   /** Breaks of every 8-hour shift, minutes from its start; none when absent. */
@@ -44,7 +51,8 @@ export const LOOP_HOURS_PER_YEAR = 3 * 8 * 7 * 52;
 const MODULES = [1000, 100, 10, 1];
 
 function modulesFor(lengthMm: number): { lengthMm: number; count: number }[] {
-  if (!Number.isInteger(lengthMm) || lengthMm <= 0) throw new RangeError(`lane length ${lengthMm} mm must be a positive whole number`);
+  if (!Number.isInteger(lengthMm) || lengthMm <= 0)
+    throw new RangeError(`lane length ${lengthMm} mm must be a positive whole number`);
   const out: { lengthMm: number; count: number }[] = [];
   let rest = lengthMm;
   for (const m of MODULES) {
@@ -61,20 +69,43 @@ export const LANE_IDS = ['work', 'return'] as const;
 export const DECK_DROP_MM = 400;
 
 function joinsOf(spec: LoopLine) {
-  if (!spec.joins) return { links: [{ fromLaneId: 'work', toLaneId: 'return' }, { fromLaneId: 'return', toLaneId: 'work' }], transfers: [] };
-  const ends = [['work', 'return'], ['return', 'work']] as const;
+  if (!spec.joins)
+    return {
+      links: [
+        { fromLaneId: 'work', toLaneId: 'return' },
+        { fromLaneId: 'return', toLaneId: 'work' },
+      ],
+      transfers: [],
+    };
+  const ends = [
+    ['work', 'return'],
+    ['return', 'work'],
+  ] as const;
   return {
     links: [],
-    transfers: spec.joins.map((j, i) => ({ id: `join-${i}`, name: `Join ${i}`, fromLaneId: ends[i][0], toLaneId: ends[i][1], ...j })),
+    transfers: spec.joins.map((j, i) => ({
+      id: `join-${i}`,
+      name: `Join ${i}`,
+      fromLaneId: ends[i][0],
+      toLaneId: ends[i][1],
+      ...j,
+    })),
   };
 }
 
 export function loopScenario(spec: LoopLine, name = 'Reference loop'): ScenarioInput {
   const last = spec.stations.length - 1;
   const twoDecks = spec.joins?.[0].kind === 'elevator';
-  const stepKind = (i: number) => (i === 0 ? 'load' : i === last ? 'unload' : spec.stations[i].inspect ? 'inspect' : 'process');
+  const stepKind = (i: number) =>
+    i === 0 ? 'load' : i === last ? 'unload' : spec.stations[i].inspect ? 'inspect' : 'process';
   const inspection = (st: LoopStation) =>
-    st.inspect ? { rejectShare: st.inspect.rejectShare, reworkShare: st.inspect.reworkShare, reworkStepId: `step-${st.inspect.reworkTo}` } : {};
+    st.inspect
+      ? {
+          rejectShare: st.inspect.rejectShare,
+          reworkShare: st.inspect.reworkShare,
+          reworkStepId: `step-${st.inspect.reworkTo}`,
+        }
+      : {};
   return {
     schemaVersion: 1,
     name,

@@ -12,7 +12,12 @@
  *   p_k(j | n) = X(n) s_k / α_k(j) · p_k(j − 1 | n − 1) for j ≥ 1,   p_k(0 | n) = 1 − Σ_{j≥1} p_k(j | n).
  * With one server this is R_k(n) = s_k (1 + Q_k(n − 1)). Returns X(n) per second, index n − 1.
  */
-export function mvaThroughput(serviceMeansSeconds: readonly number[], delaySeconds: number, maxN: number, servers: readonly number[] = serviceMeansSeconds.map(() => 1)): number[] {
+export function mvaThroughput(
+  serviceMeansSeconds: readonly number[],
+  delaySeconds: number,
+  maxN: number,
+  servers: readonly number[] = serviceMeansSeconds.map(() => 1),
+): number[] {
   // p[k][j]: probability of j carriers at station k with the previous population.
   let p = serviceMeansSeconds.map(() => [1]);
   const out: number[] = [];

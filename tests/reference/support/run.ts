@@ -6,7 +6,11 @@ import { runExperiment } from '../../../workers/engine/index';
 import { tQuantile } from '../../../workers/engine/stats/student-t';
 
 export function simulate(scenario: unknown, settings: RunSettingsInput, checkInvariants = false): Promise<RunResult> {
-  return runExperiment(scenario, settings, { now: () => performance.now(), yieldToHost: async () => undefined, checkInvariants });
+  return runExperiment(scenario, settings, {
+    now: () => performance.now(),
+    yieldToHost: async () => undefined,
+    checkInvariants,
+  });
 }
 
 export type Interval = { mean: number; low: number; high: number; halfWidth: number };

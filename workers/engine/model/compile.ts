@@ -3,7 +3,15 @@
 // plus routing tables. Done once per experiment; replications share it.
 import type { Scenario } from '../../../shared/scenario/scenario';
 import { laneLengthMm } from '../../../shared/scenario/track';
-import { asIndexArray, indexArray, NONE, type IndexArray, type LaneIndex, type StationIndex, type StepIndex } from './indexes';
+import {
+  asIndexArray,
+  indexArray,
+  NONE,
+  type IndexArray,
+  type LaneIndex,
+  type StationIndex,
+  type StepIndex,
+} from './indexes';
 import { createMotion, type Motion } from './motion';
 import { computeRoutes, type Routes } from './routing';
 
@@ -23,7 +31,12 @@ export const DISPATCH_ROUND_ROBIN = 2;
 export const DISPATCH_POOLED = 3;
 
 const STEP_CODES = { load: STEP_LOAD, process: STEP_PROCESS, inspect: STEP_INSPECT, unload: STEP_UNLOAD } as const;
-const DISPATCH_CODES = { pooled: DISPATCH_POOLED, firstFree: DISPATCH_FIRST_FREE, shortestQueue: DISPATCH_SHORTEST_QUEUE, roundRobin: DISPATCH_ROUND_ROBIN } as const;
+const DISPATCH_CODES = {
+  pooled: DISPATCH_POOLED,
+  firstFree: DISPATCH_FIRST_FREE,
+  shortestQueue: DISPATCH_SHORTEST_QUEUE,
+  roundRobin: DISPATCH_ROUND_ROBIN,
+} as const;
 const CONN_CODES = { elevator: CONN_ELEVATOR, lateral: CONN_LATERAL, curve: CONN_CURVE } as const;
 
 export type CompiledLine = {
@@ -75,7 +88,8 @@ function transferTimes(s: Scenario, t: Scenario['transfers'][number]): [number, 
     return [t.handlingSeconds + shift, shift];
   }
   const deckOf = (laneId: string) => s.decks.find((d) => d.id === s.lanes.find((l) => l.id === laneId)?.deckId);
-  const lift = Math.abs((deckOf(t.fromLaneId)?.elevationMm ?? 0) - (deckOf(t.toLaneId)?.elevationMm ?? 0)) / t.liftSpeedMmPerS;
+  const lift =
+    Math.abs((deckOf(t.fromLaneId)?.elevationMm ?? 0) - (deckOf(t.toLaneId)?.elevationMm ?? 0)) / t.liftSpeedMmPerS;
   return [t.handlingSeconds + lift, lift];
 }
 
@@ -133,13 +147,19 @@ export function compileLine(s: Scenario, carrierCount = s.carriers.count): Compi
     stationPausesForBreaks: Uint8Array.from(stations, (x) => (x.station.pausesForBreaks ? 1 : 0)),
     wholeLineBreaks: s.calendar.breakMode === 'wholeLine' && s.calendar.breaks.length > 0,
     stationIds: stations.map((x) => x.station.id),
-    stationRoom: Int32Array.from(stations, (x) => Math.max(1, Math.floor((x.station.positionMm - s.carriers.lengthMm) / pitchMm + 1e-9) + 1)),
+    stationRoom: Int32Array.from(stations, (x) =>
+      Math.max(1, Math.floor((x.station.positionMm - s.carriers.lengthMm) / pitchMm + 1e-9) + 1),
+    ),
     stepCount: s.steps.length,
     stepKind: Int32Array.from(s.steps, (st) => STEP_CODES[st.kind]),
     stepDispatch: Int32Array.from(s.steps, (st) => DISPATCH_CODES[st.dispatch]),
     stepRejectShare: Float64Array.from(s.steps, (st) => (st.kind === 'inspect' ? st.rejectShare : 0)),
     stepReworkShare: Float64Array.from(s.steps, (st) => (st.kind === 'inspect' ? st.reworkShare : 0)),
-    stepReworkTarget: asIndexArray<StepIndex>(Int32Array.from(s.steps, (st) => (st.kind === 'inspect' && st.reworkStepId !== undefined ? (stepIndex.get(st.reworkStepId) ?? -1) : -1))),
+    stepReworkTarget: asIndexArray<StepIndex>(
+      Int32Array.from(s.steps, (st) =>
+        st.kind === 'inspect' && st.reworkStepId !== undefined ? (stepIndex.get(st.reworkStepId) ?? -1) : -1,
+      ),
+    ),
     stepStations,
     routes: computeRoutes({ laneCount, laneTraverseSeconds, connFrom, connTo, connSeconds: connCarrySeconds }),
   };

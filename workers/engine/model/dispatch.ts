@@ -38,8 +38,13 @@ function travelSeconds(m: LineState, c: CarrierIndex, station: StationIndex): nu
   const pos = m.cPos[c];
   const targetLane = line.stationLane[station];
   const v = line.motion.cruiseMmPerS;
-  if (targetLane === lane && line.stationPositionMm[station] >= pos - EPS_MM) return (line.stationPositionMm[station] - pos) / v;
-  return (line.laneLengthMm[lane] - pos) / v + line.routes.cost[lane * line.laneCount + targetLane] + line.stationPositionMm[station] / v;
+  if (targetLane === lane && line.stationPositionMm[station] >= pos - EPS_MM)
+    return (line.stationPositionMm[station] - pos) / v;
+  return (
+    (line.laneLengthMm[lane] - pos) / v +
+    line.routes.cost[lane * line.laneCount + targetLane] +
+    line.stationPositionMm[station] / v
+  );
 }
 
 function eligible(m: LineState, c: CarrierIndex, s: StationIndex, filter: number): boolean {
@@ -51,10 +56,16 @@ function eligible(m: LineState, c: CarrierIndex, s: StationIndex, filter: number
 }
 
 /** Shortest queue among the eligible stations, ties by the way ahead; -1 when none is eligible. */
-function shortestQueueOnTheWay(m: LineState, stations: IndexArray<StationIndex>, c: CarrierIndex, filter: number): StationIndex {
+function shortestQueueOnTheWay(
+  m: LineState,
+  stations: IndexArray<StationIndex>,
+  c: CarrierIndex,
+  filter: number,
+): StationIndex {
   if (m.cLane[c] < 0) return leastAssigned(m, stations);
   let least = Infinity;
-  for (let i = 0; i < stations.length; i++) if (eligible(m, c, stations[i], filter) && m.sAssigned[stations[i]] < least) least = m.sAssigned[stations[i]];
+  for (let i = 0; i < stations.length; i++)
+    if (eligible(m, c, stations[i], filter) && m.sAssigned[stations[i]] < least) least = m.sAssigned[stations[i]];
   let nearest: StationIndex = NONE;
   let nearestCost = Infinity;
   for (let i = 0; i < stations.length; i++) {
@@ -72,9 +83,16 @@ function shortestQueueOnTheWay(m: LineState, stations: IndexArray<StationIndex>,
   let chosen = nearest;
   for (let i = 0; i < stations.length; i++) {
     const s = stations[i];
-    if (m.sAssigned[s] !== least || !eligible(m, c, s, filter) || line.stationLane[s] !== lane || line.stationPositionMm[s] <= line.stationPositionMm[chosen]) continue;
+    if (
+      m.sAssigned[s] !== least ||
+      !eligible(m, c, s, filter) ||
+      line.stationLane[s] !== lane ||
+      line.stationPositionMm[s] <= line.stationPositionMm[chosen]
+    )
+      continue;
     // Only a station reached by running on along the same lane, not one a lap later.
-    const along = nearestCost + (line.stationPositionMm[s] - line.stationPositionMm[nearest]) / line.motion.cruiseMmPerS;
+    const along =
+      nearestCost + (line.stationPositionMm[s] - line.stationPositionMm[nearest]) / line.motion.cruiseMmPerS;
     if (Math.abs(travelSeconds(m, c, s) - along) < 1e-9) chosen = s;
   }
   return chosen;
@@ -117,7 +135,8 @@ function routesPartAtLaneEnd(m: LineState, c: CarrierIndex, stations: IndexArray
   const line = m.line;
   const from = m.cLane[c] * line.laneCount;
   const first = line.routes.nextHop[from + line.stationLane[stations[0]]];
-  for (let i = 1; i < stations.length; i++) if (line.routes.nextHop[from + line.stationLane[stations[i]]] !== first) return true;
+  for (let i = 1; i < stations.length; i++)
+    if (line.routes.nextHop[from + line.stationLane[stations[i]]] !== first) return true;
   return false;
 }
 
@@ -130,7 +149,11 @@ export function decidePending(m: LineState, c: CarrierIndex): boolean {
   const step = m.line.stationStep[m.cTarget[c]];
   const stations = m.line.stepStations[step];
   const atLaneEnd = Math.abs(m.cPos[c] - m.line.laneLengthMm[m.cLane[c]]) <= EPS_MM;
-  const onOwnLane = !atLaneEnd || stations.some((s) => m.line.stationLane[s] === m.cLane[c] && Math.abs(m.line.stationPositionMm[s] - m.cPos[c]) <= EPS_MM);
+  const onOwnLane =
+    !atLaneEnd ||
+    stations.some(
+      (s) => m.line.stationLane[s] === m.cLane[c] && Math.abs(m.line.stationPositionMm[s] - m.cPos[c]) <= EPS_MM,
+    );
   if (!onOwnLane && !routesPartAtLaneEnd(m, c, stations)) return true;
   let chosen = shortestQueueOnTheWay(m, stations, c, onOwnLane ? REACHABLE : WITH_ROOM);
   if (chosen < 0 && onOwnLane) chosen = shortestQueueOnTheWay(m, stations, c, ANY);

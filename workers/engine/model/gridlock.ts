@@ -30,19 +30,26 @@ function where(m: LineState, c: CarrierIndex): string {
 
 function waitingFor(m: LineState, c: CarrierIndex): string {
   const step = m.cTarget[c] >= 0 ? m.line.stationStep[m.cTarget[c]] : -1;
-  const target = step < 0 ? 'nothing' : m.cPending[c] ? `a station of step "${m.line.scenario.steps[step].id}"` : `station "${m.line.stationIds[m.cTarget[c]]}"`;
+  const target =
+    step < 0
+      ? 'nothing'
+      : m.cPending[c]
+        ? `a station of step "${m.line.scenario.steps[step].id}"`
+        : `station "${m.line.stationIds[m.cTarget[c]]}"`;
   if (step >= 0 && m.stepWaiting[step].includes(c)) return `room on the way to ${target}: every station's lane is full`;
   const phase = phaseOf(m, c);
   if (phase === PH_TRANSFER) {
     for (let k = 0; k < m.line.connCount; k++) {
-      if (m.tCarrier[k] === c && m.tState[k] === TR_HOLDING) return `room at the start of lane "${laneId(m, m.line.connTo[k])}" (heading for ${target})`;
+      if (m.tCarrier[k] === c && m.tState[k] === TR_HOLDING)
+        return `room at the start of lane "${laneId(m, m.line.connTo[k])}" (heading for ${target})`;
     }
     return `its transfer (heading for ${target})`;
   }
   if (phase === PH_STATION) return `work at ${target}`;
   if (phase === PH_EXIT) {
     const conn = m.cConn[c];
-    if (m.line.connKind[conn] === 0) return `room at the start of lane "${laneId(m, m.line.connTo[conn])}" (heading for ${target})`;
+    if (m.line.connKind[conn] === 0)
+      return `room at the start of lane "${laneId(m, m.line.connTo[conn])}" (heading for ${target})`;
     return `${connName(m, conn)} to become free (heading for ${target})`;
   }
   const ahead = m.cAhead[c];
@@ -58,13 +65,18 @@ export function gridlockReport(m: LineState): GridlockEntry[] {
   return out;
 }
 
-const canBeZero = (d: Distribution) => (d.kind === 'fixed' && d.value === 0) || (d.kind === 'empirical' && d.samples.includes(0));
+const canBeZero = (d: Distribution) =>
+  (d.kind === 'fixed' && d.value === 0) || (d.kind === 'empirical' && d.samples.includes(0));
 
 /** Stations and transfers that can take no time at all: the only way a valid scenario stops the clock. */
 export function zeroTimes(line: CompiledLine): string[] {
   const s = line.scenario;
-  const stations = s.steps.flatMap((step) => step.stations.filter((st) => canBeZero(st.cycleTimeSeconds)).map((st) => `station "${st.id}" (cycle time)`));
-  const transfers = s.transfers.filter((_, j) => line.connCarrySeconds[s.links.length + j] === 0).map((t) => `transfer "${t.id}" (handling and travel)`);
+  const stations = s.steps.flatMap((step) =>
+    step.stations.filter((st) => canBeZero(st.cycleTimeSeconds)).map((st) => `station "${st.id}" (cycle time)`),
+  );
+  const transfers = s.transfers
+    .filter((_, j) => line.connCarrySeconds[s.links.length + j] === 0)
+    .map((t) => `transfer "${t.id}" (handling and travel)`);
   return [...stations, ...transfers];
 }
 
@@ -72,6 +84,7 @@ export function zeroTimes(line: CompiledLine): string[] {
 export function stallMessage(line: CompiledLine, events: number, t: number): string {
   const where = `no simulated time passed in ${events} events at t=${t.toFixed(3)} s`;
   const zeros = zeroTimes(line);
-  if (zeros.length > 0) return `${where}: carriers are cycling in zero time; give these a time above zero: ${zeros.join(', ')}`;
+  if (zeros.length > 0)
+    return `${where}: carriers are cycling in zero time; give these a time above zero: ${zeros.join(', ')}`;
   return `${where}, although every cycle and transfer time of this scenario is above zero: this is a fault of the engine, not of the scenario; please report it with the scenario file and run settings`;
 }

@@ -20,5 +20,6 @@ export interface IndexArray<T extends number> extends Int32Array {
 /** The "none" entry of an index array. */
 export const NONE = -1 as CarrierIndex & StationIndex & LaneIndex & StepIndex & ConnIndex;
 
-export const indexArray = <T extends number>(length: number, fill: number = NONE) => new Int32Array(length).fill(fill) as IndexArray<T>;
+export const indexArray = <T extends number>(length: number, fill: number = NONE) =>
+  new Int32Array(length).fill(fill) as IndexArray<T>;
 export const asIndexArray = <T extends number>(a: Int32Array) => a as IndexArray<T>;

@@ -14,7 +14,10 @@ const EPS_MM = 1e-6;
  */
 function slackMm(m: LineState, t: number): number {
   const s = m.line.scenario;
-  const fastest = s.conveyor.kind === 'belt' ? s.conveyor.speedMmPerS : Math.max(s.carriers.loaded.vMaxMmPerS, s.carriers.empty?.vMaxMmPerS ?? 0);
+  const fastest =
+    s.conveyor.kind === 'belt'
+      ? s.conveyor.speedMmPerS
+      : Math.max(s.carriers.loaded.vMaxMmPerS, s.carriers.empty?.vMaxMmPerS ?? 0);
   return EPS_MM + 4 * fastest * Math.abs(t) * Number.EPSILON;
 }
 
@@ -28,7 +31,9 @@ function checkPair(m: LineState, ahead: CarrierIndex, behind: CarrierIndex, lane
     const t = from + (horizon * k) / 4;
     const clearance = positionAt(m, ahead, t) - positionAt(m, behind, t);
     if (clearance < m.line.pitchMm - slackMm(m, t)) {
-      throw new Error(`invariant: carriers ${ahead} and ${behind} on lane ${lane} are ${clearance} mm apart, less than ${m.line.pitchMm} mm, at t=${t}`);
+      throw new Error(
+        `invariant: carriers ${ahead} and ${behind} on lane ${lane} are ${clearance} mm apart, less than ${m.line.pitchMm} mm, at t=${t}`,
+      );
     }
     if (horizon === 0) return;
   }
@@ -43,22 +48,28 @@ export function checkInvariants(m: LineState): void {
     let count = 0;
     for (let c = m.laneFront[lane]; c >= 0; c = m.cBehind[c]) {
       count++;
-      if (m.cLane[c] !== lane) throw new Error(`invariant: carrier ${c} is listed on lane ${lane} but records lane ${m.cLane[c]}`);
+      if (m.cLane[c] !== lane)
+        throw new Error(`invariant: carrier ${c} is listed on lane ${lane} but records lane ${m.cLane[c]}`);
       const head = positionAt(m, c, positionClock(m, m.now));
       const slack = slackMm(m, m.now);
       if (head < line.carrierLengthMm - slack || head > line.laneLengthMm[lane] + slack) {
-        throw new Error(`invariant: carrier ${c} front at ${head} mm is off lane ${lane} (length ${line.laneLengthMm[lane]} mm) at t=${m.now}`);
+        throw new Error(
+          `invariant: carrier ${c} front at ${head} mm is off lane ${lane} (length ${line.laneLengthMm[lane]} mm) at t=${m.now}`,
+        );
       }
       if (previous >= 0) checkPair(m, previous, c, lane);
       previous = c;
     }
-    if (count !== m.laneCarriers[lane]) throw new Error(`invariant: lane ${lane} counts ${m.laneCarriers[lane]} carriers but lists ${count}`);
+    if (count !== m.laneCarriers[lane])
+      throw new Error(`invariant: lane ${lane} counts ${m.laneCarriers[lane]} carriers but lists ${count}`);
     onLanes += count;
   }
   let inTransfers = 0;
   for (let c = 0; c < line.carrierCount; c++) if (phaseOf(m, c as CarrierIndex) === PH_TRANSFER) inTransfers++;
   if (onLanes + inTransfers !== line.carrierCount) {
-    throw new Error(`invariant: ${onLanes} carriers on lanes and ${inTransfers} in transfers, but the line has ${line.carrierCount}`);
+    throw new Error(
+      `invariant: ${onLanes} carriers on lanes and ${inTransfers} in transfers, but the line has ${line.carrierCount}`,
+    );
   }
   let loaded = 0;
   for (let c = 0; c < line.carrierCount; c++) loaded += m.cLoaded[c];

@@ -7,7 +7,16 @@
 // platoon (platoons.ts); a platoon moves as one, through its leader.
 import { followerProfile, PROFILE_EMPTY, PROFILE_LOADED } from './motion';
 import { canJoin, join, leaderOf, offsetMm, phaseOf, rearOf, ridersChangePhase } from './platoons';
-import { EV_ARRIVE, EV_LANE_WAKE, PH_EXIT, PH_MOVING, PH_QUEUED, scheduleActive, scheduleActiveAt, type LineState } from './state';
+import {
+  EV_ARRIVE,
+  EV_LANE_WAKE,
+  PH_EXIT,
+  PH_MOVING,
+  PH_QUEUED,
+  scheduleActive,
+  scheduleActiveAt,
+  type LineState,
+} from './state';
 import { NONE, type CarrierIndex, type ConnIndex, type LaneIndex } from './indexes';
 
 const EPS_MM = 1e-6;
@@ -17,7 +26,9 @@ export function positionAt(m: LineState, c: CarrierIndex, t: number): number {
   const leader = leaderOf(m, c);
   const start = m.cPos[leader] - offsetMm(m, c);
   if (m.cPhase[leader] !== PH_MOVING) return start;
-  return start + m.line.motion.travelledMm(m.cDest[leader] - m.cPos[leader], m.cProfile[leader], t - m.cMoveStart[leader]);
+  return (
+    start + m.line.motion.travelledMm(m.cDest[leader] - m.cPos[leader], m.cProfile[leader], t - m.cMoveStart[leader])
+  );
 }
 
 /** Where the carrier will stand when its current move ends (where it stands, when at rest). */
@@ -187,7 +198,14 @@ function clearsEntryAt(m: LineState, rear: CarrierIndex): number {
   // The rear moves as its leader does, offset behind it.
   const leader = leaderOf(m, rear);
   const start = m.cPos[leader];
-  return m.cMoveStart[leader] + m.line.motion.secondsToCover(m.cDest[leader] - start, m.cProfile[leader], needed - EPS_MM / 2 + offsetMm(m, rear) - start);
+  return (
+    m.cMoveStart[leader] +
+    m.line.motion.secondsToCover(
+      m.cDest[leader] - start,
+      m.cProfile[leader],
+      needed - EPS_MM / 2 + offsetMm(m, rear) - start,
+    )
+  );
 }
 
 /** Whether a carrier can be put at the lane start now (the rear carrier has cleared it). */

@@ -36,7 +36,8 @@ export function stopLine(m: LineState, until: number): void {
 export function restartLine(m: LineState): void {
   m.stoppedUntil = -Infinity;
   forEachMovingLeader(m, (c) => reportPhase(m, c, PH_QUEUED, PH_MOVING));
-  for (let k = 0; k < m.line.connCount; k++) if (m.tState[k] !== TR_IDLE) m.observer.transferState(k, m.tState[k], m.now);
+  for (let k = 0; k < m.line.connCount; k++)
+    if (m.tState[k] !== TR_IDLE) m.observer.transferState(k, m.tState[k], m.now);
 }
 
 /** The time at which positions are read: while stopped, the carriers stand where the stop left them. */

@@ -21,7 +21,9 @@ export type Motion = {
 };
 
 function toProfile(p: { vMaxMmPerS: number; aMaxMmPerS2: number; jMaxMmPerS3?: number }): MotionProfile {
-  return p.jMaxMmPerS3 === undefined ? { vMax: p.vMaxMmPerS, aMax: p.aMaxMmPerS2 } : { vMax: p.vMaxMmPerS, aMax: p.aMaxMmPerS2, jMax: p.jMaxMmPerS3 };
+  return p.jMaxMmPerS3 === undefined
+    ? { vMax: p.vMaxMmPerS, aMax: p.aMaxMmPerS2 }
+    : { vMax: p.vMaxMmPerS, aMax: p.aMaxMmPerS2, jMax: p.jMaxMmPerS3 };
 }
 
 function slower(a: MotionProfile, b: MotionProfile): MotionProfile {

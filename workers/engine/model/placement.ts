@@ -37,7 +37,11 @@ export function placeCarriers(m: LineState): void {
   const line = m.line;
   let c = 0 as CarrierIndex;
   for (const lane of lanesTowardsLoad(m)) {
-    for (let pos = line.laneLengthMm[lane]; pos >= line.carrierLengthMm - 1e-9 && c < line.carrierCount; pos -= line.pitchMm) {
+    for (
+      let pos = line.laneLengthMm[lane];
+      pos >= line.carrierLengthMm - 1e-9 && c < line.carrierCount;
+      pos -= line.pitchMm
+    ) {
       prepare(m, c);
       attach(m, c, lane, pos);
       setPhase(m, c, PH_QUEUED);
@@ -56,6 +60,8 @@ export function placeCarriers(m: LineState): void {
     c = (c + 1) as CarrierIndex;
   }
   if (c < line.carrierCount) {
-    throw new RangeError(`${line.carrierCount} carriers do not fit on the track reachable from loading; at most ${c} do`);
+    throw new RangeError(
+      `${line.carrierCount} carriers do not fit on the track reachable from loading; at most ${c} do`,
+    );
   }
 }

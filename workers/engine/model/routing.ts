@@ -5,7 +5,6 @@
 // (Floyd–Warshall, fine for the few hundred lanes a layout has), so the hot path only reads a table.
 import { indexArray, type ConnIndex, type IndexArray } from './indexes';
 
-
 export type TrackGraph = {
   laneCount: number;
   laneTraverseSeconds: Float64Array;

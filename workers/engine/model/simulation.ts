@@ -63,7 +63,9 @@ function makeSamplers(line: CompiledLine, streams: StreamFactory): StationSample
   return s.steps.flatMap((step, i) =>
     step.stations.map((st) => ({
       cycle: createSampler(st.cycleTimeSeconds, streams(`station:${st.id}:cycle`)),
-      failure: st.failures ? createSampler(st.failures.timeBetweenFailuresSeconds, streams(`station:${st.id}:failure`)) : null,
+      failure: st.failures
+        ? createSampler(st.failures.timeBetweenFailuresSeconds, streams(`station:${st.id}:failure`))
+        : null,
       repair: st.failures ? createSampler(st.failures.timeToRepairSeconds, streams(`station:${st.id}:repair`)) : null,
       inspect: inspect[i],
     })),
@@ -115,14 +117,25 @@ export class Replication {
     private readonly config: ReplicationConfig,
   ) {
     // The bottleneck analysis bridges the in-feed gap of a queued carrier, with half again for margin.
-    const inFeed = Math.max(line.motion.moveSeconds(line.pitchMm, PROFILE_LOADED), line.motion.moveSeconds(line.pitchMm, PROFILE_EMPTY));
-    this.recorder = new Recorder(line, config.warmupSeconds, config.endSeconds, config.timeBins, config.positionBins, 1.5 * inFeed);
+    const inFeed = Math.max(
+      line.motion.moveSeconds(line.pitchMm, PROFILE_LOADED),
+      line.motion.moveSeconds(line.pitchMm, PROFILE_EMPTY),
+    );
+    this.recorder = new Recorder(
+      line,
+      config.warmupSeconds,
+      config.endSeconds,
+      config.timeBins,
+      config.positionBins,
+      1.5 * inFeed,
+    );
     const m = createState(line, new EventQueue(), this.recorder, makeSamplers(line, streams));
     this.state = m;
     const origin = config.originSeconds ?? 0;
     m.now = origin;
     const calendar = line.scenario.calendar;
-    this.breaksApply = calendar.breaks.length > 0 && (line.wholeLineBreaks || line.stationPausesForBreaks.some((p) => p === 1));
+    this.breaksApply =
+      calendar.breaks.length > 0 && (line.wholeLineBreaks || line.stationPausesForBreaks.some((p) => p === 1));
     startFailureClocks(m);
     for (let s = 0; s < line.stationCount; s++) m.observer.stationState(s, m.sState[s], origin);
     placeCarriers(m);
@@ -152,7 +165,8 @@ export class Replication {
 
   private scheduleBreak(after: number): void {
     const edge = nextBreakEdge(this.line.scenario.calendar, after);
-    if (edge && edge.time < this.config.endSeconds) this.state.queue.push(edge.time, 0, EV_BREAK, edge.starting ? 1 : 0, 0);
+    if (edge && edge.time < this.config.endSeconds)
+      this.state.queue.push(edge.time, 0, EV_BREAK, edge.starting ? 1 : 0, 0);
   }
 
   private sample(t: number): void {
@@ -206,7 +220,11 @@ export class Replication {
   private checkGridlock(): void {
     const m = this.state;
     if (this.done || m.activePending > 0 || m.breakActive) return;
-    throw new SimulationStoppedError('gridlock', `gridlock at t=${m.now.toFixed(1)} s: no carrier can move and no station is working`, gridlockReport(m));
+    throw new SimulationStoppedError(
+      'gridlock',
+      `gridlock at t=${m.now.toFixed(1)} s: no carrier can move and no station is working`,
+      gridlockReport(m),
+    );
   }
 
   /**
@@ -238,7 +256,10 @@ export class Replication {
       if (this.config.checkInvariants) checkInvariants(m);
       this.checkGridlock();
       if (this.events > this.config.eventBudget) {
-        throw new SimulationStoppedError('eventBudget', `stopped after ${this.config.eventBudget} events, the budget for one replication, at t=${m.now.toFixed(1)} s; shorten the run or raise the budget`);
+        throw new SimulationStoppedError(
+          'eventBudget',
+          `stopped after ${this.config.eventBudget} events, the budget for one replication, at t=${m.now.toFixed(1)} s; shorten the run or raise the budget`,
+        );
       }
       if ((this.events & 1023) === 0 && shouldYield()) return false;
     }

@@ -5,10 +5,33 @@ import type { Sampler } from '../random/sampler';
 import type { EventQueue } from '../kernel/event-queue';
 import { ST_STARVED, type Observer } from '../observe/observer';
 import type { CompiledLine } from './compile';
-import { indexArray, type CarrierIndex, type ConnIndex, type IndexArray, type LaneIndex, type StationIndex, type StepIndex } from './indexes';
+import {
+  indexArray,
+  type CarrierIndex,
+  type ConnIndex,
+  type IndexArray,
+  type LaneIndex,
+  type StationIndex,
+  type StepIndex,
+} from './indexes';
 
 // The state codes are the observer's vocabulary; re-exported so the model's modules find them here.
-export { PH_EXIT, PH_MOVING, PH_QUEUED, PH_STATION, PH_TRANSFER, ST_BLOCKED, ST_BREAK, ST_DOWN, ST_PROCESSING, ST_STARVED, TR_CARRYING, TR_HOLDING, TR_IDLE, TR_RETURNING } from '../observe/observer';
+export {
+  PH_EXIT,
+  PH_MOVING,
+  PH_QUEUED,
+  PH_STATION,
+  PH_TRANSFER,
+  ST_BLOCKED,
+  ST_BREAK,
+  ST_DOWN,
+  ST_PROCESSING,
+  ST_STARVED,
+  TR_CARRYING,
+  TR_HOLDING,
+  TR_IDLE,
+  TR_RETURNING,
+} from '../observe/observer';
 
 /** Event kinds. */
 export const EV_ARRIVE = 1;
@@ -23,7 +46,12 @@ export const EV_BREAK = 7;
 export const EV_SAMPLE = 8;
 export const EV_END = 9;
 
-export type StationSamplers = { cycle: Sampler; failure: Sampler | null; repair: Sampler | null; inspect: Sampler | null };
+export type StationSamplers = {
+  cycle: Sampler;
+  failure: Sampler | null;
+  repair: Sampler | null;
+  inspect: Sampler | null;
+};
 
 export type LineState = {
   line: CompiledLine;
@@ -104,7 +132,12 @@ export type LineState = {
   wip: number;
 };
 
-export function createState(line: CompiledLine, queue: EventQueue, observer: Observer, samplers: StationSamplers[]): LineState {
+export function createState(
+  line: CompiledLine,
+  queue: EventQueue,
+  observer: Observer,
+  samplers: StationSamplers[],
+): LineState {
   const n = line.carrierCount;
   const s = line.stationCount;
   const c = line.connCount;

@@ -48,7 +48,11 @@ function resume(m: LineState, s: StationIndex): void {
 }
 
 /** Stops the running segment; elapsed is its whole planned length when it ran to its end. */
-function pause(m: LineState, s: StationIndex, elapsed = Math.min(Math.max(0, m.now - m.sSegmentStart[s]), m.sSegmentLength[s])): void {
+function pause(
+  m: LineState,
+  s: StationIndex,
+  elapsed = Math.min(Math.max(0, m.now - m.sSegmentStart[s]), m.sSegmentLength[s]),
+): void {
   if (!m.sSegmentActive[s]) return;
   m.sWorkLeft[s] -= elapsed;
   m.sToFailure[s] -= elapsed;
@@ -160,4 +164,3 @@ function finishWork(m: LineState, s: StationIndex): void {
 export function startFailureClocks(m: LineState): void {
   for (let s = 0; s < m.line.stationCount; s++) m.sToFailure[s] = m.samplers[s].failure?.() ?? Infinity;
 }
-

@@ -6,7 +6,19 @@
 // for a lane's start are served in the order they were made.
 import { CONN_LINK } from './compile';
 import { attach, detachFront, entryClear, requestLaneCheck, scheduleEntryWake, setPhase, wake } from './lanes';
-import { EV_CARRIED, EV_RETURNED, PH_EXIT, PH_QUEUED, PH_TRANSFER, scheduleActive, TR_CARRYING, TR_HOLDING, TR_IDLE, TR_RETURNING, type LineState } from './state';
+import {
+  EV_CARRIED,
+  EV_RETURNED,
+  PH_EXIT,
+  PH_QUEUED,
+  PH_TRANSFER,
+  scheduleActive,
+  TR_CARRYING,
+  TR_HOLDING,
+  TR_IDLE,
+  TR_RETURNING,
+  type LineState,
+} from './state';
 import { NONE, type CarrierIndex, type ConnIndex, type LaneIndex } from './indexes';
 
 function setTransferState(m: LineState, conn: ConnIndex, state: number): void {

@@ -167,7 +167,8 @@ export class BottleneckTracker {
         }
       }
     } else {
-      for (let s = 0; s < this.activeSince.length; s++) if (this.activeSince[s] >= 0 && this.activeSince[s] < boundary) boundary = this.activeSince[s];
+      for (let s = 0; s < this.activeSince.length; s++)
+        if (this.activeSince[s] >= 0 && this.activeSince[s] < boundary) boundary = this.activeSince[s];
     }
     if (boundary <= this.settled) return;
     this.sweep(boundary);

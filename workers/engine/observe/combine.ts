@@ -26,7 +26,11 @@ function meanOf(reps: ReplicationSummary[], pick: (r: ReplicationSummary) => num
 }
 
 function meanQuantiles(reps: ReplicationSummary[], pick: (r: ReplicationSummary) => [number, number, number]) {
-  return { mean: meanOf(reps, (r) => pick(r)[0]), p50: meanOf(reps, (r) => pick(r)[1]), p95: meanOf(reps, (r) => pick(r)[2]) };
+  return {
+    mean: meanOf(reps, (r) => pick(r)[0]),
+    p50: meanOf(reps, (r) => pick(r)[1]),
+    p95: meanOf(reps, (r) => pick(r)[2]),
+  };
 }
 
 function meanArray(arrays: ArrayLike<number>[], digits = 4): number[] {
@@ -59,7 +63,15 @@ export type CombineInput = {
   positionBins: number;
 };
 
-export function combineReplications({ line, settings, engineVersion, reps, events, timeBins, positionBins }: CombineInput): RunResult {
+export function combineReplications({
+  line,
+  settings,
+  engineVersion,
+  reps,
+  events,
+  timeBins,
+  positionBins,
+}: CombineInput): RunResult {
   const s = line.scenario;
   const hoursPerYear = productiveHoursPerYear({ ...s.calendar, breaks: [] });
   const observedSeconds = settings.hours * 3600;
@@ -166,7 +178,11 @@ export function combineReplications({ line, settings, engineVersion, reps, event
     departuresPerHour: interval(reps.map((r) => r.departuresPerHour)),
     wip: {
       mean: meanOf(reps, (r) => r.wipMean),
-      series: { startSeconds: settings.warmupMinutes * 60, binSeconds: observedSeconds / timeBins, values: meanArray(reps.map((r) => r.wipSeries)) },
+      series: {
+        startSeconds: settings.warmupMinutes * 60,
+        binSeconds: observedSeconds / timeBins,
+        values: meanArray(reps.map((r) => r.wipSeries)),
+      },
     },
     parts: {
       loaded: meanOf(reps, (r) => r.loaded),
@@ -178,7 +194,11 @@ export function combineReplications({ line, settings, engineVersion, reps, event
       startSeconds: settings.warmupMinutes * 60,
       binSeconds: observedSeconds / timeBins,
       timeBins,
-      lanes: s.lanes.map((lane, l) => ({ laneId: lane.id, positionBins, occupancy: meanArray(reps.map((r) => r.laneHeat[l])) })),
+      lanes: s.lanes.map((lane, l) => ({
+        laneId: lane.id,
+        positionBins,
+        occupancy: meanArray(reps.map((r) => r.laneHeat[l])),
+      })),
       stationStates: [...STATION_STATES],
       stations: stations.map(({ st }, i) => ({
         stationId: st.id,

@@ -9,7 +9,19 @@
 // has the longest active periods and is found as the bottleneck; one that is mostly blocked is not.
 import { StreamingHistogram } from '../stats/histogram';
 import { BottleneckTracker } from './bottleneck';
-import { PH_EXIT, PH_MOVING, PH_QUEUED, PH_STATION, ST_BLOCKED, ST_STARVED, TR_CARRYING, TR_IDLE, TR_RETURNING, TRANSFER_STATE_COUNT, type Observer } from './observer';
+import {
+  PH_EXIT,
+  PH_MOVING,
+  PH_QUEUED,
+  PH_STATION,
+  ST_BLOCKED,
+  ST_STARVED,
+  TR_CARRYING,
+  TR_IDLE,
+  TR_RETURNING,
+  TRANSFER_STATE_COUNT,
+  type Observer,
+} from './observer';
 import { Levels, ObservationWindow } from './window';
 
 export const STATE_COUNT = 5;

@@ -83,4 +83,3 @@ export function summarizeReplication(line: CompiledLine, r: Recorder): Replicati
     stationTimeline: timeline,
   };
 }
-

@@ -76,5 +76,13 @@ export function fromSummaryJson(j: ReplicationSummaryJson): ReplicationSummary {
 
 export type ReplicationBlockJson = { first: number; summaries: ReplicationSummaryJson[]; events: number[] };
 
-export const blockToJson = (b: ReplicationBlock): ReplicationBlockJson => ({ first: b.first, summaries: b.summaries.map(toSummaryJson), events: b.events });
-export const blockFromJson = (b: ReplicationBlockJson): ReplicationBlock => ({ first: b.first, summaries: b.summaries.map(fromSummaryJson), events: b.events });
+export const blockToJson = (b: ReplicationBlock): ReplicationBlockJson => ({
+  first: b.first,
+  summaries: b.summaries.map(toSummaryJson),
+  events: b.events,
+});
+export const blockFromJson = (b: ReplicationBlockJson): ReplicationBlock => ({
+  first: b.first,
+  summaries: b.summaries.map(fromSummaryJson),
+  events: b.events,
+});

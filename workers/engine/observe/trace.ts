@@ -101,10 +101,15 @@ export class TraceRecorder {
   observe(base: Observer): Observer {
     // Built from whatever methods the base has, so the trace keeps working as the observer grows.
     const tee: Record<string, unknown> = {};
-    for (let proto: object | null = base; proto && proto !== Object.prototype; proto = Object.getPrototypeOf(proto) as object | null) {
+    for (
+      let proto: object | null = base;
+      proto && proto !== Object.prototype;
+      proto = Object.getPrototypeOf(proto) as object | null
+    ) {
       for (const key of Object.getOwnPropertyNames(proto)) {
         const value = (base as unknown as Record<string, unknown>)[key];
-        if (key !== 'constructor' && typeof value === 'function' && !(key in tee)) tee[key] = (value as (...a: unknown[]) => unknown).bind(base);
+        if (key !== 'constructor' && typeof value === 'function' && !(key in tee))
+          tee[key] = (value as (...a: unknown[]) => unknown).bind(base);
       }
     }
     const observer = tee as unknown as Observer;
@@ -129,7 +134,16 @@ export class TraceRecorder {
     this.opened = true;
     for (let s = 0; s < this.line.stationCount; s++) this.pushStation(s, this.lastState[s], this.lastStateT[s]);
     for (let c = 0; c < this.line.carrierCount; c++) {
-      if (this.lastT[c] >= 0) this.pushCarrier(c, this.lastT[c], this.lastWhere[c], this.lastPos[c], this.lastDest[c], this.lastEnd[c], this.lastFlags[c]);
+      if (this.lastT[c] >= 0)
+        this.pushCarrier(
+          c,
+          this.lastT[c],
+          this.lastWhere[c],
+          this.lastPos[c],
+          this.lastDest[c],
+          this.lastEnd[c],
+          this.lastFlags[c],
+        );
     }
   }
 
@@ -148,8 +162,13 @@ export class TraceRecorder {
       const moving = phase === PH_MOVING;
       const dest = inTransfer ? 1 : moving ? m.cDest[leader] - offset : pos;
       const flags = m.cLoaded[c] ? TRACE_LOADED : 0;
-      const same = this.lastT[c] >= 0 && this.lastWhere[c] === where && this.lastPos[c] === Math.fround(pos) && this.lastDest[c] === Math.fround(dest) && this.lastFlags[c] === flags;
-      if (same && (moving || inTransfer) === (this.lastEnd[c] > this.lastT[c])) continue;
+      const same =
+        this.lastT[c] >= 0 &&
+        this.lastWhere[c] === where &&
+        this.lastPos[c] === Math.fround(pos) &&
+        this.lastDest[c] === Math.fround(dest) &&
+        this.lastFlags[c] === flags;
+      if (same && (moving || inTransfer) === this.lastEnd[c] > this.lastT[c]) continue;
       const end = inTransfer ? t + this.line.connCarrySeconds[m.cConn[c]] : moving ? m.cMoveEnd[leader] : t;
       // The window opens with where everything was just before it, then this change.
       if (t >= this.startSeconds && !this.opened) this.open();
@@ -174,7 +193,15 @@ export class TraceRecorder {
     this.pushStation(s, state, t);
   }
 
-  private pushCarrier(c: number, t: number, where: number, pos: number, dest: number, end: number, flags: number): void {
+  private pushCarrier(
+    c: number,
+    t: number,
+    where: number,
+    pos: number,
+    dest: number,
+    end: number,
+    flags: number,
+  ): void {
     let k = this.carriers;
     if (k.count === k.t.length) {
       if (k.count >= this.limits.carrierChangesMax) throw this.overflow('carrier', this.limits.carrierChangesMax, t);
@@ -193,7 +220,8 @@ export class TraceRecorder {
   private pushStation(s: number, state: number, t: number): void {
     let k = this.stations;
     if (k.count === k.t.length) {
-      if (k.count >= this.limits.stationChangesMax) throw this.overflow('station state', this.limits.stationChangesMax, t);
+      if (k.count >= this.limits.stationChangesMax)
+        throw this.overflow('station state', this.limits.stationChangesMax, t);
       k = this.stations = grow(k, stationColumns, Math.min(k.count * 2, this.limits.stationChangesMax));
     }
     const i = k.count++;

@@ -6,7 +6,12 @@
 // reshuffling them. Each closure keeps its constants precomputed and allocates nothing per draw.
 // Inputs are trusted: distributionSchema has already refused anything these formulas cannot take.
 import type { Distribution } from '../../../shared/scenario/distribution';
-import { inverseRegularizedLowerGamma, lnGamma, normalQuantileFast, standardNormalCdf } from '../stats/special-functions';
+import {
+  inverseRegularizedLowerGamma,
+  lnGamma,
+  normalQuantileFast,
+  standardNormalCdf,
+} from '../stats/special-functions';
 import { gammaFromMeanCv, lognormalFromMeanCv } from '../../../shared/scenario/distribution-parameters';
 import type { UniformStream } from './streams';
 

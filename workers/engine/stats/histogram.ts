@@ -25,7 +25,9 @@ export class StreamingHistogram {
    */
   constructor(initialBinWidth: number, binCount = 256) {
     if (!(initialBinWidth > 0) || !Number.isFinite(initialBinWidth)) {
-      throw new RangeError(`StreamingHistogram: initialBinWidth must be a positive finite number, got ${initialBinWidth}`);
+      throw new RangeError(
+        `StreamingHistogram: initialBinWidth must be a positive finite number, got ${initialBinWidth}`,
+      );
     }
     if (!Number.isInteger(binCount) || binCount < 2 || binCount % 2 !== 0) {
       throw new RangeError(`StreamingHistogram: binCount must be an even whole number of at least 2, got ${binCount}`);

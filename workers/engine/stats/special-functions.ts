@@ -134,9 +134,17 @@ export function standardNormalCdf(z: number): number {
 // Rational approximation of the normal quantile by P. J. Acklam ("An algorithm for computing the
 // inverse normal cumulative distribution function", 2003, web note; coefficients recalled from memory
 // and checked against jstat in the tests), relative error 1.15e-9 before refinement.
-const ACKLAM_A = [-3.969683028665376e1, 2.209460984245205e2, -2.759285104469687e2, 1.38357751867269e2, -3.066479806614716e1, 2.506628277459239];
-const ACKLAM_B = [-5.447609879822406e1, 1.615858368580409e2, -1.556989798598866e2, 6.680131188771972e1, -1.328068155288572e1];
-const ACKLAM_C = [-7.784894002430293e-3, -3.223964580411365e-1, -2.400758277161838, -2.549732539343734, 4.374664141464968, 2.938163982698783];
+const ACKLAM_A = [
+  -3.969683028665376e1, 2.209460984245205e2, -2.759285104469687e2, 1.38357751867269e2, -3.066479806614716e1,
+  2.506628277459239,
+];
+const ACKLAM_B = [
+  -5.447609879822406e1, 1.615858368580409e2, -1.556989798598866e2, 6.680131188771972e1, -1.328068155288572e1,
+];
+const ACKLAM_C = [
+  -7.784894002430293e-3, -3.223964580411365e-1, -2.400758277161838, -2.549732539343734, 4.374664141464968,
+  2.938163982698783,
+];
 const ACKLAM_D = [7.784695709041462e-3, 3.224671290700398e-1, 2.445134137142996, 3.754408661907416];
 const ACKLAM_LOW = 0.02425;
 const SQRT_2PI = Math.sqrt(2 * Math.PI);
@@ -153,7 +161,10 @@ function acklamLowerHalf(p: number): number {
   }
   const q = p - 0.5;
   const r = q * q;
-  return ((((((a0 * r + a1) * r + a2) * r + a3) * r + a4) * r + a5) * q) / (((((b0 * r + b1) * r + b2) * r + b3) * r + b4) * r + 1);
+  return (
+    ((((((a0 * r + a1) * r + a2) * r + a3) * r + a4) * r + a5) * q) /
+    (((((b0 * r + b1) * r + b2) * r + b3) * r + b4) * r + 1)
+  );
 }
 
 /**

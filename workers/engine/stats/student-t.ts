@@ -19,7 +19,8 @@ const MAX_ITERATIONS = 200;
 /** Quantile of Student's t: the t with P(T <= t) = p. df may be fractional; p in (0, 1). */
 export function tQuantile(p: number, df: number): number {
   if (!(p > 0 && p < 1)) throw new RangeError(`tQuantile: p must lie strictly between 0 and 1, got ${p}`);
-  if (!(df > 0) || !Number.isFinite(df)) throw new RangeError(`tQuantile: df must be a positive finite number, got ${df}`);
+  if (!(df > 0) || !Number.isFinite(df))
+    throw new RangeError(`tQuantile: df must be a positive finite number, got ${df}`);
   if (p < 0.5) return -tQuantile(1 - p, df);
   if (p === 0.5) return 0;
   // Closed forms (Cauchy for df = 1; Hill, CACM 13(10), 1970, for df = 2).

@@ -66,8 +66,22 @@ export function serialLine(spec: SerialLineSpec): ScenarioInput {
     track: { moduleLengthsMm: [workLength, returnLength], widthMm: 150 },
     decks: [{ id: 'deck', name: 'Deck', elevationMm: 900 }],
     lanes: [
-      { id: 'work', name: 'Work', deckId: 'deck', modules: [{ lengthMm: workLength, count: 1 }], start: { xMm: 0, yMm: 0 }, heading: 'east' },
-      { id: 'return', name: 'Return', deckId: 'deck', modules: [{ lengthMm: returnLength, count: 1 }], start: { xMm: workLength, yMm: 500 }, heading: 'west' },
+      {
+        id: 'work',
+        name: 'Work',
+        deckId: 'deck',
+        modules: [{ lengthMm: workLength, count: 1 }],
+        start: { xMm: 0, yMm: 0 },
+        heading: 'east',
+      },
+      {
+        id: 'return',
+        name: 'Return',
+        deckId: 'deck',
+        modules: [{ lengthMm: returnLength, count: 1 }],
+        start: { xMm: workLength, yMm: 500 },
+        heading: 'west',
+      },
     ],
     links: [
       { fromLaneId: 'work', toLaneId: 'return' },
@@ -81,7 +95,13 @@ export function serialLine(spec: SerialLineSpec): ScenarioInput {
       loaded: { vMaxMmPerS: spec.vMaxMmPerS ?? 20_000, aMaxMmPerS2: spec.aMaxMmPerS2 ?? 10_000_000 },
     },
     steps,
-    calendar: { shiftsPerDay: 1, hoursPerShift: spec.hoursPerShift ?? 8, breaks: spec.breaks ?? [], daysPerWeek: 5, weeksPerYear: 48 },
+    calendar: {
+      shiftsPerDay: 1,
+      hoursPerShift: spec.hoursPerShift ?? 8,
+      breaks: spec.breaks ?? [],
+      daysPerWeek: 5,
+      weeksPerYear: 48,
+    },
     conveyor: spec.belt ? { kind: 'belt', pitchMm: pitch, ...spec.belt } : { kind: 'carriers' },
   };
 }

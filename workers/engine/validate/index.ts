@@ -12,7 +12,10 @@ export type ValidationOutcome = { ok: true; scenario: Scenario } | { ok: false; 
 export function validateScenario(input: unknown): ValidationOutcome {
   const parsed = scenarioSchema.safeParse(input);
   if (!parsed.success) {
-    return { ok: false, issues: parsed.error.issues.map((i) => ({ path: formatIssuePath(i.path), message: i.message })) };
+    return {
+      ok: false,
+      issues: parsed.error.issues.map((i) => ({ path: formatIssuePath(i.path), message: i.message })),
+    };
   }
   const issues = staticChecks(parsed.data);
   return issues.length > 0 ? { ok: false, issues } : { ok: true, scenario: parsed.data };

@@ -18,7 +18,12 @@ export function trackCapacity(s: Scenario): number {
 export function checkCarrierCount(s: Scenario, count: number, path: string): ValidationIssue[] {
   const capacity = trackCapacity(s);
   if (count <= capacity) return [];
-  return [{ path, message: `${count} carriers do not fit: the track holds ${capacity} (each lane's length over carrier length plus gap, plus one per transfer); use fewer carriers or longer lanes` }];
+  return [
+    {
+      path,
+      message: `${count} carriers do not fit: the track holds ${capacity} (each lane's length over carrier length plus gap, plus one per transfer); use fewer carriers or longer lanes`,
+    },
+  ];
 }
 
 function checkElevators(s: Scenario): ValidationIssue[] {
@@ -26,7 +31,10 @@ function checkElevators(s: Scenario): ValidationIssue[] {
   const issues: ValidationIssue[] = [];
   s.transfers.forEach((t, i) => {
     if (t.kind === 'elevator' && elevation.get(t.fromLaneId) === elevation.get(t.toLaneId)) {
-      issues.push({ path: `transfers[${i}].toLaneId`, message: 'the two decks have the same elevation, so the elevator lifts nothing; set the decks\' elevationMm' });
+      issues.push({
+        path: `transfers[${i}].toLaneId`,
+        message: "the two decks have the same elevation, so the elevator lifts nothing; set the decks' elevationMm",
+      });
     }
   });
   return issues;
@@ -41,7 +49,10 @@ function checkReachability(s: Scenario): ValidationIssue[] {
   const laneName = (i: number) => `"${s.lanes[i].id}"`;
   const issues: ValidationIssue[] = [];
   if (cost[loadLane * n + loadLane] === Infinity) {
-    issues.push({ path: 'steps[0].stations[0].laneId', message: `no track leads from the end of lane ${laneName(loadLane)} back to its start, so carriers cannot return to loading; the loop must close (add links or transfers)` });
+    issues.push({
+      path: 'steps[0].stations[0].laneId',
+      message: `no track leads from the end of lane ${laneName(loadLane)} back to its start, so carriers cannot return to loading; the loop must close (add links or transfers)`,
+    });
   }
   s.steps.forEach((step, i) =>
     step.stations.forEach((station, j) => {
@@ -49,9 +60,15 @@ function checkReachability(s: Scenario): ValidationIssue[] {
       const path = `steps[${i}].stations[${j}].laneId`;
       if (lane === loadLane) return;
       if (cost[loadLane * n + lane] === Infinity) {
-        issues.push({ path, message: `station "${station.id}" on lane ${laneName(lane)} cannot be reached from the load station's lane ${laneName(loadLane)}` });
+        issues.push({
+          path,
+          message: `station "${station.id}" on lane ${laneName(lane)} cannot be reached from the load station's lane ${laneName(loadLane)}`,
+        });
       } else if (cost[lane * n + loadLane] === Infinity) {
-        issues.push({ path, message: `no track leads from lane ${laneName(lane)} back to the load station's lane ${laneName(loadLane)}; the loop must close` });
+        issues.push({
+          path,
+          message: `no track leads from lane ${laneName(lane)} back to the load station's lane ${laneName(loadLane)}; the loop must close`,
+        });
       }
     }),
   );
@@ -61,7 +78,8 @@ function checkReachability(s: Scenario): ValidationIssue[] {
 export function staticChecks(s: Scenario): ValidationIssue[] {
   const issues: ValidationIssue[] = [];
   s.steps.forEach((step, i) => {
-    if (step.stations.length === 0) issues.push({ path: `steps[${i}].stations`, message: `step "${step.id}" has no station; add at least one` });
+    if (step.stations.length === 0)
+      issues.push({ path: `steps[${i}].stations`, message: `step "${step.id}" has no station; add at least one` });
   });
   issues.push(...checkElevators(s));
   issues.push(...checkCarrierCount(s, s.carriers.count, 'carriers.count'));

@@ -17,16 +17,29 @@ export function CompareReportRoute() {
   const runIds = parseRunIds(search.get('runs')).slice(0, COMPARE_LIMITS.max);
   const data = useComparisonData(projectId, runIds);
 
-  if (runIds.length < COMPARE_LIMITS.min) return <p>A report needs {COMPARE_LIMITS.min} to {COMPARE_LIMITS.max} runs in its address.</p>;
+  if (runIds.length < COMPARE_LIMITS.min)
+    return (
+      <p>
+        A report needs {COMPARE_LIMITS.min} to {COMPARE_LIMITS.max} runs in its address.
+      </p>
+    );
   if (data.failed) return <LoadError what="the comparison" error={data.failed} />;
-  if (!data.items || !data.project.data || !data.allRevisionsLoaded) return <PageSpinner label="Preparing the report…" />;
+  if (!data.items || !data.project.data || !data.allRevisionsLoaded)
+    return <PageSpinner label="Preparing the report…" />;
 
   // The page is as wide as A4 less its margins, so charts are drawn at the width they print at.
   return (
-    <article className="report mx-auto flex w-full max-w-[186mm] flex-col gap-6" data-testid="report" data-ready={data.priceListSettled ? 'yes' : 'no'}>
+    <article
+      className="report mx-auto flex w-full max-w-[186mm] flex-col gap-6"
+      data-testid="report"
+      data-ready={data.priceListSettled ? 'yes' : 'no'}
+    >
       <header className="flex flex-col gap-2 border-b-2 border-ink pb-4">
         <div className="flex flex-wrap items-center justify-between gap-3" data-print="hide">
-          <Link className="text-sm underline underline-offset-4" to={`/projects/${projectId}/compare?runs=${runIds.join(',')}`}>
+          <Link
+            className="text-sm underline underline-offset-4"
+            to={`/projects/${projectId}/compare?runs=${runIds.join(',')}`}
+          >
             ← Back to the comparison
           </Link>
           <Button onClick={() => window.print()}>Print or save as PDF</Button>
@@ -42,7 +55,14 @@ export function CompareReportRoute() {
         stepNames={data.stepNames}
         costs={data.pricing.costs}
         question={COMPARE_QUESTION}
-        costSection={<CostSection organisationId={data.project.data.organisationId} priceList={data.priceList} scenarios={data.pricing.scenarios} mayEdit={false} />}
+        costSection={
+          <CostSection
+            organisationId={data.project.data.organisationId}
+            priceList={data.priceList}
+            scenarios={data.pricing.scenarios}
+            mayEdit={false}
+          />
+        }
       />
     </article>
   );

@@ -29,11 +29,15 @@ export function CompareRoute() {
   const runs = useRuns({ projectId });
   const organisationId = data.project.data?.organisationId;
   const mayEdit = useCanEdit(organisationId);
-  const showRuns = useCallback((ids: string[]) => navigate(`/projects/${projectId}/compare?runs=${ids.join(',')}`), [navigate, projectId]);
+  const showRuns = useCallback(
+    (ids: string[]) => navigate(`/projects/${projectId}/compare?runs=${ids.join(',')}`),
+    [navigate, projectId],
+  );
   const scenarioRuns = useScenarioRuns(showRuns);
 
   if (data.project.isPending) return <PageSpinner label="Loading the project…" />;
-  if (data.project.isError) return <LoadError what="the project" error={data.project.error} onRetry={() => void data.project.refetch()} />;
+  if (data.project.isError)
+    return <LoadError what="the project" error={data.project.error} onRetry={() => void data.project.refetch()} />;
   const comparing = runIds.length >= COMPARE_LIMITS.min;
 
   return (
@@ -50,22 +54,40 @@ export function CompareRoute() {
           />
         }
         description="Throughput, takt, output, WIP and lead time of two to four layouts with 95 % intervals on their differences, what each costs and how much floor it takes."
-        actions={comparing && data.items ? <ButtonLink to={`/projects/${projectId}/compare/report?runs=${runIds.join(',')}`}>Printable report</ButtonLink> : undefined}
+        actions={
+          comparing && data.items ? (
+            <ButtonLink to={`/projects/${projectId}/compare/report?runs=${runIds.join(',')}`}>
+              Printable report
+            </ButtonLink>
+          ) : undefined
+        }
       />
       <CompareSetup
         runs={runs.data ?? []}
-        scenarios={(scenarios.data ?? []).map((s) => ({ id: s.id, name: s.name, latestRevisionNumber: s.latestRevision.number }))}
+        scenarios={(scenarios.data ?? []).map((s) => ({
+          id: s.id,
+          name: s.name,
+          latestRevisionNumber: s.latestRevision.number,
+        }))}
         selectedRunIds={runIds}
         mayRun={mayEdit}
         progress={scenarioRuns.progress}
         problem={scenarioRuns.problem}
         onCompareRuns={showRuns}
-        onRunScenarios={(ids, settings) => void scenarioRuns.start((scenarios.data ?? []).filter((s) => ids.includes(s.id)).map((s) => ({ id: s.id, name: s.name, latestRevisionNumber: s.latestRevision.number })), settings)}
+        onRunScenarios={(ids, settings) =>
+          void scenarioRuns.start(
+            (scenarios.data ?? [])
+              .filter((s) => ids.includes(s.id))
+              .map((s) => ({ id: s.id, name: s.name, latestRevisionNumber: s.latestRevision.number })),
+            settings,
+          )
+        }
         onCancel={scenarioRuns.cancel}
       />
       {askedFor.length > COMPARE_LIMITS.max && (
         <p className="text-sm font-medium text-caution">
-          The address names {askedFor.length} runs; a comparison holds at most {COMPARE_LIMITS.max}, so the first {COMPARE_LIMITS.max} are shown.
+          The address names {askedFor.length} runs; a comparison holds at most {COMPARE_LIMITS.max}, so the first{' '}
+          {COMPARE_LIMITS.max} are shown.
         </p>
       )}
       {comparing && data.failed && <LoadError what="a run of the comparison" error={data.failed} />}
@@ -76,7 +98,14 @@ export function CompareRoute() {
           stepNames={data.stepNames}
           costs={data.pricing.costs}
           question={COMPARE_QUESTION}
-          costSection={<CostSection organisationId={organisationId} priceList={data.priceList} scenarios={data.pricing.scenarios} mayEdit={mayEdit} />}
+          costSection={
+            <CostSection
+              organisationId={organisationId}
+              priceList={data.priceList}
+              scenarios={data.pricing.scenarios}
+              mayEdit={mayEdit}
+            />
+          }
         />
       )}
     </div>

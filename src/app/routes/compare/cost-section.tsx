@@ -18,7 +18,8 @@ export function CostSection({ organisationId, priceList, scenarios, mayEdit }: C
       {priceList && scenarios.length > 0 && (
         <Section title="Bill of materials and capital cost" id="bill">
           <p className="text-sm text-ink-soft">
-            Quantity · line total per layout, counted from each scenario (carriers as run){priceList.invented ? '; priced with invented demo prices' : ''}.
+            Quantity · line total per layout, counted from each scenario (carriers as run)
+            {priceList.invented ? '; priced with invented demo prices' : ''}.
           </p>
           <BillOfMaterialsTable scenarios={scenarios} currency={priceList.currency} />
         </Section>

@@ -1,2 +1,3 @@
 // The question a comparison answers, as put on the page and at the top of the report.
-export const COMPARE_QUESTION = 'Which layout should the line use: which makes more parts per hour, is the difference real or noise, and what does each cost?';
+export const COMPARE_QUESTION =
+  'Which layout should the line use: which makes more parts per hour, is the difference real or noise, and what does each cost?';

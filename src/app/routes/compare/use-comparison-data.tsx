@@ -18,12 +18,19 @@ import { scenarioRevisionQueryOptions } from '../../../features/scenarios/api/ge
 import { runQueryOptions } from '../../../features/runs/api/get-run';
 
 export function parseRunIds(text: string | null): string[] {
-  return (text ?? '').split(',').map((s) => s.trim()).filter(Boolean);
+  return (text ?? '')
+    .split(',')
+    .map((s) => s.trim())
+    .filter(Boolean);
 }
 
 /** Scenario names, with the run name added where two runs come from one scenario. */
 function labelsOf(runs: readonly RunDetail[]): string[] {
-  return runs.map((run) => (runs.filter((r) => r.scenarioName === run.scenarioName).length > 1 ? `${run.scenarioName} (${run.name})` : run.scenarioName));
+  return runs.map((run) =>
+    runs.filter((r) => r.scenarioName === run.scenarioName).length > 1
+      ? `${run.scenarioName} (${run.name})`
+      : run.scenarioName,
+  );
 }
 
 function detailOf(run: RunDetail): string {
@@ -37,9 +44,21 @@ function priced(items: readonly CompareItem[], priceList: PriceList | null) {
   const scenarios = items.flatMap((item) => {
     if (!item.document) return [];
     const bill = billOf(quantitiesOf(item.document, item.result.carriers.count), priceList.prices);
-    return [{ id: item.id, label: item.label, bill, perHourlyPart: costPerHourlyPart(bill.capitalCost, item.result.throughputPerHour.mean) }];
+    return [
+      {
+        id: item.id,
+        label: item.label,
+        bill,
+        perHourlyPart: costPerHourlyPart(bill.capitalCost, item.result.throughputPerHour.mean),
+      },
+    ];
   });
-  const costs = new Map<string, RunCost>(scenarios.map((s) => [s.id, { capitalCost: s.bill.capitalCost, perHourlyPart: s.perHourlyPart, currency: priceList.currency }]));
+  const costs = new Map<string, RunCost>(
+    scenarios.map((s) => [
+      s.id,
+      { capitalCost: s.bill.capitalCost, perHourlyPart: s.perHourlyPart, currency: priceList.currency },
+    ]),
+  );
   return { scenarios, costs: scenarios.length === items.length ? costs : undefined };
 }
 
@@ -47,7 +66,10 @@ export function useComparisonData(projectId: string, runIds: readonly string[]) 
   const project = useProject(projectId);
   const runs = useQueries({ queries: runIds.map((id) => runQueryOptions(id)) });
   const revisions = useQueries({
-    queries: runs.map((run) => ({ ...scenarioRevisionQueryOptions(run.data?.scenarioId ?? '', run.data?.revisionNumber ?? 0), enabled: Boolean(run.data) })),
+    queries: runs.map((run) => ({
+      ...scenarioRevisionQueryOptions(run.data?.scenarioId ?? '', run.data?.revisionNumber ?? 0),
+      enabled: Boolean(run.data),
+    })),
   });
   const priceList = usePriceList(project.data?.organisationId);
 
@@ -69,15 +91,31 @@ export function useComparisonData(projectId: string, runIds: readonly string[]) 
         result: run.results,
         document: revision?.document ?? null,
         balance: revision ? balanceSteps(revision.document.steps) : null,
-        drawing: revision ? <LayoutDrawing document={revision.document} /> : <p className="text-sm text-ink-soft">Loading the drawing…</p>,
+        drawing: revision ? (
+          <LayoutDrawing document={revision.document} />
+        ) : (
+          <p className="text-sm text-ink-soft">Loading the drawing…</p>
+        ),
       };
     });
   }, [runKey, revisionKey]);
 
-  const stepNames = useMemo(() => new Map(revisionData.flatMap((r) => r?.document.steps.map((s) => [s.id, s.name] as const) ?? [])), [revisionKey]);
+  const stepNames = useMemo(
+    () => new Map(revisionData.flatMap((r) => r?.document.steps.map((s) => [s.id, s.name] as const) ?? [])),
+    [revisionKey],
+  );
   const list = priceList.data?.priceList ?? null;
   const pricing = useMemo(() => (items ? priced(items, list) : { scenarios: [], costs: undefined }), [items, list]);
 
   const failed = runs.find((r) => r.isError)?.error ?? project.error ?? null;
-  return { project, items, stepNames, priceList: list, priceListSettled: priceList.isSuccess || priceList.isError, pricing, failed, allRevisionsLoaded: revisions.every((r) => r.data) };
+  return {
+    project,
+    items,
+    stepNames,
+    priceList: list,
+    priceListSettled: priceList.isSuccess || priceList.isError,
+    pricing,
+    failed,
+    allRevisionsLoaded: revisions.every((r) => r.data),
+  };
 }

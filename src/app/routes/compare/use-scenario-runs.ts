@@ -24,11 +24,15 @@ export function useScenarioRuns(onDone: (runIds: string[]) => void) {
       try {
         for (const [index, scenario] of scenarios.entries()) {
           setCurrent({ index, count: scenarios.length, name: scenario.name });
-          const revision = await queryClient.fetchQuery(scenarioRevisionQueryOptions(scenario.id, scenario.latestRevisionNumber));
+          const revision = await queryClient.fetchQuery(
+            scenarioRevisionQueryOptions(scenario.id, scenario.latestRevisionNumber),
+          );
           const outcome = await simulation.start(revision.document, settings);
           if (cancelled.current || outcome.status === 'cancelled') return;
           if (outcome.status !== 'finished') {
-            setProblem(`${scenario.name} did not finish: ${outcome.message}. Open the scenario to fix it, then run the comparison again.`);
+            setProblem(
+              `${scenario.name} did not finish: ${outcome.message}. Open the scenario to fix it, then run the comparison again.`,
+            );
             return;
           }
           const input = {
@@ -57,7 +61,10 @@ export function useScenarioRuns(onDone: (runIds: string[]) => void) {
   }, [simulation]);
 
   const progress: ScenarioRunProgress | null = current
-    ? { label: `Running ${current.name} (${current.index + 1} of ${current.count})…`, fraction: (current.index + (simulation.progress?.fraction ?? 0)) / current.count }
+    ? {
+        label: `Running ${current.name} (${current.index + 1} of ${current.count})…`,
+        fraction: (current.index + (simulation.progress?.fraction ?? 0)) / current.count,
+      }
     : null;
   return { start, cancel, progress, problem };
 }

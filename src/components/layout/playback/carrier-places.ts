@@ -24,7 +24,10 @@ export interface CarrierPlacer {
   place(at: CarrierPlace, out: DrawnPlace): boolean;
 }
 
-export function carrierPlacer(model: LayoutModel, trace: Pick<PlaybackTrace, 'connFrom' | 'connTo' | 'connKind' | 'carrierLengthMm'>): CarrierPlacer {
+export function carrierPlacer(
+  model: LayoutModel,
+  trace: Pick<PlaybackTrace, 'connFrom' | 'connTo' | 'connKind' | 'carrierLengthMm'>,
+): CarrierPlacer {
   const lanes: (PlanLane | undefined)[] = [];
   for (const lane of model.lanes) lanes[lane.index] = lane;
   const elevation = new Map(model.decks.map((d) => [d.id, d.elevationMm ?? 0]));

@@ -24,7 +24,13 @@ export interface Painter {
   paint(t: number): void;
 }
 
-export function createPainter(root: HTMLElement, model: LayoutModel, index: TraceIndex, plan: PlanFrame | null, elevation: ElevationFrame | null): Painter {
+export function createPainter(
+  root: HTMLElement,
+  model: LayoutModel,
+  index: TraceIndex,
+  plan: PlanFrame | null,
+  elevation: ElevationFrame | null,
+): Painter {
   const { trace } = index;
   const placer = carrierPlacer(model, trace);
   const views = new Map<string, SVGElement[]>();
@@ -46,7 +52,10 @@ export function createPainter(root: HTMLElement, model: LayoutModel, index: Trac
       for (let c = 0; c < trace.carrierCount; c++) {
         const known = carrierAt(index, c, t, at) && placer.place(at, drawn);
         const fill = at.loaded ? DRAWING.colour.ink : DRAWING.colour.paper;
-        const transform = known && plan ? `translate(${plan.x(drawn.x).toFixed(1)},${plan.y(drawn.y).toFixed(1)}) rotate(${drawn.angle})` : '';
+        const transform =
+          known && plan
+            ? `translate(${plan.x(drawn.x).toFixed(1)},${plan.y(drawn.y).toFixed(1)}) rotate(${drawn.angle})`
+            : '';
         for (const [deckId, marks] of planViews) {
           const mark = marks[c];
           if (!mark) continue;

@@ -7,7 +7,17 @@ import type { LayoutModel, PlanDeck } from '../layout-model';
 
 export const ELEVATION_VIEW = '@elevation';
 
-function CarrierMarks({ count, view, lengthPx, widthPx }: { count: number; view: string; lengthPx: number; widthPx: number }) {
+function CarrierMarks({
+  count,
+  view,
+  lengthPx,
+  widthPx,
+}: {
+  count: number;
+  view: string;
+  lengthPx: number;
+  widthPx: number;
+}) {
   return (
     <g data-pb-carriers={view} pointerEvents="none">
       {Array.from({ length: count }, (_, c) => (
@@ -30,7 +40,12 @@ function CarrierMarks({ count, view, lengthPx, widthPx }: { count: number; view:
   );
 }
 
-export function planOverlay(model: LayoutModel, stationIds: readonly string[], carrierCount: number, carrierLengthMm: number) {
+export function planOverlay(
+  model: LayoutModel,
+  stationIds: readonly string[],
+  carrierCount: number,
+  carrierLengthMm: number,
+) {
   const traceIndex = new Map(stationIds.map((id, i) => [id, i]));
   return (deck: PlanDeck, frame: PlanFrame) => {
     const lengthPx = Math.max(carrierLengthMm * frame.scale, 5);
@@ -59,5 +74,7 @@ export function planOverlay(model: LayoutModel, stationIds: readonly string[], c
 }
 
 export function elevationOverlay(carrierCount: number) {
-  return (_frame: ElevationFrame) => <CarrierMarks count={carrierCount} view={ELEVATION_VIEW} lengthPx={8} widthPx={6} />;
+  return (_frame: ElevationFrame) => (
+    <CarrierMarks count={carrierCount} view={ELEVATION_VIEW} lengthPx={8} widthPx={6} />
+  );
 }

@@ -24,7 +24,10 @@ export function PlaybackPlayer({ document: scenario, trace }: { document: Layout
   const model = useMemo(() => layoutModel(scenario), [scenario]);
   const index = useMemo(() => indexTrace(trace), [trace]);
   const overlay = useMemo(
-    () => ({ plan: planOverlay(model, trace.stationIds, trace.carrierCount, trace.carrierLengthMm), elevation: elevationOverlay(trace.carrierCount) }),
+    () => ({
+      plan: planOverlay(model, trace.stationIds, trace.carrierCount, trace.carrierLengthMm),
+      elevation: elevationOverlay(trace.carrierCount),
+    }),
     [model, trace],
   );
   const root = useRef<HTMLDivElement>(null);
@@ -38,7 +41,13 @@ export function PlaybackPlayer({ document: scenario, trace }: { document: Layout
 
   useEffect(() => {
     if (!root.current) return;
-    const painter = createPainter(root.current, model, index, model.footprint ? planFrame(model.footprint.box) : null, elevationFrame(model));
+    const painter = createPainter(
+      root.current,
+      model,
+      index,
+      model.footprint ? planFrame(model.footprint.box) : null,
+      elevationFrame(model),
+    );
     let lastControls = -Infinity;
     paintRef.current = (t, force = false) => {
       painter.paint(t);
@@ -101,8 +110,13 @@ export function PlaybackPlayer({ document: scenario, trace }: { document: Layout
           </select>
         </label>
         <p className="text-sm text-ink-soft">
-          Simulated time <span ref={clock} className="font-semibold text-ink tabular-nums" data-playback-clock>{formatSimTime(trace.startSeconds)}</span>{' '}
-          <span className="whitespace-nowrap">(window {formatSimTime(trace.startSeconds)} to {formatSimTime(trace.endSeconds)})</span>
+          Simulated time{' '}
+          <span ref={clock} className="font-semibold text-ink tabular-nums" data-playback-clock>
+            {formatSimTime(trace.startSeconds)}
+          </span>{' '}
+          <span className="whitespace-nowrap">
+            (window {formatSimTime(trace.startSeconds)} to {formatSimTime(trace.endSeconds)})
+          </span>
         </p>
       </div>
       <label className="flex flex-col gap-1 text-sm text-ink">

@@ -12,12 +12,18 @@ const queryOf = (filter: AuditFilter): Record<string, string | undefined> => ({ 
 export const useAuditPage = (organisationId: string, filter: AuditFilter, page: number) =>
   useQuery({
     queryKey: auditKeys.page(organisationId, filter, page),
-    queryFn: ({ signal }) => api.get(apiRoutes.audit(organisationId), auditPageSchema, { signal, query: { ...queryOf(filter), page: String(page), pageSize: String(AUDIT_PAGE_SIZE) } }),
+    queryFn: ({ signal }) =>
+      api.get(apiRoutes.audit(organisationId), auditPageSchema, {
+        signal,
+        query: { ...queryOf(filter), page: String(page), pageSize: String(AUDIT_PAGE_SIZE) },
+      }),
     placeholderData: keepPreviousData,
   });
 
 export function auditCsvHref(organisationId: string, filter: AuditFilter): string {
-  const params = new URLSearchParams(Object.entries(queryOf(filter)).filter((entry): entry is [string, string] => Boolean(entry[1])));
+  const params = new URLSearchParams(
+    Object.entries(queryOf(filter)).filter((entry): entry is [string, string] => Boolean(entry[1])),
+  );
   const text = params.toString();
   return text ? `${apiRoutes.auditCsv(organisationId)}?${text}` : apiRoutes.auditCsv(organisationId);
 }

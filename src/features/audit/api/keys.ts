@@ -4,5 +4,6 @@ import type { AuditFilter } from '../../../../shared/api/audit';
 export const auditKeys = {
   all: ['audit'] as const,
   organisation: (organisationId: string) => [...auditKeys.all, organisationId] as const,
-  page: (organisationId: string, filter: AuditFilter, page: number) => [...auditKeys.organisation(organisationId), filter, page] as const,
+  page: (organisationId: string, filter: AuditFilter, page: number) =>
+    [...auditKeys.organisation(organisationId), filter, page] as const,
 };

@@ -5,8 +5,17 @@ import { actionLabel } from './describe-entry';
 
 const control = 'rounded-md border border-ink-faint bg-paper-raised px-2 py-1.5 font-normal';
 
-export function AuditFilters({ filter, people, onChange }: { filter: AuditFilter; people: UserRef[]; onChange: (filter: AuditFilter) => void }) {
-  const set = (key: keyof AuditFilter) => (event: { target: { value: string } }) => onChange({ ...filter, [key]: event.target.value || undefined });
+export function AuditFilters({
+  filter,
+  people,
+  onChange,
+}: {
+  filter: AuditFilter;
+  people: UserRef[];
+  onChange: (filter: AuditFilter) => void;
+}) {
+  const set = (key: keyof AuditFilter) => (event: { target: { value: string } }) =>
+    onChange({ ...filter, [key]: event.target.value || undefined });
   return (
     <fieldset className="flex flex-wrap items-end gap-3">
       <legend className="sr-only">Filter the audit trail</legend>

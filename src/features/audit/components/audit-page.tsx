@@ -14,7 +14,15 @@ import { AUDIT_PAGE_SIZE, auditCsvHref, useAuditPage } from '../api/audit';
 import { AuditFilters } from './audit-filters';
 import { actionLabel, detailOf } from './describe-entry';
 
-export function AuditPage({ organisationId, organisationName, people }: { organisationId: string; organisationName: string; people: UserRef[] }) {
+export function AuditPage({
+  organisationId,
+  organisationName,
+  people,
+}: {
+  organisationId: string;
+  organisationName: string;
+  people: UserRef[];
+}) {
   const [filter, setFilter] = useState<AuditFilter>({});
   const [page, setPage] = useState(1);
   const audit = useAuditPage(organisationId, filter, page);
@@ -45,7 +53,9 @@ export function AuditPage({ organisationId, organisationName, people }: { organi
         {audit.data && (
           <>
             <p className="text-sm text-ink-soft" aria-live="polite">
-              {audit.data.total === 0 ? 'Nothing matches this filter.' : `${audit.data.total} entr${audit.data.total === 1 ? 'y' : 'ies'}; page ${page} of ${pages}.`}
+              {audit.data.total === 0
+                ? 'Nothing matches this filter.'
+                : `${audit.data.total} entr${audit.data.total === 1 ? 'y' : 'ies'}; page ${page} of ${pages}.`}
             </p>
             {audit.data.entries.length > 0 && (
               <Table caption="Audit trail">
@@ -62,8 +72,16 @@ export function AuditPage({ organisationId, organisationName, people }: { organi
                   {audit.data.entries.map((entry) => (
                     <tr key={entry.id}>
                       <Td className="whitespace-nowrap">{formatDateTime(entry.createdAt)}</Td>
-                      <Td>{entry.actor ? formatPerson(entry.actor) : entry.action === 'sign-in-failed' ? `someone (as ${String(entry.detail.email ?? '')})` : 'a removed user'}</Td>
-                      <Td className={entry.action === 'sign-in-failed' ? 'font-semibold text-danger' : ''}>{actionLabel(entry.action)}</Td>
+                      <Td>
+                        {entry.actor
+                          ? formatPerson(entry.actor)
+                          : entry.action === 'sign-in-failed'
+                            ? `someone (as ${String(entry.detail.email ?? '')})`
+                            : 'a removed user'}
+                      </Td>
+                      <Td className={entry.action === 'sign-in-failed' ? 'font-semibold text-danger' : ''}>
+                        {actionLabel(entry.action)}
+                      </Td>
                       <Td>{entry.entity}</Td>
                       <Td className="break-all">{detailOf(entry)}</Td>
                     </tr>

@@ -29,5 +29,9 @@ export function detailOf(entry: AuditEntry): string {
   const d = entry.detail;
   const text = (key: string) => (typeof d[key] === 'string' || typeof d[key] === 'number' ? String(d[key]) : undefined);
   if (text('from') && text('to')) return `${text('from')} → ${text('to')}`;
-  return [text('name'), text('email'), text('role'), text('number') && `revision ${text('number')}`].filter(Boolean).join(', ') || entry.entityId;
+  return (
+    [text('name'), text('email'), text('role'), text('number') && `revision ${text('number')}`]
+      .filter(Boolean)
+      .join(', ') || entry.entityId
+  );
 }

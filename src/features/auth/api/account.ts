@@ -4,7 +4,8 @@ import { signedOutOthersSchema, type ChangePasswordInput } from '../../../../sha
 import { apiRoutes } from '../../../../shared/api/routes';
 import { api } from '../../../lib/api-client';
 
-export const changePassword = (input: ChangePasswordInput) => api.post(apiRoutes.accountPassword, input, signedOutOthersSchema);
+export const changePassword = (input: ChangePasswordInput) =>
+  api.post(apiRoutes.accountPassword, input, signedOutOthersSchema);
 export const signOutOtherSessions = () => api.delete(apiRoutes.accountOtherSessions, signedOutOthersSchema);
 
 export const useChangePassword = () => useMutation({ mutationFn: changePassword });

@@ -2,7 +2,17 @@
 import type { ReactNode } from 'react';
 import { Card } from '../../../components/ui/card';
 
-export function AuthPanel({ title, intro, children, footer }: { title: string; intro: string; children: ReactNode; footer: ReactNode }) {
+export function AuthPanel({
+  title,
+  intro,
+  children,
+  footer,
+}: {
+  title: string;
+  intro: string;
+  children: ReactNode;
+  footer: ReactNode;
+}) {
   return (
     <div className="mx-auto flex w-full max-w-md flex-col gap-6 py-6 sm:py-10">
       <div className="flex flex-col gap-2">

@@ -6,7 +6,9 @@ export function MailSentNotice({ message, children }: { message: string; childre
   return (
     <div role="status" className="flex flex-col gap-3">
       <p className="font-semibold text-ink">{message}</p>
-      <p className="text-sm text-ink-soft">Nothing there after a few minutes? Look in the spam folder, or check the address you typed and try again.</p>
+      <p className="text-sm text-ink-soft">
+        Nothing there after a few minutes? Look in the spam folder, or check the address you typed and try again.
+      </p>
       {children}
     </div>
   );

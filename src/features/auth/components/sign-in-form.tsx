@@ -22,9 +22,26 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-2" aria-label="Sign in">
       <FormErrorBanner title="Sign-in failed" failure={failure} />
-      <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register('email')} />
-      <TextField label="Password" type="password" autoComplete="current-password" error={errors.password?.message} {...form.register('password')} />
-      <Button type="submit" pending={signIn.isPending} pendingLabel="Signing in…" className="mt-2 self-stretch sm:self-start">
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        error={errors.email?.message}
+        {...form.register('email')}
+      />
+      <TextField
+        label="Password"
+        type="password"
+        autoComplete="current-password"
+        error={errors.password?.message}
+        {...form.register('password')}
+      />
+      <Button
+        type="submit"
+        pending={signIn.isPending}
+        pendingLabel="Signing in…"
+        className="mt-2 self-stretch sm:self-start"
+      >
         Sign in
       </Button>
     </form>

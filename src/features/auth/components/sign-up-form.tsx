@@ -33,7 +33,13 @@ export function SignUpForm({ onAsked }: { onAsked: (message: string) => void }) 
         error={errors.organisationName?.message}
         {...form.register('organisationName')}
       />
-      <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register('email')} />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        error={errors.email?.message}
+        {...form.register('email')}
+      />
       <TextField
         label="Password"
         type="password"
@@ -42,7 +48,12 @@ export function SignUpForm({ onAsked }: { onAsked: (message: string) => void }) 
         error={errors.password?.message}
         {...form.register('password')}
       />
-      <Button type="submit" pending={signUp.isPending} pendingLabel="Creating your account…" className="mt-2 self-stretch sm:self-start">
+      <Button
+        type="submit"
+        pending={signUp.isPending}
+        pendingLabel="Creating your account…"
+        className="mt-2 self-stretch sm:self-start"
+      >
         Create account
       </Button>
     </form>

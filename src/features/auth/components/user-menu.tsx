@@ -30,7 +30,13 @@ export function UserMenu({ session }: { session: Session }) {
           </span>
         )}
       </span>
-      <Button variant="secondary" className="min-h-9 px-3 py-1" onClick={onSignOut} pending={signOut.isPending} pendingLabel="Signing out…">
+      <Button
+        variant="secondary"
+        className="min-h-9 px-3 py-1"
+        onClick={onSignOut}
+        pending={signOut.isPending}
+        pendingLabel="Signing out…"
+      >
         Sign out
       </Button>
       {signOut.isError && (

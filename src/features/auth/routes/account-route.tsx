@@ -14,10 +14,14 @@ import { useChangePassword, useSignOutOtherSessions } from '../api/account';
 import { useSession } from '../../../lib/session/session-context';
 
 const FIELDS = ['currentPassword', 'newPassword'] as const;
-const ended = (n: number) => (n === 0 ? 'No other browser was signed in.' : `${n} other session${n === 1 ? '' : 's'} signed out.`);
+const ended = (n: number) =>
+  n === 0 ? 'No other browser was signed in.' : `${n} other session${n === 1 ? '' : 's'} signed out.`;
 
 function ChangePasswordForm() {
-  const form = useForm({ resolver: zodResolver(changePasswordSchema), defaultValues: { currentPassword: '', newPassword: '' } });
+  const form = useForm({
+    resolver: zodResolver(changePasswordSchema),
+    defaultValues: { currentPassword: '', newPassword: '' },
+  });
   const change = useChangePassword();
   const { onSubmit, failure } = useApiFormSubmit(form, FIELDS, async (values) => {
     await change.mutateAsync(values);
@@ -32,7 +36,13 @@ function ChangePasswordForm() {
           Password changed. {ended(change.data.ended)}
         </p>
       )}
-      <TextField label="Current password" type="password" autoComplete="current-password" error={errors.currentPassword?.message} {...form.register('currentPassword')} />
+      <TextField
+        label="Current password"
+        type="password"
+        autoComplete="current-password"
+        error={errors.currentPassword?.message}
+        {...form.register('currentPassword')}
+      />
       <TextField
         label="New password"
         type="password"
@@ -52,8 +62,15 @@ function OtherSessions() {
   const signOut = useSignOutOtherSessions();
   return (
     <div className="flex flex-col items-start gap-3">
-      <p className="max-w-prose text-ink-soft">Signed in on a shared or lost computer? End every session except this one.</p>
-      <Button variant="secondary" pending={signOut.isPending} pendingLabel="Signing out…" onClick={() => signOut.mutate()}>
+      <p className="max-w-prose text-ink-soft">
+        Signed in on a shared or lost computer? End every session except this one.
+      </p>
+      <Button
+        variant="secondary"
+        pending={signOut.isPending}
+        pendingLabel="Signing out…"
+        onClick={() => signOut.mutate()}
+      >
         Sign out other sessions
       </Button>
       {signOut.isSuccess && <p role="status">{ended(signOut.data.ended)}</p>}

@@ -31,7 +31,11 @@ export function FinishSignUpRoute() {
               <p>{finish.error.message}</p>
             </ErrorBanner>
           )}
-          <Button pending={finish.isPending} pendingLabel="Creating…" onClick={() => finish.mutate(token, { onSuccess: () => navigate('/', { replace: true }) })}>
+          <Button
+            pending={finish.isPending}
+            pendingLabel="Creating…"
+            onClick={() => finish.mutate(token, { onSuccess: () => navigate('/', { replace: true }) })}
+          >
             Create my account
           </Button>
         </div>

@@ -36,8 +36,19 @@ export function ForgotPasswordRoute() {
       ) : (
         <form noValidate onSubmit={onSubmit} className="flex flex-col gap-2" aria-label="Ask for a password link">
           <FormErrorBanner title="No link was sent" failure={failure} />
-          <TextField label="E-mail" type="email" autoComplete="email" error={form.formState.errors.email?.message} {...form.register('email')} />
-          <Button type="submit" pending={request.isPending} pendingLabel="Sending…" className="mt-2 self-stretch sm:self-start">
+          <TextField
+            label="E-mail"
+            type="email"
+            autoComplete="email"
+            error={form.formState.errors.email?.message}
+            {...form.register('email')}
+          />
+          <Button
+            type="submit"
+            pending={request.isPending}
+            pendingLabel="Sending…"
+            className="mt-2 self-stretch sm:self-start"
+          >
             Send me a link
           </Button>
         </form>

@@ -54,7 +54,12 @@ export function ResetPasswordRoute() {
             error={form.formState.errors.password?.message}
             {...form.register('password')}
           />
-          <Button type="submit" pending={reset.isPending} pendingLabel="Saving…" className="mt-2 self-stretch sm:self-start">
+          <Button
+            type="submit"
+            pending={reset.isPending}
+            pendingLabel="Saving…"
+            className="mt-2 self-stretch sm:self-start"
+          >
             Save the new password
           </Button>
         </form>

@@ -29,7 +29,10 @@ export function SignInRoute() {
       footer={
         <>
           New here?{' '}
-          <Link className="font-semibold text-accent-strong underline underline-offset-4" to={withSameReturn('/sign-up', location.search)}>
+          <Link
+            className="font-semibold text-accent-strong underline underline-offset-4"
+            to={withSameReturn('/sign-up', location.search)}
+          >
             Create an account
           </Link>
         </>

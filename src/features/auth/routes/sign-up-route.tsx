@@ -22,7 +22,10 @@ export function SignUpRoute() {
       footer={
         <>
           Already have an account?{' '}
-          <Link className="font-semibold text-accent-strong underline underline-offset-4" to={withSameReturn('/sign-in', location.search)}>
+          <Link
+            className="font-semibold text-accent-strong underline underline-offset-4"
+            to={withSameReturn('/sign-in', location.search)}
+          >
             Sign in
           </Link>
         </>

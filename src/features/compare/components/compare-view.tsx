@@ -38,7 +38,9 @@ export interface CompareViewProps {
 
 export function CompareView({ items, stepNames, costs, costSection, question }: CompareViewProps) {
   const comparison = compareRuns(items.map((item) => ({ id: item.id, label: item.label, result: item.result })));
-  const areas = new Map(items.flatMap((item) => (item.document ? [[item.id, footprintOf(item.document).areaM2] as const] : [])));
+  const areas = new Map(
+    items.flatMap((item) => (item.document ? [[item.id, footprintOf(item.document).areaM2] as const] : [])),
+  );
   const answer = answerOf(comparison, costs, areas);
   const groups = heatmapGroups(items);
   return (
@@ -63,14 +65,21 @@ export function CompareView({ items, stepNames, costs, costSection, question }: 
       </Section>
       <Section title="Headline figures" id="headline">
         <p className="text-sm text-ink-soft">
-          Under each run after the first: its difference from {items[0].label} with the 95 % {comparison.pairing === 'paired' ? 'paired-t' : 'Welch'} interval. ● marks a
-          significant difference (the interval excludes zero), ○ one that is not.
+          Under each run after the first: its difference from {items[0].label} with the 95 %{' '}
+          {comparison.pairing === 'paired' ? 'paired-t' : 'Welch'} interval. ● marks a significant difference (the
+          interval excludes zero), ○ one that is not.
         </p>
         <HeadlineTable comparison={comparison} />
       </Section>
       {costSection}
       <Section title="Footprint" id="footprint">
-        <FootprintTable items={items.map((item) => ({ id: item.id, label: item.label, footprint: item.document ? footprintOf(item.document) : null }))} />
+        <FootprintTable
+          items={items.map((item) => ({
+            id: item.id,
+            label: item.label,
+            footprint: item.document ? footprintOf(item.document) : null,
+          }))}
+        />
       </Section>
       <Section title="Layouts" id="drawings">
         <div className="grid gap-6 lg:grid-cols-2 print:grid-cols-1">
@@ -83,10 +92,18 @@ export function CompareView({ items, stepNames, costs, costSection, question }: 
         </div>
       </Section>
       <Section title="Where each step spends its time" id="states">
-        <StepStateBars rows={alignSteps(items.map((i) => i.result), stepNames)} labels={items.map((i) => i.label)} />
+        <StepStateBars
+          rows={alignSteps(
+            items.map((i) => i.result),
+            stepNames,
+          )}
+          labels={items.map((i) => i.label)}
+        />
       </Section>
       <Section title="Carriers along the track over time" id="heatmaps">
-        <p className="text-sm text-ink-soft">All panels share one colour scale: the share of each cell covered by carriers, from 0 to 100 %.</p>
+        <p className="text-sm text-ink-soft">
+          All panels share one colour scale: the share of each cell covered by carriers, from 0 to 100 %.
+        </p>
         {groups.map((group, i) => (
           <SpaceTimeHeatmap
             key={i}
@@ -94,7 +111,11 @@ export function CompareView({ items, stepNames, costs, costSection, question }: 
             timeBinSeconds={group.binSeconds}
             startMinutes={group.startSeconds / 60}
             laneHeight={80}
-            title={groups.length === 1 ? 'Carriers along each lane, every layout' : `Carriers along each lane (runs with ${Math.round(group.binSeconds / 60)} min time bins)`}
+            title={
+              groups.length === 1
+                ? 'Carriers along each lane, every layout'
+                : `Carriers along each lane (runs with ${Math.round(group.binSeconds / 60)} min time bins)`
+            }
             exportName={`compare-heatmap-${i + 1}`}
           />
         ))}

@@ -3,14 +3,30 @@ import type { Footprint } from '../../../../shared/costs/bill-of-materials';
 import { Table, Td, Th } from '../../../components/ui/table';
 
 const ROWS: { key: keyof Footprint; label: string; format: (v: number) => string }[] = [
-  { key: 'areaM2', label: 'Floor area (bounding rectangle)', format: (v) => `${v.toLocaleString('en-GB', { maximumFractionDigits: 2 })} m²` },
-  { key: 'lengthM', label: 'Length × width', format: (v) => `${v.toLocaleString('en-GB', { maximumFractionDigits: 2 })} m` },
+  {
+    key: 'areaM2',
+    label: 'Floor area (bounding rectangle)',
+    format: (v) => `${v.toLocaleString('en-GB', { maximumFractionDigits: 2 })} m²`,
+  },
+  {
+    key: 'lengthM',
+    label: 'Length × width',
+    format: (v) => `${v.toLocaleString('en-GB', { maximumFractionDigits: 2 })} m`,
+  },
   { key: 'decks', label: 'Decks', format: (v) => v.toLocaleString('en-GB') },
-  { key: 'trackLengthM', label: 'Track length', format: (v) => `${v.toLocaleString('en-GB', { maximumFractionDigits: 2 })} m` },
+  {
+    key: 'trackLengthM',
+    label: 'Track length',
+    format: (v) => `${v.toLocaleString('en-GB', { maximumFractionDigits: 2 })} m`,
+  },
   { key: 'modules', label: 'Track modules', format: (v) => v.toLocaleString('en-GB') },
 ];
 
-export function FootprintTable({ items }: { items: readonly { id: string; label: string; footprint: Footprint | null }[] }) {
+export function FootprintTable({
+  items,
+}: {
+  items: readonly { id: string; label: string; footprint: Footprint | null }[];
+}) {
   return (
     <Table caption="Footprint of each layout" data-testid="footprint-table">
       <thead>
@@ -29,7 +45,11 @@ export function FootprintTable({ items }: { items: readonly { id: string; label:
             <Td>{row.label}</Td>
             {items.map(({ id, footprint: f }) => (
               <Td key={id} className="text-right tabular-nums">
-                {!f ? '—' : row.key === 'lengthM' ? `${row.format(f.lengthM)} × ${row.format(f.widthM)}` : row.format(f[row.key])}
+                {!f
+                  ? '—'
+                  : row.key === 'lengthM'
+                    ? `${row.format(f.lengthM)} × ${row.format(f.widthM)}`
+                    : row.format(f[row.key])}
               </Td>
             ))}
           </tr>

@@ -7,14 +7,25 @@ import { isBetter, METRICS, type Comparison, type Metric } from '../utils/compar
 import { formatNumber, formatSigned } from '../utils/format';
 
 function DifferenceCell({ metric, d }: { metric: Metric; d: MeanDifference }) {
-  if (d.unavailable) return <span className="text-ink-soft">{formatSigned(d.difference, metric.decimals)} (no interval)</span>;
-  const verdict = d.significant ? (isBetter(metric, d.difference) ? 'better, significant' : 'worse, significant') : 'not significant';
+  if (d.unavailable)
+    return <span className="text-ink-soft">{formatSigned(d.difference, metric.decimals)} (no interval)</span>;
+  const verdict = d.significant
+    ? isBetter(metric, d.difference)
+      ? 'better, significant'
+      : 'worse, significant'
+    : 'not significant';
   return (
     <span className="flex flex-col">
       <span className="tabular-nums">
-        {formatSigned(d.difference, metric.decimals)} <span className="text-ink-soft">[{formatSigned(d.ciLow, metric.decimals)}, {formatSigned(d.ciHigh, metric.decimals)}]</span>
+        {formatSigned(d.difference, metric.decimals)}{' '}
+        <span className="text-ink-soft">
+          [{formatSigned(d.ciLow, metric.decimals)}, {formatSigned(d.ciHigh, metric.decimals)}]
+        </span>
       </span>
-      <span className={`text-xs font-semibold ${d.significant ? 'text-ink' : 'text-ink-soft'}`} data-verdict={d.significant ? 'significant' : 'not-significant'}>
+      <span
+        className={`text-xs font-semibold ${d.significant ? 'text-ink' : 'text-ink-soft'}`}
+        data-verdict={d.significant ? 'significant' : 'not-significant'}
+      >
         {d.significant ? '● ' : '○ '}
         {verdict}
       </span>
@@ -25,7 +36,10 @@ function DifferenceCell({ metric, d }: { metric: Metric; d: MeanDifference }) {
 export function HeadlineTable({ comparison }: { comparison: Comparison }) {
   const [reference] = comparison.figures;
   return (
-    <Table caption="Headline figures with 95 % intervals and differences from the first run" data-testid="headline-table">
+    <Table
+      caption="Headline figures with 95 % intervals and differences from the first run"
+      data-testid="headline-table"
+    >
       <thead>
         <tr>
           <Th>Figure</Th>

@@ -17,7 +17,16 @@ function Bar({ shares }: { shares: StepShares }) {
           const x = SHOWN.slice(0, i).reduce((sum, before) => sum + shares[before] * 100, 0);
           return <rect key={s} x={x} y={0} width={shares[s] * 100} height={4} fill={stateColour[s]} />;
         })}
-        <rect x={0} y={0} width={100} height={4} fill="none" stroke="currentColor" strokeWidth={0.4} vectorEffect="non-scaling-stroke" />
+        <rect
+          x={0}
+          y={0}
+          width={100}
+          height={4}
+          fill="none"
+          stroke="currentColor"
+          strokeWidth={0.4}
+          vectorEffect="non-scaling-stroke"
+        />
       </svg>
       <p className="text-xs text-ink-soft">
         {words.join(' · ')}

@@ -31,7 +31,8 @@ function costClause(figures: readonly RunFigures[], costs: ReadonlyMap<string, R
   if (!costs || figures.some((f) => !costs.has(f.run.id))) return ' No price list is set, so costs are not compared.';
   const parts = figures.map((f) => {
     const cost = costs.get(f.run.id)!;
-    const per = cost.perHourlyPart === null ? 'no capacity' : `${formatMoney(cost.perHourlyPart, cost.currency)} per part/h`;
+    const per =
+      cost.perHourlyPart === null ? 'no capacity' : `${formatMoney(cost.perHourlyPart, cost.currency)} per part/h`;
     return `${f.run.label} ${formatMoney(cost.capitalCost, cost.currency)} (${per})`;
   });
   return ` Capital cost: ${parts.join(' against ')}.`;
@@ -43,14 +44,18 @@ function areaClause(figures: readonly RunFigures[], areas: FloorAreas | undefine
 }
 
 export function answerOf(comparison: Comparison, costs?: ReadonlyMap<string, RunCost>, areas?: FloorAreas): Answer {
-  const byThroughput = [...comparison.figures].sort((a, b) => b.values.throughputPerHour.mean - a.values.throughputPerHour.mean);
+  const byThroughput = [...comparison.figures].sort(
+    (a, b) => b.values.throughputPerHour.mean - a.values.throughputPerHour.mean,
+  );
   const winner = byThroughput[0];
   const reference = comparison.figures[0];
   const other = winner === reference ? byThroughput[1] : reference;
   const d = differenceBetween(winner, other);
   const method = comparison.pairing === 'paired' ? 'paired' : 'Welch';
   const rate = (f: RunFigures) => `${formatNumber(f.values.throughputPerHour.mean, 1)} parts/h`;
-  const interval = d.unavailable ? `no interval: ${d.unavailable}` : `95 % ${method} interval ${formatSigned(d.ciLow, 1)} to ${formatSigned(d.ciHigh, 1)}`;
+  const interval = d.unavailable
+    ? `no interval: ${d.unavailable}`
+    : `95 % ${method} interval ${formatSigned(d.ciLow, 1)} to ${formatSigned(d.ciHigh, 1)}`;
   const costs2 = costClause([winner, other], costs) + areaClause([winner, other], areas);
   if (d.significant && d.difference > 0) {
     return {

@@ -71,7 +71,10 @@ const sameSeed = (a: RunResult, b: RunResult) => String(a.seed) === String(b.see
 
 function pairingOf(runs: readonly ComparedRun[]): { pairing: Comparison['pairing']; note: string | null } {
   const [reference, ...others] = runs;
-  const unlike = others.filter((o) => !sameSeed(o.result, reference.result) || o.result.replications.length !== reference.result.replications.length);
+  const unlike = others.filter(
+    (o) =>
+      !sameSeed(o.result, reference.result) || o.result.replications.length !== reference.result.replications.length,
+  );
   if (unlike.length === 0) return { pairing: 'paired', note: null };
   return {
     pairing: 'independent',
@@ -81,12 +84,17 @@ function pairingOf(runs: readonly ComparedRun[]): { pairing: Comparison['pairing
 
 export function compareRuns(runs: readonly ComparedRun[]): Comparison {
   if (runs.length < COMPARE_LIMITS.min || runs.length > COMPARE_LIMITS.max) {
-    throw new RangeError(`compareRuns: compare ${COMPARE_LIMITS.min} to ${COMPARE_LIMITS.max} runs (got ${runs.length})`);
+    throw new RangeError(
+      `compareRuns: compare ${COMPARE_LIMITS.min} to ${COMPARE_LIMITS.max} runs (got ${runs.length})`,
+    );
   }
   const { pairing, note } = pairingOf(runs);
   const reference = runs[0].result;
   const figures = runs.map((run, index) => {
-    const values = Object.fromEntries(METRICS.map((m) => [m.key, intervalOf(run.result, m.key)])) as Record<MetricKey, MetricInterval>;
+    const values = Object.fromEntries(METRICS.map((m) => [m.key, intervalOf(run.result, m.key)])) as Record<
+      MetricKey,
+      MetricInterval
+    >;
     const differences =
       index === 0
         ? null
@@ -103,4 +111,5 @@ export function compareRuns(runs: readonly ComparedRun[]): Comparison {
 }
 
 /** Whether a difference is an improvement for this metric (the sign that counts as better). */
-export const isBetter = (metric: Metric, difference: number) => (metric.higherIsBetter ? difference > 0 : difference < 0);
+export const isBetter = (metric: Metric, difference: number) =>
+  metric.higherIsBetter ? difference > 0 : difference < 0;

@@ -15,7 +15,9 @@ export function heatmapGroups(runs: readonly { label: string; result: RunResult 
   const groups: HeatmapGroup[] = [];
   for (const { label, result } of runs) {
     const { binSeconds, startSeconds, timeBins } = result.heatmaps;
-    let group = groups.find((g) => g.binSeconds === binSeconds && g.startSeconds === startSeconds && g.timeBins === timeBins);
+    let group = groups.find(
+      (g) => g.binSeconds === binSeconds && g.startSeconds === startSeconds && g.timeBins === timeBins,
+    );
     if (!group) {
       group = { binSeconds, startSeconds, timeBins, lanes: [] };
       groups.push(group);
@@ -23,7 +25,12 @@ export function heatmapGroups(runs: readonly { label: string; result: RunResult 
     for (const heatmap of result.heatmaps.lanes) {
       const lane = result.lanes.find((l) => l.id === heatmap.laneId);
       const lengthMm = lane?.lengthMm ?? heatmap.positionBins;
-      group.lanes.push({ laneName: `${label}: ${lane?.name ?? heatmap.laneId}`, lengthMm, positionBinMm: lengthMm / heatmap.positionBins, values: heatmap.occupancy });
+      group.lanes.push({
+        laneName: `${label}: ${lane?.name ?? heatmap.laneId}`,
+        lengthMm,
+        positionBinMm: lengthMm / heatmap.positionBins,
+        values: heatmap.occupancy,
+      });
     }
   }
   return groups.filter((g) => g.lanes.length > 0);

@@ -15,13 +15,20 @@ export interface StepRow {
 function stepShares(result: RunResult, stepId: string): StepShares | null {
   const stations = result.stations.filter((s) => s.stepId === stepId);
   if (stations.length === 0) return null;
-  const shares = Object.fromEntries(STATION_STATES.map((state) => [state, stations.reduce((sum, s) => sum + s[state], 0) / stations.length])) as Record<StationState, number>;
+  const shares = Object.fromEntries(
+    STATION_STATES.map((state) => [state, stations.reduce((sum, s) => sum + s[state], 0) / stations.length]),
+  ) as Record<StationState, number>;
   return { ...shares, stations: stations.length };
 }
 
 /** Steps in the order they first appear across the runs (the reference's order first). */
 export function alignSteps(results: readonly RunResult[], stepNames: ReadonlyMap<string, string>): StepRow[] {
   const order: string[] = [];
-  for (const result of results) for (const station of result.stations) if (!order.includes(station.stepId)) order.push(station.stepId);
-  return order.map((stepId) => ({ stepId, name: stepNames.get(stepId) ?? stepId, shares: results.map((r) => stepShares(r, stepId)) }));
+  for (const result of results)
+    for (const station of result.stations) if (!order.includes(station.stepId)) order.push(station.stepId);
+  return order.map((stepId) => ({
+    stepId,
+    name: stepNames.get(stepId) ?? stepId,
+    shares: results.map((r) => stepShares(r, stepId)),
+  }));
 }

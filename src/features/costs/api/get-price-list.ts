@@ -5,7 +5,8 @@ import { apiRoutes } from '../../../../shared/api/routes';
 import { api } from '../../../lib/api-client';
 import { costKeys } from './keys';
 
-export const getPriceList = (organisationId: string, signal?: AbortSignal) => api.get(apiRoutes.priceList(organisationId), priceListAnswerSchema, { signal });
+export const getPriceList = (organisationId: string, signal?: AbortSignal) =>
+  api.get(apiRoutes.priceList(organisationId), priceListAnswerSchema, { signal });
 
 export const priceListQueryOptions = (organisationId: string) =>
   queryOptions({
@@ -13,4 +14,5 @@ export const priceListQueryOptions = (organisationId: string) =>
     queryFn: ({ signal }) => getPriceList(organisationId, signal),
   });
 
-export const usePriceList = (organisationId: string | undefined) => useQuery({ ...priceListQueryOptions(organisationId ?? ''), enabled: Boolean(organisationId) });
+export const usePriceList = (organisationId: string | undefined) =>
+  useQuery({ ...priceListQueryOptions(organisationId ?? ''), enabled: Boolean(organisationId) });

@@ -5,7 +5,8 @@ import { apiRoutes } from '../../../../shared/api/routes';
 import { api } from '../../../lib/api-client';
 import { costKeys } from './keys';
 
-export const savePriceList = (organisationId: string, input: SavePriceListInput) => api.put(apiRoutes.priceList(organisationId), input, priceListAnswerSchema);
+export const savePriceList = (organisationId: string, input: SavePriceListInput) =>
+  api.put(apiRoutes.priceList(organisationId), input, priceListAnswerSchema);
 
 export function useSavePriceList(organisationId: string) {
   const queryClient = useQueryClient();

@@ -12,9 +12,16 @@ export interface PricedScenario {
 }
 
 const whole = (value: number) => value.toLocaleString('en-GB', { maximumFractionDigits: 0 });
-const quantity = (value: number, unit: string) => (unit === 'm' ? `${value.toLocaleString('en-GB', { maximumFractionDigits: 2 })} m` : whole(value));
+const quantity = (value: number, unit: string) =>
+  unit === 'm' ? `${value.toLocaleString('en-GB', { maximumFractionDigits: 2 })} m` : whole(value);
 
-export function BillOfMaterialsTable({ scenarios, currency }: { scenarios: readonly PricedScenario[]; currency: string }) {
+export function BillOfMaterialsTable({
+  scenarios,
+  currency,
+}: {
+  scenarios: readonly PricedScenario[];
+  currency: string;
+}) {
   return (
     <Table caption={`Bill of materials and capital cost in ${currency}`} data-testid="bill-of-materials">
       <thead>
@@ -35,7 +42,8 @@ export function BillOfMaterialsTable({ scenarios, currency }: { scenarios: reado
               const line = s.bill.lines.find((l) => l.item === item)!;
               return (
                 <Td key={s.id} className="text-right tabular-nums">
-                  {quantity(line.quantity, PRICE_ITEM_LABELS[item].unit)} <span className="text-ink-soft">· {whole(line.total)}</span>
+                  {quantity(line.quantity, PRICE_ITEM_LABELS[item].unit)}{' '}
+                  <span className="text-ink-soft">· {whole(line.total)}</span>
                 </Td>
               );
             })}

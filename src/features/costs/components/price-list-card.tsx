@@ -8,9 +8,18 @@ import { Card, CardTitle } from '../../../components/ui/card';
 import { formatDateTime, formatPerson } from '../../../lib/format';
 import { PriceListForm } from './price-list-form';
 
-const money = (value: number, currency: string) => `${currency} ${value.toLocaleString('en-GB', { maximumFractionDigits: 2 })}`;
+const money = (value: number, currency: string) =>
+  `${currency} ${value.toLocaleString('en-GB', { maximumFractionDigits: 2 })}`;
 
-export function PriceListCard({ organisationId, priceList, mayEdit }: { organisationId: string; priceList: PriceList | null; mayEdit: boolean }) {
+export function PriceListCard({
+  organisationId,
+  priceList,
+  mayEdit,
+}: {
+  organisationId: string;
+  priceList: PriceList | null;
+  mayEdit: boolean;
+}) {
   const [editing, setEditing] = useState(false);
   return (
     <Card aria-labelledby="prices-title" className="flex flex-col gap-3" data-print="keep">
@@ -33,7 +42,8 @@ export function PriceListCard({ organisationId, priceList, mayEdit }: { organisa
             {PRICE_ITEMS.map((item) => (
               <div key={item}>
                 <dt className="text-ink-soft">
-                  {PRICE_ITEM_LABELS[item].label} <span className="text-xs">(per {PRICE_ITEM_LABELS[item].unit === 'm' ? 'metre' : 'unit'})</span>
+                  {PRICE_ITEM_LABELS[item].label}{' '}
+                  <span className="text-xs">(per {PRICE_ITEM_LABELS[item].unit === 'm' ? 'metre' : 'unit'})</span>
                 </dt>
                 <dd className="font-semibold tabular-nums">{money(priceList.prices[item], priceList.currency)}</dd>
               </div>
@@ -41,12 +51,16 @@ export function PriceListCard({ organisationId, priceList, mayEdit }: { organisa
           </dl>
           {priceList.note && <p className="text-sm text-ink-soft">{priceList.note}</p>}
           <p className="text-xs text-ink-soft">
-            {priceList.invented ? 'Seeded with the demo' : `Saved by ${formatPerson(priceList.updatedBy)}`} on {formatDateTime(priceList.updatedAt)}.
+            {priceList.invented ? 'Seeded with the demo' : `Saved by ${formatPerson(priceList.updatedBy)}`} on{' '}
+            {formatDateTime(priceList.updatedAt)}.
           </p>
         </>
       ) : (
         <p className="text-sm text-ink-soft">
-          No prices yet: {mayEdit ? 'enter unit prices to see each layout’s capital cost and its cost per part per hour of capacity.' : 'an engineer or owner can enter them; costs appear here then.'}
+          No prices yet:{' '}
+          {mayEdit
+            ? 'enter unit prices to see each layout’s capital cost and its cost per part per hour of capacity.'
+            : 'an engineer or owner can enter them; costs appear here then.'}
         </p>
       )}
     </Card>

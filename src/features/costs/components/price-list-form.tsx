@@ -1,7 +1,13 @@
 // Editing the organisation's price list: one currency, one unit price per kind of equipment.
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { PRICE_ITEM_LABELS, PRICE_ITEMS, savePriceListSchema, type PriceList, type SavePriceListInput } from '../../../../shared/api/price-lists';
+import {
+  PRICE_ITEM_LABELS,
+  PRICE_ITEMS,
+  savePriceListSchema,
+  type PriceList,
+  type SavePriceListInput,
+} from '../../../../shared/api/price-lists';
 import { FormErrorBanner } from '../../../components/form-error-banner';
 import { Button } from '../../../components/ui/button';
 import { TextAreaField, TextField } from '../../../components/ui/field';
@@ -12,7 +18,15 @@ const FIELDS = ['currency', 'note', ...PRICE_ITEMS.map((item) => `prices.${item}
 
 const EMPTY: SavePriceListInput = {
   currency: 'EUR',
-  prices: { trackPerMetre: 0, carrier: 0, elevator: 0, lateralTransfer: 0, curve: 0, automaticStation: 0, manualStation: 0 },
+  prices: {
+    trackPerMetre: 0,
+    carrier: 0,
+    elevator: 0,
+    lateralTransfer: 0,
+    curve: 0,
+    automaticStation: 0,
+    manualStation: 0,
+  },
   note: '',
 };
 
@@ -25,7 +39,9 @@ interface PriceListFormProps {
 export function PriceListForm({ organisationId, current, onDone }: PriceListFormProps) {
   const form = useForm({
     resolver: zodResolver(savePriceListSchema),
-    defaultValues: current ? { currency: current.currency, prices: current.prices, note: current.invented ? '' : current.note } : EMPTY,
+    defaultValues: current
+      ? { currency: current.currency, prices: current.prices, note: current.invented ? '' : current.note }
+      : EMPTY,
   });
   const { errors } = form.formState;
   const save = useSavePriceList(organisationId);
@@ -38,7 +54,13 @@ export function PriceListForm({ organisationId, current, onDone }: PriceListForm
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-2" aria-label="Price list">
       <FormErrorBanner title="The prices were not saved" failure={failure} />
       <div className="grid gap-x-4 sm:grid-cols-2 lg:grid-cols-4">
-        <TextField label="Currency" hint="Three capital letters, such as EUR." maxLength={3} error={errors.currency?.message} {...form.register('currency')} />
+        <TextField
+          label="Currency"
+          hint="Three capital letters, such as EUR."
+          maxLength={3}
+          error={errors.currency?.message}
+          {...form.register('currency')}
+        />
         {PRICE_ITEMS.map((item) => (
           <TextField
             key={item}
@@ -52,7 +74,12 @@ export function PriceListForm({ organisationId, current, onDone }: PriceListForm
           />
         ))}
       </div>
-      <TextAreaField label="Note (optional)" hint="Where the prices come from and when they were quoted." error={errors.note?.message} {...form.register('note')} />
+      <TextAreaField
+        label="Note (optional)"
+        hint="Where the prices come from and when they were quoted."
+        error={errors.note?.message}
+        {...form.register('note')}
+      />
       <div className="mt-2 flex flex-wrap gap-3">
         <Button type="submit" pending={save.isPending} pendingLabel="Saving…">
           Save prices

@@ -12,7 +12,8 @@ import { MailText } from '../components/mail-text';
 export function MailboxRoute() {
   const mailbox = useMailbox(3000);
   if (mailbox.isPending) return <PageSpinner label="Opening the mailbox…" />;
-  if (mailbox.isError) return <LoadError what="the mailbox" error={mailbox.error} onRetry={() => void mailbox.refetch()} />;
+  if (mailbox.isError)
+    return <LoadError what="the mailbox" error={mailbox.error} onRetry={() => void mailbox.refetch()} />;
   if (!mailbox.data) {
     return (
       <EmptyState title="No development mailbox">
@@ -27,7 +28,11 @@ export function MailboxRoute() {
         title="Development mailbox"
         description={`Mail this Lanewright sent, caught on this computer and never delivered. The newest ${capacity} are kept while the server runs; the page refreshes itself.`}
       />
-      {mails.length === 0 && <EmptyState title="No mail yet">Invite someone, sign up or ask for a password link, and the mail appears here.</EmptyState>}
+      {mails.length === 0 && (
+        <EmptyState title="No mail yet">
+          Invite someone, sign up or ask for a password link, and the mail appears here.
+        </EmptyState>
+      )}
       <ol className="flex flex-col gap-4" aria-label="Caught mail">
         {mails.map((mail) => (
           <li key={mail.id}>
@@ -35,7 +40,8 @@ export function MailboxRoute() {
               <div className="flex flex-col gap-1 border-b border-paper-sunk pb-3">
                 <h2 className="text-lg font-semibold text-ink">{mail.subject}</h2>
                 <p className="text-sm text-ink-soft">
-                  To <span className="font-medium text-ink">{mail.to.join(', ')}</span> from {mail.from}, {formatDateTime(mail.receivedAt)}
+                  To <span className="font-medium text-ink">{mail.to.join(', ')}</span> from {mail.from},{' '}
+                  {formatDateTime(mail.receivedAt)}
                 </p>
               </div>
               <MailText text={mail.text} />

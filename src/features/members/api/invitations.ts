@@ -22,17 +22,26 @@ export const useInvitations = (organisationId: string, enabled: boolean) =>
 
 function useInvitationMutation<T, R>(organisationId: string, request: (input: T) => Promise<R>) {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: request, onSuccess: () => queryClient.invalidateQueries({ queryKey: memberKeys.invitations(organisationId) }) });
+  return useMutation({
+    mutationFn: request,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: memberKeys.invitations(organisationId) }),
+  });
 }
 
 export const useInvite = (organisationId: string) =>
-  useInvitationMutation(organisationId, (input: InviteMemberInput) => api.post(apiRoutes.invitations(organisationId), input, invitationSchema));
+  useInvitationMutation(organisationId, (input: InviteMemberInput) =>
+    api.post(apiRoutes.invitations(organisationId), input, invitationSchema),
+  );
 
 export const useResendInvitation = (organisationId: string) =>
-  useInvitationMutation(organisationId, (invitationId: string) => api.post(apiRoutes.invitationResend(organisationId, invitationId), {}, invitationSchema));
+  useInvitationMutation(organisationId, (invitationId: string) =>
+    api.post(apiRoutes.invitationResend(organisationId, invitationId), {}, invitationSchema),
+  );
 
 export const useRevokeInvitation = (organisationId: string) =>
-  useInvitationMutation(organisationId, (invitationId: string) => api.delete(apiRoutes.invitation(organisationId, invitationId), okSchema));
+  useInvitationMutation(organisationId, (invitationId: string) =>
+    api.delete(apiRoutes.invitation(organisationId, invitationId), okSchema),
+  );
 
 export const useInvitationPreview = (token: string | null) =>
   useQuery({
@@ -42,4 +51,7 @@ export const useInvitationPreview = (token: string | null) =>
     retry: false,
   });
 
-export const useAcceptInvitation = () => useMutation({ mutationFn: (input: AcceptInvitationInput) => api.post(apiRoutes.invitationAccept, input, acceptedInvitationSchema) });
+export const useAcceptInvitation = () =>
+  useMutation({
+    mutationFn: (input: AcceptInvitationInput) => api.post(apiRoutes.invitationAccept, input, acceptedInvitationSchema),
+  });

@@ -8,19 +8,27 @@ import { apiRoutes } from '../../../../shared/api/routes';
 import { api } from '../../../lib/api-client';
 import { memberKeys } from './keys';
 
-export const getMembers = (organisationId: string, signal?: AbortSignal) => api.get(apiRoutes.members(organisationId), z.array(memberSchema), { signal });
+export const getMembers = (organisationId: string, signal?: AbortSignal) =>
+  api.get(apiRoutes.members(organisationId), z.array(memberSchema), { signal });
 
 export const useMembers = (organisationId: string) =>
   useQuery({ queryKey: memberKeys.list(organisationId), queryFn: ({ signal }) => getMembers(organisationId, signal) });
 
 function useMemberMutation<T, R>(organisationId: string, request: (input: T) => Promise<R>) {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: request, onSuccess: () => queryClient.invalidateQueries({ queryKey: memberKeys.organisation(organisationId) }) });
+  return useMutation({
+    mutationFn: request,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: memberKeys.organisation(organisationId) }),
+  });
 }
 
 export const useChangeRole = (organisationId: string) =>
-  useMemberMutation(organisationId, ({ userId, role }: { userId: string; role: Role }) => api.patch(apiRoutes.member(organisationId, userId), { role }, memberSchema));
+  useMemberMutation(organisationId, ({ userId, role }: { userId: string; role: Role }) =>
+    api.patch(apiRoutes.member(organisationId, userId), { role }, memberSchema),
+  );
 
-export const useRemoveMember = (organisationId: string) => useMemberMutation(organisationId, (userId: string) => api.delete(apiRoutes.member(organisationId, userId), okSchema));
+export const useRemoveMember = (organisationId: string) =>
+  useMemberMutation(organisationId, (userId: string) => api.delete(apiRoutes.member(organisationId, userId), okSchema));
 
-export const useLeaveOrganisation = (organisationId: string) => useMemberMutation(organisationId, () => api.delete(apiRoutes.membership(organisationId), okSchema));
+export const useLeaveOrganisation = (organisationId: string) =>
+  useMemberMutation(organisationId, () => api.delete(apiRoutes.membership(organisationId), okSchema));

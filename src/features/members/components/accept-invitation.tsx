@@ -31,11 +31,18 @@ interface AcceptInvitationProps {
 function NewAccountForm({ token, onJoined }: { token: string; onJoined: AcceptInvitationProps['onJoined'] }) {
   const form = useForm({ resolver: zodResolver(newAccountSchema), defaultValues: { name: '', password: '' } });
   const accept = useAcceptInvitation();
-  const { onSubmit, failure } = useApiFormSubmit(form, FIELDS, async (values) => onJoined(await accept.mutateAsync({ token, ...values })));
+  const { onSubmit, failure } = useApiFormSubmit(form, FIELDS, async (values) =>
+    onJoined(await accept.mutateAsync({ token, ...values })),
+  );
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-2" aria-label="Create your account and join">
       <FormErrorBanner title="You have not joined yet" failure={failure} />
-      <TextField label="Your name" autoComplete="name" error={form.formState.errors.name?.message} {...form.register('name')} />
+      <TextField
+        label="Your name"
+        autoComplete="name"
+        error={form.formState.errors.name?.message}
+        {...form.register('name')}
+      />
       <TextField
         label="Choose a password"
         type="password"
@@ -54,7 +61,8 @@ function NewAccountForm({ token, onJoined }: { token: string; onJoined: AcceptIn
 function Invitation({ preview }: { preview: InvitationPreview }) {
   return (
     <p className="text-ink">
-      {preview.invitedByName ?? 'An owner'} invites <strong>{preview.email}</strong> to <strong>{preview.organisationName}</strong> as {preview.role === 'engineer' ? 'an' : 'a'}{' '}
+      {preview.invitedByName ?? 'An owner'} invites <strong>{preview.email}</strong> to{' '}
+      <strong>{preview.organisationName}</strong> as {preview.role === 'engineer' ? 'an' : 'a'}{' '}
       <strong>{preview.role}</strong>. The link works until {formatDateTime(preview.expiresAt)}.
     </p>
   );
@@ -64,9 +72,7 @@ export function AcceptInvitation({ token, signedInAs, signInPath, onJoined }: Ac
   const preview = useInvitationPreview(token);
   const accept = useAcceptInvitation();
   if (!token) {
-    return (
-      <IncompleteLink />
-    );
+    return <IncompleteLink />;
   }
   if (preview.isPending) return <PageSpinner label="Reading the invitation…" />;
   if (preview.isError) {
@@ -84,7 +90,8 @@ export function AcceptInvitation({ token, signedInAs, signInPath, onJoined }: Ac
       {signedInAs && !signedInAsInvitee && (
         <ErrorBanner title="You are signed in as someone else">
           <p>
-            This browser is signed in as {signedInAs}. Sign out, then open the link from the mail again to accept as {invitation.email}.
+            This browser is signed in as {signedInAs}. Sign out, then open the link from the mail again to accept as{' '}
+            {invitation.email}.
           </p>
         </ErrorBanner>
       )}
@@ -95,14 +102,20 @@ export function AcceptInvitation({ token, signedInAs, signInPath, onJoined }: Ac
               <p>{accept.error.message}</p>
             </ErrorBanner>
           )}
-          <Button pending={accept.isPending} pendingLabel="Joining…" onClick={() => accept.mutate({ token }, { onSuccess: onJoined })}>
+          <Button
+            pending={accept.isPending}
+            pendingLabel="Joining…"
+            onClick={() => accept.mutate({ token }, { onSuccess: onJoined })}
+          >
             Join {invitation.organisationName}
           </Button>
         </div>
       )}
       {!signedInAs && invitation.accountExists && (
         <div className="flex flex-col items-start gap-2">
-          <p className="text-ink-soft">{invitation.email} already has a Lanewright account. Sign in with it and you come back here to accept.</p>
+          <p className="text-ink-soft">
+            {invitation.email} already has a Lanewright account. Sign in with it and you come back here to accept.
+          </p>
           <ButtonLink variant="primary" to={signInPath}>
             Sign in to accept
           </ButtonLink>

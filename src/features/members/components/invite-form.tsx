@@ -13,7 +13,10 @@ import { ROLE_NOTES } from './role-notes';
 const FIELDS = ['email', 'role'] as const;
 
 export function InviteForm({ organisationId }: { organisationId: string }) {
-  const form = useForm({ resolver: zodResolver(inviteMemberSchema), defaultValues: { email: '', role: 'engineer' as const } });
+  const form = useForm({
+    resolver: zodResolver(inviteMemberSchema),
+    defaultValues: { email: '', role: 'engineer' as const },
+  });
   const invite = useInvite(organisationId);
   const { onSubmit, failure } = useApiFormSubmit(form, FIELDS, async (values) => {
     await invite.mutateAsync(values);
@@ -29,7 +32,13 @@ export function InviteForm({ organisationId }: { organisationId: string }) {
         </p>
       )}
       <div className="grid gap-x-4 sm:grid-cols-[2fr_1fr]">
-        <TextField label="E-mail" type="email" autoComplete="off" error={errors.email?.message} {...form.register('email')} />
+        <TextField
+          label="E-mail"
+          type="email"
+          autoComplete="off"
+          error={errors.email?.message}
+          {...form.register('email')}
+        />
         <SelectField label="Role" error={errors.role?.message} {...form.register('role')}>
           {roleSchema.options.map((role) => (
             <option key={role} value={role}>

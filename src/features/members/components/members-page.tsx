@@ -31,7 +31,14 @@ export function MembersPage({ organisationId, organisationName, myUserId, myRole
 
   return (
     <div className="flex flex-col gap-8">
-      <PageHeader title={`Members of ${organisationName}`} description={mayManage ? 'Invite colleagues, set what each may do, and see who signed in when.' : 'Who works in this organisation.'} />
+      <PageHeader
+        title={`Members of ${organisationName}`}
+        description={
+          mayManage
+            ? 'Invite colleagues, set what each may do, and see who signed in when.'
+            : 'Who works in this organisation.'
+        }
+      />
       {mayManage && (
         <TitledCard title="Invite someone">
           <InviteForm organisationId={organisationId} />
@@ -39,19 +46,32 @@ export function MembersPage({ organisationId, organisationName, myUserId, myRole
       )}
       <TitledCard title="Members">
         {members.isPending && <PageSpinner label="Loading members…" />}
-        {members.isError && <LoadError what="the members" error={members.error} onRetry={() => void members.refetch()} />}
-        {members.data && <MembersTable organisationId={organisationId} members={members.data} myUserId={myUserId} mayManage={mayManage} />}
+        {members.isError && (
+          <LoadError what="the members" error={members.error} onRetry={() => void members.refetch()} />
+        )}
+        {members.data && (
+          <MembersTable
+            organisationId={organisationId}
+            members={members.data}
+            myUserId={myUserId}
+            mayManage={mayManage}
+          />
+        )}
       </TitledCard>
       {mayManage && (
         <TitledCard title="Pending invitations">
           {invitations.isPending && <PageSpinner label="Loading invitations…" />}
-          {invitations.isError && <LoadError what="the invitations" error={invitations.error} onRetry={() => void invitations.refetch()} />}
+          {invitations.isError && (
+            <LoadError what="the invitations" error={invitations.error} onRetry={() => void invitations.refetch()} />
+          )}
           {invitations.data && <PendingInvitations organisationId={organisationId} invitations={invitations.data} />}
         </TitledCard>
       )}
       <TitledCard title="Leave this organisation">
         <div className="flex flex-col items-start gap-3">
-          <p className="max-w-prose text-ink-soft">You lose access to its projects at once; an owner can invite you again. The last owner cannot leave.</p>
+          <p className="max-w-prose text-ink-soft">
+            You lose access to its projects at once; an owner can invite you again. The last owner cannot leave.
+          </p>
           {leave.isError && (
             <ErrorBanner title="You are still a member">
               <p>{leave.error.message}</p>
@@ -59,7 +79,11 @@ export function MembersPage({ organisationId, organisationName, myUserId, myRole
           )}
           {confirmingLeave ? (
             <div className="flex gap-2">
-              <Button pending={leave.isPending} pendingLabel="Leaving…" onClick={() => leave.mutate(undefined, { onSuccess: onLeft })}>
+              <Button
+                pending={leave.isPending}
+                pendingLabel="Leaving…"
+                onClick={() => leave.mutate(undefined, { onSuccess: onLeft })}
+              >
                 Yes, leave {organisationName}
               </Button>
               <Button variant="secondary" onClick={() => setConfirmingLeave(false)}>

@@ -64,7 +64,9 @@ export function MembersTable({ organisationId, members, myUserId, mayManage }: M
                   <Badge tone={member.role === 'viewer' ? 'neutral' : 'accent'}>{member.role}</Badge>
                 )}
               </Td>
-              <Td className="whitespace-nowrap">{member.lastSignInAt ? formatDateTime(member.lastSignInAt) : 'never'}</Td>
+              <Td className="whitespace-nowrap">
+                {member.lastSignInAt ? formatDateTime(member.lastSignInAt) : 'never'}
+              </Td>
               {mayManage && (
                 <Td className="text-right">
                   {member.userId !== myUserId && (
@@ -72,7 +74,8 @@ export function MembersTable({ organisationId, members, myUserId, mayManage }: M
                       variant="quiet"
                       pending={remove.isPending && remove.variables === member.userId}
                       onClick={() => {
-                        if (window.confirm(`Remove ${member.name} from this organisation? They lose access at once.`)) remove.mutate(member.userId);
+                        if (window.confirm(`Remove ${member.name} from this organisation? They lose access at once.`))
+                          remove.mutate(member.userId);
                       }}
                     >
                       Remove

@@ -7,7 +7,13 @@ import { Table, Td, Th } from '../../../components/ui/table';
 import { formatDateTime, formatPerson } from '../../../lib/format';
 import { useResendInvitation, useRevokeInvitation } from '../api/invitations';
 
-export function PendingInvitations({ organisationId, invitations }: { organisationId: string; invitations: Invitation[] }) {
+export function PendingInvitations({
+  organisationId,
+  invitations,
+}: {
+  organisationId: string;
+  invitations: Invitation[];
+}) {
   const resend = useResendInvitation(organisationId);
   const revoke = useRevokeInvitation(organisationId);
   const failure = resend.error ?? revoke.error;
@@ -39,12 +45,26 @@ export function PendingInvitations({ organisationId, invitations }: { organisati
               </Td>
               <Td>{invitation.role}</Td>
               <Td className="whitespace-nowrap">{formatDateTime(invitation.sentAt)}</Td>
-              <Td>{invitation.state === 'expired' ? <Badge tone="caution">expired</Badge> : `valid until ${formatDateTime(invitation.expiresAt)}`}</Td>
+              <Td>
+                {invitation.state === 'expired' ? (
+                  <Badge tone="caution">expired</Badge>
+                ) : (
+                  `valid until ${formatDateTime(invitation.expiresAt)}`
+                )}
+              </Td>
               <Td className="text-right whitespace-nowrap">
-                <Button variant="quiet" pending={resend.isPending && resend.variables === invitation.id} onClick={() => resend.mutate(invitation.id)}>
+                <Button
+                  variant="quiet"
+                  pending={resend.isPending && resend.variables === invitation.id}
+                  onClick={() => resend.mutate(invitation.id)}
+                >
                   Resend
                 </Button>
-                <Button variant="quiet" pending={revoke.isPending && revoke.variables === invitation.id} onClick={() => revoke.mutate(invitation.id)}>
+                <Button
+                  variant="quiet"
+                  pending={revoke.isPending && revoke.variables === invitation.id}
+                  onClick={() => revoke.mutate(invitation.id)}
+                >
                   Revoke
                 </Button>
               </Td>

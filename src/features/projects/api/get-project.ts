@@ -5,7 +5,8 @@ import { apiRoutes } from '../../../../shared/api/routes';
 import { api } from '../../../lib/api-client';
 import { projectKeys } from '../../../lib/query-keys/projects';
 
-export const getProject = (id: string, signal?: AbortSignal) => api.get(apiRoutes.project(id), projectSchema, { signal });
+export const getProject = (id: string, signal?: AbortSignal) =>
+  api.get(apiRoutes.project(id), projectSchema, { signal });
 
 export const projectQueryOptions = (id: string) =>
   queryOptions({
@@ -13,4 +14,5 @@ export const projectQueryOptions = (id: string) =>
     queryFn: ({ signal }) => getProject(id, signal),
   });
 
-export const useProject = (id: string | undefined) => useQuery({ ...projectQueryOptions(id ?? ''), enabled: Boolean(id) });
+export const useProject = (id: string | undefined) =>
+  useQuery({ ...projectQueryOptions(id ?? ''), enabled: Boolean(id) });

@@ -24,13 +24,24 @@ export function CreateProjectForm({ organisationId, onCreated, onCancel }: Creat
   });
   const { errors } = form.formState;
   const createProject = useCreateProject();
-  const { onSubmit, failure } = useApiFormSubmit(form, FIELDS, async (values) => onCreated(await createProject.mutateAsync(values)));
+  const { onSubmit, failure } = useApiFormSubmit(form, FIELDS, async (values) =>
+    onCreated(await createProject.mutateAsync(values)),
+  );
 
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-2" aria-label="New project">
       <FormErrorBanner title="The project was not created" failure={failure} />
-      <TextField label="Project name" hint="For example the line or the customer job it belongs to." error={errors.name?.message} {...form.register('name')} />
-      <TextAreaField label="Description (optional)" error={errors.description?.message} {...form.register('description')} />
+      <TextField
+        label="Project name"
+        hint="For example the line or the customer job it belongs to."
+        error={errors.name?.message}
+        {...form.register('name')}
+      />
+      <TextAreaField
+        label="Description (optional)"
+        error={errors.description?.message}
+        {...form.register('description')}
+      />
       <div className="mt-2 flex flex-wrap gap-3">
         <Button type="submit" pending={createProject.isPending} pendingLabel="Creating…">
           Create project

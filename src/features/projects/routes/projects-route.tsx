@@ -40,11 +40,17 @@ export function ProjectsRoute() {
       />
       {creating && organisationId && (
         <TitledCard title="New project" className="max-w-2xl">
-          <CreateProjectForm organisationId={organisationId} onCancel={() => setCreating(false)} onCreated={(p) => navigate(`/projects/${p.id}`)} />
+          <CreateProjectForm
+            organisationId={organisationId}
+            onCancel={() => setCreating(false)}
+            onCreated={(p) => navigate(`/projects/${p.id}`)}
+          />
         </TitledCard>
       )}
       {projects.isPending && <PageSpinner label="Loading projects…" />}
-      {projects.isError && <LoadError what="the projects" error={projects.error} onRetry={() => void projects.refetch()} />}
+      {projects.isError && (
+        <LoadError what="the projects" error={projects.error} onRetry={() => void projects.refetch()} />
+      )}
       {projects.data && projects.data.length === 0 && !creating && (
         <EmptyState title="No projects yet" action={startButton}>
           {mayCreate

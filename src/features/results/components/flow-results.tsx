@@ -40,8 +40,9 @@ export function FlowResults({ result, fileBase }: { result: RunResult; fileBase:
         exportName={`${fileBase}-carrier-time`}
       />
       <p className="text-ink" data-testid="loop-time">
-        <strong>Loop time</strong> (one load to the next on the same carrier): mean {formatSeconds(carriers.loopTimeSeconds.mean)} s, median{' '}
-        {formatSeconds(carriers.loopTimeSeconds.p50)} s, 95th percentile {formatSeconds(carriers.loopTimeSeconds.p95)} s.
+        <strong>Loop time</strong> (one load to the next on the same carrier): mean{' '}
+        {formatSeconds(carriers.loopTimeSeconds.mean)} s, median {formatSeconds(carriers.loopTimeSeconds.p50)} s, 95th
+        percentile {formatSeconds(carriers.loopTimeSeconds.p95)} s.
       </p>
     </Card>
   );

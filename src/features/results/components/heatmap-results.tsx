@@ -12,11 +12,16 @@ export function HeatmapResults({ result, fileBase }: { result: RunResult; fileBa
       <div className="flex flex-col gap-1">
         <CardTitle id="heatmaps-title">Over time</CardTitle>
         <p className="max-w-prose text-sm text-ink-soft">
-          Time counts from the start of the simulation; statistics begin after the {result.settings.warmupMinutes} min warm-up. Each cell is the mean over{' '}
-          {replications} replication{replications === 1 ? '' : 's'}.
+          Time counts from the start of the simulation; statistics begin after the {result.settings.warmupMinutes} min
+          warm-up. Each cell is the mean over {replications} replication{replications === 1 ? '' : 's'}.
         </p>
       </div>
-      <SpaceTimeHeatmap lanes={spaceTimeLanes(result)} timeBinSeconds={result.heatmaps.binSeconds} startMinutes={result.heatmaps.startSeconds / 60} exportName={`${fileBase}-space-time`} />
+      <SpaceTimeHeatmap
+        lanes={spaceTimeLanes(result)}
+        timeBinSeconds={result.heatmaps.binSeconds}
+        startMinutes={result.heatmaps.startSeconds / 60}
+        exportName={`${fileBase}-space-time`}
+      />
       <StationStateTimeline
         stations={timeline.stations}
         states={timeline.states}

@@ -25,18 +25,48 @@ interface Bar {
   overflow?: boolean;
 }
 
-export function LeadTimeHistogram({ leadTime, exportName }: { leadTime: RunResult['leadTimeSeconds']; exportName: string }) {
+export function LeadTimeHistogram({
+  leadTime,
+  exportName,
+}: {
+  leadTime: RunResult['leadTimeSeconds'];
+  exportName: string;
+}) {
   const shell = useChartShell();
   const { binWidthSeconds: width, counts } = leadTime.histogram;
   const clipped = clipHistogram(counts, width);
-  if (clipped.total === 0 || !(width > 0)) return <ChartMessage title={TITLE} tone="empty" message="No part finished after warm-up, so there is no lead time to show." />;
+  if (clipped.total === 0 || !(width > 0))
+    return (
+      <ChartMessage
+        title={TITLE}
+        tone="empty"
+        message="No part finished after warm-up, so there is no lead time to show."
+      />
+    );
 
   const { overflow, total } = clipped;
-  const rows: Bar[] = clipped.counts.map((count, i) => ({ from: i * width, to: (i + 1) * width, count, label: `${formatNumber(i * width)}–${formatNumber((i + 1) * width)} s` }));
-  if (overflow) rows.push({ from: overflow.fromSeconds, to: overflow.fromSeconds + width, count: overflow.count, label: `≥ ${formatNumber(overflow.fromSeconds)} s`, overflow: true });
+  const rows: Bar[] = clipped.counts.map((count, i) => ({
+    from: i * width,
+    to: (i + 1) * width,
+    count,
+    label: `${formatNumber(i * width)}–${formatNumber((i + 1) * width)} s`,
+  }));
+  if (overflow)
+    rows.push({
+      from: overflow.fromSeconds,
+      to: overflow.fromSeconds + width,
+      count: overflow.count,
+      label: `≥ ${formatNumber(overflow.fromSeconds)} s`,
+      overflow: true,
+    });
   const plotWidth = plotWidthOf(shell.width, MARGIN);
-  const x = scaleLinear().domain([0, rows[rows.length - 1].to]).range([0, plotWidth]);
-  const y = scaleLinear().domain([0, (max(rows, (r) => r.count) ?? 1) * 1.05]).nice().range([PLOT_HEIGHT, 0]);
+  const x = scaleLinear()
+    .domain([0, rows[rows.length - 1].to])
+    .range([0, plotWidth]);
+  const y = scaleLinear()
+    .domain([0, (max(rows, (r) => r.count) ?? 1) * 1.05])
+    .nice()
+    .range([PLOT_HEIGHT, 0]);
   const clipNote = overflow
     ? `; the axis stops at the ${formatNumber(CLIP_QUANTILE * 100)}th percentile and the last bar gathers the ${formatNumber(overflow.count)} parts at ${formatNumber(overflow.fromSeconds)} s or more`
     : '';
@@ -47,15 +77,42 @@ export function LeadTimeHistogram({ leadTime, exportName }: { leadTime: RunResul
       title={TITLE}
       subtitle={`Mean ${formatSeconds(leadTime.mean)} s, median ${formatSeconds(leadTime.p50)} s, 95th percentile ${formatSeconds(leadTime.p95)} s; bins of ${formatNumber(width)} s${clipNote}`}
       summary={`Lead time of ${formatNumber(total)} parts across all replications, mean ${formatSeconds(leadTime.mean)} s.`}
-      legend={{ kind: 'swatches', items: [{ label: 'parts finished in each bin, all replications', swatch: { kind: 'box', fill: BAR_FILL, stroke: BAR_STROKE } }] }}
+      legend={{
+        kind: 'swatches',
+        items: [
+          {
+            label: 'parts finished in each bin, all replications',
+            swatch: { kind: 'box', fill: BAR_FILL, stroke: BAR_STROKE },
+          },
+        ],
+      }}
       margin={MARGIN}
       plotHeight={PLOT_HEIGHT}
-      table={{ caption: 'Parts per lead-time bin', columns: ['From (s)', 'To (s)', 'Parts'], rows: rows.map((r) => [formatNumber(r.from), r.overflow ? 'and beyond' : formatNumber(r.to), r.count]) }}
-      csv={() => ({ caption: 'Lead time', columns: ['bin_from_s', 'bin_to_s', 'parts'], rows: counts.map((count, i) => [i * width, (i + 1) * width, count]) })}
+      table={{
+        caption: 'Parts per lead-time bin',
+        columns: ['From (s)', 'To (s)', 'Parts'],
+        rows: rows.map((r) => [formatNumber(r.from), r.overflow ? 'and beyond' : formatNumber(r.to), r.count]),
+      }}
+      csv={() => ({
+        caption: 'Lead time',
+        columns: ['bin_from_s', 'bin_to_s', 'parts'],
+        rows: counts.map((count, i) => [i * width, (i + 1) * width, count]),
+      })}
       exportName={exportName}
     >
-      <AxisLeft ticks={linearTicks(y, PLOT_HEIGHT / 45, (v) => v.toLocaleString('en-GB'))} height={PLOT_HEIGHT} label="Parts (count)" gridWidth={plotWidth} labelOffset={48} />
-      <AxisBottom ticks={linearTicks(x, plotWidth / 80)} width={plotWidth} plotHeight={PLOT_HEIGHT} label="Lead time (s)" />
+      <AxisLeft
+        ticks={linearTicks(y, PLOT_HEIGHT / 45, (v) => v.toLocaleString('en-GB'))}
+        height={PLOT_HEIGHT}
+        label="Parts (count)"
+        gridWidth={plotWidth}
+        labelOffset={48}
+      />
+      <AxisBottom
+        ticks={linearTicks(x, plotWidth / 80)}
+        width={plotWidth}
+        plotHeight={PLOT_HEIGHT}
+        label="Lead time (s)"
+      />
       <g data-chart-part="marks">
         {rows.map(({ from, to, count, label, overflow: beyond }) => (
           <rect
@@ -74,7 +131,14 @@ export function LeadTimeHistogram({ leadTime, exportName }: { leadTime: RunResul
           />
         ))}
         {overflow && (
-          <text x={x(overflow.fromSeconds + width / 2)} y={y(overflow.count) - 4} textAnchor="middle" fontSize={11} fill="currentColor" data-overflow-label>
+          <text
+            x={x(overflow.fromSeconds + width / 2)}
+            y={y(overflow.count) - 4}
+            textAnchor="middle"
+            fontSize={11}
+            fill="currentColor"
+            data-overflow-label
+          >
             ≥ {formatNumber(overflow.fromSeconds)} s
           </text>
         )}

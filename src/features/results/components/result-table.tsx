@@ -1,6 +1,13 @@
 // A sortable table of one kind of result (stations, transfers, lanes) with its CSV download. The
 // screen shows rounded figures; the CSV carries the stored values unrounded.
-import { flexRender, getCoreRowModel, getSortedRowModel, useReactTable, type ColumnDef, type SortingState } from '@tanstack/react-table';
+import {
+  flexRender,
+  getCoreRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type ColumnDef,
+  type SortingState,
+} from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { Table, Td, Th } from '../../../components/ui/table';
 import { CsvButton } from './csv-button';
@@ -56,7 +63,12 @@ export function ResultTable<T>({ caption, rows, columns, rowKey, fileBase, empha
     <div className="flex flex-col gap-2">
       <div className="flex items-end justify-between gap-3">
         <h3 className="font-semibold text-ink">{caption}</h3>
-        <CsvButton what={caption} fileBase={fileBase} rows={rows} columns={columns.map((c) => ({ header: c.header, get: c.value }))} />
+        <CsvButton
+          what={caption}
+          fileBase={fileBase}
+          rows={rows}
+          columns={columns.map((c) => ({ header: c.header, get: c.value }))}
+        />
       </div>
       <Table caption={caption}>
         <thead>
@@ -65,8 +77,16 @@ export function ResultTable<T>({ caption, rows, columns, rowKey, fileBase, empha
               const sorted = header.column.getIsSorted();
               const numeric = columns.find((c) => c.id === header.id)?.numeric;
               return (
-                <Th key={header.id} aria-sort={sorted ? ARIA_SORT[sorted] : undefined} className={numeric ? 'text-right' : ''}>
-                  <button type="button" className="inline-flex items-center gap-1 hover:text-ink" onClick={header.column.getToggleSortingHandler()}>
+                <Th
+                  key={header.id}
+                  aria-sort={sorted ? ARIA_SORT[sorted] : undefined}
+                  className={numeric ? 'text-right' : ''}
+                >
+                  <button
+                    type="button"
+                    className="inline-flex items-center gap-1 hover:text-ink"
+                    onClick={header.column.getToggleSortingHandler()}
+                  >
                     {flexRender(header.column.columnDef.header, header.getContext())}
                     <span aria-hidden="true" className="text-xs">
                       {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}

@@ -19,7 +19,9 @@ function Item({ term, children }: { term: string; children: ReactNode }) {
 function breakText(results: RunDetail['results']): string {
   if (results.breakMinutesPerShift === 0) return 'none in the calendar';
   const minutes = results.breakMinutesPerShift === undefined ? '' : `${results.breakMinutesPerShift} min per shift; `;
-  return results.breakMode === 'wholeLine' ? `${minutes}stop the whole line (carriers halt, no station works)` : `${minutes}only manual stations that pause for breaks stop`;
+  return results.breakMode === 'wholeLine'
+    ? `${minutes}stop the whole line (carriers halt, no station works)`
+    : `${minutes}only manual stations that pause for breaks stop`;
 }
 
 /** `readOnlyView`: for a shared page, whose reader has no scenario to open and needs no names of the team. */
@@ -47,15 +49,23 @@ export function RunMetadata({ run, readOnlyView = false }: { run: RunDetail; rea
           <time dateTime={run.createdAt}>{formatDateTime(run.createdAt)}</time>
         </Item>
         <Item term="Simulated">
-          {settings.replications} replication{settings.replications === 1 ? '' : 's'} × {settings.hours} h after {settings.warmupMinutes} min warm-up
+          {settings.replications} replication{settings.replications === 1 ? '' : 's'} × {settings.hours} h after{' '}
+          {settings.warmupMinutes} min warm-up
         </Item>
-        <Item term="Carriers">{settings.carriers === undefined ? `${run.results.carriers.count} (as in the scenario)` : `${settings.carriers} (override)`}</Item>
-        <Item term="Conveyor">{run.results.conveyor === 'belt' ? 'belt or chain conveyor (baseline)' : 'independent carriers'}</Item>
+        <Item term="Carriers">
+          {settings.carriers === undefined
+            ? `${run.results.carriers.count} (as in the scenario)`
+            : `${settings.carriers} (override)`}
+        </Item>
+        <Item term="Conveyor">
+          {run.results.conveyor === 'belt' ? 'belt or chain conveyor (baseline)' : 'independent carriers'}
+        </Item>
         <Item term="Breaks">{breakText(run.results)}</Item>
         <Item term="Events simulated">{run.results.events.toLocaleString('en-GB')}</Item>
       </dl>
       <p className="text-sm text-ink-soft">
-        Running revision {run.revisionNumber} again with seed {run.seed} and these settings on engine {run.engineVersion} gives the same figures, in this browser or with{' '}
+        Running revision {run.revisionNumber} again with seed {run.seed} and these settings on engine{' '}
+        {run.engineVersion} gives the same figures, in this browser or with{' '}
         <code className="font-mono text-xs">npm run simulate</code>.
       </p>
     </Card>

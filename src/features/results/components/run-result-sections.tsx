@@ -9,7 +9,15 @@ import { SafetyCaution } from './safety-caution';
 import { StationResults } from './station-results';
 import { TrackResults } from './track-results';
 
-export function RunResultSections({ result, stepNames, fileBase }: { result: RunResult; stepNames?: Map<string, string>; fileBase: string }) {
+export function RunResultSections({
+  result,
+  stepNames,
+  fileBase,
+}: {
+  result: RunResult;
+  stepNames?: Map<string, string>;
+  fileBase: string;
+}) {
   return (
     <>
       <SafetyCaution />

@@ -23,7 +23,13 @@ const stateColumns: ResultColumn<StationRow>[] = [
   { id: 'onBreak', header: 'On break', value: (s) => s.onBreak, format: formatPercent, numeric: true },
   { id: 'bottleneck', header: 'Bottleneck', value: (s) => s.bottleneckShare, format: formatPercent, numeric: true },
   { id: 'sole', header: 'Sole bottleneck', value: (s) => s.soleBottleneckShare, format: formatPercent, numeric: true },
-  { id: 'shifting', header: 'Shifting bottleneck', value: (s) => s.shiftingBottleneckShare, format: formatPercent, numeric: true },
+  {
+    id: 'shifting',
+    header: 'Shifting bottleneck',
+    value: (s) => s.shiftingBottleneckShare,
+    format: formatPercent,
+    numeric: true,
+  },
 ];
 
 /** What each station did: its work content, output, failures and the carriers waiting for it. */
@@ -32,7 +38,13 @@ const workColumns: ResultColumn<StationRow>[] = [
   { id: 'step', header: 'Step', value: (s) => s.stepName },
   { id: 'lane', header: 'Lane', value: (s) => s.laneName },
   { id: 'cycle', header: 'Mean cycle (s)', value: (s) => s.meanCycleSeconds, format: formatTakt, numeric: true },
-  { id: 'operations', header: 'Operations per hour', value: (s) => s.operationsPerHour, format: formatMean2, numeric: true },
+  {
+    id: 'operations',
+    header: 'Operations per hour',
+    value: (s) => s.operationsPerHour,
+    format: formatMean2,
+    numeric: true,
+  },
   { id: 'failures', header: 'Failures per hour', value: (s) => s.failuresPerHour, format: formatMean2, numeric: true },
   { id: 'queue', header: 'Mean queue (carriers)', value: (s) => s.meanQueue, format: formatMean2, numeric: true },
 ];
@@ -40,10 +52,15 @@ const workColumns: ResultColumn<StationRow>[] = [
 function bottleneckSentence(result: RunResult): string {
   const station = result.stations.find((s) => s.id === result.bottleneckStationId);
   if (!station) return 'No station stood out as the bottleneck in this run.';
-  const others = result.stations.filter((s) => s.id !== station.id && s.bottleneckShare > 0).sort((a, b) => b.bottleneckShare - a.bottleneckShare);
-  const runnerUp = others[0] ? ` Next most often: ${others[0].name} (${formatPercent(others[0].bottleneckShare)}).` : '';
+  const others = result.stations
+    .filter((s) => s.id !== station.id && s.bottleneckShare > 0)
+    .sort((a, b) => b.bottleneckShare - a.bottleneckShare);
+  const runnerUp = others[0]
+    ? ` Next most often: ${others[0].name} (${formatPercent(others[0].bottleneckShare)}).`
+    : '';
   const transfer = result.transfers.find((t) => t.id === result.bottleneckTransferId);
-  if (transfer) return `${transfer.name}, a transfer, held the line more often than any station (see Transfers). Among the stations, ${station.name} came first.${runnerUp}`;
+  if (transfer)
+    return `${transfer.name}, a transfer, held the line more often than any station (see Transfers). Among the stations, ${station.name} came first.${runnerUp}`;
   return (
     `${station.name} is the bottleneck: the sole bottleneck ${formatPercent(station.soleBottleneckShare)} of the time, and shifting with another station a further ` +
     `${formatPercent(station.shiftingBottleneckShare)}.${runnerUp}`
@@ -76,7 +93,12 @@ export function StationResults({ result, stepNames, fileBase }: StationResultsPr
       <p className="max-w-prose text-ink" data-testid="bottleneck-sentence">
         {bottleneckSentence(result)}
       </p>
-      <StationStateBars stations={stationBars(result)} bottleneckId={result.bottleneckStationId} bottleneckShare={bottleneck?.bottleneckShare} exportName={`${fileBase}-station-states-chart`} />
+      <StationStateBars
+        stations={stationBars(result)}
+        bottleneckId={result.bottleneckStationId}
+        bottleneckShare={bottleneck?.bottleneckShare}
+        exportName={`${fileBase}-station-states-chart`}
+      />
       <ResultTable
         caption="Station time shares and bottleneck"
         rows={rows}

@@ -3,12 +3,18 @@
 import type { RunResult } from '../../../../shared/results/run-result';
 import type { SpaceTimeLane, StationStateBarsStation } from '../../../components/charts';
 
-const nameOf = (items: readonly { id: string; name: string }[], id: string) => items.find((item) => item.id === id)?.name ?? id;
+const nameOf = (items: readonly { id: string; name: string }[], id: string) =>
+  items.find((item) => item.id === id)?.name ?? id;
 
 export function spaceTimeLanes(result: RunResult): SpaceTimeLane[] {
   return result.heatmaps.lanes.map((heatmap) => {
     const lengthMm = result.lanes.find((lane) => lane.id === heatmap.laneId)?.lengthMm ?? heatmap.positionBins;
-    return { laneName: nameOf(result.lanes, heatmap.laneId), lengthMm, positionBinMm: lengthMm / heatmap.positionBins, values: heatmap.occupancy };
+    return {
+      laneName: nameOf(result.lanes, heatmap.laneId),
+      lengthMm,
+      positionBinMm: lengthMm / heatmap.positionBins,
+      values: heatmap.occupancy,
+    };
   });
 }
 

@@ -12,7 +12,11 @@ export interface ClippedHistogram {
 
 export const CLIP_QUANTILE = 0.99;
 
-export function clipHistogram(counts: readonly number[], binWidthSeconds: number, quantile = CLIP_QUANTILE): ClippedHistogram {
+export function clipHistogram(
+  counts: readonly number[],
+  binWidthSeconds: number,
+  quantile = CLIP_QUANTILE,
+): ClippedHistogram {
   let last = counts.length - 1;
   while (last >= 0 && counts[last] <= 0) last--;
   const kept = counts.slice(0, last + 1);
@@ -27,5 +31,9 @@ export function clipHistogram(counts: readonly number[], binWidthSeconds: number
   // Gathering only the final bin would change nothing a reader can see.
   if (cut >= kept.length - 2) return { counts: kept, overflow: null, total };
   const beyond = kept.slice(cut + 1).reduce((a, b) => a + b, 0);
-  return { counts: kept.slice(0, cut + 1), overflow: { fromSeconds: (cut + 1) * binWidthSeconds, count: beyond }, total };
+  return {
+    counts: kept.slice(0, cut + 1),
+    overflow: { fromSeconds: (cut + 1) * binWidthSeconds, count: beyond },
+    total,
+  };
 }

@@ -7,13 +7,18 @@ import { api } from '../../../lib/api-client';
 import { scenarioKeys } from '../../../lib/query-keys/scenarios';
 import { runKeys } from '../../../lib/query-keys/runs';
 
-export const createRun = (scenarioId: string, input: CreateRunInput) => api.post(apiRoutes.scenarioRuns(scenarioId), input, runListItemSchema);
+export const createRun = (scenarioId: string, input: CreateRunInput) =>
+  api.post(apiRoutes.scenarioRuns(scenarioId), input, runListItemSchema);
 
 export function useCreateRun() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ scenarioId, input }: { scenarioId: string; input: CreateRunInput }) => createRun(scenarioId, input),
     // Scenario summaries carry a run count.
-    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: runKeys.lists() }), queryClient.invalidateQueries({ queryKey: scenarioKeys.all })]),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: runKeys.lists() }),
+        queryClient.invalidateQueries({ queryKey: scenarioKeys.all }),
+      ]),
   });
 }

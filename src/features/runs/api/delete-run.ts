@@ -14,7 +14,10 @@ export function useDeleteRun() {
     mutationFn: (id: string) => deleteRun(id),
     onSuccess: (_ok, id) => {
       queryClient.removeQueries({ queryKey: runKeys.detail(id) });
-      return Promise.all([queryClient.invalidateQueries({ queryKey: runKeys.lists() }), queryClient.invalidateQueries({ queryKey: scenarioKeys.all })]);
+      return Promise.all([
+        queryClient.invalidateQueries({ queryKey: runKeys.lists() }),
+        queryClient.invalidateQueries({ queryKey: scenarioKeys.all }),
+      ]);
     },
   });
 }

@@ -9,7 +9,11 @@ import { runKeys, type RunListScope } from '../../../lib/query-keys/runs';
 const runListSchema = z.array(runListItemSchema);
 
 export const getRuns = (scope: RunListScope, signal?: AbortSignal) =>
-  api.get('scenarioId' in scope ? apiRoutes.scenarioRuns(scope.scenarioId) : apiRoutes.projectRuns(scope.projectId), runListSchema, { signal });
+  api.get(
+    'scenarioId' in scope ? apiRoutes.scenarioRuns(scope.scenarioId) : apiRoutes.projectRuns(scope.projectId),
+    runListSchema,
+    { signal },
+  );
 
 export const runsQueryOptions = (scope: RunListScope) =>
   queryOptions({

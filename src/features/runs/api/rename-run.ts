@@ -12,6 +12,9 @@ export function useRenameRun() {
   return useMutation({
     mutationFn: ({ id, name }: { id: string; name: string }) => renameRun(id, name),
     onSuccess: (_run, { id }) =>
-      Promise.all([queryClient.invalidateQueries({ queryKey: runKeys.lists() }), queryClient.invalidateQueries({ queryKey: runKeys.detail(id) })]),
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: runKeys.lists() }),
+        queryClient.invalidateQueries({ queryKey: runKeys.detail(id) }),
+      ]),
   });
 }

@@ -11,11 +11,13 @@ export function RerunStatus({ rerun }: { rerun: ReturnType<typeof useRerun> }) {
   return (
     <section aria-label="Rerun" className="flex flex-col gap-2 rounded-md border border-paper-sunk bg-paper p-3">
       <p className="text-sm text-ink">
-        Rerunning <strong>{source.name}</strong>: revision {source.revisionNumber}, seed {String(source.settings.seed)}, {source.settings.replications} ×{' '}
-        {source.settings.hours} h.
+        Rerunning <strong>{source.name}</strong>: revision {source.revisionNumber}, seed {String(source.settings.seed)},{' '}
+        {source.settings.replications} × {source.settings.hours} h.
       </p>
       {loadError !== null && <LoadError what="the revision to rerun" error={loadError} />}
-      {simulation.status === 'running' && <SimulationProgress progress={simulation.progress} onCancel={simulation.cancel} />}
+      {simulation.status === 'running' && (
+        <SimulationProgress progress={simulation.progress} onCancel={simulation.cancel} />
+      )}
       <SimulationProblem outcome={simulation.outcome} />
       <SaveStatus save={save} onRetry={retrySave} />
     </section>

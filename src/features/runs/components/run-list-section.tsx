@@ -25,5 +25,7 @@ export function RunListSection({ scope, organisationId, caption }: RunListSectio
       </EmptyState>
     );
   }
-  return <RunsTable runs={runs.data} organisationId={organisationId} showScenario={'projectId' in scope} caption={caption} />;
+  return (
+    <RunsTable runs={runs.data} organisationId={organisationId} showScenario={'projectId' in scope} caption={caption} />
+  );
 }

@@ -39,7 +39,12 @@ export function RunNameCell({ run, mayRename }: { run: RunListItem; mayRename: b
           {run.name}
         </Link>
         {mayRename && (
-          <button type="button" className="text-xs text-ink-soft underline underline-offset-2 hover:text-ink" aria-label={`Rename ${run.name}`} onClick={() => setEditing(true)}>
+          <button
+            type="button"
+            className="text-xs text-ink-soft underline underline-offset-2 hover:text-ink"
+            aria-label={`Rename ${run.name}`}
+            onClick={() => setEditing(true)}
+          >
             Rename
           </button>
         )}

@@ -26,10 +26,19 @@ export interface RunPanelProps {
   openResultWhenSaved?: boolean;
 }
 
-export function RunPanel({ scenarioId, organisationId, revision, onScenarioIssues, openResultWhenSaved = true }: RunPanelProps) {
+export function RunPanel({
+  scenarioId,
+  organisationId,
+  revision,
+  onScenarioIssues,
+  openResultWhenSaved = true,
+}: RunPanelProps) {
   const mayRun = useCanEdit(organisationId);
   const navigate = useNavigate();
-  const onSaved = useCallback((run: RunListItem) => openResultWhenSaved && navigate(`/runs/${run.id}`), [navigate, openResultWhenSaved]);
+  const onSaved = useCallback(
+    (run: RunListItem) => openResultWhenSaved && navigate(`/runs/${run.id}`),
+    [navigate, openResultWhenSaved],
+  );
   const { simulation, save, run, retrySave } = useRunAndSave(onSaved);
   const outcome = simulation.outcome;
   const issues = useMemo(() => splitSettingsIssues(outcome?.status === 'invalid' ? outcome.issues : []), [outcome]);
@@ -43,17 +52,28 @@ export function RunPanel({ scenarioId, organisationId, revision, onScenarioIssue
     if (result.status === 'invalid') onScenarioIssues?.(splitSettingsIssues(result.issues).scenario);
   };
   const running = simulation.status === 'running';
-  const problem = outcome?.status === 'invalid' ? (issues.scenario.length > 0 ? { ...outcome, issues: issues.scenario } : null) : outcome;
+  const problem =
+    outcome?.status === 'invalid'
+      ? issues.scenario.length > 0
+        ? { ...outcome, issues: issues.scenario }
+        : null
+      : outcome;
 
   return (
     <Card aria-labelledby="run-panel-title" className="flex flex-col gap-4">
       <div className="flex flex-col gap-1">
         <CardTitle id="run-panel-title">Run revision {revision.number}</CardTitle>
         <p className="max-w-prose text-sm text-ink-soft">
-          The simulation runs in this browser tab; the result is saved with this revision, the seed and the engine version, so it can be repeated exactly.
+          The simulation runs in this browser tab; the result is saved with this revision, the seed and the engine
+          version, so it can be repeated exactly.
         </p>
       </div>
-      <RunSettingsForm scenarioCarriers={revision.document.carriers.count} running={running} engineIssues={issues.settings} onRun={(s) => void onRun(s)} />
+      <RunSettingsForm
+        scenarioCarriers={revision.document.carriers.count}
+        running={running}
+        engineIssues={issues.settings}
+        onRun={(s) => void onRun(s)}
+      />
       {running && <SimulationProgress progress={simulation.progress} onCancel={simulation.cancel} />}
       <SimulationProblem outcome={problem} />
       <SaveStatus save={save} onRetry={retrySave} />

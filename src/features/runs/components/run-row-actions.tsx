@@ -25,10 +25,20 @@ export function RunRowActions({ run, mayRerun, mayDelete, rerunBusy, onRerun, on
       <div role="group" aria-label={`Confirm deleting ${run.name}`} className="flex flex-col gap-1">
         <p className="text-sm">Delete this run and its results? This cannot be undone.</p>
         <div className="flex gap-2">
-          <Button className={`${SMALL} bg-danger hover:bg-danger`} pending={remove.isPending} pendingLabel="Deleting…" onClick={() => remove.mutate(run.id, { onSuccess: onDeleted })}>
+          <Button
+            className={`${SMALL} bg-danger hover:bg-danger`}
+            pending={remove.isPending}
+            pendingLabel="Deleting…"
+            onClick={() => remove.mutate(run.id, { onSuccess: onDeleted })}
+          >
             Delete run
           </Button>
-          <Button variant="secondary" className={SMALL} onClick={() => setConfirming(false)} disabled={remove.isPending}>
+          <Button
+            variant="secondary"
+            className={SMALL}
+            onClick={() => setConfirming(false)}
+            disabled={remove.isPending}
+          >
             Keep
           </Button>
         </div>
@@ -44,12 +54,23 @@ export function RunRowActions({ run, mayRerun, mayDelete, rerunBusy, onRerun, on
   return (
     <div className="flex gap-2 whitespace-nowrap">
       {mayRerun && onRerun && (
-        <Button variant="secondary" className={SMALL} disabled={rerunBusy} aria-label={`Rerun ${run.name}`} onClick={() => onRerun?.(run)}>
+        <Button
+          variant="secondary"
+          className={SMALL}
+          disabled={rerunBusy}
+          aria-label={`Rerun ${run.name}`}
+          onClick={() => onRerun?.(run)}
+        >
           Rerun
         </Button>
       )}
       {mayDelete && (
-        <Button variant="secondary" className={SMALL} aria-label={`Delete ${run.name}`} onClick={() => setConfirming(true)}>
+        <Button
+          variant="secondary"
+          className={SMALL}
+          aria-label={`Delete ${run.name}`}
+          onClick={() => setConfirming(true)}
+        >
           Delete
         </Button>
       )}

@@ -10,7 +10,8 @@ interface RunsFiltersProps {
   onChange: (values: RunFilterValues) => void;
 }
 
-const CONTROL = 'rounded-md border border-ink-faint bg-paper-raised px-2 py-1.5 text-sm text-ink focus-visible:outline-2 focus-visible:outline-accent';
+const CONTROL =
+  'rounded-md border border-ink-faint bg-paper-raised px-2 py-1.5 text-sm text-ink focus-visible:outline-2 focus-visible:outline-accent';
 const LABEL = 'flex flex-col gap-1 text-xs font-semibold text-ink-soft';
 
 interface NumberChoiceProps {
@@ -39,7 +40,8 @@ function NumberChoice({ label, values, value, onChange }: NumberChoiceProps) {
 
 export function RunsFilters({ runs, values, onChange }: RunsFiltersProps) {
   const choices = filterChoices(runs);
-  const set = (key: keyof RunFilterValues) => (event: { target: { value: string } }) => onChange({ ...values, [key]: event.target.value });
+  const set = (key: keyof RunFilterValues) => (event: { target: { value: string } }) =>
+    onChange({ ...values, [key]: event.target.value });
   const active = Object.values(values).some((v) => v !== '');
   return (
     <div role="group" aria-label="Filter runs" className="flex flex-wrap items-end gap-3">
@@ -69,11 +71,25 @@ export function RunsFilters({ runs, values, onChange }: RunsFiltersProps) {
       </label>
       <label className={LABEL}>
         Throughput at least (/h)
-        <input type="number" min={0} step="any" className={`${CONTROL} w-28`} value={values.minThroughput} onChange={set('minThroughput')} />
+        <input
+          type="number"
+          min={0}
+          step="any"
+          className={`${CONTROL} w-28`}
+          value={values.minThroughput}
+          onChange={set('minThroughput')}
+        />
       </label>
       <label className={LABEL}>
         Takt at most (s)
-        <input type="number" min={0} step="any" className={`${CONTROL} w-28`} value={values.maxTakt} onChange={set('maxTakt')} />
+        <input
+          type="number"
+          min={0}
+          step="any"
+          className={`${CONTROL} w-28`}
+          value={values.maxTakt}
+          onChange={set('maxTakt')}
+        />
       </label>
       {active && (
         <Button variant="quiet" onClick={() => onChange(NO_FILTERS)}>

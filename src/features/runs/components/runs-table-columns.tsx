@@ -19,10 +19,27 @@ interface ColumnOptions {
 
 export function runsColumns({ showScenario, showActions, name, actions }: ColumnOptions) {
   return [
-    column.accessor('name', { id: 'name', header: 'Run', sortingFn: 'alphanumeric', cell: (c) => name(c.row.original) }),
-    ...(showScenario ? [column.accessor('scenarioName', { id: 'scenario', header: 'Scenario', sortingFn: 'alphanumeric' })] : []),
-    column.accessor('revisionNumber', { id: 'revision', header: 'Revision', filterFn: equalsText, cell: (c) => `#${c.getValue()}` }),
-    column.accessor((run) => formatPerson(run.createdBy), { id: 'author', header: 'Author', filterFn: authorIs, sortingFn: 'alphanumeric' }),
+    column.accessor('name', {
+      id: 'name',
+      header: 'Run',
+      sortingFn: 'alphanumeric',
+      cell: (c) => name(c.row.original),
+    }),
+    ...(showScenario
+      ? [column.accessor('scenarioName', { id: 'scenario', header: 'Scenario', sortingFn: 'alphanumeric' })]
+      : []),
+    column.accessor('revisionNumber', {
+      id: 'revision',
+      header: 'Revision',
+      filterFn: equalsText,
+      cell: (c) => `#${c.getValue()}`,
+    }),
+    column.accessor((run) => formatPerson(run.createdBy), {
+      id: 'author',
+      header: 'Author',
+      filterFn: authorIs,
+      sortingFn: 'alphanumeric',
+    }),
     column.accessor('createdAt', {
       id: 'createdAt',
       header: 'Run at',
@@ -34,16 +51,28 @@ export function runsColumns({ showScenario, showActions, name, actions }: Column
       id: 'throughput',
       header: 'Throughput (/h)',
       filterFn: atLeast,
-      cell: (c) => <Figure value={formatPerHour(c.getValue())} interval={formatInterval(c.row.original.summary.throughputPerHour, formatPerHour)} />,
+      cell: (c) => (
+        <Figure
+          value={formatPerHour(c.getValue())}
+          interval={formatInterval(c.row.original.summary.throughputPerHour, formatPerHour)}
+        />
+      ),
     }),
     column.accessor((run) => run.summary.taktSeconds.mean, {
       id: 'takt',
       header: 'Takt (s)',
       filterFn: atMost,
-      cell: (c) => <Figure value={formatTakt(c.getValue())} interval={formatInterval(c.row.original.summary.taktSeconds, formatTakt)} />,
+      cell: (c) => (
+        <Figure
+          value={formatTakt(c.getValue())}
+          interval={formatInterval(c.row.original.summary.taktSeconds, formatTakt)}
+        />
+      ),
     }),
     column.accessor((run) => run.summary.carriers, { id: 'carriers', header: 'Carriers', filterFn: equalsText }),
-    ...(showActions ? [column.display({ id: 'actions', header: 'Actions', cell: (c) => actions(c.row.original) })] : []),
+    ...(showActions
+      ? [column.display({ id: 'actions', header: 'Actions', cell: (c) => actions(c.row.original) })]
+      : []),
   ];
 }
 

@@ -1,6 +1,13 @@
 // Stored runs of a scenario or a project: sortable by every figure, filterable by author,
 // revision, carriers, date, throughput and takt; open, rename, delete and rerun in place.
-import { flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
+import {
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type SortingState,
+} from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import type { RunListItem } from '../../../../shared/api/runs';
 import { Table, Td, Th } from '../../../components/ui/table';
@@ -36,7 +43,15 @@ export function RunsTable({ runs, organisationId, showScenario = false, caption 
         showScenario,
         showActions: mayRun || runs.some(mayChange),
         name: (run) => <RunNameCell run={run} mayRename={mayChange(run)} />,
-        actions: (run) => <RunRowActions run={run} mayRerun={mayRun} mayDelete={mayChange(run)} rerunBusy={rerun.busy} onRerun={(r) => void rerun.rerun(r)} />,
+        actions: (run) => (
+          <RunRowActions
+            run={run}
+            mayRerun={mayRun}
+            mayDelete={mayChange(run)}
+            rerunBusy={rerun.busy}
+            onRerun={(r) => void rerun.rerun(r)}
+          />
+        ),
       }),
     [showScenario, mayChange, mayRun, rerun, runs],
   );
@@ -66,7 +81,11 @@ export function RunsTable({ runs, organisationId, showScenario = false, caption 
                 return (
                   <Th key={header.id} aria-sort={sorted ? ARIA_SORT[sorted] : undefined} className="whitespace-nowrap">
                     {header.column.getCanSort() ? (
-                      <button type="button" className="inline-flex items-center gap-1 hover:text-ink" onClick={header.column.getToggleSortingHandler()}>
+                      <button
+                        type="button"
+                        className="inline-flex items-center gap-1 hover:text-ink"
+                        onClick={header.column.getToggleSortingHandler()}
+                      >
                         {label}
                         <span aria-hidden="true" className="text-xs">
                           {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}
@@ -91,7 +110,9 @@ export function RunsTable({ runs, organisationId, showScenario = false, caption 
           ))}
         </tbody>
       </Table>
-      {rows.length === 0 && <p className="text-sm text-ink-soft">{runs.length === 0 ? 'No runs yet.' : 'No run matches these filters.'}</p>}
+      {rows.length === 0 && (
+        <p className="text-sm text-ink-soft">{runs.length === 0 ? 'No runs yet.' : 'No run matches these filters.'}</p>
+      )}
     </div>
   );
 }

@@ -20,8 +20,8 @@ export function SaveStatus({ save, onRetry }: { save: SaveState; onRetry: () => 
             </Button>
           }
         >
-          {save.error instanceof Error ? save.error.message : 'Something unexpected went wrong.'} The result is kept on this page until it is saved; saving
-          again cannot store it twice.
+          {save.error instanceof Error ? save.error.message : 'Something unexpected went wrong.'} The result is kept on
+          this page until it is saved; saving again cannot store it twice.
         </ErrorBanner>
       );
     case 'saved':

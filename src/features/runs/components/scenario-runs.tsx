@@ -2,7 +2,13 @@
 import { Card, CardTitle } from '../../../components/ui/card';
 import { RunListSection } from './run-list-section';
 
-export function ScenarioRuns({ scenarioId, organisationId }: { scenarioId: string; organisationId: string | undefined }) {
+export function ScenarioRuns({
+  scenarioId,
+  organisationId,
+}: {
+  scenarioId: string;
+  organisationId: string | undefined;
+}) {
   return (
     <Card aria-labelledby="scenario-runs-title" className="flex flex-col gap-4">
       <CardTitle id="scenario-runs-title">Runs</CardTitle>

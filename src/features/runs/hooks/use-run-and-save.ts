@@ -20,7 +20,11 @@ interface PendingSave {
   input: CreateRunInput;
 }
 
-export type SaveState = { status: 'idle' } | ({ status: 'saving' } & PendingSave) | ({ status: 'failed'; error: unknown } & PendingSave) | { status: 'saved'; run: RunListItem };
+export type SaveState =
+  | { status: 'idle' }
+  | ({ status: 'saving' } & PendingSave)
+  | ({ status: 'failed'; error: unknown } & PendingSave)
+  | { status: 'saved'; run: RunListItem };
 
 /** Names runs apart in a list before anyone renames them: revision, length, seed and any carrier override. */
 export function defaultRunName(revisionNumber: number, settings: RunSettings): string {
@@ -52,7 +56,13 @@ export function useRunAndSave(onSaved?: (run: RunListItem) => void) {
       setSave({ status: 'idle' });
       const outcome = await simulation.start(revision.document, settings);
       if (outcome.status === 'finished') {
-        const input = { clientRunId: crypto.randomUUID(), revisionId: revision.id, name: defaultRunName(revision.number, settings), settings, results: outcome.result };
+        const input = {
+          clientRunId: crypto.randomUUID(),
+          revisionId: revision.id,
+          name: defaultRunName(revision.number, settings),
+          settings,
+          results: outcome.result,
+        };
         await attemptSave({ scenarioId, input });
       }
       return outcome;

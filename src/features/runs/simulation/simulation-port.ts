@@ -17,16 +17,26 @@ export type OpenSimulationPort = () => SimulationPort;
 
 /** A port that records a playback window instead of running an experiment. */
 export interface PlaybackPort {
-  playback(scenario: unknown, settings: unknown, request: unknown, onProgress: (progress: Progress) => void): Promise<PlaybackOutcome>;
+  playback(
+    scenario: unknown,
+    settings: unknown,
+    request: unknown,
+    onProgress: (progress: Progress) => void,
+  ): Promise<PlaybackOutcome>;
   terminate(): void;
 }
 
 function spawnWorker() {
-  const worker = new Worker(new URL('../../../../workers/simulation.worker.ts', import.meta.url), { type: 'module', name: 'lanewright-simulation' });
+  const worker = new Worker(new URL('../../../../workers/simulation.worker.ts', import.meta.url), {
+    type: 'module',
+    name: 'lanewright-simulation',
+  });
   const remote = Comlink.wrap<SimulationWorkerApi>(worker);
   // A worker that fails to load or crashes answers nothing over comlink; its error event is the only news.
   const crashed = new Promise<never>((_, reject) => {
-    worker.addEventListener('error', (event) => reject(new Error(event.message || 'the simulation worker stopped unexpectedly')));
+    worker.addEventListener('error', (event) =>
+      reject(new Error(event.message || 'the simulation worker stopped unexpectedly')),
+    );
   });
   crashed.catch(() => undefined);
   const terminate = () => {
@@ -47,7 +57,8 @@ export const openWorkerPort: OpenSimulationPort = () => {
 export const openPlaybackPort = (): PlaybackPort => {
   const { remote, crashed, terminate } = spawnWorker();
   return {
-    playback: (scenario, settings, request, onProgress) => Promise.race([remote.playback(scenario, settings, request, Comlink.proxy(onProgress)), crashed]),
+    playback: (scenario, settings, request, onProgress) =>
+      Promise.race([remote.playback(scenario, settings, request, Comlink.proxy(onProgress)), crashed]),
     terminate,
   };
 };

@@ -13,7 +13,14 @@ export interface RunFilterValues {
   maxTakt: string;
 }
 
-export const NO_FILTERS: RunFilterValues = { author: '', revision: '', carriers: '', since: '', minThroughput: '', maxTakt: '' };
+export const NO_FILTERS: RunFilterValues = {
+  author: '',
+  revision: '',
+  carriers: '',
+  since: '',
+  minThroughput: '',
+  maxTakt: '',
+};
 
 export const FILTER_COLUMN: Record<keyof RunFilterValues, string> = {
   author: 'author',
@@ -26,9 +33,12 @@ export const FILTER_COLUMN: Record<keyof RunFilterValues, string> = {
 
 const number = (text: unknown) => (typeof text === 'string' && text.trim() !== '' ? Number(text) : NaN);
 
-export const equalsText: FilterFn<RunListItem> = (row, columnId, wanted) => String(row.getValue(columnId)) === String(wanted);
-export const atLeast: FilterFn<RunListItem> = (row, columnId, wanted) => !Number.isFinite(number(wanted)) || Number(row.getValue(columnId)) >= number(wanted);
-export const atMost: FilterFn<RunListItem> = (row, columnId, wanted) => !Number.isFinite(number(wanted)) || Number(row.getValue(columnId)) <= number(wanted);
+export const equalsText: FilterFn<RunListItem> = (row, columnId, wanted) =>
+  String(row.getValue(columnId)) === String(wanted);
+export const atLeast: FilterFn<RunListItem> = (row, columnId, wanted) =>
+  !Number.isFinite(number(wanted)) || Number(row.getValue(columnId)) >= number(wanted);
+export const atMost: FilterFn<RunListItem> = (row, columnId, wanted) =>
+  !Number.isFinite(number(wanted)) || Number(row.getValue(columnId)) <= number(wanted);
 /** `wanted` is a yyyy-mm-dd day in the user's time zone; runs from the start of that day on pass. */
 export const sinceDay: FilterFn<RunListItem> = (row, columnId, wanted) => {
   const from = typeof wanted === 'string' && wanted ? new Date(`${wanted}T00:00:00`).getTime() : NaN;
@@ -36,7 +46,9 @@ export const sinceDay: FilterFn<RunListItem> = (row, columnId, wanted) => {
 };
 
 export function columnFiltersOf(values: RunFilterValues) {
-  return (Object.keys(values) as (keyof RunFilterValues)[]).filter((key) => values[key].trim() !== '').map((key) => ({ id: FILTER_COLUMN[key], value: values[key] }));
+  return (Object.keys(values) as (keyof RunFilterValues)[])
+    .filter((key) => values[key].trim() !== '')
+    .map((key) => ({ id: FILTER_COLUMN[key], value: values[key] }));
 }
 
 export function filterChoices(runs: readonly RunListItem[]) {
@@ -52,4 +64,5 @@ export function filterChoices(runs: readonly RunListItem[]) {
   };
 }
 
-export const authorIs: FilterFn<RunListItem> = (row, _columnId, wanted) => (row.original.createdBy?.id ?? '') === wanted;
+export const authorIs: FilterFn<RunListItem> = (row, _columnId, wanted) =>
+  (row.original.createdBy?.id ?? '') === wanted;

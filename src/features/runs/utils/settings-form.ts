@@ -21,7 +21,8 @@ export function settingsMessage(field: SettingsField, message: string): string {
 }
 
 /** Number inputs hand over text; an empty box is "not given", anything else is left for the schema to judge. */
-export const numberOrUndefined = (value: unknown) => (value === '' || value === null || value === undefined ? undefined : Number(value));
+export const numberOrUndefined = (value: unknown) =>
+  value === '' || value === null || value === undefined ? undefined : Number(value);
 
 /** A seed of digits only is a number (as the CLI reads it); anything else is kept as text. */
 export function seedFromText(value: unknown): string | number {
@@ -34,7 +35,10 @@ export function newSeed(): number {
 }
 
 /** Engine issues about the settings come back as "settings.<field>"; the rest belong to the scenario. */
-export function splitSettingsIssues(issues: readonly FieldIssue[]): { settings: { field: SettingsField; message: string }[]; scenario: FieldIssue[] } {
+export function splitSettingsIssues(issues: readonly FieldIssue[]): {
+  settings: { field: SettingsField; message: string }[];
+  scenario: FieldIssue[];
+} {
   const settings: { field: SettingsField; message: string }[] = [];
   const scenario: FieldIssue[] = [];
   for (const issue of issues) {

@@ -5,7 +5,8 @@ import { scenarioDetailSchema } from '../../../../shared/api/scenarios';
 import { api } from '../../../lib/api-client';
 import { scenarioKeys } from '../../../lib/query-keys/scenarios';
 
-export const getScenario = (id: string, signal?: AbortSignal) => api.get(apiRoutes.scenario(id), scenarioDetailSchema, { signal });
+export const getScenario = (id: string, signal?: AbortSignal) =>
+  api.get(apiRoutes.scenario(id), scenarioDetailSchema, { signal });
 
 export const scenarioQueryOptions = (id: string) =>
   queryOptions({

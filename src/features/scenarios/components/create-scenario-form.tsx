@@ -54,14 +54,19 @@ export function CreateScenarioForm({ projectId, existing, onCreated, onCancel }:
   const first = exampleScenarios[0];
   const form = useForm({
     resolver: zodResolver(createScenarioFormSchema),
-    defaultValues: { name: first?.document.name ?? '', description: first?.document.description ?? '', source: first ? `${EXAMPLE}${first.id}` : '' },
+    defaultValues: {
+      name: first?.document.name ?? '',
+      description: first?.document.description ?? '',
+      source: first ? `${EXAMPLE}${first.id}` : '',
+    },
   });
   const { errors } = form.formState;
   const createScenario = useCreateScenario(projectId);
   const queryClient = useQueryClient();
 
   const documentFor = async (source: string) => {
-    if (source.startsWith(COPY)) return (await queryClient.fetchQuery(scenarioQueryOptions(source.slice(COPY.length)))).document;
+    if (source.startsWith(COPY))
+      return (await queryClient.fetchQuery(scenarioQueryOptions(source.slice(COPY.length)))).document;
     const example = exampleScenarios.find((e) => `${EXAMPLE}${e.id}` === source);
     if (!example) throw new Error('The chosen starting point is no longer available; pick another.');
     return example.document;
@@ -77,7 +82,13 @@ export function CreateScenarioForm({ projectId, existing, onCreated, onCancel }:
 
   const { onSubmit, failure } = useApiFormSubmit(form, FIELDS, async ({ source, name, description }) => {
     const document = await documentFor(source);
-    onCreated(await createScenario.mutateAsync({ name, description, document: { ...document, name, description: description ?? document.description } }));
+    onCreated(
+      await createScenario.mutateAsync({
+        name,
+        description,
+        document: { ...document, name, description: description ?? document.description },
+      }),
+    );
   });
 
   const sourceField = form.register('source', { onChange: (event) => onSourceChange(String(event.target.value)) });
@@ -85,7 +96,12 @@ export function CreateScenarioForm({ projectId, existing, onCreated, onCancel }:
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-2" aria-label="New scenario">
       <FormErrorBanner title="The scenario was not created" failure={failure} />
-      <SelectField label="Start from" hint="Every scenario begins as a complete layout you can then change." error={errors.source?.message} {...sourceField}>
+      <SelectField
+        label="Start from"
+        hint="Every scenario begins as a complete layout you can then change."
+        error={errors.source?.message}
+        {...sourceField}
+      >
         <option value="">Choose a starting layout…</option>
         {exampleScenarios.length > 0 && (
           <optgroup label="Example layouts">
@@ -108,9 +124,17 @@ export function CreateScenarioForm({ projectId, existing, onCreated, onCancel }:
       </SelectField>
       <SourceNote source={form.watch('source')} existing={existing} />
       <TextField label="Scenario name" error={errors.name?.message} {...form.register('name')} />
-      <TextAreaField label="Description (optional)" error={errors.description?.message} {...form.register('description')} />
+      <TextAreaField
+        label="Description (optional)"
+        error={errors.description?.message}
+        {...form.register('description')}
+      />
       <div className="mt-2 flex flex-wrap gap-3">
-        <Button type="submit" pending={createScenario.isPending || form.formState.isSubmitting} pendingLabel="Creating…">
+        <Button
+          type="submit"
+          pending={createScenario.isPending || form.formState.isSubmitting}
+          pendingLabel="Creating…"
+        >
           Create scenario
         </Button>
         <Button variant="secondary" onClick={onCancel} disabled={createScenario.isPending}>

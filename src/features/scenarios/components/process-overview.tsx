@@ -19,7 +19,8 @@ export function ProcessOverview({ document }: { document: Scenario }) {
             <span className="font-mono text-sm text-ink-soft">{index + 1}.</span>
             <span className="font-semibold">{step.name}</span>
             <span className="text-sm text-ink-soft">
-              {stepKindLabel[step.kind]} · {step.stations.length === 1 ? '1 station' : `${step.stations.length} stations`}
+              {stepKindLabel[step.kind]} ·{' '}
+              {step.stations.length === 1 ? '1 station' : `${step.stations.length} stations`}
             </span>
           </p>
           <ul className="mt-2 flex flex-col gap-1 pl-6 text-sm">
@@ -27,8 +28,8 @@ export function ProcessOverview({ document }: { document: Scenario }) {
               <li key={station.id} className="flex flex-wrap gap-x-2">
                 <span className="font-medium">{station.name}</span>
                 <span className="text-ink-soft">
-                  on {laneName(station.laneId)} at {formatLengthMm(station.positionMm)} · mean cycle {formatSeconds(distributionMean(station.cycleTimeSeconds))} ·{' '}
-                  {station.operation}
+                  on {laneName(station.laneId)} at {formatLengthMm(station.positionMm)} · mean cycle{' '}
+                  {formatSeconds(distributionMean(station.cycleTimeSeconds))} · {station.operation}
                   {station.failures ? ' · with failures' : ''}
                 </span>
               </li>

@@ -17,7 +17,14 @@ interface RevisionHistoryProps {
   restoreBlocked?: string;
 }
 
-export function RevisionHistory({ scenarioId, revisions, latestNumber, onRestore, restoring = null, restoreBlocked }: RevisionHistoryProps) {
+export function RevisionHistory({
+  scenarioId,
+  revisions,
+  latestNumber,
+  onRestore,
+  restoring = null,
+  restoreBlocked,
+}: RevisionHistoryProps) {
   const newestFirst = [...revisions].sort((a, b) => b.number - a.number);
   return (
     <div className="flex flex-col gap-2">
@@ -39,7 +46,9 @@ export function RevisionHistory({ scenarioId, revisions, latestNumber, onRestore
             <tr key={revision.id}>
               <Td className="font-semibold whitespace-nowrap">
                 #{revision.number}
-                {revision.number === latestNumber && <span className="ml-2 text-xs font-medium text-accent-strong">latest</span>}
+                {revision.number === latestNumber && (
+                  <span className="ml-2 text-xs font-medium text-accent-strong">latest</span>
+                )}
               </Td>
               <Td className="text-ink-soft">{revision.message || 'No note'}</Td>
               <Td>{formatPerson(revision.createdBy)}</Td>
@@ -48,11 +57,20 @@ export function RevisionHistory({ scenarioId, revisions, latestNumber, onRestore
               </Td>
               <Td className="whitespace-nowrap">
                 <div className="flex items-center justify-end gap-3">
-                  <Link to={`/scenarios/${scenarioId}/revisions/${revision.number}`} className="text-sm font-semibold text-accent-strong underline underline-offset-4">
+                  <Link
+                    to={`/scenarios/${scenarioId}/revisions/${revision.number}`}
+                    className="text-sm font-semibold text-accent-strong underline underline-offset-4"
+                  >
                     Open<span className="sr-only"> revision {revision.number}</span>
                   </Link>
                   {onRestore && !restoreBlocked && revision.number !== latestNumber && (
-                    <Button variant="secondary" className="min-h-8 px-2 py-1" onClick={() => onRestore(revision.number)} pending={restoring === revision.number} pendingLabel="Restoring…">
+                    <Button
+                      variant="secondary"
+                      className="min-h-8 px-2 py-1"
+                      onClick={() => onRestore(revision.number)}
+                      pending={restoring === revision.number}
+                      pendingLabel="Restoring…"
+                    >
                       Restore<span className="sr-only"> revision {revision.number}</span>
                     </Button>
                   )}

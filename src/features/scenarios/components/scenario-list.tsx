@@ -5,7 +5,10 @@ import { formatCount, formatDateTime, formatPerson } from '../../../lib/format';
 
 export function ScenarioList({ scenarios }: { scenarios: ScenarioSummary[] }) {
   return (
-    <ul className="flex flex-col divide-y divide-paper-sunk rounded-lg border border-paper-sunk bg-paper-raised" aria-label="Scenarios">
+    <ul
+      className="flex flex-col divide-y divide-paper-sunk rounded-lg border border-paper-sunk bg-paper-raised"
+      aria-label="Scenarios"
+    >
       {scenarios.map((scenario) => (
         <li key={scenario.id}>
           <Link
@@ -14,7 +17,9 @@ export function ScenarioList({ scenarios }: { scenarios: ScenarioSummary[] }) {
           >
             <span className="flex min-w-0 flex-col gap-1">
               <span className="font-semibold text-accent-strong">{scenario.name}</span>
-              {scenario.description && <span className="line-clamp-2 text-sm text-ink-soft">{scenario.description}</span>}
+              {scenario.description && (
+                <span className="line-clamp-2 text-sm text-ink-soft">{scenario.description}</span>
+              )}
             </span>
             <span className="shrink-0 text-sm text-ink-soft">
               Revision {scenario.latestRevision.number} · {formatPerson(scenario.latestRevision.createdBy)},{' '}

@@ -15,19 +15,23 @@ function LineSummary({ document }: { document: Scenario }) {
   return (
     <ul className="flex flex-col gap-1 text-sm text-ink-soft">
       <li>
-        {carriers.count} carriers, each {formatLengthMm(carriers.lengthMm)} long with at least {formatLengthMm(carriers.minGapMm)} between them; top
-        speed loaded {formatLengthMm(carriers.loaded.vMaxMmPerS)}/s{carriers.empty ? `, empty ${formatLengthMm(carriers.empty.vMaxMmPerS)}/s` : ''}.
+        {carriers.count} carriers, each {formatLengthMm(carriers.lengthMm)} long with at least{' '}
+        {formatLengthMm(carriers.minGapMm)} between them; top speed loaded {formatLengthMm(carriers.loaded.vMaxMmPerS)}
+        /s{carriers.empty ? `, empty ${formatLengthMm(carriers.empty.vMaxMmPerS)}/s` : ''}.
       </li>
       {conveyor.kind === 'belt' && (
         <li>
-          Baseline on a belt conveyor at {formatLengthMm(conveyor.speedMmPerS)}/s, {seconds(conveyor.stopAndLocateSeconds)} to stop and locate at each
-          station.
+          Baseline on a belt conveyor at {formatLengthMm(conveyor.speedMmPerS)}/s,{' '}
+          {seconds(conveyor.stopAndLocateSeconds)} to stop and locate at each station.
         </li>
       )}
       <li>
-        {calendar.shiftsPerDay} × {calendar.hoursPerShift} h shifts, {calendar.daysPerWeek} days a week, {calendar.weeksPerYear} weeks a year
-        {calendar.breaks.length > 0 ? `, ${calendar.breaks.length} break${calendar.breaks.length === 1 ? '' : 's'} per shift` : ''}.
-        {targetTaktSeconds !== undefined && ` Target takt ${seconds(targetTaktSeconds)}.`}
+        {calendar.shiftsPerDay} × {calendar.hoursPerShift} h shifts, {calendar.daysPerWeek} days a week,{' '}
+        {calendar.weeksPerYear} weeks a year
+        {calendar.breaks.length > 0
+          ? `, ${calendar.breaks.length} break${calendar.breaks.length === 1 ? '' : 's'} per shift`
+          : ''}
+        .{targetTaktSeconds !== undefined && ` Target takt ${seconds(targetTaktSeconds)}.`}
       </li>
     </ul>
   );

@@ -15,7 +15,8 @@ export function TrackOverview({ document }: { document: Scenario }) {
         return (
           <div key={deck.id} className="flex flex-col gap-2">
             <h4 className="font-semibold text-ink">
-              {deck.name} <span className="font-normal text-ink-soft">· {formatLengthMm(deck.elevationMm)} above floor</span>
+              {deck.name}{' '}
+              <span className="font-normal text-ink-soft">· {formatLengthMm(deck.elevationMm)} above floor</span>
             </h4>
             {lanes.length === 0 ? (
               <p className="text-sm text-ink-soft">No lanes on this deck.</p>

@@ -16,7 +16,8 @@ export const useShares = (kind: ShareKind, subjectId: string) =>
 export function useCreateShare(kind: ShareKind, subjectId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (expiresInDays: number) => api.post(apiRoutes.shares, { kind, subjectId, expiresInDays }, createdShareSchema),
+    mutationFn: (expiresInDays: number) =>
+      api.post(apiRoutes.shares, { kind, subjectId, expiresInDays }, createdShareSchema),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: shareKeys.list(kind, subjectId) }),
   });
 }

@@ -24,7 +24,8 @@ export function SharePanel({ kind, subjectId, mayShare }: { kind: ShareKind; sub
     <Card aria-labelledby="share-title" className="flex flex-col gap-4">
       <CardTitle id="share-title">Share read-only</CardTitle>
       <p className="max-w-prose text-sm text-ink-soft">
-        A link lets anyone who has it see this {kind}&apos;s results without an account, and change nothing. Withdraw it any time.
+        A link lets anyone who has it see this {kind}&apos;s results without an account, and change nothing. Withdraw it
+        any time.
       </p>
       {failure && (
         <ErrorBanner title="Sharing did not work">
@@ -35,7 +36,11 @@ export function SharePanel({ kind, subjectId, mayShare }: { kind: ShareKind; sub
         <div className="flex flex-wrap items-end gap-3">
           <label className="flex flex-col gap-1 text-sm font-semibold">
             Link works for
-            <select value={days} onChange={(event) => setDays(Number(event.target.value))} className="rounded-md border border-ink-faint bg-paper-raised px-3 py-2 font-normal">
+            <select
+              value={days}
+              onChange={(event) => setDays(Number(event.target.value))}
+              className="rounded-md border border-ink-faint bg-paper-raised px-3 py-2 font-normal"
+            >
               {EXPIRY_CHOICES.map((choice) => (
                 <option key={choice} value={choice}>
                   {choice} day{choice === 1 ? '' : 's'}
@@ -43,7 +48,11 @@ export function SharePanel({ kind, subjectId, mayShare }: { kind: ShareKind; sub
               ))}
             </select>
           </label>
-          <Button pending={create.isPending} pendingLabel="Making…" onClick={() => create.mutate(days, { onSuccess: () => setCopied(false) })}>
+          <Button
+            pending={create.isPending}
+            pendingLabel="Making…"
+            onClick={() => create.mutate(days, { onSuccess: () => setCopied(false) })}
+          >
             Make a link
           </Button>
         </div>
@@ -52,8 +61,17 @@ export function SharePanel({ kind, subjectId, mayShare }: { kind: ShareKind; sub
         <div role="status" className="flex flex-col gap-2 rounded-md bg-accent-soft p-3">
           <p className="text-sm font-semibold text-ink">Copy this link now; it is not shown again.</p>
           <div className="flex flex-wrap items-center gap-2">
-            <input readOnly aria-label="Share link" value={create.data.url} onFocus={(event) => event.target.select()} className="min-w-0 flex-1 rounded-md border border-ink-faint bg-paper-raised px-2 py-1 font-mono text-xs" />
-            <Button variant="secondary" onClick={() => void navigator.clipboard?.writeText(create.data.url).then(() => setCopied(true))}>
+            <input
+              readOnly
+              aria-label="Share link"
+              value={create.data.url}
+              onFocus={(event) => event.target.select()}
+              className="min-w-0 flex-1 rounded-md border border-ink-faint bg-paper-raised px-2 py-1 font-mono text-xs"
+            />
+            <Button
+              variant="secondary"
+              onClick={() => void navigator.clipboard?.writeText(create.data.url).then(() => setCopied(true))}
+            >
               {copied ? 'Copied' : 'Copy'}
             </Button>
           </div>
@@ -77,14 +95,22 @@ export function SharePanel({ kind, subjectId, mayShare }: { kind: ShareKind; sub
                 <Td>{formatPerson(share.createdBy)}</Td>
                 <Td className="whitespace-nowrap">{formatDateTime(share.createdAt)}</Td>
                 <Td className="whitespace-nowrap">{formatDateTime(share.expiresAt)}</Td>
-                <Td className="whitespace-nowrap">{share.lastOpenedAt ? formatDateTime(share.lastOpenedAt) : 'not yet'}</Td>
+                <Td className="whitespace-nowrap">
+                  {share.lastOpenedAt ? formatDateTime(share.lastOpenedAt) : 'not yet'}
+                </Td>
                 <Td>
-                  <Badge tone={share.state === 'active' ? 'accent' : 'neutral'}>{share.state === 'revoked' ? 'withdrawn' : share.state}</Badge>
+                  <Badge tone={share.state === 'active' ? 'accent' : 'neutral'}>
+                    {share.state === 'revoked' ? 'withdrawn' : share.state}
+                  </Badge>
                 </Td>
                 {mayShare && (
                   <Td className="text-right">
                     {share.state === 'active' && (
-                      <Button variant="quiet" pending={revoke.isPending && revoke.variables === share.id} onClick={() => revoke.mutate(share.id)}>
+                      <Button
+                        variant="quiet"
+                        pending={revoke.isPending && revoke.variables === share.id}
+                        onClick={() => revoke.mutate(share.id)}
+                      >
                         Withdraw
                       </Button>
                     )}

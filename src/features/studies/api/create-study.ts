@@ -5,7 +5,8 @@ import { studyDetailSchema, type CreateStudyInput } from '../../../../shared/api
 import { api } from '../../../lib/api-client';
 import { studyKeys } from './keys';
 
-export const createStudy = (projectId: string, input: CreateStudyInput) => api.post(apiRoutes.projectStudies(projectId), input, studyDetailSchema);
+export const createStudy = (projectId: string, input: CreateStudyInput) =>
+  api.post(apiRoutes.projectStudies(projectId), input, studyDetailSchema);
 
 export function useCreateStudy(projectId: string) {
   const queryClient = useQueryClient();

@@ -4,4 +4,5 @@ import { apiRoutes } from '../../../../shared/api/routes';
 import { saveJobResultAnswerSchema, type SaveJobResultInput } from '../../../../shared/api/studies';
 import { api } from '../../../lib/api-client';
 
-export const saveJobResult = (studyId: string, input: SaveJobResultInput) => api.post(apiRoutes.studyResults(studyId), input, saveJobResultAnswerSchema);
+export const saveJobResult = (studyId: string, input: SaveJobResultInput) =>
+  api.post(apiRoutes.studyResults(studyId), input, saveJobResultAnswerSchema);

@@ -5,7 +5,8 @@ import { studyListItemSchema, type UpdateStudyInput } from '../../../../shared/a
 import { api } from '../../../lib/api-client';
 import { studyKeys } from './keys';
 
-export const updateStudy = (id: string, input: UpdateStudyInput) => api.patch(apiRoutes.study(id), input, studyListItemSchema);
+export const updateStudy = (id: string, input: UpdateStudyInput) =>
+  api.patch(apiRoutes.study(id), input, studyListItemSchema);
 
 export function useUpdateStudy(id: string) {
   const queryClient = useQueryClient();

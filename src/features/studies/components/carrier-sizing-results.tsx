@@ -8,17 +8,38 @@ import { CurveWithBand, type SweepPoint } from '../../../components/charts';
 import { Recommendation } from './recommendation';
 import { curveOf } from '../utils/curves';
 
-export function CarrierSizingResults({ study, stats, scenario }: { study: StudyDetail; stats: PointStatistics[]; scenario: Scenario }) {
-  const sized: SizingPoint[] = stats.map((s) => ({ carriers: study.points[s.index].changes.find((c) => c.path === 'carriers.count')?.value ?? Number.NaN, stats: s }));
+export function CarrierSizingResults({
+  study,
+  stats,
+  scenario,
+}: {
+  study: StudyDetail;
+  stats: PointStatistics[];
+  scenario: Scenario;
+}) {
+  const sized: SizingPoint[] = stats.map((s) => ({
+    carriers: study.points[s.index].changes.find((c) => c.path === 'carriers.count')?.value ?? Number.NaN,
+    stats: s,
+  }));
   const target = scenario.targetTaktSeconds ? 3600 / scenario.targetTaktSeconds : null;
   const stationNames = scenario.steps.flatMap((step) => step.stations.map((s) => s.name));
   const advice = recommendCarriers(sized, target, stationNames);
   const xOf = (s: PointStatistics) => sized[s.index].carriers;
   const throughput: SweepPoint[] = curveOf(stats, xOf, (s) => s.throughput);
-  const recommended = advice.kind === 'recommend' && throughput.some((p) => p.x === advice.carriers) ? advice.carriers : undefined;
+  const recommended =
+    advice.kind === 'recommend' && throughput.some((p) => p.x === advice.carriers) ? advice.carriers : undefined;
   return (
     <div className="flex flex-col gap-4">
-      <Recommendation tone={advice.kind === 'unreachable' ? 'caution' : 'accent'} title={advice.kind === 'recommend' ? `Recommended: ${advice.carriers} carriers` : advice.kind === 'unreachable' ? 'No carrier count reaches the target' : 'No recommendation yet'}>
+      <Recommendation
+        tone={advice.kind === 'unreachable' ? 'caution' : 'accent'}
+        title={
+          advice.kind === 'recommend'
+            ? `Recommended: ${advice.carriers} carriers`
+            : advice.kind === 'unreachable'
+              ? 'No carrier count reaches the target'
+              : 'No recommendation yet'
+        }
+      >
         {advice.text}
       </Recommendation>
       <CurveWithBand
@@ -29,13 +50,35 @@ export function CarrierSizingResults({ study, stats, scenario }: { study: StudyD
         yUnit="parts/h"
         recommendedX={recommended}
         recommendedLabel={recommended !== undefined ? `${recommended} carriers` : undefined}
-        reference={target ? { value: target, label: `target ${target.toFixed(1)} parts/h (takt ${scenario.targetTaktSeconds} s)` } : undefined}
+        reference={
+          target
+            ? { value: target, label: `target ${target.toFixed(1)} parts/h (takt ${scenario.targetTaktSeconds} s)` }
+            : undefined
+        }
         title="Throughput against carriers"
         exportName="carrier-sizing-throughput"
       />
       <div className="grid gap-4 lg:grid-cols-2">
-        <CurveWithBand points={curveOf(stats, xOf, (s) => s.wip)} xQuantity="Carriers" xUnit="count" yQuantity="WIP" yUnit="parts" plotHeight={180} title="Work in process against carriers" exportName="carrier-sizing-wip" />
-        <CurveWithBand points={curveOf(stats, xOf, (s) => s.leadSeconds)} xQuantity="Carriers" xUnit="count" yQuantity="Lead time" yUnit="s" plotHeight={180} title="Lead time against carriers" exportName="carrier-sizing-lead-time" />
+        <CurveWithBand
+          points={curveOf(stats, xOf, (s) => s.wip)}
+          xQuantity="Carriers"
+          xUnit="count"
+          yQuantity="WIP"
+          yUnit="parts"
+          plotHeight={180}
+          title="Work in process against carriers"
+          exportName="carrier-sizing-wip"
+        />
+        <CurveWithBand
+          points={curveOf(stats, xOf, (s) => s.leadSeconds)}
+          xQuantity="Carriers"
+          xUnit="count"
+          yQuantity="Lead time"
+          yUnit="s"
+          plotHeight={180}
+          title="Lead time against carriers"
+          exportName="carrier-sizing-lead-time"
+        />
       </div>
     </div>
   );

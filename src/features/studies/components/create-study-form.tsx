@@ -25,20 +25,36 @@ interface CreateStudyFormProps {
   onCreated: (study: StudyDetail) => void;
 }
 
-function AxisFields({ axis, index, scenario, onChange }: { axis: AxisForm; index: number; scenario: Scenario; onChange: (a: AxisForm) => void }) {
+function AxisFields({
+  axis,
+  index,
+  scenario,
+  onChange,
+}: {
+  axis: AxisForm;
+  index: number;
+  scenario: Scenario;
+  onChange: (a: AxisForm) => void;
+}) {
   const fields = useMemo(() => sweepableFields(scenario), [scenario]);
   const groups = [...new Set(fields.map((f) => f.group))];
   const chosen = fields.find((f) => f.path === axis.path);
   const set = (patch: Partial<AxisForm>) => onChange({ ...axis, ...patch });
   return (
     <fieldset className="grid gap-3 rounded-md border border-paper-sunk p-3 sm:grid-cols-2">
-      <legend className="px-1 text-sm font-semibold">{index === 0 ? 'Field to vary' : 'Second field (optional)'}</legend>
+      <legend className="px-1 text-sm font-semibold">
+        {index === 0 ? 'Field to vary' : 'Second field (optional)'}
+      </legend>
       <SelectField
         label="Field"
         value={axis.path}
         onChange={(e) => {
           const f = fields.find((x) => x.path === e.target.value);
-          set({ path: e.target.value, from: f ? String(Number((f.value * 0.8).toPrecision(4))) : '', to: f ? String(Number((f.value * 1.2).toPrecision(4))) : '' });
+          set({
+            path: e.target.value,
+            from: f ? String(Number((f.value * 0.8).toPrecision(4))) : '',
+            to: f ? String(Number((f.value * 1.2).toPrecision(4))) : '',
+          });
         }}
       >
         <option value="">{index === 0 ? 'Choose a field…' : 'None'}</option>
@@ -57,19 +73,37 @@ function AxisFields({ axis, index, scenario, onChange }: { axis: AxisForm; index
       </SelectField>
       {chosen && (
         <>
-          <SelectField label="Values" value={axis.mode} onChange={(e) => set({ mode: e.target.value as AxisForm['mode'] })}>
+          <SelectField
+            label="Values"
+            value={axis.mode}
+            onChange={(e) => set({ mode: e.target.value as AxisForm['mode'] })}
+          >
             <option value="range">Evenly spaced range</option>
             <option value="list">A list of values</option>
           </SelectField>
           {axis.mode === 'range' ? (
             <div className="grid grid-cols-3 gap-2 sm:col-span-2">
-              <TextField label="From" inputMode="decimal" value={axis.from} onChange={(e) => set({ from: e.target.value })} />
+              <TextField
+                label="From"
+                inputMode="decimal"
+                value={axis.from}
+                onChange={(e) => set({ from: e.target.value })}
+              />
               <TextField label="To" inputMode="decimal" value={axis.to} onChange={(e) => set({ to: e.target.value })} />
-              <TextField label="Values" inputMode="numeric" value={axis.count} onChange={(e) => set({ count: e.target.value })} />
+              <TextField
+                label="Values"
+                inputMode="numeric"
+                value={axis.count}
+                onChange={(e) => set({ count: e.target.value })}
+              />
             </div>
           ) : (
             <div className="sm:col-span-2">
-              <TextField label="Values, separated by commas" value={axis.list} onChange={(e) => set({ list: e.target.value })} />
+              <TextField
+                label="Values, separated by commas"
+                value={axis.list}
+                onChange={(e) => set({ list: e.target.value })}
+              />
             </div>
           )}
         </>
@@ -78,7 +112,15 @@ function AxisFields({ axis, index, scenario, onChange }: { axis: AxisForm; index
   );
 }
 
-export function CreateStudyForm({ projectId, scenarios, scenarioId, onScenarioChange, scenario, onCancel, onCreated }: CreateStudyFormProps) {
+export function CreateStudyForm({
+  projectId,
+  scenarios,
+  scenarioId,
+  onScenarioChange,
+  scenario,
+  onCancel,
+  onCreated,
+}: CreateStudyFormProps) {
   const [form, setForm] = useState<StudyForm>(() => defaultForm('carrierSizing', scenario));
   const [loadedFor, setLoadedFor] = useState<Scenario | undefined>(scenario);
   const create = useCreateStudy(projectId);
@@ -107,7 +149,12 @@ export function CreateStudyForm({ projectId, scenarios, scenarioId, onScenarioCh
             </option>
           ))}
         </SelectField>
-        <SelectField label="Question" value={form.kind} hint={KIND_HINTS[form.kind]} onChange={(e) => set({ ...defaultForm(e.target.value as StudyKind, scenario), name: form.name })}>
+        <SelectField
+          label="Question"
+          value={form.kind}
+          hint={KIND_HINTS[form.kind]}
+          onChange={(e) => set({ ...defaultForm(e.target.value as StudyKind, scenario), name: form.name })}
+        >
           {STUDY_KINDS.map((k) => (
             <option key={k} value={k}>
               {KIND_LABELS[k]}
@@ -115,25 +162,69 @@ export function CreateStudyForm({ projectId, scenarios, scenarioId, onScenarioCh
           ))}
         </SelectField>
       </div>
-      <TextField label="Name" placeholder={`${KIND_LABELS[form.kind]} of ${choice?.name ?? 'the scenario'}`} value={form.name} onChange={(e) => set({ name: e.target.value })} />
+      <TextField
+        label="Name"
+        placeholder={`${KIND_LABELS[form.kind]} of ${choice?.name ?? 'the scenario'}`}
+        value={form.name}
+        onChange={(e) => set({ name: e.target.value })}
+      />
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-        <TextField label="Hours per replication" inputMode="decimal" value={form.hours} onChange={(e) => set({ hours: e.target.value })} />
-        <TextField label="Warm-up (min)" inputMode="decimal" value={form.warmupMinutes} onChange={(e) => set({ warmupMinutes: e.target.value })} />
-        <TextField label="Replications" inputMode="numeric" value={form.replications} onChange={(e) => set({ replications: e.target.value })} />
+        <TextField
+          label="Hours per replication"
+          inputMode="decimal"
+          value={form.hours}
+          onChange={(e) => set({ hours: e.target.value })}
+        />
+        <TextField
+          label="Warm-up (min)"
+          inputMode="decimal"
+          value={form.warmupMinutes}
+          onChange={(e) => set({ warmupMinutes: e.target.value })}
+        />
+        <TextField
+          label="Replications"
+          inputMode="numeric"
+          value={form.replications}
+          onChange={(e) => set({ replications: e.target.value })}
+        />
         <TextField label="Seed" value={form.seed} onChange={(e) => set({ seed: e.target.value })} />
       </div>
       {!scenario && <p className="text-sm text-ink-soft">Loading the scenario…</p>}
       {scenario && form.kind === 'carrierSizing' && (
         <div className="grid grid-cols-3 gap-3">
-          <TextField label="Fewest carriers" hint="One per station" inputMode="numeric" value={form.carriersFrom} onChange={(e) => set({ carriersFrom: e.target.value })} />
-          <TextField label="Most carriers" hint="What the track holds" inputMode="numeric" value={form.carriersTo} onChange={(e) => set({ carriersTo: e.target.value })} />
-          <TextField label="Counts to try" hint="About this many" inputMode="numeric" value={form.carrierPoints} onChange={(e) => set({ carrierPoints: e.target.value })} />
+          <TextField
+            label="Fewest carriers"
+            hint="One per station"
+            inputMode="numeric"
+            value={form.carriersFrom}
+            onChange={(e) => set({ carriersFrom: e.target.value })}
+          />
+          <TextField
+            label="Most carriers"
+            hint="What the track holds"
+            inputMode="numeric"
+            value={form.carriersTo}
+            onChange={(e) => set({ carriersTo: e.target.value })}
+          />
+          <TextField
+            label="Counts to try"
+            hint="About this many"
+            inputMode="numeric"
+            value={form.carrierPoints}
+            onChange={(e) => set({ carrierPoints: e.target.value })}
+          />
         </div>
       )}
       {scenario && form.kind === 'sweep' && (
         <div className="flex flex-col gap-3">
           {form.axes.map((axis, i) => (
-            <AxisFields key={i} axis={axis} index={i} scenario={scenario} onChange={(a) => set({ axes: form.axes.map((x, j) => (j === i ? a : x)) })} />
+            <AxisFields
+              key={i}
+              axis={axis}
+              index={i}
+              scenario={scenario}
+              onChange={(a) => set({ axes: form.axes.map((x, j) => (j === i ? a : x)) })}
+            />
           ))}
           {form.axes.length === 1 && form.axes[0].path && (
             <Button variant="quiet" className="self-start" onClick={() => set({ axes: [...form.axes, emptyAxis()] })}>
@@ -143,10 +234,19 @@ export function CreateStudyForm({ projectId, scenarios, scenarioId, onScenarioCh
         </div>
       )}
       {scenario && form.kind === 'whatIf' && (
-        <TextField label="Shorten each station’s mean cycle time by (%)" inputMode="decimal" value={form.reductionPercent} onChange={(e) => set({ reductionPercent: e.target.value })} />
+        <TextField
+          label="Shorten each station’s mean cycle time by (%)"
+          inputMode="decimal"
+          value={form.reductionPercent}
+          onChange={(e) => set({ reductionPercent: e.target.value })}
+        />
       )}
       <label className="flex items-center gap-2 text-sm">
-        <input type="checkbox" checked={form.commonRandomNumbers} onChange={(e) => set({ commonRandomNumbers: e.target.checked })} />
+        <input
+          type="checkbox"
+          checked={form.commonRandomNumbers}
+          onChange={(e) => set({ commonRandomNumbers: e.target.checked })}
+        />
         Same random numbers at every point (differences between points are then paired and sharper)
       </label>
       {error && (

@@ -3,7 +3,13 @@ import type { PointStatistics } from '../../../../workers/studies/point-statisti
 import type { ConfidenceInterval } from '../../../../workers/engine/stats';
 import { Table, Td, Th } from '../../../components/ui/table';
 
-const STATE_WORDS = { done: 'done', partial: 'partly run', pending: 'waiting', invalid: 'not valid', stopped: 'stopped' } as const;
+const STATE_WORDS = {
+  done: 'done',
+  partial: 'partly run',
+  pending: 'waiting',
+  invalid: 'not valid',
+  stopped: 'stopped',
+} as const;
 
 function show(ci: ConfidenceInterval | null, digits = 1): string {
   if (!ci) return '–';

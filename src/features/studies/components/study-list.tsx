@@ -34,7 +34,9 @@ export function StudyList({ studies }: { studies: StudyListItem[] }) {
               <span className="mr-2 tabular-nums">
                 {s.jobsDone} / {s.jobCount} jobs
               </span>
-              <Badge tone={s.status === 'done' ? 'accent' : s.status === 'running' ? 'neutral' : 'caution'}>{STATUS_LABELS[s.status]}</Badge>
+              <Badge tone={s.status === 'done' ? 'accent' : s.status === 'running' ? 'neutral' : 'caution'}>
+                {STATUS_LABELS[s.status]}
+              </Badge>
             </Td>
             <Td>
               {formatDateTime(s.createdAt)} by {formatPerson(s.createdBy)}

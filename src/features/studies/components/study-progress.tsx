@@ -16,7 +16,10 @@ interface StudyProgressProps {
 export function StudyProgress({ done, total, running, remainingMs, workers, onCancel, onResume }: StudyProgressProps) {
   const percent = total > 0 ? Math.round((done / total) * 100) : 0;
   return (
-    <div className="flex flex-col gap-3 rounded-md border border-accent/30 bg-accent-soft/40 p-4" data-testid="study-progress">
+    <div
+      className="flex flex-col gap-3 rounded-md border border-accent/30 bg-accent-soft/40 p-4"
+      data-testid="study-progress"
+    >
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <p className="font-semibold text-ink" aria-live="polite">
           {done} of {total} jobs done{running ? ` · running on ${workers} ${workers === 1 ? 'core' : 'cores'}` : ''}
@@ -28,10 +31,25 @@ export function StudyProgress({ done, total, running, remainingMs, workers, onCa
         )}
         {!running && onResume && <Button onClick={onResume}>Resume study</Button>}
       </div>
-      <div role="progressbar" aria-label="Study progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={percent} aria-valuetext={`${done} of ${total} jobs`} className="h-3 w-full overflow-hidden rounded-full bg-paper-sunk">
-        <div className="h-full rounded-full bg-accent transition-[width] duration-200" style={{ width: `${percent}%` }} />
+      <div
+        role="progressbar"
+        aria-label="Study progress"
+        aria-valuemin={0}
+        aria-valuemax={100}
+        aria-valuenow={percent}
+        aria-valuetext={`${done} of ${total} jobs`}
+        className="h-3 w-full overflow-hidden rounded-full bg-paper-sunk"
+      >
+        <div
+          className="h-full rounded-full bg-accent transition-[width] duration-200"
+          style={{ width: `${percent}%` }}
+        />
       </div>
-      {running && <p className="text-sm text-ink-soft">Time left: {remainingMs === null ? 'estimating…' : `about ${formatDuration(remainingMs / 1000)}`}</p>}
+      {running && (
+        <p className="text-sm text-ink-soft">
+          Time left: {remainingMs === null ? 'estimating…' : `about ${formatDuration(remainingMs / 1000)}`}
+        </p>
+      )}
     </div>
   );
 }

@@ -38,8 +38,10 @@ export function StudyView({ study, scenario, documents, mayRun }: StudyViewProps
   return (
     <div className="flex flex-col gap-6">
       <p className="text-ink-soft">
-        {KIND_LABELS[study.kind]} of {study.scenarioName}, revision {study.revisionNumber}: {study.pointCount} points × {s.replications} replications of {s.hours} h after {s.warmupMinutes} min warm-up, seed {String(s.seed)}
-        {study.commonRandomNumbers ? ', the same random numbers at every point' : ', separate random numbers per point'}. Status: {STATUS_LABELS[study.status]}.
+        {KIND_LABELS[study.kind]} of {study.scenarioName}, revision {study.revisionNumber}: {study.pointCount} points ×{' '}
+        {s.replications} replications of {s.hours} h after {s.warmupMinutes} min warm-up, seed {String(s.seed)}
+        {study.commonRandomNumbers ? ', the same random numbers at every point' : ', separate random numbers per point'}
+        . Status: {STATUS_LABELS[study.status]}.
       </p>
       {(pending > 0 || running) && (
         <StudyProgress
@@ -52,10 +54,15 @@ export function StudyView({ study, scenario, documents, mayRun }: StudyViewProps
           onResume={mayRun && (study.status === 'cancelled' || runner.held) ? () => void runner.resume() : undefined}
         />
       )}
-      {runner.problem && <ErrorBanner title="The study stopped">{runner.problem} Finished jobs are kept; reload the page to carry on.</ErrorBanner>}
+      {runner.problem && (
+        <ErrorBanner title="The study stopped">
+          {runner.problem} Finished jobs are kept; reload the page to carry on.
+        </ErrorBanner>
+      )}
       {failed > 0 && (
         <p className="text-sm text-caution" role="status">
-          {failed} {failed === 1 ? 'point has' : 'points have'} no result; the table below says why. The other points are not affected.
+          {failed} {failed === 1 ? 'point has' : 'points have'} no result; the table below says why. The other points
+          are not affected.
         </p>
       )}
       {study.kind === 'carrierSizing' && <CarrierSizingResults study={study} stats={stats} scenario={scenario} />}

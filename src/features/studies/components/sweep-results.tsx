@@ -7,15 +7,28 @@ import { CurveWithBand } from '../../../components/charts';
 import { ParameterHeatmap } from '../../../components/charts/ParameterHeatmap';
 import { curveOf } from '../utils/curves';
 
-export function SweepResults({ study, stats, scenario }: { study: StudyDetail; stats: PointStatistics[]; scenario: Scenario }) {
+export function SweepResults({
+  study,
+  stats,
+  scenario,
+}: {
+  study: StudyDetail;
+  stats: PointStatistics[];
+  scenario: Scenario;
+}) {
   const target = scenario.targetTaktSeconds ? 3600 / scenario.targetTaktSeconds : undefined;
   const [xAxis, yAxis] = study.axes;
   if (!xAxis) return null;
-  const valueOf = (s: PointStatistics, path: string) => study.points[s.index].changes.find((c) => c.path === path)?.value ?? Number.NaN;
+  const valueOf = (s: PointStatistics, path: string) =>
+    study.points[s.index].changes.find((c) => c.path === path)?.value ?? Number.NaN;
   if (!yAxis) {
     return (
       <CurveWithBand
-        points={curveOf(stats, (s) => valueOf(s, xAxis.path), (s) => s.throughput)}
+        points={curveOf(
+          stats,
+          (s) => valueOf(s, xAxis.path),
+          (s) => s.throughput,
+        )}
         xQuantity={xAxis.label}
         xUnit="value"
         yQuantity="Throughput"
@@ -28,6 +41,23 @@ export function SweepResults({ study, stats, scenario }: { study: StudyDetail; s
   }
   const xs = [...new Set(stats.map((s) => valueOf(s, xAxis.path)))].sort((a, b) => a - b);
   const ys = [...new Set(stats.map((s) => valueOf(s, yAxis.path)))].sort((a, b) => a - b);
-  const values = xs.map((vx) => ys.map((vy) => stats.find((s) => valueOf(s, xAxis.path) === vx && valueOf(s, yAxis.path) === vy)?.throughput?.mean ?? null));
-  return <ParameterHeatmap xs={xs} ys={ys} values={values} xLabel={xAxis.label} yLabel={yAxis.label} quantity="Throughput" unit="parts/h" target={target} title="Throughput over both swept fields" />;
+  const values = xs.map((vx) =>
+    ys.map(
+      (vy) =>
+        stats.find((s) => valueOf(s, xAxis.path) === vx && valueOf(s, yAxis.path) === vy)?.throughput?.mean ?? null,
+    ),
+  );
+  return (
+    <ParameterHeatmap
+      xs={xs}
+      ys={ys}
+      values={values}
+      xLabel={xAxis.label}
+      yLabel={yAxis.label}
+      quantity="Throughput"
+      unit="parts/h"
+      target={target}
+      title="Throughput over both swept fields"
+    />
+  );
 }

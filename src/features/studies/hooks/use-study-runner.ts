@@ -14,7 +14,14 @@ import { studyKeys } from '../api/keys';
 import { updateStudy } from '../api/update-study';
 
 /** `held`: the reader cancelled here, so the page must not start the jobs again until they resume. */
-export type RunnerState = { running: boolean; held: boolean; done: number; total: number; remainingMs: number | null; problem: string | null };
+export type RunnerState = {
+  running: boolean;
+  held: boolean;
+  done: number;
+  total: number;
+  remainingMs: number | null;
+  problem: string | null;
+};
 
 const MIN_ELAPSED_MS = 1_000;
 const SAVE_ATTEMPTS = 3;
@@ -35,14 +42,27 @@ async function saveWithRetry(studyId: string, body: SaveJobResultInput): Promise
 function resultBody(job: StudyJob, answer: Exclude<StudyJobOutcome, { outcome: 'cancelled' }>): SaveJobResultInput {
   const key = { pointIndex: job.pointIndex, first: job.first, count: job.count };
   return answer.outcome === 'done'
-    ? { ...key, outcome: 'done', engineVersion: answer.engineVersion, summaries: answer.block.summaries, events: answer.block.events }
+    ? {
+        ...key,
+        outcome: 'done',
+        engineVersion: answer.engineVersion,
+        summaries: answer.block.summaries,
+        events: answer.block.events,
+      }
     : { ...key, outcome: answer.outcome, message: answer.message.slice(0, 2_000) };
 }
 
 export function useStudyRunner(study: StudyDetail | undefined, documents: Record<string, unknown> | undefined) {
   const queryClient = useQueryClient();
   const session = useRef<PoolSession | null>(null);
-  const [state, setState] = useState<RunnerState>({ running: false, held: false, done: 0, total: 0, remainingMs: null, problem: null });
+  const [state, setState] = useState<RunnerState>({
+    running: false,
+    held: false,
+    done: 0,
+    total: 0,
+    remainingMs: null,
+    problem: null,
+  });
 
   const refresh = useRef<ReturnType<typeof setTimeout> | null>(null);
   const refreshSoon = useCallback(

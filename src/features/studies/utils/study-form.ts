@@ -3,7 +3,13 @@
 import type { CreateStudyInput, StudyKind } from '../../../../shared/api/studies';
 import type { Scenario } from '../../../../shared/scenario/scenario';
 import { sweepableFields } from '../../../../shared/studies/sweepable-fields';
-import { carrierSizingPoints, rangeValues, sweepPoints, whatIfPoints, type SweepAxis } from '../../../../workers/studies/build-points';
+import {
+  carrierSizingPoints,
+  rangeValues,
+  sweepPoints,
+  whatIfPoints,
+  type SweepAxis,
+} from '../../../../workers/studies/build-points';
 import { carrierGrid, defaultCarrierRange, SIZING_DEFAULTS } from '../../../../workers/studies/carrier-sizing';
 
 export type AxisForm = { path: string; mode: 'range' | 'list'; from: string; to: string; count: string; list: string };
@@ -60,7 +66,11 @@ function axisOf(a: AxisForm, scenario: Scenario): SweepAxis | null {
   return { path: field.path, label: `${field.group}: ${field.label}`, values };
 }
 
-const KIND_NAMES: Record<StudyKind, string> = { carrierSizing: 'Carrier sizing', sweep: 'Sweep', whatIf: 'Speed-up ranking' };
+const KIND_NAMES: Record<StudyKind, string> = {
+  carrierSizing: 'Carrier sizing',
+  sweep: 'Sweep',
+  whatIf: 'Speed-up ranking',
+};
 
 /** About eight jobs at least, so every worker has work even when a study has few points. */
 function withBlockSize(input: CreateStudyInput): CreateStudyInput {
@@ -76,10 +86,25 @@ export function studyInput(form: StudyForm, scenario: Scenario, revisionId: stri
 }
 
 function definition(form: StudyForm, scenario: Scenario, revisionId: string): CreateStudyInput {
-  const settings = { hours: num(form.hours), warmupMinutes: num(form.warmupMinutes), replications: num(form.replications), seed: /^\d+$/.test(form.seed.trim()) ? Number(form.seed) : form.seed };
-  const base = { name: form.name.trim() || `${KIND_NAMES[form.kind]} of ${scenario.name}`, kind: form.kind, revisionId, settings, commonRandomNumbers: form.commonRandomNumbers };
+  const settings = {
+    hours: num(form.hours),
+    warmupMinutes: num(form.warmupMinutes),
+    replications: num(form.replications),
+    seed: /^\d+$/.test(form.seed.trim()) ? Number(form.seed) : form.seed,
+  };
+  const base = {
+    name: form.name.trim() || `${KIND_NAMES[form.kind]} of ${scenario.name}`,
+    kind: form.kind,
+    revisionId,
+    settings,
+    commonRandomNumbers: form.commonRandomNumbers,
+  };
   if (form.kind === 'carrierSizing') {
-    return { ...base, axes: [{ path: 'carriers.count', label: 'Carriers' }], points: carrierSizingPoints(carrierGrid(num(form.carriersFrom), num(form.carriersTo), num(form.carrierPoints))) };
+    return {
+      ...base,
+      axes: [{ path: 'carriers.count', label: 'Carriers' }],
+      points: carrierSizingPoints(carrierGrid(num(form.carriersFrom), num(form.carriersTo), num(form.carrierPoints))),
+    };
   }
   if (form.kind === 'whatIf') {
     const reduction = num(form.reductionPercent) / 100;

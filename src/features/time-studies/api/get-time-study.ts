@@ -5,7 +5,8 @@ import { timeStudyDetailSchema } from '../../../../shared/api/time-studies';
 import { api } from '../../../lib/api-client';
 import { timeStudyKeys } from '../../../lib/query-keys/time-studies';
 
-export const getTimeStudy = (id: string, signal?: AbortSignal) => api.get(apiRoutes.timeStudy(id), timeStudyDetailSchema, { signal });
+export const getTimeStudy = (id: string, signal?: AbortSignal) =>
+  api.get(apiRoutes.timeStudy(id), timeStudyDetailSchema, { signal });
 
 export const timeStudyQueryOptions = (id: string) =>
   queryOptions({
@@ -14,4 +15,5 @@ export const timeStudyQueryOptions = (id: string) =>
     staleTime: Number.POSITIVE_INFINITY,
   });
 
-export const useTimeStudy = (id: string | null) => useQuery({ ...timeStudyQueryOptions(id ?? ''), enabled: id !== null });
+export const useTimeStudy = (id: string | null) =>
+  useQuery({ ...timeStudyQueryOptions(id ?? ''), enabled: id !== null });

@@ -18,7 +18,11 @@ export function DeleteTimeStudyButton({ study }: { study: TimeStudyListItem }) {
         className={armed ? `${SMALL} bg-danger hover:bg-danger` : SMALL}
         pending={remove.isPending}
         pendingLabel="Deleting…"
-        aria-label={armed ? `Confirm: delete the ${samples} samples of ${study.name} for everyone` : `Delete time study ${study.name}`}
+        aria-label={
+          armed
+            ? `Confirm: delete the ${samples} samples of ${study.name} for everyone`
+            : `Delete time study ${study.name}`
+        }
         onClick={() => (armed ? remove.mutate(study.id) : setArmed(true))}
       >
         {armed ? 'Delete for everyone' : 'Delete'}

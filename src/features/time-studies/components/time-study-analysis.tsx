@@ -15,7 +15,10 @@ interface TimeStudyAnalysisProps {
   onUse: (distribution: Distribution) => void;
 }
 
-const RULE_TEXT = { 'freedman-diaconis': 'Freedman–Diaconis rule', sturges: 'Sturges’ rule (over half the samples are equal)' } as const;
+const RULE_TEXT = {
+  'freedman-diaconis': 'Freedman–Diaconis rule',
+  sturges: 'Sturges’ rule (over half the samples are equal)',
+} as const;
 
 export function TimeStudyAnalysis({ study, stationName, canEdit, onUse }: TimeStudyAnalysisProps) {
   const { summary, histogram, candidates } = study.analysis;
@@ -32,7 +35,10 @@ export function TimeStudyAnalysis({ study, stationName, canEdit, onUse }: TimeSt
 
   return (
     <div className="flex flex-col gap-4">
-      <dl className="grid grid-cols-2 gap-x-6 gap-y-1 text-sm sm:grid-cols-4" aria-label={`Statistics of ${study.name}`}>
+      <dl
+        className="grid grid-cols-2 gap-x-6 gap-y-1 text-sm sm:grid-cols-4"
+        aria-label={`Statistics of ${study.name}`}
+      >
         {stats.map(([term, value]) => (
           <div key={term}>
             <dt className="text-ink-soft">{term}</dt>
@@ -50,9 +56,10 @@ export function TimeStudyAnalysis({ study, stationName, canEdit, onUse }: TimeSt
         exportName={`time-study-${study.stationId}`}
       />
       <p className="text-xs text-ink-soft">
-        Standard deviation with n − 1; {histogram.bins.length} bins by the {RULE_TEXT[histogram.rule]}. Fits are maximum-likelihood; D is the
-        Kolmogorov–Smirnov distance and the p-value its asymptotic approximation, which is optimistic because the parameters come from the
-        same samples: compare D between candidates rather than read p as a test.
+        Standard deviation with n − 1; {histogram.bins.length} bins by the {RULE_TEXT[histogram.rule]}. Fits are
+        maximum-likelihood; D is the Kolmogorov–Smirnov distance and the p-value its asymptotic approximation, which is
+        optimistic because the parameters come from the same samples: compare D between candidates rather than read p as
+        a test.
       </p>
       <FitCandidatesTable candidates={candidates} canEdit={canEdit} onUse={onUse} />
       {canEdit &&

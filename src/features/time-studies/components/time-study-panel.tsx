@@ -23,10 +23,21 @@ export interface TimeStudyPanelProps {
   onUse: (distribution: Distribution) => void;
 }
 
-function SelectedStudy({ id, stationName, canEdit, onUse }: { id: string; stationName: string; canEdit: boolean; onUse: (d: Distribution) => void }) {
+function SelectedStudy({
+  id,
+  stationName,
+  canEdit,
+  onUse,
+}: {
+  id: string;
+  stationName: string;
+  canEdit: boolean;
+  onUse: (d: Distribution) => void;
+}) {
   const study = useTimeStudy(id);
   if (study.isPending) return <Spinner label="Loading the analysis…" />;
-  if (study.isError) return <LoadError what="the time study" error={study.error} onRetry={() => void study.refetch()} />;
+  if (study.isError)
+    return <LoadError what="the time study" error={study.error} onRetry={() => void study.refetch()} />;
   return <TimeStudyAnalysis study={study.data} stationName={stationName} canEdit={canEdit} onUse={onUse} />;
 }
 
@@ -34,7 +45,11 @@ function SelectedStudy({ id, stationName, canEdit, onUse }: { id: string; statio
 export function TimeStudyPanel(props: TimeStudyPanelProps) {
   const parsed = idSchema.safeParse(props.stationId);
   if (!parsed.success) {
-    return <p className="text-sm text-ink-soft">Time studies: give the station a valid id first ({parsed.error.issues[0]?.message}).</p>;
+    return (
+      <p className="text-sm text-ink-soft">
+        Time studies: give the station a valid id first ({parsed.error.issues[0]?.message}).
+      </p>
+    );
   }
   return <StationTimeStudies {...props} />;
 }
@@ -64,11 +79,19 @@ function StationTimeStudies({ scenarioId, stationId, stationName, canEdit, onUse
       </h3>
       {canEdit && <TimeStudyUpload scenarioId={scenarioId} stationId={stationId} onUploaded={onUploaded} />}
       {studies.isPending && <Spinner label="Loading time studies…" />}
-      {studies.isError && <LoadError what="the time studies" error={studies.error} onRetry={() => void studies.refetch()} />}
-      {studies.isSuccess && list.length === 0 && (
-        <p className="text-sm text-ink-soft">{canEdit ? 'No time study yet: upload the measured cycle times of this station.' : 'No time study has been uploaded for this station.'}</p>
+      {studies.isError && (
+        <LoadError what="the time studies" error={studies.error} onRetry={() => void studies.refetch()} />
       )}
-      {list.length > 0 && <TimeStudyList studies={list} selectedId={selectedId} onSelect={setChosenId} canEdit={canEdit} />}
+      {studies.isSuccess && list.length === 0 && (
+        <p className="text-sm text-ink-soft">
+          {canEdit
+            ? 'No time study yet: upload the measured cycle times of this station.'
+            : 'No time study has been uploaded for this station.'}
+        </p>
+      )}
+      {list.length > 0 && (
+        <TimeStudyList studies={list} selectedId={selectedId} onSelect={setChosenId} canEdit={canEdit} />
+      )}
       {used && (
         <p role="status" className="rounded-md bg-accent-soft px-3 py-2 text-sm text-ink">
           {used}

@@ -14,14 +14,18 @@ interface TimeStudyUploadProps {
 }
 
 function formatSize(bytes: number): string {
-  return bytes >= 1024 * 1024 ? `${(bytes / (1024 * 1024)).toFixed(1).replace(/\.0$/, '')} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`;
+  return bytes >= 1024 * 1024
+    ? `${(bytes / (1024 * 1024)).toFixed(1).replace(/\.0$/, '')} MB`
+    : `${Math.max(1, Math.round(bytes / 1024))} KB`;
 }
 
 /** The same rules the server applies first, worded alike. */
 function localProblem(file: File): string | null {
   const lower = file.name.toLowerCase();
-  if (!TIME_STUDY_LIMITS.extensions.some((ext) => lower.endsWith(ext))) return `"${file.name}" is not a CSV or text file; upload the measured cycle times as a .csv or .txt file.`;
-  if (file.size > TIME_STUDY_LIMITS.fileBytes) return `The file is ${formatSize(file.size)}; the limit is ${formatSize(TIME_STUDY_LIMITS.fileBytes)}. Split the time study or thin it out.`;
+  if (!TIME_STUDY_LIMITS.extensions.some((ext) => lower.endsWith(ext)))
+    return `"${file.name}" is not a CSV or text file; upload the measured cycle times as a .csv or .txt file.`;
+  if (file.size > TIME_STUDY_LIMITS.fileBytes)
+    return `The file is ${formatSize(file.size)}; the limit is ${formatSize(TIME_STUDY_LIMITS.fileBytes)}. Split the time study or thin it out.`;
   return null;
 }
 
@@ -52,9 +56,12 @@ export function TimeStudyUpload({ scenarioId, stationId, onUploaded }: TimeStudy
   const error = upload.error;
   // The server's message often lists the field problems already; list only what it leaves out, so
   // no rejection reads twice.
-  const fieldMessages = isApiRequestError(error) && error.fields.length > 1
-    ? error.fields.filter((f) => f.message && !error.message.includes(f.message)).map((f) => `${f.path}: ${f.message}`)
-    : [];
+  const fieldMessages =
+    isApiRequestError(error) && error.fields.length > 1
+      ? error.fields
+          .filter((f) => f.message && !error.message.includes(f.message))
+          .map((f) => `${f.path}: ${f.message}`)
+      : [];
 
   return (
     <div className="flex flex-col gap-3">
@@ -82,12 +89,14 @@ export function TimeStudyUpload({ scenarioId, stationId, onUploaded }: TimeStudy
           }}
         />
         <p id={hintId} className="text-sm text-ink-soft">
-          Drop a file here or choose one: one measured cycle time in seconds per row, in a column named like cycle, seconds or time (or the
-          only numeric column). Comma, semicolon or tab separated; a decimal comma is fine. At most {formatSize(TIME_STUDY_LIMITS.fileBytes)} and{' '}
-          {TIME_STUDY_LIMITS.rows.toLocaleString('en-GB')} rows.
+          Drop a file here or choose one: one measured cycle time in seconds per row, in a column named like cycle,
+          seconds or time (or the only numeric column). Comma, semicolon or tab separated; a decimal comma is fine. At
+          most {formatSize(TIME_STUDY_LIMITS.fileBytes)} and {TIME_STUDY_LIMITS.rows.toLocaleString('en-GB')} rows.
         </p>
       </div>
-      {upload.isPending && file && <Spinner label={`Uploading and analysing ${file.name} (${formatSize(file.size)})…`} />}
+      {upload.isPending && file && (
+        <Spinner label={`Uploading and analysing ${file.name} (${formatSize(file.size)})…`} />
+      )}
       {problem && <ErrorBanner title="This file cannot be used.">{problem}</ErrorBanner>}
       {error && (
         <ErrorBanner title={`${file?.name ?? 'The file'} was not accepted.`}>

@@ -31,7 +31,9 @@ export function parameterText(candidate: FittedCandidate): string {
 export const isFitted = (candidate: FitCandidate): candidate is FittedCandidate => candidate.status === 'fitted';
 
 export function fittedDensities(candidates: readonly FitCandidate[]): FittedDensity[] {
-  return candidates.filter(isFitted).map((candidate) => ({ label: `${FAMILY_LABEL[candidate.kind]} fit`, pdf: lawOf(candidate).pdf }));
+  return candidates
+    .filter(isFitted)
+    .map((candidate) => ({ label: `${FAMILY_LABEL[candidate.kind]} fit`, pdf: lawOf(candidate).pdf }));
 }
 
 export type UsableDistribution = { ok: true; distribution: Distribution } | { ok: false; message: string };
@@ -39,7 +41,9 @@ export type UsableDistribution = { ok: true; distribution: Distribution } | { ok
 /** The measured samples as an empirical cycle time, checked by the scenario schema the editor uses. */
 export function empiricalDistribution(samples: readonly number[]): UsableDistribution {
   const parsed = distributionSchema.safeParse({ kind: 'empirical', samples: [...samples] });
-  return parsed.success ? { ok: true, distribution: parsed.data } : { ok: false, message: parsed.error.issues[0]?.message ?? 'the samples cannot be used' };
+  return parsed.success
+    ? { ok: true, distribution: parsed.data }
+    : { ok: false, message: parsed.error.issues[0]?.message ?? 'the samples cannot be used' };
 }
 
 export function describeDistribution(distribution: Distribution): string {

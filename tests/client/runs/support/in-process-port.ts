@@ -9,9 +9,13 @@ export function inProcessPorts() {
     run: async (scenario, settings, onProgress) => {
       runs.push({ scenario, settings });
       try {
-        return { ok: true, result: await runExperiment(scenario, settings, { onProgress, now: () => performance.now() }) };
+        return {
+          ok: true,
+          result: await runExperiment(scenario, settings, { onProgress, now: () => performance.now() }),
+        };
       } catch (error) {
-        if (error instanceof InvalidInputError) return { ok: false, kind: 'invalid', message: error.message, issues: error.issues };
+        if (error instanceof InvalidInputError)
+          return { ok: false, kind: 'invalid', message: error.message, issues: error.issues };
         throw error;
       }
     },

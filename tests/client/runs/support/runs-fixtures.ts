@@ -8,7 +8,17 @@ export const OTHER_USER = { id: uuid(3), name: 'Bram Oakes', email: 'bram@exampl
 
 const interval = (mean: number, half: number) => ({ mean, ciLow: mean - half, ciHigh: mean + half });
 
-export function runItem(n: number, overrides: { throughput?: number; takt?: number; carriers?: number; author?: typeof USER; revision?: number; createdAt?: string } = {}): RunListItem {
+export function runItem(
+  n: number,
+  overrides: {
+    throughput?: number;
+    takt?: number;
+    carriers?: number;
+    author?: typeof USER;
+    revision?: number;
+    createdAt?: string;
+  } = {},
+): RunListItem {
   const throughput = overrides.throughput ?? 300;
   return {
     id: uuid(500 + n),

@@ -41,7 +41,9 @@ export function SimulationProblem({ outcome }: { outcome: SimulationOutcome | nu
     case 'failed':
       return (
         <ErrorBanner title="The simulation failed">
-          <p>{outcome.message}. Nothing was saved; try again, and if it happens again, report the scenario and settings.</p>
+          <p>
+            {outcome.message}. Nothing was saved; try again, and if it happens again, report the scenario and settings.
+          </p>
         </ErrorBanner>
       );
     case 'cancelled':

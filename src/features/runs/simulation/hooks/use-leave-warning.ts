@@ -3,10 +3,13 @@
 import { useEffect } from 'react';
 import { useBlocker } from 'react-router-dom';
 
-export const LEAVE_WARNING = 'A simulation is running in this page. Leaving stops it and nothing is saved. Leave anyway?';
+export const LEAVE_WARNING =
+  'A simulation is running in this page. Leaving stops it and nothing is saved. Leave anyway?';
 
 export function useLeaveWarning(active: boolean): void {
-  const blocker = useBlocker(({ currentLocation, nextLocation }) => active && currentLocation.pathname !== nextLocation.pathname);
+  const blocker = useBlocker(
+    ({ currentLocation, nextLocation }) => active && currentLocation.pathname !== nextLocation.pathname,
+  );
   useEffect(() => {
     if (blocker.state !== 'blocked') return;
     if (confirm(LEAVE_WARNING)) blocker.proceed();

@@ -28,11 +28,21 @@ export function usePlaybackRecording() {
       setState({ status: 'recording', fraction: 0 });
       const mine = () => active.current === port;
       try {
-        const outcome = await port.playback(scenario, settings, request, (p) => mine() && setState({ status: 'recording', fraction: p.fraction }));
+        const outcome = await port.playback(
+          scenario,
+          settings,
+          request,
+          (p) => mine() && setState({ status: 'recording', fraction: p.fraction }),
+        );
         if (!mine()) return;
-        setState(outcome.ok ? { status: 'ready', trace: outcome.trace } : { status: 'failed', message: outcome.message, issues: outcome.kind === 'invalid' ? outcome.issues : [] });
+        setState(
+          outcome.ok
+            ? { status: 'ready', trace: outcome.trace }
+            : { status: 'failed', message: outcome.message, issues: outcome.kind === 'invalid' ? outcome.issues : [] },
+        );
       } catch (error) {
-        if (mine()) setState({ status: 'failed', message: error instanceof Error ? error.message : String(error), issues: [] });
+        if (mine())
+          setState({ status: 'failed', message: error instanceof Error ? error.message : String(error), issues: [] });
       } finally {
         if (mine()) stop();
       }

@@ -54,7 +54,11 @@ export function useSimulation() {
         const started = performance.now();
         run.port
           .run(scenario, settings, (progress) => {
-            if (active.current === run) setState((previous) => ({ ...previous, progress: describeProgress(progress, performance.now() - started) }));
+            if (active.current === run)
+              setState((previous) => ({
+                ...previous,
+                progress: describeProgress(progress, performance.now() - started),
+              }));
           })
           .then(
             (answer) =>
@@ -66,9 +70,15 @@ export function useSimulation() {
                     ? { status: 'invalid', message: answer.message, issues: answer.issues }
                     : answer.reason === 'cancelled'
                       ? { status: 'cancelled' }
-                      : { status: 'stopped', reason: answer.reason, message: answer.message, gridlock: answer.gridlock },
+                      : {
+                          status: 'stopped',
+                          reason: answer.reason,
+                          message: answer.message,
+                          gridlock: answer.gridlock,
+                        },
               ),
-            (error: unknown) => finish(run, { status: 'failed', message: error instanceof Error ? error.message : String(error) }),
+            (error: unknown) =>
+              finish(run, { status: 'failed', message: error instanceof Error ? error.message : String(error) }),
           );
       });
     },

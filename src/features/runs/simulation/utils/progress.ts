@@ -22,7 +22,10 @@ const MIN_ELAPSED_MS = 500;
 export function describeProgress(progress: Progress, elapsedMs: number): RunProgress {
   const replicationLengthSeconds = progress.totalSeconds / progress.replications;
   const fraction = Math.min(1, Math.max(0, progress.fraction));
-  const replicationSeconds = Math.min(replicationLengthSeconds, Math.max(0, progress.simulatedSeconds - progress.replication * replicationLengthSeconds));
+  const replicationSeconds = Math.min(
+    replicationLengthSeconds,
+    Math.max(0, progress.simulatedSeconds - progress.replication * replicationLengthSeconds),
+  );
   const estimable = fraction >= MIN_FRACTION && elapsedMs >= MIN_ELAPSED_MS;
   return {
     replication: progress.replication + 1,

@@ -7,7 +7,8 @@ import { revisionSchema, type CreateRevisionInput } from '../../../../../shared/
 import { api } from '../../../../lib/api-client';
 import { scenarioKeys } from '../../../../lib/query-keys/scenarios';
 
-export const createRevision = (scenarioId: string, input: CreateRevisionInput) => api.post(apiRoutes.scenarioRevisions(scenarioId), input, revisionSchema);
+export const createRevision = (scenarioId: string, input: CreateRevisionInput) =>
+  api.post(apiRoutes.scenarioRevisions(scenarioId), input, revisionSchema);
 
 export function useCreateRevision(scenarioId: string) {
   const queryClient = useQueryClient();

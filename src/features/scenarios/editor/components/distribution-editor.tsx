@@ -25,13 +25,33 @@ const KINDS: { value: DistributionKind; label: string }[] = [
 
 const PARAMETERS: Record<DistributionKind, { key: string; label: string; step?: string }[]> = {
   fixed: [{ key: 'value', label: 'Value (s)' }],
-  uniform: [{ key: 'min', label: 'Min (s)' }, { key: 'max', label: 'Max (s)' }],
-  triangular: [{ key: 'min', label: 'Min (s)' }, { key: 'mode', label: 'Mode (s)' }, { key: 'max', label: 'Max (s)' }],
-  normal: [{ key: 'mean', label: 'Mean (s)' }, { key: 'sd', label: 'Std. dev. (s)' }, { key: 'min', label: 'Cut below (s)' }],
-  lognormal: [{ key: 'mean', label: 'Mean (s)' }, { key: 'cv', label: 'CV' }],
+  uniform: [
+    { key: 'min', label: 'Min (s)' },
+    { key: 'max', label: 'Max (s)' },
+  ],
+  triangular: [
+    { key: 'min', label: 'Min (s)' },
+    { key: 'mode', label: 'Mode (s)' },
+    { key: 'max', label: 'Max (s)' },
+  ],
+  normal: [
+    { key: 'mean', label: 'Mean (s)' },
+    { key: 'sd', label: 'Std. dev. (s)' },
+    { key: 'min', label: 'Cut below (s)' },
+  ],
+  lognormal: [
+    { key: 'mean', label: 'Mean (s)' },
+    { key: 'cv', label: 'CV' },
+  ],
   exponential: [{ key: 'mean', label: 'Mean (s)' }],
-  erlang: [{ key: 'mean', label: 'Mean (s)' }, { key: 'k', label: 'Phases k', step: '1' }],
-  gamma: [{ key: 'mean', label: 'Mean (s)' }, { key: 'cv', label: 'CV' }],
+  erlang: [
+    { key: 'mean', label: 'Mean (s)' },
+    { key: 'k', label: 'Phases k', step: '1' },
+  ],
+  gamma: [
+    { key: 'mean', label: 'Mean (s)' },
+    { key: 'cv', label: 'CV' },
+  ],
   empirical: [],
 };
 
@@ -68,7 +88,15 @@ function plausibilityCaution(value: unknown, range: PlausibleRange | undefined, 
   return `A mean ${label.toLowerCase()} of ${mean.toLocaleString('en-GB', { maximumSignificantDigits: 4 })} s is unusual (most lie between ${range.minSeconds} s and ${range.maxSeconds.toLocaleString('en-GB')} s); check the value and that it is in seconds. It is kept as typed.`;
 }
 
-export function DistributionEditor({ name, label, plausible }: { name: string; label: string; plausible?: PlausibleRange }) {
+export function DistributionEditor({
+  name,
+  label,
+  plausible,
+}: {
+  name: string;
+  label: string;
+  plausible?: PlausibleRange;
+}) {
   const id = useId();
   const { control, setValue } = useFormContext<ScenarioForm>();
   const { readOnly, clearExternal } = useEditor();
@@ -78,7 +106,10 @@ export function DistributionEditor({ name, label, plausible }: { name: string; l
   const onKind = (next: DistributionKind) => {
     const parsed = distributionSchema.safeParse(value);
     clearExternal(name);
-    setValue(path, distributionOfKind(next, parsed.success ? distributionMean(parsed.data) : Number.NaN) as never, { shouldDirty: true, shouldValidate: true });
+    setValue(path, distributionOfKind(next, parsed.success ? distributionMean(parsed.data) : Number.NaN) as never, {
+      shouldDirty: true,
+      shouldValidate: true,
+    });
   };
   return (
     <fieldset className="flex flex-col gap-2 rounded-md border border-paper-sunk p-3" data-distribution={name}>
@@ -88,7 +119,13 @@ export function DistributionEditor({ name, label, plausible }: { name: string; l
           <label htmlFor={id} className="text-xs font-semibold text-ink">
             Kind
           </label>
-          <select id={id} value={kind} disabled={readOnly} onChange={(e) => onKind(e.target.value as DistributionKind)} className="rounded border border-ink-faint bg-paper-raised px-2 py-1.5 text-sm disabled:bg-paper-sunk">
+          <select
+            id={id}
+            value={kind}
+            disabled={readOnly}
+            onChange={(e) => onKind(e.target.value as DistributionKind)}
+            className="rounded border border-ink-faint bg-paper-raised px-2 py-1.5 text-sm disabled:bg-paper-sunk"
+          >
             {KINDS.map((k) => (
               <option key={k.value} value={k.value}>
                 {k.label}
@@ -109,7 +146,12 @@ export function DistributionEditor({ name, label, plausible }: { name: string; l
         ))}
         {kind === 'empirical' && (
           <div className="col-span-3">
-            <NumberListField name={`${name}.samples`} label="Measured times (s)" hint="Paste the time study's cycle times, separated by commas, spaces or new lines." rows={3} />
+            <NumberListField
+              name={`${name}.samples`}
+              label="Measured times (s)"
+              hint="Paste the time study's cycle times, separated by commas, spaces or new lines."
+              rows={3}
+            />
           </div>
         )}
       </div>

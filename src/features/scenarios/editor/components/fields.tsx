@@ -102,7 +102,9 @@ export function NumberField({ name, label, hint, className }: FieldProps & { ste
   const typed: unknown = useWatch<ScenarioForm>({ name: asPath(name) });
   return (
     <FieldFrame id={id} name={name} label={label} hint={hint} className={className} problem={decimalProblem(typed)}>
-      {(describedBy, invalid) => <input type="text" inputMode="decimal" autoComplete="off" {...bind(describedBy, invalid)} />}
+      {(describedBy, invalid) => (
+        <input type="text" inputMode="decimal" autoComplete="off" {...bind(describedBy, invalid)} />
+      )}
     </FieldFrame>
   );
 }
@@ -111,7 +113,13 @@ export function TextField({ name, label, hint, className, multiline = false }: F
   const { id, bind } = useBoundControl(name);
   return (
     <FieldFrame id={id} name={name} label={label} hint={hint} className={className}>
-      {(describedBy, invalid) => (multiline ? <textarea rows={3} {...bind(describedBy, invalid)} /> : <input type="text" {...bind(describedBy, invalid)} />)}
+      {(describedBy, invalid) =>
+        multiline ? (
+          <textarea rows={3} {...bind(describedBy, invalid)} />
+        ) : (
+          <input type="text" {...bind(describedBy, invalid)} />
+        )
+      }
     </FieldFrame>
   );
 }
@@ -119,7 +127,14 @@ export function TextField({ name, label, hint, className, multiline = false }: F
 const emptyAsNone = (value: unknown) => (value === '' ? undefined : value);
 
 /** `emptyMeansNone`: the empty option stands for an optional reference that is not set. */
-export function SelectField({ name, label, hint, className, options, emptyMeansNone = false }: FieldProps & { options: readonly { value: string; label: string }[]; emptyMeansNone?: boolean }) {
+export function SelectField({
+  name,
+  label,
+  hint,
+  className,
+  options,
+  emptyMeansNone = false,
+}: FieldProps & { options: readonly { value: string; label: string }[]; emptyMeansNone?: boolean }) {
   const { id, bind } = useBoundControl(name, emptyMeansNone ? emptyAsNone : undefined);
   return (
     <FieldFrame id={id} name={name} label={label} hint={hint} className={className}>
@@ -144,7 +159,14 @@ export function CheckField({ name, label, hint, className }: FieldProps) {
   return (
     <div className={`flex flex-col gap-1 ${className ?? ''}`} data-field={name}>
       <label htmlFor={id} className="flex items-center gap-2 text-sm text-ink">
-        <input id={id} type="checkbox" disabled={readOnly} className="size-4 accent-accent" aria-invalid={Boolean(issue) || undefined} {...register(asPath(name), { onChange: () => clearExternal(name) })} />
+        <input
+          id={id}
+          type="checkbox"
+          disabled={readOnly}
+          className="size-4 accent-accent"
+          aria-invalid={Boolean(issue) || undefined}
+          {...register(asPath(name), { onChange: () => clearExternal(name) })}
+        />
         {label}
       </label>
       {hint && <p className="text-xs text-ink-soft">{hint}</p>}

@@ -49,7 +49,14 @@ export function ImportExport({ exportDocument, onImported }: ImportExportProps) 
             <label htmlFor={inputId} className="sr-only">
               Import scenario JSON
             </label>
-            <input ref={input} id={inputId} type="file" accept="application/json,.json" className="sr-only" onChange={(e) => void onFile(e.target.files?.[0])} />
+            <input
+              ref={input}
+              id={inputId}
+              type="file"
+              accept="application/json,.json"
+              className="sr-only"
+              onChange={(e) => void onFile(e.target.files?.[0])}
+            />
             <Button variant="secondary" onClick={() => input.current?.click()}>
               Import JSON…
             </Button>
@@ -62,7 +69,9 @@ export function ImportExport({ exportDocument, onImported }: ImportExportProps) 
         </p>
       )}
       {problem && (
-        <ErrorBanner title={`${problem.file} was not imported: ${problem.issues.length} problem${problem.issues.length === 1 ? '' : 's'}`}>
+        <ErrorBanner
+          title={`${problem.file} was not imported: ${problem.issues.length} problem${problem.issues.length === 1 ? '' : 's'}`}
+        >
           <ul className="list-disc pl-5" data-import-issues>
             {problem.issues.slice(0, 50).map((issue) => (
               <li key={`${issue.path}:${issue.message}`} data-issue-path={issue.path}>

@@ -15,7 +15,17 @@ export function parseNumberList(text: string): number[] {
 
 const show = (value: unknown) => (Array.isArray(value) ? value.join(', ') : '');
 
-export function NumberListField({ name, label, hint, rows = 1 }: { name: string; label: string; hint?: string; rows?: number }) {
+export function NumberListField({
+  name,
+  label,
+  hint,
+  rows = 1,
+}: {
+  name: string;
+  label: string;
+  hint?: string;
+  rows?: number;
+}) {
   const id = useId();
   const { control } = useFormContext<ScenarioForm>();
   const { clearExternal, readOnly } = useEditor();
@@ -24,7 +34,8 @@ export function NumberListField({ name, label, hint, rows = 1 }: { name: string;
   // A reset from outside (import, discard) replaces the numbers; show them unless the text already says so.
   const current = show(field.value);
   const shown = show(parseNumberList(text)) === current ? text : current;
-  const classes = 'block w-full rounded border border-ink-faint bg-paper-raised px-2 py-1.5 text-sm text-ink tabular-nums disabled:bg-paper-sunk';
+  const classes =
+    'block w-full rounded border border-ink-faint bg-paper-raised px-2 py-1.5 text-sm text-ink tabular-nums disabled:bg-paper-sunk';
   const onChange = (value: string) => {
     setText(value);
     clearExternal(name);
@@ -34,9 +45,29 @@ export function NumberListField({ name, label, hint, rows = 1 }: { name: string;
     <FieldFrame id={id} name={name} label={label} hint={hint}>
       {(describedBy, invalid) =>
         rows > 1 ? (
-          <textarea id={id} rows={rows} disabled={readOnly} aria-invalid={invalid || undefined} aria-describedby={describedBy} className={`${classes} ${invalid ? 'border-danger' : ''}`} value={shown} onChange={(e) => onChange(e.target.value)} onBlur={field.onBlur} />
+          <textarea
+            id={id}
+            rows={rows}
+            disabled={readOnly}
+            aria-invalid={invalid || undefined}
+            aria-describedby={describedBy}
+            className={`${classes} ${invalid ? 'border-danger' : ''}`}
+            value={shown}
+            onChange={(e) => onChange(e.target.value)}
+            onBlur={field.onBlur}
+          />
         ) : (
-          <input id={id} type="text" disabled={readOnly} aria-invalid={invalid || undefined} aria-describedby={describedBy} className={`${classes} ${invalid ? 'border-danger' : ''}`} value={shown} onChange={(e) => onChange(e.target.value)} onBlur={field.onBlur} />
+          <input
+            id={id}
+            type="text"
+            disabled={readOnly}
+            aria-invalid={invalid || undefined}
+            aria-describedby={describedBy}
+            className={`${classes} ${invalid ? 'border-danger' : ''}`}
+            value={shown}
+            onChange={(e) => onChange(e.target.value)}
+            onBlur={field.onBlur}
+          />
         )
       }
     </FieldFrame>

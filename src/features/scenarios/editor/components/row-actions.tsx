@@ -6,7 +6,17 @@ const small =
   'inline-flex min-h-8 items-center rounded border border-ink-faint bg-paper-raised px-2 text-xs font-semibold text-ink hover:border-ink ' +
   'focus-visible:outline-2 focus-visible:outline-accent disabled:cursor-not-allowed disabled:opacity-40';
 
-export function SmallButton({ onClick, children, label, disabled }: { onClick: () => void; children: ReactNode; label?: string; disabled?: boolean }) {
+export function SmallButton({
+  onClick,
+  children,
+  label,
+  disabled,
+}: {
+  onClick: () => void;
+  children: ReactNode;
+  label?: string;
+  disabled?: boolean;
+}) {
   const { readOnly } = useEditor();
   if (readOnly) return null;
   return (
@@ -16,7 +26,15 @@ export function SmallButton({ onClick, children, label, disabled }: { onClick: (
   );
 }
 
-export function SectionHeading({ title, children, description }: { title: string; children?: ReactNode; description?: string }) {
+export function SectionHeading({
+  title,
+  children,
+  description,
+}: {
+  title: string;
+  children?: ReactNode;
+  description?: string;
+}) {
   return (
     <div className="flex flex-col gap-1">
       <div className="flex flex-wrap items-center justify-between gap-2">
@@ -29,7 +47,19 @@ export function SectionHeading({ title, children, description }: { title: string
 }
 
 /** A row of a master list that opens its item's details when chosen. */
-export function PickRow({ selected, onPick, invalid, children, label }: { selected: boolean; onPick: () => void; invalid: boolean; children: ReactNode; label: string }) {
+export function PickRow({
+  selected,
+  onPick,
+  invalid,
+  children,
+  label,
+}: {
+  selected: boolean;
+  onPick: () => void;
+  invalid: boolean;
+  children: ReactNode;
+  label: string;
+}) {
   return (
     <button
       type="button"

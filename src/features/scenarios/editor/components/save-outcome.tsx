@@ -9,7 +9,15 @@ import { displayPath, type PathIssue } from '../utils/paths';
 /** Names the station and field of a dotted form path, from the draft being saved. */
 type DescribePath = (formPath: string) => string;
 
-function IssueList({ issues, describe, onShow }: { issues: PathIssue[]; describe: DescribePath; onShow: (formPath: string) => void }) {
+function IssueList({
+  issues,
+  describe,
+  onShow,
+}: {
+  issues: PathIssue[];
+  describe: DescribePath;
+  onShow: (formPath: string) => void;
+}) {
   const shown = issues.slice(0, 12);
   return (
     <ul className="mt-1 list-disc pl-5" data-issue-list>
@@ -17,7 +25,11 @@ function IssueList({ issues, describe, onShow }: { issues: PathIssue[]; describe
         <li key={`${issue.path}:${issue.message}`} data-issue-path={displayPath(issue.path)}>
           {describe(issue.path)}: {issue.message}{' '}
           {issue.path !== '' && (
-            <button type="button" className="text-sm font-semibold text-accent-strong underline underline-offset-4" onClick={() => onShow(issue.path)}>
+            <button
+              type="button"
+              className="text-sm font-semibold text-accent-strong underline underline-offset-4"
+              onClick={() => onShow(issue.path)}
+            >
               Show the field
             </button>
           )}
@@ -48,7 +60,9 @@ export function SaveOutcomeMessage({ outcome, scenarioId, onKeepMine, rebasing, 
       );
     case 'invalid':
       return (
-        <ErrorBanner title={`Not saved: ${outcome.issues.length} problem${outcome.issues.length === 1 ? '' : 's'} to fix first`}>
+        <ErrorBanner
+          title={`Not saved: ${outcome.issues.length} problem${outcome.issues.length === 1 ? '' : 's'} to fix first`}
+        >
           <p>Each is marked beside its field; the section list shows where they are. Nothing you typed is lost.</p>
           <IssueList issues={outcome.issues} describe={describe} onShow={onShow} />
         </ErrorBanner>
@@ -71,7 +85,10 @@ export function SaveOutcomeMessage({ outcome, scenarioId, onKeepMine, rebasing, 
                 Keep my changes on top of the latest revision
               </Button>
               {latestNumber !== undefined && (
-                <Link to={`/scenarios/${scenarioId}/revisions/${latestNumber}`} className="text-sm font-semibold text-accent-strong underline underline-offset-4">
+                <Link
+                  to={`/scenarios/${scenarioId}/revisions/${latestNumber}`}
+                  className="text-sm font-semibold text-accent-strong underline underline-offset-4"
+                >
                   See revision {latestNumber}
                 </Link>
               )}
@@ -79,7 +96,10 @@ export function SaveOutcomeMessage({ outcome, scenarioId, onKeepMine, rebasing, 
           }
         >
           <p>{outcome.message}</p>
-          <p>Your draft is kept as it is. Putting it on top makes the latest revision its base; then check it and save again.</p>
+          <p>
+            Your draft is kept as it is. Putting it on top makes the latest revision its base; then check it and save
+            again.
+          </p>
         </ErrorBanner>
       );
     }

@@ -12,7 +12,12 @@ import { TrackSection } from './sections/track-section';
 import { TransfersSection } from './sections/transfers-section';
 
 export const SECTIONS: { id: SectionId; label: string; roots: string[]; render: () => ReactNode }[] = [
-  { id: 'general', label: 'General', roots: ['name', 'description', 'targetTaktSeconds'], render: () => <GeneralSection /> },
+  {
+    id: 'general',
+    label: 'General',
+    roots: ['name', 'description', 'targetTaktSeconds'],
+    render: () => <GeneralSection />,
+  },
   { id: 'track', label: 'Track and decks', roots: ['track', 'decks'], render: () => <TrackSection /> },
   { id: 'lanes', label: 'Lanes', roots: ['lanes'], render: () => <LanesSection /> },
   { id: 'transfers', label: 'Transfers and links', roots: ['transfers', 'links'], render: () => <TransfersSection /> },
@@ -28,7 +33,10 @@ function Count({ roots }: { roots: string[] }) {
   const total = counts.reduce((a, b) => a + b, 0);
   if (total === 0) return null;
   return (
-    <span className="ml-auto rounded-full bg-danger-soft px-2 text-xs font-semibold text-danger" aria-label={`${total} problem${total === 1 ? '' : 's'}`}>
+    <span
+      className="ml-auto rounded-full bg-danger-soft px-2 text-xs font-semibold text-danger"
+      aria-label={`${total} problem${total === 1 ? '' : 's'}`}
+    >
       {total}
     </span>
   );

@@ -37,14 +37,19 @@ export function ScenarioWorkspace({ scenario, mayEdit, engineIssues, stationStud
   const draft = useScenarioDraft(scenario.id, latest, mayEdit);
   const [external, setExternal] = useState<Record<string, string>>({});
   const replaceExternal = useCallback((issues: PathIssue[]) => setExternal(toMap(issues)), []);
-  const clearExternal = useCallback((path: string) => setExternal((all) => {
-    if (!(path in all)) return all;
-    const rest = { ...all };
-    delete rest[path];
-    return rest;
-  }), []);
+  const clearExternal = useCallback(
+    (path: string) =>
+      setExternal((all) => {
+        if (!(path in all)) return all;
+        const rest = { ...all };
+        delete rest[path];
+        return rest;
+      }),
+    [],
+  );
   useEffect(() => {
-    if (engineIssues) replaceExternal(engineIssues.map((issue) => ({ path: toFormPath(issue.path), message: issue.message })));
+    if (engineIssues)
+      replaceExternal(engineIssues.map((issue) => ({ path: toFormPath(issue.path), message: issue.message })));
   }, [engineIssues, replaceExternal]);
   const saving = useSaveDraft(scenario.id, draft, replaceExternal);
   const [message, setMessage] = useState('');
@@ -53,7 +58,9 @@ export function ScenarioWorkspace({ scenario, mayEdit, engineIssues, stationStud
 
   const exportDocument = () => {
     const parsed = scenarioSchema.safeParse(draft.form.getValues());
-    return parsed.success ? { document: parsed.data } : { document: scenario.document, revisionNumber: scenario.latestRevision.number };
+    return parsed.success
+      ? { document: parsed.data }
+      : { document: scenario.document, revisionNumber: scenario.latestRevision.number };
   };
   const onSave = async () => {
     if (await saving.save(message)) setMessage('');
@@ -74,7 +81,10 @@ export function ScenarioWorkspace({ scenario, mayEdit, engineIssues, stationStud
           </span>
           {draft.hasDraft ? <Badge tone="caution">Unsaved changes</Badge> : <Badge>No unsaved changes</Badge>}
           {draft.restored && draft.hasDraft && (
-            <span role="status">Your unsaved draft{draft.storedAt ? ` from ${formatDateTime(draft.storedAt)}` : ''} was restored from this browser tab.</span>
+            <span role="status">
+              Your unsaved draft{draft.storedAt ? ` from ${formatDateTime(draft.storedAt)}` : ''} was restored from this
+              browser tab.
+            </span>
           )}
           {mayEdit && draft.hasDraft && (
             <Button variant="quiet" onClick={discard}>
@@ -103,7 +113,12 @@ export function ScenarioWorkspace({ scenario, mayEdit, engineIssues, stationStud
               />
               {messageIssue && <p className="text-xs font-medium text-danger">Note {messageIssue}</p>}
             </div>
-            <Button onClick={() => void onSave()} pending={saving.pending} pendingLabel="Saving…" disabled={!draft.hasDraft}>
+            <Button
+              onClick={() => void onSave()}
+              pending={saving.pending}
+              pendingLabel="Saving…"
+              disabled={!draft.hasDraft}
+            >
               Save as revision {draft.baseNumber + 1}
             </Button>
           </div>
@@ -120,12 +135,27 @@ export function ScenarioWorkspace({ scenario, mayEdit, engineIssues, stationStud
           <ImportExport exportDocument={exportDocument} onImported={mayEdit ? draft.replaceDraft : undefined} />
           {mayEdit && (
             <div className="w-full max-w-md">
-              <TemplatePicker onPick={(document) => draft.replaceDraft({ ...document, name: draft.form.getValues('name'), description: draft.form.getValues('description') })} />
+              <TemplatePicker
+                onPick={(document) =>
+                  draft.replaceDraft({
+                    ...document,
+                    name: draft.form.getValues('name'),
+                    description: draft.form.getValues('description'),
+                  })
+                }
+              />
             </div>
           )}
         </div>
       </Card>
-      <WorkspaceBody readOnly={!mayEdit} focus={focus} scenarioId={scenario.id} stationStudies={stationStudies} externalIssues={external} clearExternal={clearExternal} />
+      <WorkspaceBody
+        readOnly={!mayEdit}
+        focus={focus}
+        scenarioId={scenario.id}
+        stationStudies={stationStudies}
+        externalIssues={external}
+        clearExternal={clearExternal}
+      />
       <WorkspaceHistory scenarioId={scenario.id} draft={draft} mayEdit={mayEdit} />
     </FormProvider>
   );

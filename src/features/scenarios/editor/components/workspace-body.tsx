@@ -15,7 +15,13 @@ import { ScenarioEditor } from './scenario-editor';
 function DraftDrawing() {
   const document = useWatch<ScenarioForm>();
   const { selection, select } = useEditor();
-  return <LayoutDrawing document={document as LayoutDraft} selection={selection} onSelect={(next) => select(next, 'drawing')} />;
+  return (
+    <LayoutDrawing
+      document={document as LayoutDraft}
+      selection={selection}
+      onSelect={(next) => select(next, 'drawing')}
+    />
+  );
 }
 
 function DraftBalance() {
@@ -25,7 +31,14 @@ function DraftBalance() {
   if (typeof takt !== 'number' || !Number.isFinite(takt) || takt <= 0) {
     return <p className="text-sm text-ink-soft">Set a target takt under General to compare each step with it.</p>;
   }
-  return <LineBalanceChart steps={balance} taktSeconds={takt} title="Line balance against the target takt (before simulation)" exportName="line-balance" />;
+  return (
+    <LineBalanceChart
+      steps={balance}
+      taktSeconds={takt}
+      title="Line balance against the target takt (before simulation)"
+      exportName="line-balance"
+    />
+  );
 }
 
 /** A field to open and focus, e.g. from the list of save problems; `seq` repeats a request. */
@@ -47,7 +60,14 @@ interface WorkspaceBodyProps {
 
 const NO_ISSUES: Readonly<Record<string, string>> = {};
 
-export function WorkspaceBody({ readOnly, focus, scenarioId, stationStudies, externalIssues = NO_ISSUES, clearExternal }: WorkspaceBodyProps) {
+export function WorkspaceBody({
+  readOnly,
+  focus,
+  scenarioId,
+  stationStudies,
+  externalIssues = NO_ISSUES,
+  clearExternal,
+}: WorkspaceBodyProps) {
   const [selection, setSelection] = useState<LayoutSelection>(null);
   const [section, setSection] = useState<SectionId>('general');
   const editorRef = useRef<HTMLElement>(null);
@@ -72,7 +92,15 @@ export function WorkspaceBody({ readOnly, focus, scenarioId, stationStudies, ext
     if (from === 'drawing') editorRef.current?.scrollIntoView?.({ behavior: 'smooth', block: 'start' });
   }, []);
   const context = useMemo(
-    () => ({ readOnly, scenarioId, stationStudies, externalIssues, clearExternal: clearExternal ?? (() => undefined), selection, select }),
+    () => ({
+      readOnly,
+      scenarioId,
+      stationStudies,
+      externalIssues,
+      clearExternal: clearExternal ?? (() => undefined),
+      selection,
+      select,
+    }),
     [readOnly, scenarioId, stationStudies, externalIssues, clearExternal, selection, select],
   );
   return (
@@ -95,7 +123,10 @@ export function WorkspaceBody({ readOnly, focus, scenarioId, stationStudies, ext
         <CardTitle id="balance-title" className="mb-2">
           Line balance
         </CardTitle>
-        <p className="mb-4 max-w-prose text-sm text-ink-soft">Each step's mean cycle time per station (mean ÷ parallel stations) from the distributions in the draft, against the target takt. Variability, blocking and failures need the simulation.</p>
+        <p className="mb-4 max-w-prose text-sm text-ink-soft">
+          Each step's mean cycle time per station (mean ÷ parallel stations) from the distributions in the draft,
+          against the target takt. Variability, blocking and failures need the simulation.
+        </p>
         <DraftBalance />
       </Card>
     </EditorContext.Provider>

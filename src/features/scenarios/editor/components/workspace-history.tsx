@@ -9,7 +9,15 @@ import { RevisionHistory } from '../../components/revision-history';
 import { useRestoreRevision } from '../hooks/use-restore-revision';
 import type { ScenarioDraft } from '../hooks/use-scenario-draft';
 
-export function WorkspaceHistory({ scenarioId, draft, mayEdit }: { scenarioId: string; draft: ScenarioDraft; mayEdit: boolean }) {
+export function WorkspaceHistory({
+  scenarioId,
+  draft,
+  mayEdit,
+}: {
+  scenarioId: string;
+  draft: ScenarioDraft;
+  mayEdit: boolean;
+}) {
   const revisions = useRevisions(scenarioId);
   const { restore, restoring, error } = useRestoreRevision(scenarioId);
   const latestNumber = Math.max(draft.baseNumber, ...(revisions.data ?? []).map((r) => r.number));
@@ -21,7 +29,9 @@ export function WorkspaceHistory({ scenarioId, draft, mayEdit }: { scenarioId: s
     <TitledCard title="Revision history" className="mt-6">
       {error && <ErrorBanner title="Not restored">{error}</ErrorBanner>}
       {revisions.isPending && <PageSpinner label="Loading revisions…" />}
-      {revisions.isError && <LoadError what="the revision history" error={revisions.error} onRetry={() => void revisions.refetch()} />}
+      {revisions.isError && (
+        <LoadError what="the revision history" error={revisions.error} onRetry={() => void revisions.refetch()} />
+      )}
       {revisions.data && (
         <RevisionHistory
           scenarioId={scenarioId}

@@ -18,7 +18,11 @@ export function useRestoreRevision(scenarioId: string) {
     setRestoring(number);
     try {
       const old = await queryClient.fetchQuery(scenarioRevisionQueryOptions(scenarioId, number));
-      return await createRevision.mutateAsync({ document: old.document, message: restoreMessage(number), baseRevisionNumber: latestNumber });
+      return await createRevision.mutateAsync({
+        document: old.document,
+        message: restoreMessage(number),
+        baseRevisionNumber: latestNumber,
+      });
     } catch (cause) {
       setError(cause instanceof Error ? cause.message : `Revision ${number} could not be restored.`);
       return null;

@@ -27,7 +27,11 @@ export function useSaveDraft(scenarioId: string, draft: ScenarioDraft, setExtern
   const send = async (document: Scenario, message: string): Promise<boolean> => {
     setOutcome(null);
     try {
-      const revision = await createRevision.mutateAsync({ document, message: message.trim() || undefined, baseRevisionNumber: draft.baseNumber });
+      const revision = await createRevision.mutateAsync({
+        document,
+        message: message.trim() || undefined,
+        baseRevisionNumber: draft.baseNumber,
+      });
       draft.resetTo({ number: revision.number, document: revision.document });
       setExternal([]);
       setOutcome({ kind: 'saved', number: revision.number });
@@ -38,7 +42,11 @@ export function useSaveDraft(scenarioId: string, draft: ScenarioDraft, setExtern
         const issues = error.fields.map((field) => ({ path: toFormPath(field.path), message: field.message }));
         setExternal(issues);
         setOutcome({ kind: 'rejected', message: error.message, issues });
-      } else setOutcome({ kind: 'failed', message: error instanceof Error ? error.message : 'The revision was not saved. Try again.' });
+      } else
+        setOutcome({
+          kind: 'failed',
+          message: error instanceof Error ? error.message : 'The revision was not saved. Try again.',
+        });
       return false;
     }
   };
@@ -64,11 +72,21 @@ export function useSaveDraft(scenarioId: string, draft: ScenarioDraft, setExtern
       draft.rebase({ number: latest.latestRevision.number, document: latest.document });
       setOutcome(null);
     } catch (error) {
-      setOutcome({ kind: 'failed', message: error instanceof Error ? error.message : 'The latest revision could not be loaded.' });
+      setOutcome({
+        kind: 'failed',
+        message: error instanceof Error ? error.message : 'The latest revision could not be loaded.',
+      });
     } finally {
       setRebasing(false);
     }
   };
 
-  return { save, outcome, pending: createRevision.isPending, keepMineOnTop, rebasing, clearOutcome: () => setOutcome(null) };
+  return {
+    save,
+    outcome,
+    pending: createRevision.isPending,
+    keepMineOnTop,
+    rebasing,
+    clearOutcome: () => setOutcome(null),
+  };
 }

@@ -18,7 +18,8 @@ export function parseDecimal(value: unknown): unknown {
 export function decimalProblem(value: unknown): string | null {
   if (typeof value !== 'string' || value.trim() === '') return null;
   const text = value.trim().replace(/\s/g, '');
-  if (GROUPED.test(text) && text.includes(',')) return `"${value}" is ambiguous: write one and a half as 1.5 or 1,5 and fifteen hundred as 1500`;
+  if (GROUPED.test(text) && text.includes(','))
+    return `"${value}" is ambiguous: write one and a half as 1.5 or 1,5 and fifteen hundred as 1500`;
   if (!PLAIN.test(text)) return `"${value}" is not a number: use digits with at most one decimal point or comma`;
   return null;
 }

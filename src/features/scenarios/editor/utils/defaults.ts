@@ -37,7 +37,10 @@ export function distributionOfKind(kind: DistributionKind, mean: number): Distri
   }
 }
 
-export function transferOfKind(kind: TransferKind, base: Pick<Transfer, 'id' | 'name' | 'fromLaneId' | 'toLaneId'>): Transfer {
+export function transferOfKind(
+  kind: TransferKind,
+  base: Pick<Transfer, 'id' | 'name' | 'fromLaneId' | 'toLaneId'>,
+): Transfer {
   switch (kind) {
     case 'elevator':
       return { ...base, kind, handlingSeconds: 1.5, liftSpeedMmPerS: 500 };
@@ -54,7 +57,9 @@ export function stepOfKind(kind: StepKind, step: Pick<Step, 'id' | 'name' | 'sta
 }
 
 export function conveyorOfKind(kind: Conveyor['kind'], carrierLengthMm: number): Conveyor {
-  return kind === 'belt' ? { kind, speedMmPerS: 300, stopAndLocateSeconds: 1.5, pitchMm: Math.max(carrierLengthMm, 1) + 100 } : { kind };
+  return kind === 'belt'
+    ? { kind, speedMmPerS: 300, stopAndLocateSeconds: 1.5, pitchMm: Math.max(carrierLengthMm, 1) + 100 }
+    : { kind };
 }
 
 export function newLane(id: string, deckId: string, moduleLengthMm: number, start: { xMm: number; yMm: number }): Lane {
@@ -62,5 +67,13 @@ export function newLane(id: string, deckId: string, moduleLengthMm: number, star
 }
 
 export function newStation(id: string, laneId: string, positionMm: number): Station {
-  return { id, name: `Station ${id}`, laneId, positionMm, cycleTimeSeconds: { kind: 'fixed', value: 5 }, operation: 'automatic', pausesForBreaks: false };
+  return {
+    id,
+    name: `Station ${id}`,
+    laneId,
+    positionMm,
+    cycleTimeSeconds: { kind: 'fixed', value: 5 },
+    operation: 'automatic',
+    pausesForBreaks: false,
+  };
 }

@@ -46,7 +46,11 @@ export function describeFormPath(formPath: string, document: unknown): string {
       const item = Array.isArray(next) ? next[Number(index)] : undefined;
       const name = nameAt(item);
       // The innermost named item says where; outer ones only add noise.
-      places.splice(0, places.length, name ? `${ITEM_LABEL[key]} '${name}'` : `${ITEM_LABEL[key]} ${Number(index) + 1}`);
+      places.splice(
+        0,
+        places.length,
+        name ? `${ITEM_LABEL[key]} '${name}'` : `${ITEM_LABEL[key]} ${Number(index) + 1}`,
+      );
       fields.length = 0;
       node = item;
       i++;

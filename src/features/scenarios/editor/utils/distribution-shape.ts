@@ -4,9 +4,7 @@ import type { Distribution } from '../../../../../shared/scenario/distribution';
 import { gammaFromMeanCv, lognormalFromMeanCv } from '../../../../../shared/scenario/distribution-parameters';
 import { gammaLaw, lognormalLaw, normalLaw } from '../../../../../workers/analysis/fitted-densities';
 
-export type PreviewShape =
-  | { samples: number[] }
-  | { density: (x: number) => number; domain: [number, number] };
+export type PreviewShape = { samples: number[] } | { density: (x: number) => number; domain: [number, number] };
 
 export function previewShape(d: Distribution): PreviewShape {
   switch (d.kind) {
@@ -22,13 +20,22 @@ export function previewShape(d: Distribution): PreviewShape {
       return {
         density: (x) => {
           if (x < d.min || x > d.max) return 0;
-          return x <= d.mode ? (d.mode === d.min ? 1 : (x - d.min) / (d.mode - d.min)) : d.max === d.mode ? 1 : (d.max - x) / (d.max - d.mode);
+          return x <= d.mode
+            ? d.mode === d.min
+              ? 1
+              : (x - d.min) / (d.mode - d.min)
+            : d.max === d.mode
+              ? 1
+              : (d.max - x) / (d.max - d.mode);
         },
         domain: [d.min, d.max],
       };
     case 'normal': {
       const { pdf } = normalLaw(d.mean, d.sd);
-      return { density: (x) => (x < d.min ? 0 : pdf(x)), domain: [Math.max(d.min, d.mean - 4 * d.sd), d.mean + 4 * d.sd] };
+      return {
+        density: (x) => (x < d.min ? 0 : pdf(x)),
+        domain: [Math.max(d.min, d.mean - 4 * d.sd), d.mean + 4 * d.sd],
+      };
     }
     case 'lognormal': {
       const { mu, sigma } = lognormalFromMeanCv(d.mean, d.cv);

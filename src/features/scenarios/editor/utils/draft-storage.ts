@@ -15,8 +15,13 @@ export function readDraft(scenarioId: string): StoredDraft | null {
     const text = window.sessionStorage.getItem(keyOf(scenarioId));
     if (!text) return null;
     const value = JSON.parse(text) as Partial<StoredDraft>;
-    if (typeof value.baseRevisionNumber !== 'number' || typeof value.document !== 'object' || value.document === null) return null;
-    return { baseRevisionNumber: value.baseRevisionNumber, document: value.document, storedAt: String(value.storedAt ?? '') };
+    if (typeof value.baseRevisionNumber !== 'number' || typeof value.document !== 'object' || value.document === null)
+      return null;
+    return {
+      baseRevisionNumber: value.baseRevisionNumber,
+      document: value.document,
+      storedAt: String(value.storedAt ?? ''),
+    };
   } catch {
     return null;
   }

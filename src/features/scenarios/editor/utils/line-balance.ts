@@ -21,6 +21,14 @@ export function balanceSteps(steps: readonly (DraftStep | undefined)[] | undefin
     const variances = moments.map((m) => (m.success ? distributionVariance(m.data) : 0));
     const mean = means.reduce((a, b) => a + b, 0) / stations.length;
     const variance = variances.reduce((a, b) => a + b, 0) / stations.length;
-    return [{ id: step.id || `step-${index + 1}`, name: step.name || step.id || `Step ${index + 1}`, meanCycleSeconds: mean, sdCycleSeconds: Math.sqrt(variance), parallelStations: stations.length }];
+    return [
+      {
+        id: step.id || `step-${index + 1}`,
+        name: step.name || step.id || `Step ${index + 1}`,
+        meanCycleSeconds: mean,
+        sdCycleSeconds: Math.sqrt(variance),
+        parallelStations: stations.length,
+      },
+    ];
   });
 }

@@ -3,7 +3,11 @@
 import { sentenceFor } from '../../../../lib/form-errors';
 
 export function fieldMessage(label: string, path: string, message: string): string {
-  const key = path.split('.').filter((part) => !/^\d+$/.test(part)).pop() ?? '';
+  const key =
+    path
+      .split('.')
+      .filter((part) => !/^\d+$/.test(part))
+      .pop() ?? '';
   const bare = label.replace(/\s*\([^)]*\)$/, '');
   if (key !== '' && message.startsWith(`${key} `)) return `${bare}${message.slice(key.length)}`;
   return sentenceFor(label, message);

@@ -22,7 +22,9 @@ export function toFormPath(issuePath: string | readonly PropertyKey[]): string {
 /** "steps.2.stations.0.positionMm" → "steps[2].stations[0].positionMm", the way messages show paths. */
 export function displayPath(formPath: string): string {
   if (formPath === '') return '(document)';
-  return formPath.split('.').reduce((out, key) => (/^\d+$/.test(key) ? `${out}[${key}]` : out ? `${out}.${key}` : key), '');
+  return formPath
+    .split('.')
+    .reduce((out, key) => (/^\d+$/.test(key) ? `${out}[${key}]` : out ? `${out}.${key}` : key), '');
 }
 
 const SECTION_OF_ROOT: Record<string, SectionId> = {
@@ -46,7 +48,10 @@ export function sectionOf(formPath: string): SectionId {
 }
 
 const isFieldError = (value: unknown): value is FieldError =>
-  typeof value === 'object' && value !== null && typeof (value as { message?: unknown }).message === 'string' && 'type' in value;
+  typeof value === 'object' &&
+  value !== null &&
+  typeof (value as { message?: unknown }).message === 'string' &&
+  'type' in value;
 
 /** Every message in react-hook-form's nested error object, with its dotted path. */
 export function flattenErrors(errors: FieldErrors | undefined, prefix = ''): PathIssue[] {

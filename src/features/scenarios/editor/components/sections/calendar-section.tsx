@@ -14,12 +14,16 @@ function WorkingHours() {
   const nums = [calendar?.shiftsPerDay, calendar?.hoursPerShift, calendar?.daysPerWeek, calendar?.weeksPerYear];
   if (!nums.every((n) => typeof n === 'number' && Number.isFinite(n))) return null;
   const [shifts, hours, days, weeks] = nums as number[];
-  const breakMinutes = (calendar?.breaks ?? []).reduce((sum, b) => sum + (typeof b?.minutes === 'number' && Number.isFinite(b.minutes) ? b.minutes : 0), 0);
+  const breakMinutes = (calendar?.breaks ?? []).reduce(
+    (sum, b) => sum + (typeof b?.minutes === 'number' && Number.isFinite(b.minutes) ? b.minutes : 0),
+    0,
+  );
   const working = shifts * days * weeks * Math.max(0, hours - breakMinutes / 60);
   return (
     <p className="text-sm text-ink-soft" data-annual-hours>
-      {(shifts * hours * days * weeks).toLocaleString('en-GB', { maximumFractionDigits: 0 })} staffed hours a year, of which about{' '}
-      <strong className="text-ink">{working.toLocaleString('en-GB', { maximumFractionDigits: 0 })}</strong> outside breaks.
+      {(shifts * hours * days * weeks).toLocaleString('en-GB', { maximumFractionDigits: 0 })} staffed hours a year, of
+      which about <strong className="text-ink">{working.toLocaleString('en-GB', { maximumFractionDigits: 0 })}</strong>{' '}
+      outside breaks.
     </p>
   );
 }
@@ -29,7 +33,10 @@ export function CalendarSection() {
   const breaks = useFieldArray({ control, name: 'calendar.breaks' });
   return (
     <div className="flex flex-col gap-5">
-      <SectionHeading title="Calendar" description="Every shift of a day has the same length and breaks. Choose below whether breaks stop only the manual stations set to pause, or the whole line." />
+      <SectionHeading
+        title="Calendar"
+        description="Every shift of a day has the same length and breaks. Choose below whether breaks stop only the manual stations set to pause, or the whole line."
+      />
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
         <NumberField name="calendar.shiftsPerDay" label="Shifts per day" step="1" />
         <NumberField name="calendar.hoursPerShift" label="Hours per shift" />
@@ -42,7 +49,9 @@ export function CalendarSection() {
       </SectionHeading>
       <SelectField name="calendar.breakMode" label="During breaks" options={BREAK_MODE_OPTIONS} />
       <ListIssue name="calendar.breaks" />
-      {breaks.fields.length === 0 && <p className="text-sm text-ink-soft">No breaks: the line works the whole shift.</p>}
+      {breaks.fields.length === 0 && (
+        <p className="text-sm text-ink-soft">No breaks: the line works the whole shift.</p>
+      )}
       <ol className="flex flex-col gap-2">
         {breaks.fields.map((field, i) => (
           <li key={field.id} className="grid grid-cols-[1fr_1fr_auto] items-start gap-2">

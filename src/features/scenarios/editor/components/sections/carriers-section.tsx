@@ -23,10 +23,16 @@ export function CarriersSection() {
   const empty = useWatch<ScenarioForm, 'carriers.empty'>({ name: 'carriers.empty' });
   const sameAsLoaded = empty === undefined;
   const toggle = (same: boolean) =>
-    setValue('carriers.empty', same ? undefined : { ...getValues('carriers.loaded') }, { shouldDirty: true, shouldValidate: true });
+    setValue('carriers.empty', same ? undefined : { ...getValues('carriers.loaded') }, {
+      shouldDirty: true,
+      shouldValidate: true,
+    });
   return (
     <div className="flex flex-col gap-5">
-      <SectionHeading title="Carriers" description="Carriers never pass each other on a lane and keep at least the minimum gap, so a lane holds a bounded number." />
+      <SectionHeading
+        title="Carriers"
+        description="Carriers never pass each other on a lane and keep at least the minimum gap, so a lane holds a bounded number."
+      />
       <div className="grid grid-cols-3 gap-3">
         <NumberField name="carriers.count" label="Carrier count" step="1" />
         <NumberField name="carriers.lengthMm" label="Carrier length (mm)" />
@@ -34,7 +40,13 @@ export function CarriersSection() {
       </div>
       <MotionFields prefix="carriers.loaded" title="Motion with a part on board" />
       <label className="flex items-center gap-2 text-sm text-ink">
-        <input type="checkbox" className="size-4 accent-accent" checked={sameAsLoaded} disabled={readOnly} onChange={(e) => toggle(e.target.checked)} />
+        <input
+          type="checkbox"
+          className="size-4 accent-accent"
+          checked={sameAsLoaded}
+          disabled={readOnly}
+          onChange={(e) => toggle(e.target.checked)}
+        />
         Empty carriers move like loaded ones
       </label>
       {!sameAsLoaded && <MotionFields prefix="carriers.empty" title="Motion when empty" />}

@@ -11,20 +11,42 @@ export function ConveyorSection() {
   const kind = useWatch<ScenarioForm, 'conveyor.kind'>({ name: 'conveyor.kind' }) ?? 'carriers';
   const choose = (next: 'carriers' | 'belt') => {
     const length = Number(getValues('carriers.lengthMm'));
-    setValue('conveyor', conveyorOfKind(next, Number.isFinite(length) ? length : 0), { shouldDirty: true, shouldValidate: true });
+    setValue('conveyor', conveyorOfKind(next, Number.isFinite(length) ? length : 0), {
+      shouldDirty: true,
+      shouldValidate: true,
+    });
   };
   return (
     <div className="flex flex-col gap-5">
-      <SectionHeading title="Conveyor" description="Run the layout with independent carriers, or as a belt baseline to show what the carriers gain." />
+      <SectionHeading
+        title="Conveyor"
+        description="Run the layout with independent carriers, or as a belt baseline to show what the carriers gain."
+      />
       <div role="radiogroup" aria-label="Conveyor mode" className="flex flex-col gap-2">
         {(
           [
-            ['carriers', 'Independent carriers', 'Each carrier moves on its own motion profile and stops at any position.'],
-            ['belt', 'Belt baseline', 'Pallets ride at constant belt speed, queue at a fixed pitch and need a stop-and-locate time at each station.'],
+            [
+              'carriers',
+              'Independent carriers',
+              'Each carrier moves on its own motion profile and stops at any position.',
+            ],
+            [
+              'belt',
+              'Belt baseline',
+              'Pallets ride at constant belt speed, queue at a fixed pitch and need a stop-and-locate time at each station.',
+            ],
           ] as const
         ).map(([value, label, hint]) => (
           <label key={value} className="flex items-start gap-2 text-sm">
-            <input type="radio" name="conveyor-kind" value={value} checked={kind === value} disabled={readOnly} onChange={() => choose(value)} className="mt-1 accent-accent" />
+            <input
+              type="radio"
+              name="conveyor-kind"
+              value={value}
+              checked={kind === value}
+              disabled={readOnly}
+              onChange={() => choose(value)}
+              className="mt-1 accent-accent"
+            />
             <span>
               <span className="font-semibold text-ink">{label}</span>
               <span className="block text-ink-soft">{hint}</span>

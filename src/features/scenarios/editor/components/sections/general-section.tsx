@@ -8,7 +8,11 @@ export function GeneralSection() {
       <SectionHeading title="General" description="What this layout is, and the takt the sales plan needs from it." />
       <TextField name="name" label="Scenario name" />
       <TextField name="description" label="Description" multiline />
-      <NumberField name="targetTaktSeconds" label="Target takt (s)" hint="Seconds per part the line must reach; leave empty if not yet known. The line-balance chart compares each step with it." />
+      <NumberField
+        name="targetTaktSeconds"
+        label="Target takt (s)"
+        hint="Seconds per part the line must reach; leave empty if not yet known. The line-balance chart compares each step with it."
+      />
     </div>
   );
 }

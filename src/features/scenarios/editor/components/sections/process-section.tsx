@@ -14,7 +14,12 @@ function StepRow({ index, selected, onPick }: { index: number; selected: boolean
   const step = useWatch<ScenarioForm, `steps.${number}`>({ name: `steps.${index}` });
   const issues = useIssueCount(`steps.${index}`);
   return (
-    <PickRow selected={selected} onPick={onPick} invalid={issues > 0} label={`Step ${index + 1}: ${step?.name ?? ''}${issues > 0 ? `, ${issues} problem${issues === 1 ? '' : 's'}` : ''}`}>
+    <PickRow
+      selected={selected}
+      onPick={onPick}
+      invalid={issues > 0}
+      label={`Step ${index + 1}: ${step?.name ?? ''}${issues > 0 ? `, ${issues} problem${issues === 1 ? '' : 's'}` : ''}`}
+    >
       <span className="w-6 text-right text-xs text-ink-soft tabular-nums">{index + 1}.</span>
       <span className="flex-1 truncate">{step?.name}</span>
       <span className="text-xs text-ink-soft">{step?.kind}</span>
@@ -29,7 +34,8 @@ export function ProcessSection() {
   const { selection, select } = useEditor();
   const [openStep, setOpenStep] = useState(0);
   const count = steps.fields.length;
-  const current = selection?.kind === 'station' && selection.stepIndex < count ? selection.stepIndex : Math.min(openStep, count - 1);
+  const current =
+    selection?.kind === 'station' && selection.stepIndex < count ? selection.stepIndex : Math.min(openStep, count - 1);
 
   const open = (index: number) => {
     setOpenStep(index);
@@ -40,7 +46,10 @@ export function ProcessSection() {
     open(to);
   };
   const add = () => {
-    const id = freeId('step', (getValues('steps') ?? []).map((s) => s.id));
+    const id = freeId(
+      'step',
+      (getValues('steps') ?? []).map((s) => s.id),
+    );
     // New work goes before unload, which must stay last.
     const at = Math.max(count - 1, 0);
     steps.insert(at, { id, name: 'New step', kind: 'process', dispatch: DEFAULT_DISPATCH, stations: [] });
@@ -53,14 +62,21 @@ export function ProcessSection() {
 
   return (
     <div className="flex flex-col gap-4">
-      <SectionHeading title={`Process steps (${count})`} description="In order: the first step loads, the last unloads.">
+      <SectionHeading
+        title={`Process steps (${count})`}
+        description="In order: the first step loads, the last unloads."
+      >
         <SmallButton onClick={add}>Add step</SmallButton>
         {current >= 0 && (
           <>
             <SmallButton onClick={() => move(current, current - 1)} disabled={current <= 0} label="Move step up">
               ↑ Up
             </SmallButton>
-            <SmallButton onClick={() => move(current, current + 1)} disabled={current >= count - 1} label="Move step down">
+            <SmallButton
+              onClick={() => move(current, current + 1)}
+              disabled={current >= count - 1}
+              label="Move step down"
+            >
               ↓ Down
             </SmallButton>
             <SmallButton onClick={() => remove(current)} disabled={count <= 2}>
@@ -70,7 +86,11 @@ export function ProcessSection() {
         )}
       </SectionHeading>
       <ListIssue name="steps" />
-      <div className="max-h-60 overflow-y-auto rounded-md border border-paper-sunk" role="list" aria-label="Process steps">
+      <div
+        className="max-h-60 overflow-y-auto rounded-md border border-paper-sunk"
+        role="list"
+        aria-label="Process steps"
+      >
         {steps.fields.map((field, i) => (
           <div role="listitem" key={field.id}>
             <StepRow index={i} selected={current === i} onPick={() => open(i)} />

@@ -24,15 +24,37 @@ export function StationDetails({ stepIndex, stationIndex }: { stepIndex: number;
   const stationName = useWatch<ScenarioForm, `steps.${number}.stations.${number}.name`>({ name: `${base}.name` });
   const lanes = useWatch<ScenarioForm, 'lanes'>({ name: 'lanes' }) ?? [];
   const failures = useWatch<ScenarioForm, `steps.${number}.stations.${number}.failures`>({ name: `${base}.failures` });
-  const toggleFailures = (on: boolean) => setValue(`${base}.failures`, on ? structuredClone(DEFAULT_FAILURES) : undefined, { shouldDirty: true, shouldValidate: true });
+  const toggleFailures = (on: boolean) =>
+    setValue(`${base}.failures`, on ? structuredClone(DEFAULT_FAILURES) : undefined, {
+      shouldDirty: true,
+      shouldValidate: true,
+    });
   return (
-    <div className="flex flex-col gap-3 rounded-md border border-accent/40 bg-paper p-3" data-station-details={`${stepIndex}.${stationIndex}`}>
+    <div
+      className="flex flex-col gap-3 rounded-md border border-accent/40 bg-paper p-3"
+      data-station-details={`${stepIndex}.${stationIndex}`}
+    >
       <div className="grid grid-cols-2 gap-3">
         <TextField name={`${base}.id`} label="Station id" />
         <TextField name={`${base}.name`} label="Station name" />
-        <SelectField name={`${base}.laneId`} label="Lane" options={lanes.map((lane) => ({ value: lane?.id ?? '', label: `${lane?.id ?? ''}${lane?.name ? ` — ${lane.name}` : ''}` }))} />
-        <NumberField name={`${base}.positionMm`} label="Position (mm)" hint="Where the carrier's front stops, from the lane's start." />
-        <SelectField name={`${base}.operation`} label="Operation" options={STATION_OPERATIONS.map((o) => ({ value: o, label: o }))} />
+        <SelectField
+          name={`${base}.laneId`}
+          label="Lane"
+          options={lanes.map((lane) => ({
+            value: lane?.id ?? '',
+            label: `${lane?.id ?? ''}${lane?.name ? ` — ${lane.name}` : ''}`,
+          }))}
+        />
+        <NumberField
+          name={`${base}.positionMm`}
+          label="Position (mm)"
+          hint="Where the carrier's front stops, from the lane's start."
+        />
+        <SelectField
+          name={`${base}.operation`}
+          label="Operation"
+          options={STATION_OPERATIONS.map((o) => ({ value: o, label: o }))}
+        />
         <div className="pt-5">
           <CheckField name={`${base}.pausesForBreaks`} label="Pauses for breaks" />
         </div>
@@ -47,12 +69,21 @@ export function StationDetails({ stepIndex, stationIndex }: { stepIndex: number;
           onUse: (d) => setValue(`${base}.cycleTimeSeconds`, d, { shouldDirty: true, shouldValidate: true }),
         })}
       <label className="flex items-center gap-2 text-sm text-ink">
-        <input type="checkbox" className="size-4 accent-accent" checked={failures !== undefined} disabled={readOnly} onChange={(e) => toggleFailures(e.target.checked)} />
+        <input
+          type="checkbox"
+          className="size-4 accent-accent"
+          checked={failures !== undefined}
+          disabled={readOnly}
+          onChange={(e) => toggleFailures(e.target.checked)}
+        />
         This station fails now and then
       </label>
       {failures !== undefined && (
         <>
-          <DistributionEditor name={`${base}.failures.timeBetweenFailuresSeconds`} label="Operating time between failures (MTBF)" />
+          <DistributionEditor
+            name={`${base}.failures.timeBetweenFailuresSeconds`}
+            label="Operating time between failures (MTBF)"
+          />
           <DistributionEditor name={`${base}.failures.timeToRepairSeconds`} label="Time to repair (MTTR)" />
         </>
       )}

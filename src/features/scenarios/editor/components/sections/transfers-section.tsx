@@ -11,7 +11,10 @@ const KIND_LABELS: Record<TransferKind, string> = { elevator: 'Elevator', latera
 
 function useLaneOptions() {
   const lanes = useWatch<ScenarioForm, 'lanes'>({ name: 'lanes' }) ?? [];
-  return lanes.map((lane) => ({ value: lane?.id ?? '', label: `${lane?.id ?? ''}${lane?.name ? ` — ${lane.name}` : ''}` }));
+  return lanes.map((lane) => ({
+    value: lane?.id ?? '',
+    label: `${lane?.id ?? ''}${lane?.name ? ` — ${lane.name}` : ''}`,
+  }));
 }
 
 function TransferCard({ index, onRemove }: { index: number; onRemove: () => void }) {
@@ -29,7 +32,12 @@ function TransferCard({ index, onRemove }: { index: number; onRemove: () => void
       <div className="flex flex-wrap items-end justify-between gap-2">
         <label className="flex flex-col gap-1 text-xs font-semibold text-ink">
           Kind
-          <select value={kind} disabled={readOnly} onChange={(e) => changeKind(e.target.value as TransferKind)} className="rounded border border-ink-faint bg-paper-raised px-2 py-1.5 text-sm font-normal disabled:bg-paper-sunk">
+          <select
+            value={kind}
+            disabled={readOnly}
+            onChange={(e) => changeKind(e.target.value as TransferKind)}
+            className="rounded border border-ink-faint bg-paper-raised px-2 py-1.5 text-sm font-normal disabled:bg-paper-sunk"
+          >
             {TRANSFER_KINDS.map((k) => (
               <option key={k} value={k}>
                 {KIND_LABELS[k]}
@@ -50,8 +58,16 @@ function TransferCard({ index, onRemove }: { index: number; onRemove: () => void
       <div key={kind} className="grid grid-cols-3 gap-3">
         {kind === 'elevator' && (
           <>
-            <NumberField name={`transfers.${index}.handlingSeconds`} label="Handling (s)" hint="On and off the platform together." />
-            <NumberField name={`transfers.${index}.liftSpeedMmPerS`} label="Lift speed (mm/s)" hint="Travel height comes from the decks." />
+            <NumberField
+              name={`transfers.${index}.handlingSeconds`}
+              label="Handling (s)"
+              hint="On and off the platform together."
+            />
+            <NumberField
+              name={`transfers.${index}.liftSpeedMmPerS`}
+              label="Lift speed (mm/s)"
+              hint="Travel height comes from the decks."
+            />
           </>
         )}
         {kind === 'lateral' && (
@@ -82,12 +98,18 @@ export function TransfersSection() {
     return { fromLaneId: lanes[0]?.id ?? '', toLaneId: lanes[1]?.id ?? lanes[0]?.id ?? '' };
   };
   const addTransfer = (kind: TransferKind) => {
-    const id = freeId(kind, (getValues('transfers') ?? []).map((t) => t.id));
+    const id = freeId(
+      kind,
+      (getValues('transfers') ?? []).map((t) => t.id),
+    );
     transfers.append(transferOfKind(kind, { id, name: `${KIND_LABELS[kind]} ${id}`, ...firstLanes() }));
   };
   return (
     <div className="flex flex-col gap-5">
-      <SectionHeading title={`Transfers (${transfers.fields.length})`} description="Each holds one carrier at a time; carriers wait for it like for a station.">
+      <SectionHeading
+        title={`Transfers (${transfers.fields.length})`}
+        description="Each holds one carrier at a time; carriers wait for it like for a station."
+      >
         <SmallButton onClick={() => addTransfer('elevator')}>Add elevator</SmallButton>
         <SmallButton onClick={() => addTransfer('lateral')}>Add lateral</SmallButton>
         <SmallButton onClick={() => addTransfer('curve')}>Add curve</SmallButton>
@@ -98,7 +120,10 @@ export function TransfersSection() {
           <TransferCard key={field.id} index={i} onRemove={() => transfers.remove(i)} />
         ))}
       </ol>
-      <SectionHeading title={`Direct links (${links.fields.length})`} description="A lane's end meets the next lane's start on the same deck; the carrier rolls straight on.">
+      <SectionHeading
+        title={`Direct links (${links.fields.length})`}
+        description="A lane's end meets the next lane's start on the same deck; the carrier rolls straight on."
+      >
         <SmallButton onClick={() => links.append(firstLanes())}>Add link</SmallButton>
       </SectionHeading>
       <ListIssue name="links" />

@@ -1,4 +1,4 @@
-// The type check and the lint as steps of `npm test` of their own, outside vitest, so the unit project
+// The type check, the lint and the format check as steps of `npm test` of their own, outside vitest, so the unit project
 // stays fast. Each step counts as one test in the closing line: one passed, or one failed with the
 // tool's output printed under its name.
 import { execFile } from 'node:child_process';
@@ -15,6 +15,8 @@ export interface StaticCheck {
 export const STATIC_CHECKS: StaticCheck[] = [
   { name: 'type check', command: 'tsc', args: ['--noEmit', '-p', '.'] },
   { name: 'lint', command: 'eslint', args: ['.'] },
+  // Lists files that differ from the Prettier settings; silent when the tree is formatted.
+  { name: 'format', command: 'prettier', args: ['--list-different', '.'] },
 ];
 
 export interface StaticCheckResult {

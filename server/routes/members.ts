@@ -61,13 +61,11 @@ export function membersRouter(ctx: AppContext) {
   const memberOf = (res: express.Response) => res.locals.membership as MembershipEntity;
 
   router.get('/organisations/:id/members', loadOrganisation(ctx), async (req, res) => {
-    const members = await ds
-      .getRepository(MembershipEntity)
-      .find({
-        where: { organisationId: loaded(req, 'organisation').id },
-        relations: { user: true },
-        order: { createdAt: 'ASC' },
-      });
+    const members = await ds.getRepository(MembershipEntity).find({
+      where: { organisationId: loaded(req, 'organisation').id },
+      relations: { user: true },
+      order: { createdAt: 'ASC' },
+    });
     res.json(members.map(toMember));
   });
 
@@ -114,12 +112,10 @@ export function membersRouter(ctx: AppContext) {
   );
 
   router.delete('/organisations/:id/membership', loadOrganisation(ctx), async (req, res) => {
-    const membership = await ds
-      .getRepository(MembershipEntity)
-      .findOneOrFail({
-        where: { organisationId: loaded(req, 'organisation').id, userId: currentUser(req).id },
-        relations: { user: true },
-      });
+    const membership = await ds.getRepository(MembershipEntity).findOneOrFail({
+      where: { organisationId: loaded(req, 'organisation').id, userId: currentUser(req).id },
+      relations: { user: true },
+    });
     await audited(
       ds,
       async (manager) => {

@@ -35,20 +35,18 @@ export function priceListsRouter(ctx: AppContext) {
       await audited(
         ds,
         (manager) =>
-          manager
-            .getRepository(PriceListEntity)
-            .upsert(
-              {
-                organisationId: organisation.id,
-                currency: body.currency,
-                ...body.prices,
-                note: body.note,
-                invented: false,
-                updatedById: user.id,
-                updatedAt: new Date(),
-              },
-              ['organisationId'],
-            ),
+          manager.getRepository(PriceListEntity).upsert(
+            {
+              organisationId: organisation.id,
+              currency: body.currency,
+              ...body.prices,
+              note: body.note,
+              invented: false,
+              updatedById: user.id,
+              updatedAt: new Date(),
+            },
+            ['organisationId'],
+          ),
         {
           organisationId: organisation.id,
           actorId: user.id,

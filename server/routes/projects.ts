@@ -87,15 +87,13 @@ export function projectsRouter(ctx: AppContext) {
           audited(
             ds,
             (manager) =>
-              manager
-                .getRepository(ProjectEntity)
-                .save({
-                  organisationId: orgId,
-                  name: body.name,
-                  description: body.description ?? '',
-                  clientId: clientId ?? null,
-                  createdById: user.id,
-                }),
+              manager.getRepository(ProjectEntity).save({
+                organisationId: orgId,
+                name: body.name,
+                description: body.description ?? '',
+                clientId: clientId ?? null,
+                createdById: user.id,
+              }),
             (saved) => ({
               organisationId: orgId,
               actorId: user.id,

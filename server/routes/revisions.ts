@@ -70,15 +70,13 @@ export function revisionsRouter(ctx: AppContext) {
             ],
           );
         }
-        const revision = await manager
-          .getRepository(ScenarioRevisionEntity)
-          .save({
-            scenarioId: scenario.id,
-            number: latest.number + 1,
-            document: body.document,
-            message: body.message ?? '',
-            createdById: user.id,
-          });
+        const revision = await manager.getRepository(ScenarioRevisionEntity).save({
+          scenarioId: scenario.id,
+          number: latest.number + 1,
+          document: body.document,
+          message: body.message ?? '',
+          createdById: user.id,
+        });
         // A name changed in the document renames the scenario; an unchanged one leaves a scenario named
         // apart from its document (a copy, the demo's short names) as it was.
         const previous = await manager

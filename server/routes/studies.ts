@@ -134,17 +134,15 @@ export function studiesRouter(ctx: AppContext) {
             jobCount: body.points.length * Math.ceil(body.settings.replications / blockSize),
             createdById: user.id,
           });
-          await manager
-            .getRepository(StudyPointEntity)
-            .insert(
-              body.points.map((p, index) => ({
-                studyId: saved.id,
-                index,
-                revisionId: p.revisionId ?? body.revisionId,
-                label: p.label,
-                changes: p.changes,
-              })),
-            );
+          await manager.getRepository(StudyPointEntity).insert(
+            body.points.map((p, index) => ({
+              studyId: saved.id,
+              index,
+              revisionId: p.revisionId ?? body.revisionId,
+              label: p.label,
+              changes: p.changes,
+            })),
+          );
           return saved;
         },
         (saved) => ({

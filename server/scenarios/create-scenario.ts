@@ -28,15 +28,13 @@ export async function createScenarioWithFirstRevision(
     createdById: input.createdById,
     clientId: input.clientId ?? null,
   });
-  const revision = await manager
-    .getRepository(ScenarioRevisionEntity)
-    .save({
-      scenarioId: scenario.id,
-      number: 1,
-      document: input.document,
-      message: input.message,
-      createdById: input.createdById,
-    });
+  const revision = await manager.getRepository(ScenarioRevisionEntity).save({
+    scenarioId: scenario.id,
+    number: 1,
+    document: input.document,
+    message: input.message,
+    createdById: input.createdById,
+  });
   await scenarios.update({ id: scenario.id }, { latestRevisionId: revision.id });
   await touchProject(manager, input.projectId);
   return { ...scenario, latestRevisionId: revision.id };

@@ -35,16 +35,14 @@ describe('audit trail', () => {
   });
 
   it('filters by date, a whole day when given as YYYY-MM-DD', async () => {
-    const old = await db()
-      .getRepository(AuditEntryEntity)
-      .save({
-        organisationId: org.people.organisationId,
-        actorId: org.people.owner.id,
-        action: 'update',
-        entity: 'project',
-        entityId: 'old-one',
-        detail: {},
-      });
+    const old = await db().getRepository(AuditEntryEntity).save({
+      organisationId: org.people.organisationId,
+      actorId: org.people.owner.id,
+      action: 'update',
+      entity: 'project',
+      entityId: 'old-one',
+      detail: {},
+    });
     await db().query(`UPDATE audit_entries SET created_at = '2026-01-15T12:00:00Z' WHERE id = $1`, [old.id]);
     const day = await audit({ from: '2026-01-15', to: '2026-01-15' });
     expect(day.body.entries.map((e: { id: string }) => e.id)).toEqual([old.id]);

@@ -166,13 +166,11 @@ describe('making a study', () => {
     const scenario = await org.people.outsider.agent
       .post(apiRoutes.projectScenarios(elsewhere.body.id))
       .send({ name: 'Theirs', document: stackedLoop() });
-    const res = await org.people.engineer.agent
-      .post(apiRoutes.projectStudies(org.content.projectId))
-      .send(
-        studyBody(org.content.revisionId, {
-          points: [{ label: 'theirs', revisionId: scenario.body.latestRevision.id }],
-        }),
-      );
+    const res = await org.people.engineer.agent.post(apiRoutes.projectStudies(org.content.projectId)).send(
+      studyBody(org.content.revisionId, {
+        points: [{ label: 'theirs', revisionId: scenario.body.latestRevision.id }],
+      }),
+    );
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toEqual([
       { path: 'points[0].revisionId', message: 'is not a revision of a scenario in this project' },
@@ -197,39 +195,33 @@ describe('making a study', () => {
 
   it('refuses more jobs or simulated hours than allowed, saying how many it would be', async () => {
     const points = Array.from({ length: 100 }, (_, i) => ({ label: `point ${i}` }));
-    const jobs = await org.people.engineer.agent
-      .post(apiRoutes.projectStudies(org.content.projectId))
-      .send(
-        studyBody(org.content.revisionId, {
-          settings: { hours: 0.01, warmupMinutes: 0, replications: 41, seed: 1 },
-          blockSize: 1,
-          points,
-        }),
-      );
+    const jobs = await org.people.engineer.agent.post(apiRoutes.projectStudies(org.content.projectId)).send(
+      studyBody(org.content.revisionId, {
+        settings: { hours: 0.01, warmupMinutes: 0, replications: 41, seed: 1 },
+        blockSize: 1,
+        points,
+      }),
+    );
     expect(jobs.status).toBe(400);
     expect(jobs.body.error.fields[0]).toEqual({
       path: 'blockSize',
       message: `the study would have 4100 jobs; at most ${STUDY_LIMITS.jobsMax} are allowed, so use larger blocks or fewer points`,
     });
-    const atLimit = await org.people.engineer.agent
-      .post(apiRoutes.projectStudies(org.content.projectId))
-      .send(
-        studyBody(org.content.revisionId, {
-          settings: { hours: 0.01, warmupMinutes: 0, replications: 40, seed: 1 },
-          blockSize: 1,
-          points,
-        }),
-      );
+    const atLimit = await org.people.engineer.agent.post(apiRoutes.projectStudies(org.content.projectId)).send(
+      studyBody(org.content.revisionId, {
+        settings: { hours: 0.01, warmupMinutes: 0, replications: 40, seed: 1 },
+        blockSize: 1,
+        points,
+      }),
+    );
     expect(atLimit.status).toBe(201);
-    const hours = await org.people.engineer.agent
-      .post(apiRoutes.projectStudies(org.content.projectId))
-      .send(
-        studyBody(org.content.revisionId, {
-          settings: { hours: 501, warmupMinutes: 0, replications: 1, seed: 1 },
-          blockSize: 1,
-          points,
-        }),
-      );
+    const hours = await org.people.engineer.agent.post(apiRoutes.projectStudies(org.content.projectId)).send(
+      studyBody(org.content.revisionId, {
+        settings: { hours: 501, warmupMinutes: 0, replications: 1, seed: 1 },
+        blockSize: 1,
+        points,
+      }),
+    );
     expect(hours.status).toBe(400);
     expect(hours.body.error.fields[0].path).toBe('settings.hours');
     expect(hours.body.error.fields[0].message).toContain('50100 hours');
@@ -260,12 +252,10 @@ describe('job results', () => {
     expect(short.body.error.fields).toEqual([
       { path: 'summaries', message: 'must hold 2 replication summaries, one per replication of the job' },
     ]);
-    const broken = await org.people.engineer.agent
-      .post(apiRoutes.studyResults(study.id))
-      .send({
-        ...doneBody(0, blocks[0]),
-        summaries: [{ ...blocks[0].summaries[0], lead: [1, 2] }, blocks[0].summaries[1]],
-      });
+    const broken = await org.people.engineer.agent.post(apiRoutes.studyResults(study.id)).send({
+      ...doneBody(0, blocks[0]),
+      summaries: [{ ...blocks[0].summaries[0], lead: [1, 2] }, blocks[0].summaries[1]],
+    });
     expect(broken.body.error.fields[0].path).toBe('summaries[0].lead');
   });
 
@@ -274,15 +264,13 @@ describe('job results', () => {
     const engineer = org.people.engineer.agent;
     for (const block of blocks)
       expect((await engineer.post(apiRoutes.studyResults(study.id)).send(doneBody(0, block))).status).toBe(201);
-    await engineer
-      .post(apiRoutes.studyResults(study.id))
-      .send({
-        pointIndex: 1,
-        first: 0,
-        count: 2,
-        outcome: 'stopped',
-        message: 'gridlock: every carrier waits for another',
-      });
+    await engineer.post(apiRoutes.studyResults(study.id)).send({
+      pointIndex: 1,
+      first: 0,
+      count: 2,
+      outcome: 'stopped',
+      message: 'gridlock: every carrier waits for another',
+    });
     const last = await engineer
       .post(apiRoutes.studyResults(study.id))
       .send({ pointIndex: 1, first: 2, count: 1, outcome: 'stopped', message: 'gridlock' });

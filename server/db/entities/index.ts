@@ -12,6 +12,7 @@ import { ScenarioEntity } from './scenario.entity';
 import { SessionEntity } from './session.entity';
 import { SignInAttemptEntity } from './sign-in-attempt.entity';
 import { ShareLinkEntity } from './share-link.entity';
+import { StudyJobFailureEntity } from './study-job-failure.entity';
 import { StudyJobResultEntity } from './study-job-result.entity';
 import { StudyPointEntity } from './study-point.entity';
 import { StudyEntity } from './study.entity';
@@ -33,6 +34,7 @@ export {
   SignInAttemptEntity,
   ShareLinkEntity,
   StudyEntity,
+  StudyJobFailureEntity,
   StudyJobResultEntity,
   StudyPointEntity,
   TimeStudyEntity,
@@ -53,6 +55,7 @@ export const entities = [
   StudyEntity,
   StudyPointEntity,
   StudyJobResultEntity,
+  StudyJobFailureEntity,
   AuditEntryEntity,
   SignInAttemptEntity,
   InvitationEntity,

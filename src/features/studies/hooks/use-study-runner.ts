@@ -8,6 +8,7 @@ import { useCallback, useEffect, useRef, useState } from 'react';
 import { pendingJobs, type SaveJobResultInput, type StudyDetail, type StudyJob } from '../../../../shared/api/studies';
 import type { Progress } from '../../../../workers/engine';
 import type { StudyJobOutcome } from '../../../../workers/simulation.worker';
+import { jobResultBody } from '../../../../workers/studies/run-study-job';
 import { isCancelled, sharedEnginePool, type PoolSession } from '../../../lib/engine/engine-pool';
 import { saveJobResult } from '../api/save-job-result';
 import { studyKeys } from '../api/keys';
@@ -37,19 +38,6 @@ async function saveWithRetry(studyId: string, body: SaveJobResultInput): Promise
       await new Promise((resolve) => setTimeout(resolve, 500 * attempt));
     }
   }
-}
-
-function resultBody(job: StudyJob, answer: Exclude<StudyJobOutcome, { outcome: 'cancelled' }>): SaveJobResultInput {
-  const key = { pointIndex: job.pointIndex, first: job.first, count: job.count };
-  return answer.outcome === 'done'
-    ? {
-        ...key,
-        outcome: 'done',
-        engineVersion: answer.engineVersion,
-        summaries: answer.block.summaries,
-        events: answer.block.events,
-      }
-    : { ...key, outcome: answer.outcome, message: answer.message.slice(0, 2_000) };
 }
 
 export function useStudyRunner(study: StudyDetail | undefined, documents: Record<string, unknown> | undefined) {
@@ -109,7 +97,7 @@ export function useStudyRunner(study: StudyDetail | undefined, documents: Record
             )) as StudyJobOutcome);
       inFlight.delete(k);
       if (answer.outcome === 'cancelled' || own.isCancelled) return;
-      await saveWithRetry(study.id, resultBody(job, answer));
+      await saveWithRetry(study.id, jobResultBody(job, answer));
       finished++;
       done++;
       update();

@@ -44,7 +44,7 @@ function externalServer(url: string): LocalPostgres {
   return { url: (db) => withDatabase(url, db), stop: async () => undefined, startedHere: false, external: true };
 }
 
-function initCluster(bins: PgBinaries, paths: ClusterPaths): void {
+export function initCluster(bins: PgBinaries, paths: ClusterPaths): void {
   say(`creating a PostgreSQL ${bins.major} cluster in ${paths.dataDir}`);
   const args = ['-D', paths.dataDir, '-U', SUPERUSER, '-A', 'trust', '-E', 'UTF8', '--locale=C.UTF-8'];
   const result = runCommand(bins.bin('initdb'), args, { asServerUser: true, cwd: paths.dataDir });
@@ -97,7 +97,7 @@ function logTail(paths: ClusterPaths, lines = 15): string {
   }
 }
 
-async function startCluster(bins: PgBinaries, paths: ClusterPaths, port: number): Promise<void> {
+export async function startCluster(bins: PgBinaries, paths: ClusterPaths, port: number): Promise<void> {
   if (await portTaken(port)) {
     throw new SetupError(
       `port ${port} on ${HOST} is already taken by another program (perhaps the PostgreSQL of another Lanewright clone). ` +
@@ -126,7 +126,7 @@ async function waitUntilReady(bins: PgBinaries, port: number, paths: ClusterPath
   }
 }
 
-function stopCluster(bins: PgBinaries, paths: ClusterPaths): void {
+export function stopCluster(bins: PgBinaries, paths: ClusterPaths): void {
   const result = runCommand(bins.bin('pg_ctl'), ['-D', paths.dataDir, '-m', 'fast', '-w', '-t', '60', 'stop'], {
     asServerUser: true,
     cwd: paths.dataDir,

@@ -53,8 +53,8 @@ export async function startStudyWorker(options: StudyWorkerOptions): Promise<Stu
   return {
     threads: engine.size,
     stop: async () => {
-      await Promise.all([jobs.stop(), deadLetters.stop()]);
-      await engine.close();
+      // Ending the threads fails the jobs in hand at once, so they retry elsewhere without waiting for expiry.
+      await Promise.all([jobs.stop(), deadLetters.stop(), engine.close()]);
       await stopQueue(boss);
     },
   };

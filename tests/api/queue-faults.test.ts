@@ -22,7 +22,7 @@ import { useCleanDatabase } from './fixtures/database';
 import { stackedLoop } from './fixtures/documents';
 import { mailbox, testMailer } from './fixtures/mail';
 import { emptyQueue } from './fixtures/queue';
-import { startWorkerProcess, type WorkerProcess } from './fixtures/worker-process';
+import { startWorkerProcess, type WorkerProcess } from '../../server/worker/worker-process';
 
 /** Short, so a killed worker's job comes back soon; long enough for any one job here. */
 const TIME_LIMIT_SECONDS = 8;

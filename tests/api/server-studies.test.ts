@@ -21,7 +21,7 @@ import { useCleanDatabase } from './fixtures/database';
 import { stackedLoop } from './fixtures/documents';
 import { mailTo } from './fixtures/mail';
 import { emptyQueue, useQueue } from './fixtures/queue';
-import { startWorkerProcess, type WorkerProcess } from './fixtures/worker-process';
+import { startWorkerProcess, type WorkerProcess } from '../../server/worker/worker-process';
 import { ACTORS, useOrganisation, type Actor } from './fixtures/world';
 
 const db = useCleanDatabase({ truncate: false });

@@ -5,18 +5,10 @@
 // Carriers that may be able to move are put on a wake ring and retried after the current event, so
 // no handler re-enters another. A carrier held right behind another at rest may join it in a
 // platoon (platoons.ts); a platoon moves as one, through its leader.
+import { scheduleActive, scheduleActiveAt } from '../kernel/clock';
 import { followerProfile, PROFILE_EMPTY, PROFILE_LOADED } from './motion';
 import { canJoin, join, leaderOf, offsetMm, phaseOf, rearOf, ridersChangePhase } from './platoons';
-import {
-  EV_ARRIVE,
-  EV_LANE_WAKE,
-  PH_EXIT,
-  PH_MOVING,
-  PH_QUEUED,
-  scheduleActive,
-  scheduleActiveAt,
-  type LineState,
-} from './state';
+import { EV_ARRIVE, EV_LANE_WAKE, PH_EXIT, PH_MOVING, PH_QUEUED, type LineState } from './state';
 import { NONE, type CarrierIndex, type ConnIndex, type LaneIndex } from './indexes';
 
 const EPS_MM = 1e-6;

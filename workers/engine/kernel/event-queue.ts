@@ -79,8 +79,44 @@ export class EventQueue {
     this.free[this.freeTop++] = slot;
     const last = n - 1;
     this.size = last;
-    if (last > 0) this.siftDown(0, this.hTime[last], this.hKey[last], this.hSlot[last]);
+    if (last > 0) this.refill(this.hTime[last], this.hKey[last], this.hSlot[last]);
     return true;
+  }
+
+  /**
+   * Fills the hole left at the root by the pop with the entry that was last (Floyd's bottom-up
+   * variant): the hole first sinks to a leaf along the earliest children, then the entry rises from
+   * there. The last entry is late as a rule, so it rarely rises far, and the way down saves the
+   * comparison with it at every level. Entries are unique (sequence), so the pop order is the same
+   * as that of any other heap.
+   */
+  private refill(time: number, key: number, slot: number): void {
+    const ht = this.hTime;
+    const hk = this.hKey;
+    const hs = this.hSlot;
+    const n = this.size;
+    let i = 0;
+    for (;;) {
+      const first = 4 * i + 1;
+      if (first >= n) break;
+      let best = first;
+      let bt = ht[first];
+      let bk = hk[first];
+      const end = first + 4 < n ? first + 4 : n;
+      for (let c = first + 1; c < end; c++) {
+        const ct = ht[c];
+        if (ct < bt || (ct === bt && hk[c] < bk)) {
+          best = c;
+          bt = ct;
+          bk = hk[c];
+        }
+      }
+      ht[i] = bt;
+      hk[i] = bk;
+      hs[i] = hs[best];
+      i = best;
+    }
+    this.siftUp(i, time, key, slot);
   }
 
   /**

@@ -59,7 +59,10 @@ export function wake(m: LineState, c: CarrierIndex): void {
   if (c < 0 || m.cWoken[c]) return;
   m.cWoken[c] = 1;
   const ring = m.wakeRing;
-  ring[(m.wakeHead + m.wakeCount) % ring.length] = c;
+  // A wrap by comparison, not %: this runs several times per event.
+  let at = m.wakeHead + m.wakeCount;
+  if (at >= ring.length) at -= ring.length;
+  ring[at] = c;
   m.wakeCount++;
 }
 
@@ -67,7 +70,7 @@ export function wake(m: LineState, c: CarrierIndex): void {
 export function nextWoken(m: LineState): CarrierIndex {
   if (m.wakeCount === 0) return NONE;
   const c = m.wakeRing[m.wakeHead];
-  m.wakeHead = (m.wakeHead + 1) % m.wakeRing.length;
+  if (++m.wakeHead === m.wakeRing.length) m.wakeHead = 0;
   m.wakeCount--;
   m.cWoken[c] = 0;
   return c;

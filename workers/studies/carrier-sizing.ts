@@ -2,7 +2,9 @@
 // per station (fewer leaves a station waiting for work by construction) to the most the track holds.
 // The recommendation is the smallest count whose throughput is within a tolerance of the best and that
 // meets the target when any count does, said in words with the price paid beyond it in lead time.
+import type { StudyDetail } from '../../shared/api/studies';
 import type { Scenario } from '../../shared/scenario/scenario';
+import { CARRIER_COUNT_PATH } from '../../shared/studies/sweepable-fields';
 import { trackCapacity } from '../engine';
 import type { PointStatistics } from './point-statistics';
 
@@ -27,6 +29,20 @@ export function defaultCarrierRange(s: Scenario): { low: number; high: number } 
 }
 
 export type SizingPoint = { carriers: number; stats: PointStatistics };
+
+/** Each point's carrier count beside its statistics (NaN for a point that does not set the count). */
+export function sizingPointsOf(study: Pick<StudyDetail, 'points'>, stats: PointStatistics[]): SizingPoint[] {
+  return stats.map((s) => ({
+    carriers: study.points[s.index].changes.find((c) => c.path === CARRIER_COUNT_PATH)?.value ?? Number.NaN,
+    stats: s,
+  }));
+}
+
+/** The rate a scenario's target takt asks for, or null without a target. */
+export const targetPerHourOf = (s: Scenario) => (s.targetTaktSeconds ? 3600 / s.targetTaktSeconds : null);
+
+/** Station names in the order of a point's bottleneck shares. */
+export const stationNamesOf = (s: Scenario) => s.steps.flatMap((step) => step.stations.map((st) => st.name));
 
 export type SizingAdvice =
   | { kind: 'recommend'; carriers: number; best: number; meetsTarget: boolean | null; text: string }

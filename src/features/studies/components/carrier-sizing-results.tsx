@@ -11,7 +11,7 @@ import {
 import type { PointStatistics } from '../../../../workers/studies/point-statistics';
 import { CurveWithBand, type SweepPoint } from '../../../components/charts';
 import { Recommendation } from './recommendation';
-import { curveOf } from '../utils/curves';
+import { curveOf, stopsOf } from '../utils/curves';
 
 export function CarrierSizingResults({
   study,
@@ -27,6 +27,7 @@ export function CarrierSizingResults({
   const advice = recommendCarriers(sized, target, stationNamesOf(scenario));
   const xOf = (s: PointStatistics) => sized[s.index].carriers;
   const throughput: SweepPoint[] = curveOf(stats, xOf, (s) => s.throughput);
+  const stops = stopsOf(stats, xOf);
   const recommended =
     advice.kind === 'recommend' && throughput.some((p) => p.x === advice.carriers) ? advice.carriers : undefined;
   return (
@@ -56,6 +57,7 @@ export function CarrierSizingResults({
             ? { value: target, label: `target ${target.toFixed(1)} parts/h (takt ${scenario.targetTaktSeconds} s)` }
             : undefined
         }
+        stops={stops}
         title="Throughput against carriers"
         exportName="carrier-sizing-throughput"
       />

@@ -2,25 +2,17 @@
 // under every study after the first its difference from the first with the interval on that
 // difference. The verdict is written out, so the table reads in black and white.
 import type { MeanDifference } from '../../../../workers/analysis/compare-means';
-import type { PointStatistics } from '../../../../workers/studies/point-statistics';
+import { POINT_STATE_WORDS, type PointStatistics } from '../../../../workers/studies/point-statistics';
 import { Table, Td, Th } from '../../../components/ui/table';
 import { formatNumber, formatSigned } from '../../../lib/format-number';
 import type { StudyComparison } from '../utils/study-comparison';
-
-const NO_RESULT: Record<PointStatistics['state'], string> = {
-  done: '',
-  partial: '',
-  pending: 'not run yet',
-  invalid: 'not valid',
-  stopped: 'stopped',
-};
 
 function Figures({ stats }: { stats: PointStatistics }) {
   const ci = stats.throughput;
   if (!ci)
     return (
       <span className="text-ink-soft" data-point-state={stats.state} title={stats.message ?? undefined}>
-        {NO_RESULT[stats.state]}
+        {stats.state === 'pending' ? 'not run yet' : POINT_STATE_WORDS[stats.state]}
         {stats.message && <span className="block max-w-56 text-xs">{stats.message}</span>}
       </span>
     );

@@ -9,7 +9,7 @@ import {
   stationNamesOf,
   targetPerHourOf,
 } from '../../../../workers/studies/carrier-sizing';
-import { pointStatistics } from '../../../../workers/studies/point-statistics';
+import { hasFailed, POINT_STATE_WORDS, pointStatistics } from '../../../../workers/studies/point-statistics';
 import { CurvesWithBands } from '../../../components/charts';
 import { Card, CardTitle } from '../../../components/ui/card';
 import { studyAnswer } from '../utils/study-answer';
@@ -84,8 +84,8 @@ export function StudyCompareView({ studies, scenarios, details, question, notes 
   const stops = studies.map((_, s) =>
     comparison.rows.flatMap((row) => {
       const stats = row.cells[s]?.stats;
-      return row.x !== null && stats && (stats.state === 'stopped' || stats.state === 'invalid')
-        ? [{ x: row.x, reason: stats.state === 'stopped' ? 'stopped: no result' : 'not valid' }]
+      return row.x !== null && stats && hasFailed(stats.state)
+        ? [{ x: row.x, reason: POINT_STATE_WORDS[stats.state] }]
         : [];
     }),
   );
@@ -128,7 +128,8 @@ export function StudyCompareView({ studies, scenarios, details, question, notes 
           />
           {stops.some((marks) => marks.length > 0) && (
             <p className="text-sm text-ink-soft">
-              ✕ on the axis: a setting that stopped (for example in a gridlock) or was not valid; it has no result.
+              ✕ on the axis: a setting with no result (it gridlocked, stopped, was not valid or was not run); it is
+              never read as zero.
             </p>
           )}
         </Part>

@@ -185,6 +185,15 @@ describe('carrier recommendation', () => {
     );
   });
 
+  it('blames transport, not a station, when no station is the bottleneck most of the time', () => {
+    const elevatorBound = curve.map((p) => point(p.carriers, p.stats.throughput!.mean, 60, [0.09, 0.06, 0.02]));
+    const advice = recommendCarriers(elevatorBound, 240, ['LD', 'Press', 'UL']);
+    expect(advice).toMatchObject({ kind: 'unreachable', limitingStation: 'LD' });
+    expect(advice.text).toMatch(
+      /No station is the bottleneck most of the time \(the most often is LD, 9 % at 22 carriers\), so transport limits the line/,
+    );
+  });
+
   it('on a tie for the best, names the fewer carriers: they cost less', () => {
     // 20 carriers lie inside the 95 % interval of the highest mean (at 30): a tie, so 20 is named.
     const tied = [10, 20, 30].map((n, i) => point(n, [150, 199.5, 200][i], 60 + i * 10, undefined, 0.005));

@@ -51,6 +51,9 @@ export type SizingAdvice =
   | { kind: 'unreachable'; best: number; bestThroughput: number; limitingStation: string | null; text: string }
   | { kind: 'none'; text: string };
 
+/** A station that is the bottleneck less often than this does not limit the line on its own. */
+const STATION_LIMIT_SHARE = 0.5;
+
 const pct = (x: number) => `${Math.round(x * 100)} %`;
 const perHour = (x: number) => `${x.toFixed(1)} parts/h`;
 
@@ -83,9 +86,11 @@ export function recommendCarriers(
     const shares = best.stats.bottleneckShares;
     const limiting = shares.length > 0 ? shares.indexOf(Math.max(...shares)) : -1;
     const limitingStation = limiting >= 0 ? (stationNames[limiting] ?? null) : null;
-    const limit = limitingStation
-      ? ` Station ${limitingStation} limits the line: it is the bottleneck ${pct(shares[limiting])} of the time at ${best.carriers} carriers, so more carriers cannot help; shorten its cycle time or add a station beside it.`
-      : '';
+    const limit = !limitingStation
+      ? ''
+      : shares[limiting] >= STATION_LIMIT_SHARE
+        ? ` Station ${limitingStation} limits the line: it is the bottleneck ${pct(shares[limiting])} of the time at ${best.carriers} carriers, so more carriers cannot help; shorten its cycle time or add a station beside it.`
+        : ` No station is the bottleneck most of the time (the most often is ${limitingStation}, ${pct(shares[limiting])} at ${best.carriers} carriers), so transport limits the line: look at the elevators, transfers and track speeds; more carriers cannot help.`;
     return {
       kind: 'unreachable',
       best: best.carriers,

@@ -125,6 +125,7 @@ describe('study questions of the demo', () => {
       await picker.getByLabel(/Fleet of the stacked loop/).check();
       await picker.getByLabel(/Fleet of the side-by-side loop/).check();
       await picker.getByRole('button', { name: 'Compare chosen studies' }).click();
+      await page.getByTestId('study-comparison').waitFor();
 
       const chart = page.locator('[data-chart="study-comparison-throughput"]');
       await chart.waitFor();

@@ -2,7 +2,7 @@
 // the recommended setting marked and labelled, and an optional reference level such as the plateau.
 import { extent, max, min, scaleLinear } from 'd3';
 import { useState, type MouseEvent } from 'react';
-import { AxisBottom, AxisLeft, linearTicks } from './Axes';
+import { SweepAxes } from './SweepAxes';
 import { ChartFrame, ChartMessage, plotWidthOf, type Margin } from './ChartFrame';
 import type { LegendItem } from './Legend';
 import { ascendingProblem, LineWithBand, nearestIndex } from './LineWithBand';
@@ -175,31 +175,17 @@ export function CurveWithBand(props: CurveWithBandProps) {
       })}
       exportName={props.exportName ?? 'sweep-curve'}
     >
-      <AxisLeft
-        ticks={linearTicks(y, plotHeight / 45)}
-        height={plotHeight}
-        label={`${yQuantity} (${yUnit})`}
-        gridWidth={plotWidth}
-        labelOffset={54}
-      />
-      <AxisBottom
-        ticks={linearTicks(
-          x,
-          Math.min(plotWidth / 70, xUnit === 'count' ? x1 - x0 : Infinity),
-          xUnit === 'count' ? (v) => (Number.isInteger(v) ? formatNumber(v) : '') : formatNumber,
-        )}
-        width={plotWidth}
+      <SweepAxes
+        x={x}
+        y={y}
+        plotWidth={plotWidth}
         plotHeight={plotHeight}
-        label={`${xQuantity} (${xUnit})`}
+        xQuantity={xQuantity}
+        xUnit={xUnit}
+        yQuantity={yQuantity}
+        yUnit={yUnit}
+        reference={reference}
       />
-      {reference && (
-        <g transform={`translate(0,${y(reference.value)})`} pointerEvents="none" data-chart-part="reference">
-          <line x2={plotWidth} stroke={ink.soft} strokeWidth={1.5} strokeDasharray="4 3" />
-          <text x={4} y={-5} fontSize={11} fill={ink.soft}>
-            {reference.label}
-          </text>
-        </g>
-      )}
       <LineWithBand
         xs={xs}
         values={points.map((p) => p.mean)}

@@ -5,10 +5,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import sideBySideLoop from '../../../shared/examples/side-by-side-loop.json';
 import stackedLoop from '../../../shared/examples/stacked-loop.json';
-import { createStudySchema, type StudyDetail } from '../../../shared/api/studies';
+import type { StudyDetail } from '../../../shared/api/studies';
 import { pairedDifference, welchDifference } from '../../../workers/analysis/compare-means';
-import { carrierSizingPoints } from '../../../workers/studies/build-points';
-import { runStudyLocally } from '../../../workers/studies/run-study-locally';
 import { studyAnswer } from '../../../src/features/study-compare/utils/study-answer';
 import {
   compareStudies,
@@ -16,9 +14,9 @@ import {
   pointKey,
   throughputSeries,
 } from '../../../src/features/study-compare/utils/study-comparison';
+import { localSizingStudy } from '../support/local-study';
 
 const SETTINGS = { hours: 1, warmupMinutes: 10, replications: 4, seed: 7 };
-const REVISION = (n: number) => `00000000-0000-4000-8000-00000000010${n}`;
 
 /** The stacked example with the press cut from 9 s to 6 s: it must make clearly more. */
 function fasterPress() {
@@ -28,52 +26,8 @@ function fasterPress() {
   return doc;
 }
 
-async function sizingStudy(
-  n: number,
-  scenarioName: string,
-  document: unknown,
-  counts: number[],
-  settings = SETTINGS,
-): Promise<StudyDetail> {
-  const definition = createStudySchema.parse({
-    name: `Sizing ${n}`,
-    kind: 'carrierSizing',
-    revisionId: REVISION(n),
-    settings,
-    blockSize: 2,
-    points: carrierSizingPoints(counts),
-  });
-  const points = definition.points.map((p, index) => ({
-    index,
-    label: p.label,
-    revisionId: REVISION(n),
-    changes: p.changes,
-  }));
-  const local = await runStudyLocally(
-    { id: REVISION(n), settings, commonRandomNumbers: true, blockSize: 2, points },
-    { [REVISION(n)]: document },
-  );
-  const done = local.results.length;
-  return {
-    ...local,
-    projectId: REVISION(0),
-    name: definition.name,
-    kind: 'carrierSizing',
-    revisionId: REVISION(n),
-    scenarioId: REVISION(n),
-    scenarioName,
-    revisionNumber: 1,
-    reduction: null,
-    status: 'done',
-    pointCount: points.length,
-    jobCount: done,
-    jobsDone: done,
-    createdBy: null,
-    createdAt: new Date(0).toISOString(),
-    updatedAt: new Date(0).toISOString(),
-    axes: [],
-  };
-}
+const sizingStudy = (n: number, name: string, doc: unknown, counts: number[], settings = SETTINGS) =>
+  localSizingStudy(n, name, doc, counts, settings);
 
 let stacked: StudyDetail;
 let sideBySide: StudyDetail;

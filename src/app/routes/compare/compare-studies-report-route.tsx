@@ -4,11 +4,9 @@ import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { LoadError } from '../../../components/load-error';
 import { Button } from '../../../components/ui/button';
 import { PageSpinner } from '../../../components/ui/spinner';
-import { StudyCompareView } from '../../../features/study-compare/components/study-compare-view';
 import { STUDY_COMPARE_LIMITS } from '../../../features/study-compare/utils/study-comparison';
 import { formatDateTime } from '../../../lib/format';
-import { STUDY_COMPARE_QUESTION } from './question';
-import { StudyNotes } from './study-notes';
+import { ComparedStudies } from './compared-studies';
 import { parseRunIds as parseIds } from './use-comparison-data';
 import { useStudyComparisonData } from './use-study-comparison-data';
 
@@ -47,13 +45,7 @@ export function CompareStudiesReportRoute() {
           Project {data.project.data.name} · prepared {formatDateTime(new Date().toISOString())}
         </p>
       </header>
-      <StudyCompareView
-        studies={data.compared}
-        scenarios={data.scenarios}
-        details={data.details}
-        question={STUDY_COMPARE_QUESTION}
-        notes={<StudyNotes />}
-      />
+      <ComparedStudies compared={data.compared} scenarios={data.scenarios} details={data.details} />
     </article>
   );
 }

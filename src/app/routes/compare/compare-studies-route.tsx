@@ -9,11 +9,9 @@ import { PageHeader } from '../../../components/ui/page-header';
 import { PageSpinner } from '../../../components/ui/spinner';
 import { useStudies } from '../../../features/studies/api/get-studies';
 import { KIND_LABELS } from '../../../features/studies/utils/labels';
-import { StudyCompareView } from '../../../features/study-compare/components/study-compare-view';
 import { StudyPicker } from '../../../features/study-compare/components/study-picker';
 import { STUDY_COMPARE_LIMITS } from '../../../features/study-compare/utils/study-comparison';
-import { STUDY_COMPARE_QUESTION } from './question';
-import { StudyNotes } from './study-notes';
+import { ComparedStudies } from './compared-studies';
 import { parseRunIds as parseIds } from './use-comparison-data';
 import { useStudyComparisonData } from './use-study-comparison-data';
 
@@ -77,13 +75,7 @@ export function CompareStudiesRoute() {
       {comparing && data.failed && <LoadError what="a study of the comparison" error={data.failed} />}
       {comparing && !data.failed && !data.compared && <PageSpinner label="Loading the studies…" />}
       {comparing && data.compared && (
-        <StudyCompareView
-          studies={data.compared}
-          scenarios={data.scenarios}
-          details={data.details}
-          question={STUDY_COMPARE_QUESTION}
-          notes={<StudyNotes />}
-        />
+        <ComparedStudies compared={data.compared} scenarios={data.scenarios} details={data.details} />
       )}
     </div>
   );

@@ -14,7 +14,7 @@ import { currentUser, loaded } from '../http/request-context';
 import { validate } from '../http/validate';
 import { touchProject } from '../projects/touch-project';
 import { summariseRun } from '../runs/summarise-run';
-import { listRuns, runDetail, runListItem } from './run-queries';
+import { listRunsPage, runDetail, runListItem } from './run-queries';
 
 const requireRunAuthorOrOwner: RequestHandler = (req, _res, next) => {
   const role = loaded(req, 'role');
@@ -44,7 +44,7 @@ export function runsRouter(ctx: AppContext) {
     '/projects/:id/runs',
     loadProject(ctx),
     validate({ query: listRunsQuerySchema }, async ({ query }, req, res) => {
-      res.json(await listRuns(ds, { ...query, projectId: loaded(req, 'project').id }));
+      res.json(await listRunsPage(ds, { projectId: loaded(req, 'project').id }, query));
     }),
   );
 
@@ -52,7 +52,7 @@ export function runsRouter(ctx: AppContext) {
     '/scenarios/:id/runs',
     loadScenario(ctx),
     validate({ query: listRunsQuerySchema }, async ({ query }, req, res) => {
-      res.json(await listRuns(ds, { ...query, scenarioId: loaded(req, 'scenario').id }));
+      res.json(await listRunsPage(ds, { scenarioId: loaded(req, 'scenario').id }, query));
     }),
   );
 

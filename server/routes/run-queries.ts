@@ -1,5 +1,5 @@
 // Run reads. Lists join only the scenario name and revision number and never select `results`.
-import type { DataSource, SelectQueryBuilder } from 'typeorm';
+import type { DataSource, EntityManager, SelectQueryBuilder } from 'typeorm';
 import {
   FORMER_MEMBER,
   type ListRunsQuery,
@@ -29,7 +29,7 @@ const SORT_EXPRESSION: Record<RunSort, string> = {
   carriers: 'run.carriers',
 };
 
-function runsQuery(ds: DataSource): SelectQueryBuilder<RunEntity> {
+function runsQuery(ds: DataSource | EntityManager): SelectQueryBuilder<RunEntity> {
   return ds
     .getRepository(RunEntity)
     .createQueryBuilder('run')
@@ -93,7 +93,8 @@ export async function listRunsPage(ds: DataSource, scope: RunScope, filters: Lis
   return { items: items.map(toRunListItem), total, offset: filters.offset, limit: filters.limit, choices };
 }
 
-export async function runListItem(ds: DataSource, id: string): Promise<RunListItem> {
+/** One run as lists show it; pass the transaction's manager to read a run saved in it. */
+export async function runListItem(ds: DataSource | EntityManager, id: string): Promise<RunListItem> {
   return toRunListItem(await runsQuery(ds).where('run.id = :id', { id }).getOneOrFail());
 }
 

@@ -1,12 +1,12 @@
-// A throw-away PostgreSQL cluster of a test's own, on a free loopback port in a temporary folder, made
-// with the project's own cluster steps. Tests that stop or restart PostgreSQL use one, so the shared test
-// cluster (and every test using it) never notices.
+// A throw-away PostgreSQL cluster of a test's own, in a temporary folder on a free loopback port, run
+// with the project's own cluster steps (`ensureLocalPostgres({ root, port })`). Tests that stop or
+// restart PostgreSQL use one, so the shared test cluster (and every test using it) never notices.
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { initCluster, startCluster, stopCluster } from '../../server/setup/local-postgres';
-import { requirePgBinaries } from '../../server/setup/postgres-binaries';
-import { prepareClusterFolders } from '../../server/setup/postgres-folder';
+import { ensureLocalPostgres, stopLocalPostgres } from '../../server/setup/local-postgres';
+import { chooseClusterPaths } from '../../server/setup/postgres-folder';
 
 export interface PrivatePostgres {
   url(database: string): string;
@@ -27,26 +27,20 @@ function freePort(): Promise<number> {
 }
 
 export async function startPrivatePostgres(): Promise<PrivatePostgres> {
-  const bins = requirePgBinaries();
-  // Under /var/tmp, which the `postgres` user can enter whatever the clone's own folders allow.
-  const base = mkdtempSync(join('/var/tmp', 'lanewright-private-pg-'));
-  const paths = { base, dataDir: join(base, 'postgres'), logFile: join(base, 'postgres.log'), fallback: true };
-  prepareClusterFolders(paths);
-  initCluster(bins, paths);
+  const root = mkdtempSync(join(tmpdir(), 'lanewright-private-pg-'));
   const port = await freePort();
-  await startCluster(bins, paths, port);
-  let running = true;
+  const cluster = await ensureLocalPostgres({ root, port });
   return {
-    url: (database) => `postgres://postgres@127.0.0.1:${port}/${database}`,
+    url: (database) => cluster.url(database),
     restart: async (downMs) => {
-      stopCluster(bins, paths);
+      stopLocalPostgres(root);
       await new Promise((resolve) => setTimeout(resolve, downMs));
-      await startCluster(bins, paths, port);
+      await ensureLocalPostgres({ root, port });
     },
     remove: async () => {
-      if (running) stopCluster(bins, paths);
-      running = false;
-      rmSync(base, { recursive: true, force: true });
+      stopLocalPostgres(root);
+      rmSync(chooseClusterPaths(root).base, { recursive: true, force: true });
+      rmSync(root, { recursive: true, force: true });
     },
   };
 }

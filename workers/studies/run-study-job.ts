@@ -9,7 +9,7 @@ import { blockToJson, type ReplicationBlockJson } from '../engine/observe/summar
 
 export type StudyJobOutcome =
   | { outcome: 'done'; engineVersion: string; block: ReplicationBlockJson }
-  | { outcome: 'invalid' | 'stopped'; message: string }
+  | { outcome: 'invalid' | 'stopped' | 'gridlock'; message: string }
   | { outcome: 'cancelled' };
 
 /** The job as it travels to a runner: the study's job plus the revision's document it needs. */
@@ -34,15 +34,20 @@ export async function runStudyJob(
     if (e instanceof InvalidInputError)
       return { outcome: 'invalid', message: e.issues.map((i) => `${i.path}: ${i.message}`).join('; ') };
     if (isSimulationStopped(e))
-      return e.reason === 'cancelled' ? { outcome: 'cancelled' } : { outcome: 'stopped', message: e.message };
+      return e.reason === 'cancelled'
+        ? { outcome: 'cancelled' }
+        : { outcome: e.reason === 'gridlock' ? 'gridlock' : 'stopped', message: e.message };
     throw e;
   }
 }
 
+/** A job's answer: the engine's, or `skipped` for a carrier count above one that gridlocked. */
+export type JobAnswer = StudyJobOutcome | { outcome: 'skipped'; message: string };
+
 /** The body that stores a finished job's outcome, as the browser posts it and the server's workers save it. */
 export function jobResultBody(
   key: Pick<StudyJob, 'pointIndex' | 'first' | 'count'>,
-  answer: Exclude<StudyJobOutcome, { outcome: 'cancelled' }>,
+  answer: Exclude<JobAnswer, { outcome: 'cancelled' }>,
 ): SaveJobResultInput {
   const base = { pointIndex: key.pointIndex, first: key.first, count: key.count };
   return answer.outcome === 'done'

@@ -5,6 +5,7 @@
 // per second per round, the median of `--rounds` rounds per worker count, the scaling ratio (2 over 1)
 // and the machine's load before and after (other work on the machine shows in both).
 import 'reflect-metadata';
+import { median, numberOption } from './bench-options';
 import { execFileSync } from 'node:child_process';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { createDataSource } from '../db/data-source';
@@ -18,18 +19,11 @@ import { queueStudyRound } from '../studies/server-studies';
 import { startWorkerProcess, type WorkerProcess } from '../worker/worker-process';
 
 // Options as `--jobs=32 --hours=4 --rounds=3` (command-line flags; nothing here reads the environment).
-function option(name: string, fallback: number): number {
-  const flag = process.argv.find((arg) => arg.startsWith(`--${name}=`));
-  const value = flag ? Number(flag.slice(name.length + 3)) : fallback;
-  if (!Number.isFinite(value) || value <= 0) throw new Error(`--${name} must be a positive number (got ${flag})`);
-  return value;
-}
-const JOBS = option('jobs', 32);
-const HOURS = option('hours', 4);
-const ROUNDS = option('rounds', 3);
+const JOBS = numberOption('jobs', 32);
+const HOURS = numberOption('hours', 4);
+const ROUNDS = numberOption('rounds', 3);
 const WORKER_COUNTS = [1, 2];
 
-const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
 const load = () => execFileSync('uptime', { encoding: 'utf8' }).trim();
 
 async function main(): Promise<void> {

@@ -15,12 +15,7 @@ import { loadProject, loadStudy } from '../access/loaders';
 import { requireRole } from '../access/require-role';
 import type { AppContext } from '../app-context';
 import { audited } from '../audit/record-audit';
-import {
-  ScenarioRevisionEntity,
-  StudyEntity,
-  StudyPointEntity,
-  type ProjectEntity,
-} from '../db/entities';
+import { ScenarioRevisionEntity, StudyEntity, StudyPointEntity, type ProjectEntity } from '../db/entities';
 import { badRequest, conflict, forbidden, HttpError } from '../http/http-error';
 import { currentUser, loaded } from '../http/request-context';
 import { validate } from '../http/validate';

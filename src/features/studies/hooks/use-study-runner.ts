@@ -13,7 +13,6 @@ import {
   type StudyJob,
 } from '../../../../shared/api/studies';
 import type { Progress } from '../../../../workers/engine';
-import type { StudyJobOutcome } from '../../../../workers/simulation.worker';
 import { jobResultBody, type JobAnswer } from '../../../../workers/studies/run-study-job';
 import { isCancelled, sharedEnginePool, type PoolSession } from '../../../lib/engine/engine-pool';
 import { saveJobResult } from '../api/save-job-result';

@@ -57,11 +57,14 @@ export function CompareRoute() {
         }
         description="Throughput, takt, output, WIP and lead time of two to four layouts with 95 % intervals on their differences, what each costs and how much floor it takes."
         actions={
-          comparing && data.items ? (
-            <ButtonLink to={`/projects/${projectId}/compare/report?runs=${runIds.join(',')}`}>
-              Printable report
-            </ButtonLink>
-          ) : undefined
+          <>
+            <ButtonLink to={`/projects/${projectId}/compare/studies`}>Compare studies</ButtonLink>
+            {comparing && data.items && (
+              <ButtonLink to={`/projects/${projectId}/compare/report?runs=${runIds.join(',')}`}>
+                Printable report
+              </ButtonLink>
+            )}
+          </>
         }
       />
       <CompareSetup

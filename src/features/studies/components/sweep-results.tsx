@@ -5,7 +5,7 @@ import type { Scenario } from '../../../../shared/scenario/scenario';
 import type { PointStatistics } from '../../../../workers/studies/point-statistics';
 import { CurveWithBand } from '../../../components/charts';
 import { ParameterHeatmap } from '../../../components/charts/ParameterHeatmap';
-import { curveOf } from '../utils/curves';
+import { curveOf, stopsOf } from '../utils/curves';
 
 export function SweepResults({
   study,
@@ -34,6 +34,7 @@ export function SweepResults({
         yQuantity="Throughput"
         yUnit="parts/h"
         reference={target ? { value: target, label: `target ${target.toFixed(1)} parts/h` } : undefined}
+        stops={stopsOf(stats, (s) => valueOf(s, xAxis.path))}
         title={`Throughput against ${xAxis.label}`}
         exportName="sweep-throughput"
       />

@@ -2,12 +2,12 @@
 // sees the study's answer and points, told it is a shared view, with no control that changes or runs
 // anything; once withdrawn the link shows nothing.
 import type { Page } from 'playwright-core';
-import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { ScenarioEntity, ScenarioRevisionEntity, ShareLinkEntity } from '../../server/db/entities';
+import { ScenarioRevisionEntity, ShareLinkEntity } from '../../server/db/entities';
 import { DEMO_PASSWORD } from '../../server/db/seed/demo';
 import { blockToJson, runReplicationRange } from '../../workers/engine';
 import { screenshot, useAppInBrowser, type TestApp } from '../support/browser';
+import { DEMO_ENGINEER, demoEngineerAgent, firstDemoScenario } from './support/demo-engineer';
 
 const STUDY_NAME = 'Fleet size for the shared view';
 const SETTINGS = { hours: 0.1, warmupMinutes: 1, replications: 1, seed: 11 };
@@ -16,14 +16,8 @@ let shareUrl: string;
 
 const session = useAppInBrowser(async (app) => {
   // A finished two-point study of the demo's first scenario, its job results from the real engine.
-  const engineer = request.agent(app.url);
-  await engineer
-    .post('/api/auth/sign-in')
-    .send({ email: 'engineer@demo.lanewright.test', password: DEMO_PASSWORD })
-    .expect(200);
-  const scenario = await app.dataSource
-    .getRepository(ScenarioEntity)
-    .findOneOrFail({ where: {}, order: { createdAt: 'ASC' } });
+  const engineer = await demoEngineerAgent(app);
+  const scenario = await firstDemoScenario(app);
   const revision = await app.dataSource
     .getRepository(ScenarioRevisionEntity)
     .findOneByOrFail({ id: scenario.latestRevisionId! });
@@ -64,7 +58,7 @@ beforeAll(() => {
 describe('sharing a study read-only', () => {
   it('the engineer makes a link on the study page', async () => {
     await page.goto(`${app.url}/sign-in?returnTo=${encodeURIComponent(`/studies/${studyId}`)}`);
-    await page.getByLabel('E-mail').fill('engineer@demo.lanewright.test');
+    await page.getByLabel('E-mail').fill(DEMO_ENGINEER);
     await page.getByLabel('Password').fill(DEMO_PASSWORD);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.getByRole('heading', { level: 1, name: STUDY_NAME }).waitFor();

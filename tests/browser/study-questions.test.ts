@@ -133,7 +133,7 @@ describe('study questions of the demo', () => {
       expect(await chart.locator('[data-chart-part="point"]').count()).toBe(8);
       expect(await page.getByTestId('study-pairing').innerText()).toMatch(/Every difference is paired/);
       const answer = await page.getByTestId('study-answer').innerText();
-      expect(answer).toMatch(/Side-by-side loop makes significantly more than Stacked loop at [1-4],/);
+      expect(answer).toMatch(/Side-by-side loop makes significantly more than Stacked loop at [1-4][,;]/);
       expect(answer).toMatch(/95 % paired interval/);
       expect(await page.getByTestId('study-advice').innerText()).toMatch(/Stacked loop: .*Side-by-side loop: /s);
       expect(await page.locator('[data-verdict="significant"]').count()).toBeGreaterThan(0);

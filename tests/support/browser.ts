@@ -4,7 +4,6 @@
 import 'reflect-metadata';
 import { existsSync } from 'node:fs';
 import { mkdir, mkdtemp, rm } from 'node:fs/promises';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
@@ -19,6 +18,7 @@ import type { CaughtMailbox } from '../../server/mail/mailbox';
 import { clientOutDir, projectRoot } from '../../server/setup/paths';
 import { CHROMIUM_PATH } from './chromium-path';
 import { browserDatabaseUrl } from './test-database';
+import { freePort } from './free-port';
 
 const HOST = '127.0.0.1';
 const SCREENSHOT_DIR = join(projectRoot, 'test-artifacts', 'screenshots');
@@ -47,19 +47,6 @@ export interface TestBrowser {
   /** Uncaught errors thrown by pages' scripts, for tests to assert there were none. */
   pageErrors: Error[];
   close(): Promise<void>;
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, HOST, () => {
-      const address = probe.address();
-      probe.close(() =>
-        typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port')),
-      );
-    });
-  });
 }
 
 export async function startTestApp(databaseUrl: string = browserDatabaseUrl()): Promise<TestApp> {

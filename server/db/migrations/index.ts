@@ -8,6 +8,7 @@ import { StudyQueue1796227373997 } from './1796227373997-StudyQueue';
 import { PriceLists1796205600000 } from './1796205600000-PriceLists';
 import { SignInAttempts1796210000000 } from './1796210000000-SignInAttempts';
 import { StoredChecks1796210000001 } from './1796210000001-StoredChecks';
+import { ShareStudies1796220000000 } from './1796220000000-ShareStudies';
 
 export const migrations = [
   InitialSchema1796189683213,
@@ -18,5 +19,6 @@ export const migrations = [
   StoredChecks1796210000001,
   TeamAndSharing1796216390870,
   Studies1796216413737,
+  ShareStudies1796220000000,
   StudyQueue1796227373997,
 ];

@@ -28,7 +28,8 @@ export function useStudyComparisonData(projectId: string, studyIds: readonly str
   const studyData = studies.map((s) => s.data);
   const loaded = studyData.every(Boolean) ? (studyData as StudyDetail[]) : null;
   // Queries hand back new arrays on every render; ids and progress say when the data really changed.
-  const studyKey = loaded?.map((s) => `${s.id}:${s.jobsDone}:${s.status}`).join() ?? '';
+  // Null while loading, so an empty comparison never stands in for one still on its way.
+  const studyKey = loaded ? loaded.map((s) => `${s.id}:${s.jobsDone}:${s.status}`).join() : null;
   const revisionKey = revisions.map((r) => r.data?.id ?? '').join();
   const compared = useMemo<ComparedStudy[] | null>(() => (loaded ? labelStudies(loaded) : null), [studyKey]);
   const details = useMemo(() => loaded?.map(detailOf) ?? [], [studyKey]);

@@ -2,6 +2,7 @@
 // contour.
 import type { StudyDetail } from '../../../../shared/api/studies';
 import type { Scenario } from '../../../../shared/scenario/scenario';
+import { sweepableFields } from '../../../../shared/studies/sweepable-fields';
 import type { PointStatistics } from '../../../../workers/studies/point-statistics';
 import { CurveWithBand } from '../../../components/charts';
 import { ParameterHeatmap } from '../../../components/charts/ParameterHeatmap';
@@ -30,7 +31,7 @@ export function SweepResults({
           (s) => s.throughput,
         )}
         xQuantity={xAxis.label}
-        xUnit="value"
+        xUnit={sweepableFields(scenario).find((f) => f.path === xAxis.path)?.unit || 'value'}
         yQuantity="Throughput"
         yUnit="parts/h"
         reference={target ? { value: target, label: `target ${target.toFixed(1)} parts/h` } : undefined}

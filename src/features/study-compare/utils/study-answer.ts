@@ -6,15 +6,17 @@ import type { StudyComparison } from './study-comparison';
 
 const rate = (x: number) => `${formatNumber(x, 1)} parts/h`;
 
+/** A study's best point: the first (fewest carriers, smallest setting) whose mean lies within the top mean's 95 % interval. */
 function bestOf(comparison: StudyComparison, s: number): string {
-  let best: { label: string; mean: number } | null = null;
-  for (const row of comparison.rows) {
+  const finished = comparison.rows.flatMap((row) => {
     const ci = row.cells[s]?.stats.throughput;
-    // On a tie the earlier point (fewer carriers, the smaller setting) stays the best.
-    if (ci && (!best || ci.mean > best.mean)) best = { label: row.label, mean: ci.mean };
-  }
+    return ci ? [{ label: row.label, ci }] : [];
+  });
   const label = comparison.studies[s].label;
-  return best ? `${label} ${rate(best.mean)} (${best.label})` : `${label} no finished point yet`;
+  if (finished.length === 0) return `${label} no finished point yet`;
+  const top = finished.reduce((a, b) => (b.ci.mean > a.ci.mean ? b : a));
+  const best = finished.find((p) => p.ci.mean >= Math.min(top.ci.mean, top.ci.ciLow))!;
+  return `${label} ${rate(top.ci.mean)} (${best === top ? best.label : `from ${best.label} within its interval`})`;
 }
 
 function versus(comparison: StudyComparison, s: number): string {
@@ -31,9 +33,15 @@ function versus(comparison: StudyComparison, s: number): string {
   const d = largest.differences[s]!;
   const method = d.method === 'paired' ? 'paired' : 'Welch';
   const points = shared.length === 1 ? 'the one point' : `the ${shared.length} points`;
+  const same = shared.length - more - less;
+  const clauses = [
+    more > 0 ? `significantly more than ${reference} at ${more}` : '',
+    less > 0 ? `significantly less${more > 0 ? '' : ` than ${reference}`} at ${less}` : '',
+    same > 0 ? `no significantly different amount${more + less > 0 ? '' : ` from ${reference}`} at ${same}` : '',
+  ].filter(Boolean);
+  const listed = clauses.length > 1 ? `${clauses.slice(0, -1).join(', ')} and ${clauses.at(-1)}` : clauses[0];
   return (
-    `At ${points} both ran, ${label} makes significantly more than ${reference} at ${more}, significantly less at ${less} ` +
-    `and no significantly different amount at ${shared.length - more - less}; the largest difference is ${formatSigned(d.difference, 1)} parts/h ` +
+    `At ${points} both ran, ${label} makes ${listed}; the largest difference is ${formatSigned(d.difference, 1)} parts/h ` +
     `at ${largest.label} (95 % ${method} interval ${formatSigned(d.ciLow, 1)} to ${formatSigned(d.ciHigh, 1)}).`
   );
 }

@@ -2,25 +2,18 @@
 // window, plays it, pauses and scrubs: carriers are painted on the decks and in the side elevation
 // and move, the clock and the moment in words follow. Screenshots go to test-artifacts/screenshots/playback-*.png.
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, screenshot, startTestApp, type TestApp, type TestBrowser } from '../support/browser';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { screenshot, useAppInBrowser, type TestApp, type TestBrowser } from '../support/browser';
 
 const RUN_TIMEOUT = 90_000;
 
+const session = useAppInBrowser({ viewport: { width: 1280, height: 900 } });
 let app: TestApp;
 let browser: TestBrowser;
 let page: Page;
 
-beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-  page = browser.page;
-  await page.setViewportSize({ width: 1280, height: 900 });
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
+beforeAll(() => {
+  ({ app, browser, page } = session);
 });
 
 /** Where every carrier is, from the table of the shown moment, keyed by carrier number. */
@@ -57,10 +50,7 @@ const seconds = (hms: string | null) => (hms ?? '').split(':').reduce((sum, part
 
 describe('playback of a stored run', () => {
   it('records a window of the run from the result page', async () => {
-    await page.goto(`${app.url}/sign-in`);
-    await page.getByLabel('E-mail').fill('engineer@demo.lanewright.test');
-    await page.getByLabel('Password').fill('demo-password');
-    await page.getByRole('button', { name: 'Sign in' }).click();
+    await session.signIn('engineer@demo.lanewright.test');
     await page.getByRole('link', { name: /Cartridge line layout study/ }).click();
     await page
       .getByRole('link', { name: /Stacked loop/ })

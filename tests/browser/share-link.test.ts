@@ -11,19 +11,21 @@ import { screenshot, useAppInBrowser, type TestApp } from '../support/browser';
 let runId: string;
 let shareUrl: string;
 
-const session = useAppInBrowser(async (app) => {
-  // A stored run of the demo's first scenario, saved through the API as the engineer.
-  const engineer = request.agent(app.url);
-  await engineer
-    .post('/api/auth/sign-in')
-    .send({ email: 'engineer@demo.lanewright.test', password: DEMO_PASSWORD })
-    .expect(200);
-  const scenario = await app.dataSource
-    .getRepository(ScenarioEntity)
-    .findOneOrFail({ where: {}, order: { createdAt: 'ASC' } });
-  const saved = await engineer.post(`/api/scenarios/${scenario.id}/runs`).send(runBody(scenario.latestRevisionId!));
-  expect(saved.status, JSON.stringify(saved.body)).toBe(201);
-  runId = saved.body.id;
+const session = useAppInBrowser({
+  prepare: async (app) => {
+    // A stored run of the demo's first scenario, saved through the API as the engineer.
+    const engineer = request.agent(app.url);
+    await engineer
+      .post('/api/auth/sign-in')
+      .send({ email: 'engineer@demo.lanewright.test', password: DEMO_PASSWORD })
+      .expect(200);
+    const scenario = await app.dataSource
+      .getRepository(ScenarioEntity)
+      .findOneOrFail({ where: {}, order: { createdAt: 'ASC' } });
+    const saved = await engineer.post(`/api/scenarios/${scenario.id}/runs`).send(runBody(scenario.latestRevisionId!));
+    expect(saved.status, JSON.stringify(saved.body)).toBe(201);
+    runId = saved.body.id;
+  },
 });
 let page: Page;
 let app: TestApp;
@@ -34,10 +36,7 @@ beforeAll(() => {
 
 describe('sharing a run read-only', () => {
   it('the engineer makes a link on the run page', async () => {
-    await page.goto(`${app.url}/sign-in?returnTo=${encodeURIComponent(`/runs/${runId}`)}`);
-    await page.getByLabel('E-mail').fill('engineer@demo.lanewright.test');
-    await page.getByLabel('Password').fill(DEMO_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
+    await session.signIn('engineer@demo.lanewright.test', { returnTo: `/runs/${runId}` });
     const panel = page.getByRole('region', { name: 'Share read-only' });
     await panel.waitFor();
     await panel.getByRole('button', { name: 'Make a link' }).click();

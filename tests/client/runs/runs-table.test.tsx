@@ -4,7 +4,7 @@ import { apiRoutes } from '../../../shared/api/routes';
 import type { Role } from '../../../shared/api/roles';
 import { RunsTable } from '../../../src/features/runs/components/runs-table';
 import { mockApi } from '../support/fetch-mock';
-import { me, ORG_ID } from '../support/fixtures';
+import { me, ORG_ID, session } from '../support/fixtures';
 import { inProcessPorts } from './support/in-process-port';
 import { renderWithSession } from './support/render-with-session';
 import { OTHER_USER, runItem } from './support/runs-fixtures';
@@ -17,7 +17,7 @@ const runs = [
 ];
 
 function renderTable(role: Role) {
-  mockApi({ [`GET ${apiRoutes.me}`]: { status: 200, body: me(role) } });
+  mockApi({ [`GET ${apiRoutes.session}`]: session(me(role)) });
   return renderWithSession(
     <RunsTable runs={runs} organisationId={ORG_ID} caption="Runs of this scenario" />,
     inProcessPorts().open,
@@ -93,7 +93,7 @@ describe('runs table', () => {
 
   it('lets an owner delete anyone’s run after confirming', async () => {
     const api = mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 200, body: me('owner') },
+      [`GET ${apiRoutes.session}`]: session(me('owner')),
       [`DELETE ${apiRoutes.run(runs[1].id)}`]: { status: 200, body: { ok: true } },
     });
     const { user } = renderWithSession(
@@ -110,7 +110,7 @@ describe('runs table', () => {
 
   it('renames a run in place', async () => {
     const api = mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 200, body: me('engineer') },
+      [`GET ${apiRoutes.session}`]: session(me('engineer')),
       [`PATCH ${apiRoutes.run(runs[0].id)}`]: { status: 200, body: { ...runs[0], name: 'Baseline, 20 carriers' } },
     });
     const { user } = renderWithSession(

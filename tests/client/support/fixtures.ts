@@ -17,6 +17,11 @@ export function me(role: Role = 'engineer'): Me {
   return { user: USER, memberships: [{ organisationId: ORG_ID, organisationName: 'Northgate Fixtures', role }] };
 }
 
+/** The session check's answer: who is signed in, or nobody (`null`, still a 200). */
+export function session(who: Me | null) {
+  return { status: 200, body: { me: who } };
+}
+
 export function project(overrides: Partial<Project> = {}): Project {
   return {
     id: uuid(10),

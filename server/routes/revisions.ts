@@ -23,7 +23,15 @@ export function revisionsRouter(ctx: AppContext) {
   router.get('/scenarios/:id/revisions', loadScenario(ctx), async (req, res) => {
     const list = await revisions().find({
       where: { scenarioId: loaded(req, 'scenario').id },
-      select: { id: true, scenarioId: true, number: true, message: true, createdAt: true, createdById: true },
+      select: {
+        id: true,
+        scenarioId: true,
+        number: true,
+        message: true,
+        conveyorMode: true,
+        createdAt: true,
+        createdById: true,
+      },
       relations: { createdBy: true },
       order: { number: 'DESC' },
     });

@@ -10,6 +10,7 @@ const summaryColumns = {
   scenarioId: true,
   number: true,
   message: true,
+  conveyorMode: true,
   createdAt: true,
   createdById: true,
 } as const;

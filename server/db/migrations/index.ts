@@ -7,6 +7,7 @@ import { Studies1796216413737 } from './1796216413737-Studies';
 import { PriceLists1796205600000 } from './1796205600000-PriceLists';
 import { SignInAttempts1796210000000 } from './1796210000000-SignInAttempts';
 import { StoredChecks1796210000001 } from './1796210000001-StoredChecks';
+import { ConveyorMode1796230000000 } from './1796230000000-ConveyorMode';
 
 export const migrations = [
   InitialSchema1796189683213,
@@ -17,4 +18,5 @@ export const migrations = [
   StoredChecks1796210000001,
   TeamAndSharing1796216390870,
   Studies1796216413737,
+  ConveyorMode1796230000000,
 ];

@@ -42,6 +42,7 @@ export function revision(number: number, overrides: Partial<RevisionSummary> = {
     scenarioId: uuid(20),
     number,
     message: number === 1 ? 'Started from the stacked example' : `Change ${number}`,
+    conveyorMode: 'carriers',
     createdBy: USER,
     createdAt: WHEN,
     ...overrides,

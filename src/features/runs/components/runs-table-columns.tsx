@@ -3,6 +3,7 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import type { ReactNode } from 'react';
 import type { RunListItem } from '../../../../shared/api/runs';
+import { BeltBaselineTag } from '../../../components/ui/belt-baseline-tag';
 import { formatDateTime, formatPerson } from '../../../lib/format';
 import { atLeast, atMost, authorIs, equalsText, sinceDay } from '../utils/run-filters';
 import { formatInterval, formatPerHour, formatTakt } from '../../../lib/format-run';
@@ -33,6 +34,12 @@ export function runsColumns({ showScenario, showActions, name, actions }: Column
       header: 'Revision',
       filterFn: equalsText,
       cell: (c) => `#${c.getValue()}`,
+    }),
+    column.accessor('conveyorMode', {
+      id: 'conveyor',
+      header: 'Conveyor',
+      enableColumnFilter: false,
+      cell: (c) => (c.getValue() === 'belt' ? <BeltBaselineTag short /> : 'Carriers'),
     }),
     column.accessor((run) => formatPerson(run.createdBy), {
       id: 'author',

@@ -42,6 +42,28 @@ export default tseslint.config(
               from: ['./src', './server'],
               message: 'The simulation knows nothing of React, HTTP or the database.',
             },
+            {
+              target: './workers/engine/kernel',
+              from: ['./workers/engine/model', './workers/engine/observe', './workers/engine/random'],
+              message: 'The kernel (clock, event queue, event loop, priorities) knows no line model and no recorder.',
+            },
+            {
+              target: './workers/engine/model',
+              from: './workers/engine/observe',
+              except: ['./observer.ts'],
+              message:
+                'The line model reports through the Observer interface only; the replication module wires in the recorder.',
+            },
+            {
+              target: [
+                './workers/engine/observe/observer.ts',
+                './workers/engine/observe/recorder.ts',
+                './workers/engine/observe/bottleneck.ts',
+                './workers/engine/observe/window.ts',
+              ],
+              from: './workers/engine/model',
+              message: 'The recorder knows the observer vocabulary (observer.ts), not the line model or its constants.',
+            },
             { target: './server', from: './src', message: 'The server never imports client code.' },
             { target: './src', from: './server', message: 'The client talks to the server over HTTP only.' },
             {

@@ -46,6 +46,20 @@ export async function mayMailAnotherLink(ds: DataSource, purpose: TokenPurpose, 
   return recent < LINKS_PER_ADDRESS_PER_HOUR;
 }
 
+function isUsable(row: OneTimeTokenEntity | null): row is OneTimeTokenEntity {
+  return row !== null && !row.usedAt && row.expiresAt.getTime() > Date.now();
+}
+
+/**
+ * The token's row without spending it (to check a new password against its address before the slow
+ * hashing), or the one "no longer valid" answer. `spendToken` checks again under the row lock.
+ */
+export async function peekToken(ds: DataSource, purpose: TokenPurpose, token: string): Promise<OneTimeTokenEntity> {
+  const row = await ds.getRepository(OneTimeTokenEntity).findOneBy({ tokenHash: hashLinkToken(token), purpose });
+  if (!isUsable(row)) throw invalidLink();
+  return row;
+}
+
 /** Marks the token spent and returns its row, or throws the one "no longer valid" answer. */
 export async function spendToken(
   manager: EntityManager,
@@ -57,7 +71,7 @@ export async function spendToken(
     where: { tokenHash: hashLinkToken(token), purpose },
     lock: { mode: 'pessimistic_write' },
   });
-  if (!row || row.usedAt || row.expiresAt.getTime() <= Date.now()) throw invalidLink();
+  if (!isUsable(row)) throw invalidLink();
   await repo.update({ id: row.id }, { usedAt: new Date() });
   return row;
 }

@@ -4,6 +4,7 @@
 import { ZxcvbnFactory } from '@zxcvbn-ts/core';
 import { adjacencyGraphs, dictionary } from '@zxcvbn-ts/language-common';
 import type { FieldIssue } from '../../shared/api/errors';
+import { badRequest } from '../http/http-error';
 
 /** zxcvbn's matching grows faster than linearly with length; the first 64 characters decide. */
 const ANALYSED_LENGTH = 64;
@@ -18,13 +19,13 @@ export interface PasswordOwner {
 }
 
 /** The problem with a new password, or null when it may be used. */
-export function passwordProblem(password: string, owner: PasswordOwner): FieldIssue | null {
+export function passwordProblem(password: string, owner: PasswordOwner, path = 'password'): FieldIssue | null {
   const lower = password.toLowerCase();
   const email = owner.email.toLowerCase();
   const localPart = email.split('@')[0];
   if (lower.includes(email) || (localPart.length >= 4 && lower.includes(localPart))) {
     return {
-      path: 'password',
+      path,
       message: 'must not contain your e-mail address; choose something unrelated to your account',
     };
   }
@@ -38,7 +39,16 @@ export function passwordProblem(password: string, owner: PasswordOwner): FieldIs
       ? 'is built from your name or e-mail'
       : 'is one of the most commonly used passwords or too close to one';
   return {
-    path: 'password',
+    path,
     message: `${why}; a few unrelated words or a longer phrase is both easier to remember and safer`,
   };
+}
+
+/**
+ * Throws the one 400 for a refused new password. Every place a password is chosen calls it (sign-up, reset,
+ * change, accepting an invitation with a new account), before the slow hashing.
+ */
+export function refuseWeakPassword(password: string, owner: PasswordOwner, path = 'password'): void {
+  const weak = passwordProblem(password, owner, path);
+  if (weak) throw badRequest(`Choose another password: it ${weak.message}.`, [weak]);
 }

@@ -32,6 +32,9 @@ export function isDatabaseUnavailable(error: unknown): boolean {
   const code = sqlState(error);
   if (code && (code.startsWith('08') || ['57P01', '57P02', '57P03'].includes(code) || CONNECTION_ERRORS.has(code)))
     return true;
+  // TypeORM releases a transaction's connection when PostgreSQL drops it; the transaction's next statement
+  // then meets this error instead of the connection error itself.
+  if (error instanceof Error && error.name === 'QueryRunnerAlreadyReleasedError') return true;
   const errors = (error as { errors?: unknown[] } | null)?.errors;
   if (Array.isArray(errors) && errors.some((inner) => isDatabaseUnavailable(inner))) return true;
   const message = error instanceof Error ? error.message : '';

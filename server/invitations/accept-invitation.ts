@@ -4,6 +4,7 @@ import type { DataSource } from 'typeorm';
 import type { AcceptInvitationInput } from '../../shared/api/invitations';
 import { recordAudit } from '../audit/record-audit';
 import { hashPassword } from '../auth/password';
+import { refuseWeakPassword } from '../auth/password-policy';
 import { InvitationEntity, MembershipEntity, UserEntity } from '../db/entities';
 import { badRequest } from '../http/http-error';
 import type { SignedInUser } from '../http/request-context';
@@ -28,8 +29,15 @@ export async function acceptInvitation(
   input: AcceptInvitationInput,
   signedIn: SignedInUser | undefined,
 ): Promise<Accepted> {
-  // Hashing is slow, so it happens before the transaction holds the invitation's row lock.
-  const passwordHash = !signedIn && input.password ? await hashPassword(input.password) : undefined;
+  let passwordHash: string | undefined;
+  if (!signedIn && input.password) {
+    const invitation = await usableInvitation(ds.manager, input.token, false);
+    // An invitee who already has an account is asked to sign in below; only a new account's password counts.
+    if (!(await ds.getRepository(UserEntity).existsBy({ email: invitation.email })))
+      refuseWeakPassword(input.password, { email: invitation.email, name: input.name });
+    // Hashing is slow, so it happens before the transaction holds the invitation's row lock.
+    passwordHash = await hashPassword(input.password);
+  }
   return ds.transaction(async (manager) => {
     const invitation = await usableInvitation(manager, input.token, true);
     const users = manager.getRepository(UserEntity);

@@ -10,8 +10,9 @@ import {
 } from '../../shared/api/account';
 import type { AppContext } from '../app-context';
 import { audited, recordAudit } from '../audit/record-audit';
-import { issueToken, mayMailAnotherLink, spendToken } from '../auth/one-time-tokens';
+import { issueToken, mayMailAnotherLink, peekToken, spendToken } from '../auth/one-time-tokens';
 import { hashPassword, verifyPassword } from '../auth/password';
+import { refuseWeakPassword } from '../auth/password-policy';
 import { OneTimeTokenEntity, SessionEntity, UserEntity } from '../db/entities';
 import { badRequest } from '../http/http-error';
 import { publicLink } from '../http/public-link';
@@ -52,6 +53,9 @@ export function accountRouter(ctx: AppContext) {
   router.post(
     '/auth/password-reset',
     validate({ body: resetPasswordSchema }, async ({ body }, _req, res) => {
+      const pending = await peekToken(ds, 'password-reset', body.token);
+      const owner = await ds.getRepository(UserEntity).findOneBy({ id: pending.userId! });
+      refuseWeakPassword(body.password, { email: pending.email, name: owner?.name });
       const passwordHash = await hashPassword(body.password);
       await ds.transaction(async (manager) => {
         const link = await spendToken(manager, 'password-reset', body.token);
@@ -84,6 +88,7 @@ export function accountRouter(ctx: AppContext) {
           { path: 'currentPassword', message: 'is not your current password' },
         ]);
       }
+      refuseWeakPassword(body.newPassword, user, 'newPassword');
       const passwordHash = await hashPassword(body.newPassword);
       const ended = await audited(
         ds,

@@ -10,13 +10,13 @@ import type { AppContext } from '../app-context';
 import { recordAudit } from '../audit/record-audit';
 import { issueToken, invalidLink, mayMailAnotherLink, spendToken } from '../auth/one-time-tokens';
 import { hashPassword, verifyAgainstDecoy, verifyPassword } from '../auth/password';
-import { passwordProblem } from '../auth/password-policy';
+import { refuseWeakPassword } from '../auth/password-policy';
 import { writeSessionCookie } from '../auth/session-cookie';
 import { startSession } from '../auth/start-session';
 import { MembershipEntity, OrganisationEntity, UserEntity } from '../db/entities';
 import { alreadyRegisteredMail, signUpMail } from '../mail/messages';
 import { sendInBackground } from '../mail/mailer';
-import { badRequest, unauthenticated } from '../http/http-error';
+import { unauthenticated } from '../http/http-error';
 import { publicLink } from '../http/public-link';
 import { currentUser } from '../http/request-context';
 import { validate } from '../http/validate';
@@ -33,8 +33,7 @@ export function authRouter(ctx: AppContext) {
   router.post(
     '/auth/sign-up',
     validate({ body: signUpSchema }, async ({ body }, req, res) => {
-      const weak = passwordProblem(body.password, body);
-      if (weak) throw badRequest(`Choose another password: it ${weak.message}.`, [weak]);
+      refuseWeakPassword(body.password, body);
       const existing = await ds.getRepository(UserEntity).findOneBy({ email: body.email });
       const mayMail = await mayMailAnotherLink(ds, 'sign-up', body.email);
       if (existing) {

@@ -59,7 +59,9 @@ export function revisionsRouter(ctx: AppContext) {
       assertRunnable(body.document);
       const scenario = loaded(req, 'scenario');
       const user = currentUser(req);
-      const revisionId = await ds.transaction(async (manager) => {
+      // The answer is read inside the transaction: a save the database loses before COMMIT answers 503 and
+      // stores nothing, and one it commits is answered without another round trip that could fail.
+      const saved = await ds.transaction(async (manager) => {
         // The row lock serialises concurrent saves of one scenario, so numbers never collide.
         const locked = await manager
           .getRepository(ScenarioEntity)
@@ -109,9 +111,10 @@ export function revisionsRouter(ctx: AppContext) {
           entityId: revision.id,
           detail: { scenarioId: scenario.id, number: revision.number },
         });
-        return revision.id;
+        return manager
+          .getRepository(ScenarioRevisionEntity)
+          .findOneOrFail({ where: { id: revision.id }, relations: { createdBy: true } });
       });
-      const saved = await revisions().findOneOrFail({ where: { id: revisionId }, relations: { createdBy: true } });
       res.status(201).json(toRevision(saved));
     }),
   );

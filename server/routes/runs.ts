@@ -14,7 +14,7 @@ import { currentUser, loaded } from '../http/request-context';
 import { validate } from '../http/validate';
 import { touchProject } from '../projects/touch-project';
 import { summariseRun } from '../runs/summarise-run';
-import { listRuns, runDetail, runListItem } from './run-queries';
+import { listRunsPage, runDetail, runListItem } from './run-queries';
 
 const requireRunAuthorOrOwner: RequestHandler = (req, _res, next) => {
   const role = loaded(req, 'role');
@@ -44,7 +44,7 @@ export function runsRouter(ctx: AppContext) {
     '/projects/:id/runs',
     loadProject(ctx),
     validate({ query: listRunsQuerySchema }, async ({ query }, req, res) => {
-      res.json(await listRuns(ds, { ...query, projectId: loaded(req, 'project').id }));
+      res.json(await listRunsPage(ds, { projectId: loaded(req, 'project').id }, query));
     }),
   );
 
@@ -52,7 +52,7 @@ export function runsRouter(ctx: AppContext) {
     '/scenarios/:id/runs',
     loadScenario(ctx),
     validate({ query: listRunsQuerySchema }, async ({ query }, req, res) => {
-      res.json(await listRuns(ds, { ...query, scenarioId: loaded(req, 'scenario').id }));
+      res.json(await listRunsPage(ds, { scenarioId: loaded(req, 'scenario').id }, query));
     }),
   );
 
@@ -87,11 +87,12 @@ export function runsRouter(ctx: AppContext) {
         ]);
       const { summary, seed, engineVersion } = summariseRun(body.settings, body.results);
       try {
-        const run = await audited(
+        // The answer is read inside the transaction, so a save is either committed and answered 201 or
+        // (database lost before COMMIT) answered 503 with nothing stored.
+        const item = await audited(
           ds,
           async (manager) => {
-            await touchProject(manager, scenario.projectId);
-            return manager.getRepository(RunEntity).save({
+            const saved = await manager.getRepository(RunEntity).save({
               scenarioId: scenario.id,
               revisionId: revision.id,
               clientRunId: body.clientRunId,
@@ -106,6 +107,8 @@ export function runsRouter(ctx: AppContext) {
               results: body.results,
               createdById: user.id,
             });
+            await touchProject(manager, scenario.projectId);
+            return runListItem(manager, saved.id);
           },
           (saved) => ({
             organisationId: scenario.project?.organisationId ?? null,
@@ -116,7 +119,7 @@ export function runsRouter(ctx: AppContext) {
             detail: { scenarioId: scenario.id, revisionNumber: revision.number },
           }),
         );
-        res.status(201).json(await runListItem(ds, run.id));
+        res.status(201).json(item);
       } catch (error) {
         // Two attempts raced past the first lookup; the loser answers like any retry.
         const winner = isUniqueViolation(error) ? await findExisting() : null;

@@ -1,7 +1,8 @@
 // The project's private PostgreSQL cluster: created on first use, listening on 127.0.0.1 only (port 54329,
-// LANEWRIGHT_PG_PORT overrides), reused when already running, stopped only by the process that started
-// it. With DATABASE_URL set, no local cluster is touched at all.
-import { appendFileSync, existsSync, readFileSync, writeFileSync } from 'node:fs';
+// LANEWRIGHT_PG_PORT overrides), every login with a scram-sha-256 password (postgres-credentials.ts),
+// reused when already running, stopped only by the process that started it. With DATABASE_URL set, no
+// local cluster is touched at all.
+import { appendFileSync, chownSync, existsSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { createConnection } from 'node:net';
 import { join } from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
@@ -10,14 +11,15 @@ import { acquireLock } from './file-lock';
 import { redactUrl, say, SetupError } from './log';
 import { projectRoot } from './paths';
 import { requirePgBinaries, type PgBinaries } from './postgres-binaries';
+import { APP_ROLE, clusterUrl, ensureCredentials, SUPERUSER, type ClusterCredentials } from './postgres-credentials';
 import { chooseClusterPaths, prepareClusterFolders, type ClusterPaths } from './postgres-folder';
-import { runCommand } from './run-command';
+import { secureCluster, writePasswordHba } from './postgres-roles';
+import { isRoot, runCommand, serverUserIds } from './run-command';
 import { loadSetupConfig } from './setup-config';
 
 export { createDatabase, dropDatabase, databaseName, withDatabase } from './databases';
 
 const HOST = '127.0.0.1';
-const SUPERUSER = 'postgres';
 
 export interface LocalPostgres {
   /** Connection URL for a database of this server (the database itself is not created). */
@@ -44,17 +46,26 @@ function externalServer(url: string): LocalPostgres {
   return { url: (db) => withDatabase(url, db), stop: async () => undefined, startedHere: false, external: true };
 }
 
-function initCluster(bins: PgBinaries, paths: ClusterPaths): void {
+function initCluster(bins: PgBinaries, paths: ClusterPaths, credentials: ClusterCredentials): void {
   say(`creating a PostgreSQL ${bins.major} cluster in ${paths.dataDir}`);
-  const args = ['-D', paths.dataDir, '-U', SUPERUSER, '-A', 'trust', '-E', 'UTF8', '--locale=C.UTF-8'];
-  const result = runCommand(bins.bin('initdb'), args, { asServerUser: true, cwd: paths.dataDir });
+  // initdb reads the superuser's password from a file; it lives only as long as initdb runs.
+  const pwfile = join(paths.base, 'initdb-password');
+  writeFileSync(pwfile, `${credentials.superuserPassword}\n`, { mode: 0o600 });
+  if (isRoot) chownSync(pwfile, serverUserIds()!.uid, serverUserIds()!.gid);
+  const args = ['-D', paths.dataDir, '-U', SUPERUSER, '-A', 'scram-sha-256', `--pwfile=${pwfile}`];
+  let result;
+  try {
+    result = runCommand(bins.bin('initdb'), [...args, '-E', 'UTF8', '--locale=C.UTF-8'], {
+      asServerUser: true,
+      cwd: paths.dataDir,
+    });
+  } finally {
+    rmSync(pwfile, { force: true });
+  }
   if (result.status !== 0) throw new SetupError(`initdb failed:\n${result.stdout}${result.stderr}`);
-  // Loopback TCP only, no password: the cluster is reachable from this machine alone. No unix sockets, so
-  // no socket path can exceed the 107-byte limit wherever the clone lives.
-  writeFileSync(
-    join(paths.dataDir, 'pg_hba.conf'),
-    '# Lanewright: loopback TCP only, trusted.\nhost all all 127.0.0.1/32 trust\n',
-  );
+  // Loopback TCP only, with a password. No unix sockets, so no socket path can exceed the 107-byte limit
+  // wherever the clone lives.
+  writePasswordHba(paths);
   appendFileSync(
     join(paths.dataDir, 'postgresql.conf'),
     `\n# Lanewright\nlisten_addresses = '${HOST}'\nunix_socket_directories = ''\n`,
@@ -126,6 +137,14 @@ async function waitUntilReady(bins: PgBinaries, port: number, paths: ClusterPath
   }
 }
 
+function reloadCluster(bins: PgBinaries, paths: ClusterPaths): void {
+  const result = runCommand(bins.bin('pg_ctl'), ['-D', paths.dataDir, 'reload'], {
+    asServerUser: true,
+    cwd: paths.dataDir,
+  });
+  if (result.status !== 0) throw new SetupError(`pg_ctl reload failed: ${result.stderr.trim()}`);
+}
+
 function stopCluster(bins: PgBinaries, paths: ClusterPaths): void {
   const result = runCommand(bins.bin('pg_ctl'), ['-D', paths.dataDir, '-m', 'fast', '-w', '-t', '60', 'stop'], {
     asServerUser: true,
@@ -140,19 +159,26 @@ function clusterMajor(paths: ClusterPaths): number | undefined {
   return existsSync(file) ? Number(readFileSync(file, 'utf8').trim()) : undefined;
 }
 
-export async function ensureLocalPostgres(): Promise<LocalPostgres> {
+export interface LocalClusterOptions {
+  /** The clone whose .data holds the cluster (tests use a folder of their own). */
+  root?: string;
+  port?: number;
+}
+
+export async function ensureLocalPostgres(options: LocalClusterOptions = {}): Promise<LocalPostgres> {
   const config = loadSetupConfig();
-  if (config.DATABASE_URL) return externalServer(config.DATABASE_URL);
-  const wantedPort = config.LANEWRIGHT_PG_PORT;
+  if (config.DATABASE_URL && !options.root) return externalServer(config.DATABASE_URL);
+  const wantedPort = options.port ?? config.LANEWRIGHT_PG_PORT;
   // First, since installing the package is also what creates the `postgres` user the folders are checked for.
   const newest = requirePgBinaries();
-  const paths = chooseClusterPaths(projectRoot);
+  const paths = chooseClusterPaths(options.root ?? projectRoot);
   prepareClusterFolders(paths);
   const release = await acquireLock(join(paths.base, 'cluster.lock'), 'PostgreSQL set-up');
   try {
     const major = clusterMajor(paths);
     const bins = major === undefined || major === newest.major ? newest : requirePgBinaries(major);
-    if (major === undefined) initCluster(bins, paths);
+    const credentials = ensureCredentials(paths.base);
+    if (major === undefined) initCluster(bins, paths, credentials);
     let port = wantedPort;
     let startedHere = false;
     if (isRunning(bins, paths)) {
@@ -165,14 +191,16 @@ export async function ensureLocalPostgres(): Promise<LocalPostgres> {
       say(`started PostgreSQL ${bins.major} on ${HOST}:${port} (data ${paths.dataDir}, log ${paths.logFile})`);
     }
     await waitUntilReady(bins, port, paths);
+    if (await secureCluster(paths, port, credentials)) reloadCluster(bins, paths);
+    const url = (db: string) => clusterUrl(port, db, APP_ROLE, credentials.password);
     let stopped = false;
     return {
-      url: (db) => `postgres://${SUPERUSER}@${HOST}:${port}/${encodeURIComponent(db)}`,
+      url,
       stop: async () => {
         if (!startedHere || stopped) return;
         stopped = true;
         // Another process in this clone (say `npm start` during a test run) may have reused the cluster.
-        const others = await otherConnections(`postgres://${SUPERUSER}@${HOST}:${port}/postgres`).catch(() => 0);
+        const others = await otherConnections(url('postgres')).catch(() => 0);
         if (others > 0) return say(`leaving PostgreSQL running: ${others} other connection(s) still use it`);
         stopCluster(bins, paths);
       },
@@ -186,8 +214,8 @@ export async function ensureLocalPostgres(): Promise<LocalPostgres> {
 }
 
 /** Stops the project's cluster whoever started it (for `postgres-cli.ts stop`). */
-export function stopLocalPostgres(): void {
-  const paths = chooseClusterPaths(projectRoot);
+export function stopLocalPostgres(root: string = projectRoot): void {
+  const paths = chooseClusterPaths(root);
   const major = clusterMajor(paths);
   if (major === undefined) return say(`no cluster in ${paths.dataDir}`);
   const bins = requirePgBinaries(major);

@@ -1,6 +1,6 @@
 // The audit trail: who created, changed, ran, shared, invited or deleted what, and sign-ins that failed.
 import { z } from 'zod';
-import { isoDateSchema, userRefSchema, uuidSchema } from './common';
+import { isoDateSchema, queryIntSchema, userRefSchema, uuidSchema } from './common';
 
 export const auditActionSchema = z.enum([
   'create',
@@ -84,18 +84,8 @@ export const auditFilterSchema = auditFilterFields.refine(rangeInOrder, rangeMes
 
 export const listAuditQuerySchema = auditFilterFields
   .extend({
-    page: z.coerce
-      .number({ message: 'must be a number' })
-      .int({ message: 'must be a whole number' })
-      .min(1, { message: 'must be at least 1' })
-      .max(100_000, { message: 'must be at most 100000' })
-      .default(1),
-    pageSize: z.coerce
-      .number({ message: 'must be a number' })
-      .int({ message: 'must be a whole number' })
-      .min(1, { message: 'must be at least 1' })
-      .max(AUDIT_PAGE_MAX, { message: `must be at most ${AUDIT_PAGE_MAX}` })
-      .default(50),
+    page: queryIntSchema(1, 100_000).default(1),
+    pageSize: queryIntSchema(1, AUDIT_PAGE_MAX).default(50),
   })
   .refine(rangeInOrder, rangeMessage);
 

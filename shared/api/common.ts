@@ -14,6 +14,23 @@ export const descriptionSchema = z
   .string({ message: 'must be text' })
   .max(2000, { message: 'must be at most 2000 characters' });
 
+/** A whole number from a query string, within [min, max]; the messages name the bound that was crossed. */
+export function queryIntSchema(min: number, max: number) {
+  return z.coerce
+    .number({ message: 'must be a number' })
+    .int({ message: 'must be a whole number' })
+    .min(min, { message: `must be at least ${min}` })
+    .max(max, { message: `must be at most ${max}` });
+}
+
+/** A finite number from a query string, within [min, max]. */
+export function queryNumberSchema(min: number, max: number) {
+  return z.coerce
+    .number({ message: 'must be a number' })
+    .min(min, { message: `must be at least ${min}` })
+    .max(max, { message: `must be at most ${max}` });
+}
+
 export const idParamsSchema = z.object({ id: uuidSchema });
 
 export const userRefSchema = z.object({

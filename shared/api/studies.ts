@@ -5,12 +5,18 @@
 import { z } from 'zod';
 import { runSettingsSchema, type RunSettings } from '../scenario/run-settings';
 import { pointChangeSchema } from '../studies/point-changes';
+import { CARRIER_COUNT_PATH } from '../studies/sweepable-fields';
 import { replicationFiguresSchema, replicationSummaryJsonSchema } from '../studies/replication-summary-json';
 import { isoDateSchema, nameSchema, userRefSchema, uuidSchema } from './common';
 
 export const STUDY_KINDS = ['carrierSizing', 'sweep', 'whatIf'] as const;
 export const STUDY_STATUSES = ['running', 'done', 'cancelled', 'failedPoints'] as const;
-export const JOB_OUTCOMES = ['done', 'invalid', 'stopped'] as const;
+/**
+ * `gridlock`: the point's carriers locked the track; `skipped`: a carrier-sizing point above a count
+ * that already gridlocked, not run because more carriers on the same track only lock it sooner.
+ */
+export const JOB_OUTCOMES = ['done', 'invalid', 'stopped', 'gridlock', 'skipped'] as const;
+export const FAILED_OUTCOMES = ['invalid', 'stopped', 'gridlock', 'skipped'] as const;
 
 export const STUDY_LIMITS = {
   pointsMax: 400,
@@ -116,7 +122,7 @@ export const saveJobResultSchema = z.discriminatedUnion(
     }),
     z.object({
       ...jobKeyShape,
-      outcome: z.enum(['invalid', 'stopped']),
+      outcome: z.enum(FAILED_OUTCOMES),
       message: z.string().trim().min(1, 'is required').max(STUDY_LIMITS.messageMaxLength),
     }),
   ],
@@ -233,6 +239,41 @@ export const jobKey = (j: { pointIndex: number; first: number }) => `${j.pointIn
 export function pendingJobs(study: JobSource & Pick<StudyDetail, 'results'>): StudyJob[] {
   const done = new Set(study.results.map(jobKey));
   return studyJobs(study).filter((j) => !done.has(jobKey(j)));
+}
+
+/** The carrier count a job sets, or null when it leaves the count alone. */
+export const carriersOf = (job: Pick<StudyJob, 'changes'>): number | null =>
+  job.changes.find((c) => c.path === CARRIER_COUNT_PATH && c.op === 'set')?.value ?? null;
+
+/** In carrier sizing, the fewest carriers that gridlocked, or null. */
+function gridlockCeiling(study: Pick<StudyDetail, 'kind' | 'points' | 'results'>): number | null {
+  if (study.kind !== 'carrierSizing') return null;
+  const locked = study.results
+    .filter((r) => r.outcome === 'gridlock')
+    .map((r) => carriersOf(study.points[r.pointIndex]))
+    .filter((n): n is number => n !== null);
+  return locked.length > 0 ? Math.min(...locked) : null;
+}
+
+/**
+ * Carrier sizing stops adding counts above the first that gridlocks: more carriers on the same track
+ * only lock it sooner. Ask `skip` as each job starts (the reason it is not run, or null) and tell
+ * `record` each outcome, so jobs already queued behind a gridlock are skipped too.
+ */
+export function gridlockGuard(study: Pick<StudyDetail, 'kind' | 'points' | 'results'>) {
+  let ceiling = gridlockCeiling(study);
+  return {
+    skip(job: Pick<StudyJob, 'changes'>): string | null {
+      const n = carriersOf(job);
+      return ceiling !== null && n !== null && n > ceiling
+        ? `not run: ${ceiling} carriers already gridlock this track, and more carriers only lock it sooner`
+        : null;
+    },
+    record(job: Pick<StudyJob, 'changes'>, outcome: string): void {
+      const n = carriersOf(job);
+      if (study.kind === 'carrierSizing' && outcome === 'gridlock' && n !== null) ceiling = Math.min(ceiling ?? n, n);
+    },
+  };
 }
 
 export type StudyKind = z.infer<typeof studyKindSchema>;

@@ -99,7 +99,8 @@ export function sweepableFields(s: Scenario): SweepableField[] {
   );
   s.transfers.forEach((t, i) => {
     if (t.kind !== 'elevator') return;
-    const group = `Elevator ${t.name}`;
+    // Names often say "Elevator" already; "Elevator Elevator east" reads as a slip.
+    const group = /^elevator\b/i.test(t.name) ? t.name : `Elevator ${t.name}`;
     fields.push(
       { path: `transfers.${i}.handlingSeconds`, label: 'Handling time', group, unit: 's', value: t.handlingSeconds },
       { path: `transfers.${i}.liftSpeedMmPerS`, label: 'Lift speed', group, unit: 'mm/s', value: t.liftSpeedMmPerS },

@@ -69,6 +69,16 @@ const signedInPages: RouteObject[] = [
     lazy: async () => ({ Component: (await import('./routes/compare/compare-report-route')).CompareReportRoute }),
   },
   {
+    path: '/projects/:projectId/compare/studies',
+    lazy: async () => ({ Component: (await import('./routes/compare/compare-studies-route')).CompareStudiesRoute }),
+  },
+  {
+    path: '/projects/:projectId/compare/studies/report',
+    lazy: async () => ({
+      Component: (await import('./routes/compare/compare-studies-report-route')).CompareStudiesReportRoute,
+    }),
+  },
+  {
     path: '/runs/:runId/playback',
     lazy: async () => ({ Component: (await import('./routes/playback-route')).PlaybackRoute }),
   },

@@ -9,21 +9,6 @@ export function formatDateTime(iso: string): string {
   return Number.isNaN(date.getTime()) ? iso : dateTime.format(date);
 }
 
-const day = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium' });
-
-/** A yyyy-mm-dd calendar day as the app writes dates everywhere, e.g. "2 Dec 2026". */
-export function formatDay(isoDay: string): string {
-  const date = new Date(`${isoDay}T00:00:00`);
-  return Number.isNaN(date.getTime()) ? isoDay : day.format(date);
-}
-
-/** The yyyy-mm-dd day of an instant in the user's time zone. */
-export function localDayOf(iso: string): string {
-  const date = new Date(iso);
-  const pad = (n: number) => String(n).padStart(2, '0');
-  return `${date.getFullYear()}-${pad(date.getMonth() + 1)}-${pad(date.getDate())}`;
-}
-
 /** Lengths are stored in millimetres; people read long track in metres. */
 export function formatLengthMm(mm: number): string {
   if (Math.abs(mm) >= 1000) return `${(mm / 1000).toLocaleString('en-GB', { maximumFractionDigits: 2 })} m`;

@@ -117,9 +117,9 @@ describe('reading runs', () => {
   it('lists leave results out; the detail has them', async () => {
     const list = await org.people.viewer.agent.get(apiRoutes.scenarioRuns(org.content.scenarioId));
     expect(list.status).toBe(200);
-    expect(list.body).toHaveLength(1);
-    expect(list.body[0]).not.toHaveProperty('results');
-    runListItemSchema.parse(list.body[0]);
+    expect(list.body.items).toHaveLength(1);
+    expect(list.body.items[0]).not.toHaveProperty('results');
+    runListItemSchema.parse(list.body.items[0]);
     const detail = await org.people.viewer.agent.get(apiRoutes.run(org.content.runId));
     expect(runDetailSchema.parse(detail.body).results.engineVersion).toBe('0.1.0-test');
   });
@@ -133,15 +133,15 @@ describe('reading runs', () => {
       .send(runBody(second.body.id));
     expect(byOwner.status).toBe(201);
     const all = await org.people.viewer.agent.get(apiRoutes.projectRuns(org.content.projectId));
-    expect(all.body.map((r: { id: string }) => r.id).sort()).toEqual([org.content.runId, byOwner.body.id].sort());
+    expect(all.body.items.map((r: { id: string }) => r.id).sort()).toEqual([org.content.runId, byOwner.body.id].sort());
     const ofRevision = await org.people.viewer.agent
       .get(apiRoutes.projectRuns(org.content.projectId))
       .query({ revisionId: second.body.id });
-    expect(ofRevision.body.map((r: { id: string }) => r.id)).toEqual([byOwner.body.id]);
+    expect(ofRevision.body.items.map((r: { id: string }) => r.id)).toEqual([byOwner.body.id]);
     const ofEngineer = await org.people.viewer.agent
       .get(apiRoutes.scenarioRuns(org.content.scenarioId))
       .query({ createdBy: org.people.engineer.id });
-    expect(ofEngineer.body.map((r: { id: string }) => r.id)).toEqual([org.content.runId]);
+    expect(ofEngineer.body.items.map((r: { id: string }) => r.id)).toEqual([org.content.runId]);
   });
 
   it('the author renames a run', async () => {

@@ -7,6 +7,7 @@ import stackedLoop from '../../shared/examples/stacked-loop.json';
 import { apiError, mockApi } from './support/fetch-mock';
 import { me, project, revision, scenarioDetail, scenarioSummary, session } from './support/fixtures';
 import { renderApp } from './support/render-app';
+import { EMPTY_RUNS_PAGE } from './runs/support/runs-fixtures';
 
 // The scenario page mounts the whole editor and drawing; on a busy machine that takes longer than 5 s.
 vi.setConfig({ testTimeout: 20_000 });
@@ -115,7 +116,7 @@ describe('scenario page', () => {
       [`GET ${apiRoutes.scenario(scenarioSummary().id)}`]: { status: 200, body: scenarioDetail() },
       [`GET ${apiRoutes.project(project().id)}`]: { status: 200, body: project() },
       [`GET ${apiRoutes.scenarioRevisions(scenarioSummary().id)}`]: { status: 200, body: [revision(1), revision(2)] },
-      [`GET ${apiRoutes.scenarioRuns(scenarioSummary().id)}`]: { status: 200, body: [] },
+      [`GET ${apiRoutes.scenarioRuns(scenarioSummary().id)}`]: { status: 200, body: EMPTY_RUNS_PAGE },
     });
     renderApp(`/scenarios/${scenarioSummary().id}`);
 

@@ -7,7 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { scenarioSchema, type ScenarioInput } from '../../shared/scenario/scenario';
 import { compileLine } from '../../workers/engine/model/compile';
 import { stallMessage, zeroTimes } from '../../workers/engine/model/gridlock';
-import { Replication } from '../../workers/engine/model/simulation';
+import { Replication } from '../../workers/engine/replication';
 import { createStreamFactory } from '../../workers/engine/random/streams';
 import { serialLine } from '../../workers/engine/testing/line-builder';
 import { randomScenario } from '../reference/support/random-scenario';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { ENGINE_VERSION, InvalidInputError, isSimulationStopped, runExperiment } from '../../workers/engine';
 import { compileLine } from '../../workers/engine/model/compile';
-import { Replication } from '../../workers/engine/model/simulation';
+import { Replication } from '../../workers/engine/replication';
 import { createStreamFactory } from '../../workers/engine/random/streams';
 import { validateScenario } from '../../workers/engine';
 import { runResultSchema } from '../../shared/results/run-result';

@@ -24,8 +24,12 @@ function point(
   throughput: number,
   leadSeconds: number,
   shares: number[] = [0.1, 0.8, 0.1],
+  relativeHalfWidth = 0.001,
 ): SizingPoint {
-  const ci = (mean: number) => ({ mean, ciLow: mean * 0.99, ciHigh: mean * 1.01, halfWidth: mean * 0.01, n: 5 });
+  const ci = (mean: number) => {
+    const halfWidth = mean * relativeHalfWidth;
+    return { mean, ciLow: mean - halfWidth, ciHigh: mean + halfWidth, halfWidth, n: 5 };
+  };
   return {
     carriers,
     stats: {
@@ -129,10 +133,12 @@ describe('carrier range and grid', () => {
     expect(carrierGrid(10, 10)).toEqual([10]);
   });
 
-  it('runs from one carrier per station to what the track holds', () => {
+  it('runs from one carrier per station to one fewer than the smallest loop holds, below gridlock', () => {
     const s = scenarioSchema.parse(loadExample('stacked-loop.json'));
     const stations = s.steps.reduce((n, step) => n + step.stations.length, 0);
-    expect(defaultCarrierRange(s)).toEqual({ low: stations, high: trackCapacity(s) });
+    // Two 8 m lanes at a 200 mm pitch hold 40 carriers each, and each elevator one: 82 lock the loop.
+    expect(trackCapacity(s)).toBe(82);
+    expect(defaultCarrierRange(s)).toEqual({ low: stations, high: 81 });
   });
 
   it('range values are evenly spaced and whole when asked', () => {
@@ -154,7 +160,7 @@ describe('carrier recommendation', () => {
     const advice = recommendCarriers(curve, null, ['LD', 'Press', 'UL']);
     expect(advice).toMatchObject({ kind: 'recommend', carriers: 14, best: 22 });
     expect(advice.text).toBe(
-      '14 carriers make 198.0 parts/h, within 1 % of the best (200.0 parts/h at 22). Beyond 14 carriers throughput rises by 1.0 % while lead time grows 19 % (at 22).',
+      '14 carriers make 198.0 parts/h, within 1 % of the best (200.0 parts/h at 22 carriers). Beyond 14 carriers throughput rises by 1.0 % while lead time grows 19 % (at 22).',
     );
   });
 
@@ -177,6 +183,32 @@ describe('carrier recommendation', () => {
     expect(advice.text).toBe(
       'No carrier count reaches the target of 240.0 parts/h: the most is 200.0 parts/h at 22 carriers. Station Press limits the line: it is the bottleneck 80 % of the time at 22 carriers, so more carriers cannot help; shorten its cycle time or add a station beside it.',
     );
+  });
+
+  it('blames transport, not a station, when no station is the bottleneck most of the time', () => {
+    const elevatorBound = curve.map((p) => point(p.carriers, p.stats.throughput!.mean, 60, [0.09, 0.06, 0.02]));
+    const advice = recommendCarriers(elevatorBound, 240, ['LD', 'Press', 'UL']);
+    expect(advice).toMatchObject({ kind: 'unreachable', limitingStation: 'LD' });
+    expect(advice.text).toMatch(
+      /No station is the bottleneck most of the time \(the most often is LD, 9 % at 22 carriers\), so transport limits the line/,
+    );
+  });
+
+  it('on a tie for the best, names the fewer carriers: they cost less', () => {
+    // 20 carriers lie inside the 95 % interval of the highest mean (at 30): a tie, so 20 is named.
+    const tied = [10, 20, 30].map((n, i) => point(n, [150, 199.5, 200][i], 60 + i * 10, undefined, 0.005));
+    const unreachable = recommendCarriers(tied, 240, ['LD', 'Press', 'UL']);
+    expect(unreachable).toMatchObject({ kind: 'unreachable', best: 20, bestThroughput: 200 });
+    expect(unreachable.text).toMatch(
+      /the most is 200\.0 parts\/h, reached within its 95 % interval from 20 carriers\./,
+    );
+    expect(recommendCarriers(tied, null, [])).toMatchObject({ kind: 'recommend', carriers: 20, best: 20 });
+    // Exactly equal throughput (a deterministic line has no spread): the smaller count again.
+    const equal = [point(22, 200, 95, undefined, 0), point(14, 200, 80, undefined, 0)];
+    expect(recommendCarriers(equal, 240, [])).toMatchObject({ kind: 'unreachable', best: 14 });
+    // Outside the interval it is no tie: the larger count makes more and is named.
+    const apart = [point(20, 190, 70, undefined, 0.005), point(30, 200, 80, undefined, 0.005)];
+    expect(recommendCarriers(apart, 240, [])).toMatchObject({ best: 30 });
   });
 
   it('skips points that failed and says when nothing has finished', () => {

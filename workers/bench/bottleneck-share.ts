@@ -3,7 +3,7 @@
 // same reports are then replayed into a fresh tracker and timed alone. The share is the replay time
 // over the run time, both warm and measured in the same process, so machine load largely cancels.
 import { compileLine } from '../engine/model/compile';
-import { Replication } from '../engine/model/simulation';
+import { Replication } from '../engine/replication';
 import { BottleneckTracker } from '../engine/observe/bottleneck';
 import { createStreamFactory } from '../engine/random/streams';
 import { validateScenario } from '../engine/validate';

@@ -8,7 +8,7 @@ import { runSettingsSchema, type RunSettings } from '../../shared/scenario/run-s
 import type { Scenario } from '../../shared/scenario/scenario';
 import { SimulationStoppedError } from './kernel/stop';
 import { compileLine } from './model/compile';
-import { Replication } from './model/simulation';
+import { Replication } from './replication';
 import { combineReplications } from './observe/combine';
 import { summarizeReplication, type ReplicationSummary } from './observe/replication-summary';
 import { createStreamFactory } from './random/streams';

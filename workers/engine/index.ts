@@ -1,6 +1,12 @@
 // The engine's public face, the same in a Web Worker, in Node (CLI, server, bench) and in tests:
 // check a scenario, run an experiment, recognise why a run stopped.
-export { validateScenario, trackCapacity, type ValidationIssue, type ValidationOutcome } from './validate';
+export {
+  validateScenario,
+  trackCapacity,
+  gridlockFreeCarriers,
+  type ValidationIssue,
+  type ValidationOutcome,
+} from './validate';
 export {
   runExperiment,
   runReplicationRange,

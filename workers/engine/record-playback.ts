@@ -7,7 +7,7 @@ import { formatIssuePath } from '../../shared/scenario/issue-path';
 import { InvalidInputError, prepare, RESULT_POSITION_BINS, RESULT_TIME_BINS, type RunHooks } from './experiment';
 import { SimulationStoppedError } from './kernel/stop';
 import { compileLine } from './model/compile';
-import { Replication } from './model/simulation';
+import { Replication } from './replication';
 import { TraceRecorder } from './observe/trace';
 import { createStreamFactory } from './random/streams';
 

@@ -5,13 +5,28 @@ import type { JobResult, StudyDetail } from '../../shared/api/studies';
 import type { ReplicationFigures } from '../../shared/studies/replication-summary-json';
 import { studentT95, type ConfidenceInterval } from '../engine/stats';
 
-export type PointState = 'done' | 'partial' | 'pending' | 'invalid' | 'stopped';
+export type PointState = 'done' | 'partial' | 'pending' | 'invalid' | 'stopped' | 'gridlock' | 'skipped';
+
+/** Each state in a word or two, as tables and charts show it. */
+export const POINT_STATE_WORDS: Record<PointState, string> = {
+  done: 'done',
+  partial: 'partly run',
+  pending: 'waiting',
+  invalid: 'not valid',
+  stopped: 'stopped',
+  gridlock: 'gridlock',
+  skipped: 'not run',
+};
+
+/** A point that will never have figures: not valid, stopped, gridlocked or skipped. */
+export const hasFailed = (state: PointState) =>
+  state === 'invalid' || state === 'stopped' || state === 'gridlock' || state === 'skipped';
 
 export type PointStatistics = {
   index: number;
   label: string;
   state: PointState;
-  /** Why an invalid or stopped point has no figures. */
+  /** Why an invalid, stopped, gridlocked or skipped point has no figures. */
   message: string | null;
   /** Figures per replication, in replication order (index = replication number). */
   replications: (ReplicationFigures | undefined)[];
@@ -24,7 +39,7 @@ export type PointStatistics = {
 
 function pointState(jobs: JobResult[], jobsPerPoint: number): { state: PointState; message: string | null } {
   const failed = jobs.find((j) => j.outcome !== 'done');
-  if (failed) return { state: failed.outcome === 'invalid' ? 'invalid' : 'stopped', message: failed.message };
+  if (failed) return { state: failed.outcome as Exclude<JobResult['outcome'], 'done'>, message: failed.message };
   if (jobs.length === 0) return { state: 'pending', message: null };
   return { state: jobs.length >= jobsPerPoint ? 'done' : 'partial', message: null };
 }

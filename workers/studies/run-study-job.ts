@@ -9,7 +9,7 @@ import { blockToJson, type ReplicationBlockJson } from '../engine/observe/summar
 
 export type StudyJobOutcome =
   | { outcome: 'done'; engineVersion: string; block: ReplicationBlockJson }
-  | { outcome: 'invalid' | 'stopped'; message: string }
+  | { outcome: 'invalid' | 'stopped' | 'gridlock'; message: string }
   | { outcome: 'cancelled' };
 
 /** The job as it travels to a runner: the study's job plus the revision's document it needs. */
@@ -34,7 +34,9 @@ export async function runStudyJob(
     if (e instanceof InvalidInputError)
       return { outcome: 'invalid', message: e.issues.map((i) => `${i.path}: ${i.message}`).join('; ') };
     if (isSimulationStopped(e))
-      return e.reason === 'cancelled' ? { outcome: 'cancelled' } : { outcome: 'stopped', message: e.message };
+      return e.reason === 'cancelled'
+        ? { outcome: 'cancelled' }
+        : { outcome: e.reason === 'gridlock' ? 'gridlock' : 'stopped', message: e.message };
     throw e;
   }
 }

@@ -1,16 +1,16 @@
 // The demo organisation: an invented valve-cartridge assembly plant with an owner, an engineer and a
-// viewer, one project and the two example layouts. Seeding is all-or-nothing and happens once: when the
-// demo organisation exists, nothing is touched, so users' edits to demo data survive restarts.
+// viewer, one project and two layouts made from the examples (demo-layouts.ts). Seeding is
+// all-or-nothing and happens once: when the demo organisation exists, nothing is touched, so users'
+// edits to demo data survive restarts.
 import type { DataSource } from 'typeorm';
 import type { Role } from '../../../shared/api/roles';
 import { scenarioSchema } from '../../../shared/scenario/scenario';
-import sideBySideLoop from '../../../shared/examples/side-by-side-loop.json';
-import stackedLoop from '../../../shared/examples/stacked-loop.json';
 import { recordAudit } from '../../audit/record-audit';
 import { hashPassword } from '../../auth/password';
 import { loadConfig, type ServerConfig } from '../../config';
 import { createScenarioWithFirstRevision } from '../../scenarios/create-scenario';
 import { MembershipEntity, OrganisationEntity, ProjectEntity, UserEntity } from '../entities';
+import { DEMO_LAYOUTS } from './demo-layouts';
 
 export const DEMO_ORGANISATION_ID = '5eed0000-0000-4000-8000-000000000001';
 export const DEMO_PASSWORD = 'demo-password';
@@ -20,19 +20,6 @@ export const DEMO_ACCOUNTS: ReadonlyArray<{ email: string; name: string; role: R
   { email: `owner@${DEMO_EMAIL_DOMAIN}`, name: 'Demo Owner', role: 'owner' },
   { email: `engineer@${DEMO_EMAIL_DOMAIN}`, name: 'Demo Engineer', role: 'engineer' },
   { email: `viewer@${DEMO_EMAIL_DOMAIN}`, name: 'Demo Viewer', role: 'viewer' },
-];
-
-const DEMO_SCENARIOS = [
-  {
-    example: stackedLoop,
-    name: 'Stacked loop',
-    description: 'Work deck above, return deck below, an elevator at each end.',
-  },
-  {
-    example: sideBySideLoop,
-    name: 'Side-by-side loop',
-    description: 'Work and return lanes next to each other, joined at both ends.',
-  },
 ];
 
 function parseExample(name: string, example: unknown) {
@@ -51,7 +38,7 @@ export async function seedDemo(
 ): Promise<void> {
   if (config.LANEWRIGHT_DEMO === 'off') return;
   if (await ds.getRepository(OrganisationEntity).existsBy({ id: DEMO_ORGANISATION_ID })) return;
-  const documents = DEMO_SCENARIOS.map((s) => ({ ...s, document: parseExample(s.name, s.example) }));
+  const documents = DEMO_LAYOUTS.map((s) => ({ ...s, document: parseExample(s.name, s.example) }));
   const passwordHash = await hashPassword(DEMO_PASSWORD);
 
   await ds.transaction(async (manager) => {

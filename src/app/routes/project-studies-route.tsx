@@ -4,7 +4,7 @@ import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
 import { LoadError } from '../../components/load-error';
 import { NotFoundMessage } from '../../components/not-found-message';
-import { Button } from '../../components/ui/button';
+import { Button, ButtonLink } from '../../components/ui/button';
 import { TitledCard } from '../../components/ui/card';
 import { EmptyState } from '../../components/ui/empty-state';
 import { PageHeader } from '../../components/ui/page-header';
@@ -55,7 +55,16 @@ export function ProjectStudiesRoute() {
         }
         description="A study runs one scenario many times over, at several carrier counts or settings, and answers with a chart and a recommendation."
         // The empty state carries the button while there are no studies, so the page never shows two.
-        actions={(studies.data?.length ?? 0) > 0 ? startButton || undefined : undefined}
+        actions={
+          (studies.data?.length ?? 0) > 0 ? (
+            <>
+              {(studies.data?.length ?? 0) > 1 && (
+                <ButtonLink to={`/projects/${projectId}/compare/studies`}>Compare studies</ButtonLink>
+              )}
+              {startButton}
+            </>
+          ) : undefined
+        }
       />
       {creating && chosen && (
         <TitledCard title="New study" className="max-w-3xl">

@@ -2,13 +2,14 @@
 // the recommended setting marked and labelled, and an optional reference level such as the plateau.
 import { extent, max, min, scaleLinear } from 'd3';
 import { useState, type MouseEvent } from 'react';
-import { AxisBottom, AxisLeft, linearTicks } from './Axes';
+import { SweepAxes } from './SweepAxes';
 import { ChartFrame, ChartMessage, plotWidthOf, type Margin } from './ChartFrame';
 import type { LegendItem } from './Legend';
 import { ascendingProblem, LineWithBand, nearestIndex } from './LineWithBand';
 import { estimateTextWidth, formatNumber } from './format';
 import { ink, seriesStyle } from './palette';
 import { localPoint, useChartShell } from './useChartShell';
+import { StopMarks, STOP_COLOUR, type StopMark } from './StopMarks';
 import { checkNumbers, firstProblem, type Problem } from './validate';
 
 export interface SweepPoint {
@@ -31,6 +32,8 @@ export interface CurveWithBandProps {
   recommendedLabel?: string;
   /** A level to read the curve against, e.g. "plateau − 1 % tolerance". */
   reference?: { value: number; label: string };
+  /** Settings with no result (gridlock, not valid, not run): crossed on the axis, never drawn as zero. */
+  stops?: readonly StopMark[];
   title?: string;
   plotHeight?: number;
   width?: number;
@@ -93,7 +96,8 @@ export function CurveWithBand(props: CurveWithBandProps) {
 
   const plotWidth = plotWidthOf(shell.width, MARGIN);
   const xs = points.map((p) => p.x);
-  const [x0, x1] = extent(xs) as [number, number];
+  const stops = props.stops ?? [];
+  const [x0, x1] = extent([...xs, ...stops.map((m) => m.x)]) as [number, number];
   const x = scaleLinear()
     .domain(x0 === x1 ? [x0 - 1, x1 + 1] : [x0, x1])
     .range([0, plotWidth]);
@@ -112,6 +116,14 @@ export function CurveWithBand(props: CurveWithBandProps) {
     ...(recommended ? [{ label: 'recommended setting', swatch: { kind: 'diamond' as const, colour: MARK } }] : []),
     ...(reference
       ? [{ label: reference.label, swatch: { kind: 'line' as const, colour: ink.soft, dash: '4 3', strokeWidth: 1.5 } }]
+      : []),
+    ...(stops.length > 0
+      ? [
+          {
+            label: `✕ no result: ${[...new Set(stops.map((m) => m.reason))].join(', ')}`,
+            swatch: { kind: 'line' as const, colour: STOP_COLOUR },
+          },
+        ]
       : []),
   ];
 
@@ -163,31 +175,17 @@ export function CurveWithBand(props: CurveWithBandProps) {
       })}
       exportName={props.exportName ?? 'sweep-curve'}
     >
-      <AxisLeft
-        ticks={linearTicks(y, plotHeight / 45)}
-        height={plotHeight}
-        label={`${yQuantity} (${yUnit})`}
-        gridWidth={plotWidth}
-        labelOffset={54}
-      />
-      <AxisBottom
-        ticks={linearTicks(
-          x,
-          Math.min(plotWidth / 70, xUnit === 'count' ? x1 - x0 : Infinity),
-          xUnit === 'count' ? (v) => (Number.isInteger(v) ? formatNumber(v) : '') : formatNumber,
-        )}
-        width={plotWidth}
+      <SweepAxes
+        x={x}
+        y={y}
+        plotWidth={plotWidth}
         plotHeight={plotHeight}
-        label={`${xQuantity} (${xUnit})`}
+        xQuantity={xQuantity}
+        xUnit={xUnit}
+        yQuantity={yQuantity}
+        yUnit={yUnit}
+        reference={reference}
       />
-      {reference && (
-        <g transform={`translate(0,${y(reference.value)})`} pointerEvents="none" data-chart-part="reference">
-          <line x2={plotWidth} stroke={ink.soft} strokeWidth={1.5} strokeDasharray="4 3" />
-          <text x={4} y={-5} fontSize={11} fill={ink.soft}>
-            {reference.label}
-          </text>
-        </g>
-      )}
       <LineWithBand
         xs={xs}
         values={points.map((p) => p.mean)}
@@ -210,6 +208,7 @@ export function CurveWithBand(props: CurveWithBandProps) {
           />
         ))}
       </g>
+      <StopMarks marks={stops} x={x} plotHeight={plotHeight} />
       {recommended && (
         <g pointerEvents="none" data-chart-part="recommended">
           <line

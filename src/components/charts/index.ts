@@ -13,6 +13,8 @@ export { LineBalanceChart, effectiveCycle, type LineBalanceChartProps, type Bala
 export { Histogram, type HistogramProps, type FittedDensity } from './Histogram';
 export { TimeSeriesChart, type TimeSeriesChartProps, type TimeSeries } from './TimeSeriesChart';
 export { CurveWithBand, type CurveWithBandProps, type SweepPoint } from './CurveWithBand';
+export { CurvesWithBands, type CurvesWithBandsProps, type CurveSeries } from './CurvesWithBands';
+export type { StopMark } from './StopMarks';
 export { ShareBars, type ShareBarsProps, type CarrierShareItem } from './ShareBars';
 export { DistributionPreview, type DistributionPreviewProps } from './DistributionPreview';
 export { ChartExportMenu } from './ChartExportMenu';

@@ -5,6 +5,7 @@ import type { Role } from '../../../shared/api/roles';
 import { mockApi, type MockAnswer, type RecordedCall } from '../support/fetch-mock';
 import { me, project, revision, scenarioDetail, scenarioSummary, session } from '../support/fixtures';
 import { renderApp } from '../support/render-app';
+import { EMPTY_RUNS_PAGE } from '../runs/support/runs-fixtures';
 
 export const SCENARIO_ID = scenarioSummary().id;
 
@@ -16,7 +17,7 @@ export async function openScenarioPage(role: Role, extra: Record<string, Route> 
     [`GET ${apiRoutes.scenario(SCENARIO_ID)}`]: { status: 200, body: scenarioDetail() },
     [`GET ${apiRoutes.project(project().id)}`]: { status: 200, body: project() },
     [`GET ${apiRoutes.scenarioRevisions(SCENARIO_ID)}`]: { status: 200, body: [revision(1), revision(2)] },
-    [`GET ${apiRoutes.scenarioRuns(SCENARIO_ID)}`]: { status: 200, body: [] },
+    [`GET ${apiRoutes.scenarioRuns(SCENARIO_ID)}`]: { status: 200, body: EMPTY_RUNS_PAGE },
     ...extra,
   });
   const app = renderApp(`/scenarios/${SCENARIO_ID}`);

@@ -1,21 +1,32 @@
-// The pending-event set of the simulation: a binary min-heap of event slots held in typed arrays.
-// Order is (time, priority, sequence), so events at the same time run by priority and then in the
-// order they were scheduled: runs are deterministic. An event is a type code and two integer
-// payloads; nothing is allocated per event once the arrays have grown to the model's working size.
+// The pending-event set of the simulation: a 4-ary min-heap on parallel typed arrays. Order is
+// (time, priority, sequence), so events at the same time run by priority and then in the order they
+// were scheduled: runs are deterministic. An event is a type code and two integer payloads; nothing
+// is allocated per event once the arrays have grown to the model's working size.
+//
+// Why this shape: the heap arrays hold each entry's time and tie key (priority and sequence folded
+// into one exact double) beside its slot, so a comparison reads two numbers next to each other
+// instead of chasing a slot into three arrays; four children per node halve the depth of a sift for
+// the same comparisons. The payload (kind, a, b) stays in its slot and is read once, at the pop.
 // Cancellation is left to the model (generation counters in the payload), which is cheaper than
 // removing entries from the middle of the heap.
 
 const INITIAL_CAPACITY = 256;
+/**
+ * priority × SEQ_SPAN + sequence is an exact double for priorities below 2^9 and up to 2^44 (1.8e13)
+ * events per replication, far beyond any event budget; priorities are the few named in priorities.ts.
+ * Not checked per push: this is the hottest call of the engine.
+ */
+const SEQ_SPAN = 2 ** 44;
 
 export class EventQueue {
-  private time = new Float64Array(INITIAL_CAPACITY);
-  private seq = new Float64Array(INITIAL_CAPACITY);
-  private prio = new Int32Array(INITIAL_CAPACITY);
+  /** Heap order: entry i's time, tie key and slot. */
+  private hTime = new Float64Array(INITIAL_CAPACITY);
+  private hKey = new Float64Array(INITIAL_CAPACITY);
+  private hSlot = new Int32Array(INITIAL_CAPACITY);
+  /** Payload by slot; free slots are kept on a stack. */
   private kind = new Int32Array(INITIAL_CAPACITY);
   private a = new Int32Array(INITIAL_CAPACITY);
   private b = new Int32Array(INITIAL_CAPACITY);
-  /** heap[i] is the slot of the i-th heap entry; free slots are kept on a stack. */
-  private heap = new Int32Array(INITIAL_CAPACITY);
   private free = new Int32Array(INITIAL_CAPACITY);
   private freeTop = 0;
   private used = 0;
@@ -40,36 +51,72 @@ export class EventQueue {
   }
 
   peekTime(): number {
-    return this.size > 0 ? this.time[this.heap[0]] : Infinity;
+    return this.size > 0 ? this.hTime[0] : Infinity;
   }
 
   push(time: number, priority: number, kind: number, a: number, b: number): void {
-    const slot = this.allocate();
-    this.time[slot] = time;
-    this.seq[slot] = this.nextSeq++;
-    this.prio[slot] = priority;
+    let slot: number;
+    if (this.freeTop > 0) slot = this.free[--this.freeTop];
+    else {
+      if (this.used === this.kind.length) this.grow();
+      slot = this.used++;
+    }
     this.kind[slot] = kind;
     this.a[slot] = a;
     this.b[slot] = b;
-    this.heap[this.size] = slot;
-    this.siftUp(this.size++);
+    this.siftUp(this.size++, time, priority * SEQ_SPAN + this.nextSeq++, slot);
   }
 
   /** Removes the earliest event and exposes it through popTime, popKind, popA, popB. */
   pop(): boolean {
-    if (this.size === 0) return false;
-    const slot = this.heap[0];
-    this.popTime = this.time[slot];
+    const n = this.size;
+    if (n === 0) return false;
+    const slot = this.hSlot[0];
+    this.popTime = this.hTime[0];
     this.popKind = this.kind[slot];
     this.popA = this.a[slot];
     this.popB = this.b[slot];
     this.free[this.freeTop++] = slot;
-    this.size--;
-    if (this.size > 0) {
-      this.heap[0] = this.heap[this.size];
-      this.siftDown(0);
-    }
+    const last = n - 1;
+    this.size = last;
+    if (last > 0) this.refill(this.hTime[last], this.hKey[last], this.hSlot[last]);
     return true;
+  }
+
+  /**
+   * Fills the hole left at the root by the pop with the entry that was last (Floyd's bottom-up
+   * variant): the hole first sinks to a leaf along the earliest children, then the entry rises from
+   * there. The last entry is late as a rule, so it rarely rises far, and the way down saves the
+   * comparison with it at every level. Entries are unique (sequence), so the pop order is the same
+   * as that of any other heap.
+   */
+  private refill(time: number, key: number, slot: number): void {
+    const ht = this.hTime;
+    const hk = this.hKey;
+    const hs = this.hSlot;
+    const n = this.size;
+    let i = 0;
+    for (;;) {
+      const first = 4 * i + 1;
+      if (first >= n) break;
+      let best = first;
+      let bt = ht[first];
+      let bk = hk[first];
+      const end = first + 4 < n ? first + 4 : n;
+      for (let c = first + 1; c < end; c++) {
+        const ct = ht[c];
+        if (ct < bt || (ct === bt && hk[c] < bk)) {
+          best = c;
+          bt = ct;
+          bk = hk[c];
+        }
+      }
+      ht[i] = bt;
+      hk[i] = bk;
+      hs[i] = hs[best];
+      i = best;
+    }
+    this.siftUp(i, time, key, slot);
   }
 
   /**
@@ -77,58 +124,63 @@ export class EventQueue {
    * keep their times. Rare (a few times a shift), so the heap is simply rebuilt.
    */
   postpone(delta: number, maxKind: number): void {
-    for (let i = 0; i < this.size; i++) {
-      const slot = this.heap[i];
-      if (this.kind[slot] <= maxKind) this.time[slot] += delta;
-    }
-    for (let i = (this.size >> 1) - 1; i >= 0; i--) this.siftDown(i);
+    for (let i = 0; i < this.size; i++) if (this.kind[this.hSlot[i]] <= maxKind) this.hTime[i] += delta;
+    for (let i = (this.size - 2) >> 2; i >= 0; i--) this.siftDown(i, this.hTime[i], this.hKey[i], this.hSlot[i]);
   }
 
-  private before(x: number, y: number): boolean {
-    const tx = this.time[x];
-    const ty = this.time[y];
-    if (tx !== ty) return tx < ty;
-    const px = this.prio[x];
-    const py = this.prio[y];
-    if (px !== py) return px < py;
-    return this.seq[x] < this.seq[y];
-  }
-
-  private siftUp(i: number): void {
-    const heap = this.heap;
-    const slot = heap[i];
+  /** Places the entry (time, key, slot) at hole i or above it. */
+  private siftUp(i: number, time: number, key: number, slot: number): void {
+    const ht = this.hTime;
+    const hk = this.hKey;
+    const hs = this.hSlot;
     while (i > 0) {
-      const parent = (i - 1) >> 1;
-      if (!this.before(slot, heap[parent])) break;
-      heap[i] = heap[parent];
+      const parent = (i - 1) >> 2;
+      const pt = ht[parent];
+      if (pt < time || (pt === time && hk[parent] < key)) break;
+      ht[i] = pt;
+      hk[i] = hk[parent];
+      hs[i] = hs[parent];
       i = parent;
     }
-    heap[i] = slot;
+    ht[i] = time;
+    hk[i] = key;
+    hs[i] = slot;
   }
 
-  private siftDown(i: number): void {
-    const heap = this.heap;
+  /** Places the entry (time, key, slot) at hole i or below it. */
+  private siftDown(i: number, time: number, key: number, slot: number): void {
+    const ht = this.hTime;
+    const hk = this.hKey;
+    const hs = this.hSlot;
     const n = this.size;
-    const slot = heap[i];
     for (;;) {
-      let child = 2 * i + 1;
-      if (child >= n) break;
-      if (child + 1 < n && this.before(heap[child + 1], heap[child])) child++;
-      if (!this.before(heap[child], slot)) break;
-      heap[i] = heap[child];
-      i = child;
+      const first = 4 * i + 1;
+      if (first >= n) break;
+      let best = first;
+      let bt = ht[first];
+      let bk = hk[first];
+      const end = first + 4 < n ? first + 4 : n;
+      for (let c = first + 1; c < end; c++) {
+        const ct = ht[c];
+        if (ct < bt || (ct === bt && hk[c] < bk)) {
+          best = c;
+          bt = ct;
+          bk = hk[c];
+        }
+      }
+      if (time < bt || (time === bt && key < bk)) break;
+      ht[i] = bt;
+      hk[i] = bk;
+      hs[i] = hs[best];
+      i = best;
     }
-    heap[i] = slot;
-  }
-
-  private allocate(): number {
-    if (this.freeTop > 0) return this.free[--this.freeTop];
-    if (this.used === this.time.length) this.grow();
-    return this.used++;
+    ht[i] = time;
+    hk[i] = key;
+    hs[i] = slot;
   }
 
   private grow(): void {
-    const n = this.time.length * 2;
+    const n = this.kind.length * 2;
     const grow64 = (x: Float64Array) => {
       const y = new Float64Array(n);
       y.set(x);
@@ -139,13 +191,12 @@ export class EventQueue {
       y.set(x);
       return y;
     };
-    this.time = grow64(this.time);
-    this.seq = grow64(this.seq);
-    this.prio = grow32(this.prio);
+    this.hTime = grow64(this.hTime);
+    this.hKey = grow64(this.hKey);
+    this.hSlot = grow32(this.hSlot);
     this.kind = grow32(this.kind);
     this.a = grow32(this.a);
     this.b = grow32(this.b);
-    this.heap = grow32(this.heap);
     this.free = grow32(this.free);
   }
 }

@@ -5,18 +5,10 @@
 // Carriers that may be able to move are put on a wake ring and retried after the current event, so
 // no handler re-enters another. A carrier held right behind another at rest may join it in a
 // platoon (platoons.ts); a platoon moves as one, through its leader.
+import { scheduleActive, scheduleActiveAt } from '../kernel/clock';
 import { followerProfile, PROFILE_EMPTY, PROFILE_LOADED } from './motion';
 import { canJoin, join, leaderOf, offsetMm, phaseOf, rearOf, ridersChangePhase } from './platoons';
-import {
-  EV_ARRIVE,
-  EV_LANE_WAKE,
-  PH_EXIT,
-  PH_MOVING,
-  PH_QUEUED,
-  scheduleActive,
-  scheduleActiveAt,
-  type LineState,
-} from './state';
+import { EV_ARRIVE, EV_LANE_WAKE, PH_EXIT, PH_MOVING, PH_QUEUED, type LineState } from './state';
 import { NONE, type CarrierIndex, type ConnIndex, type LaneIndex } from './indexes';
 
 const EPS_MM = 1e-6;
@@ -67,7 +59,10 @@ export function wake(m: LineState, c: CarrierIndex): void {
   if (c < 0 || m.cWoken[c]) return;
   m.cWoken[c] = 1;
   const ring = m.wakeRing;
-  ring[(m.wakeHead + m.wakeCount) % ring.length] = c;
+  // A wrap by comparison, not %: this runs several times per event.
+  let at = m.wakeHead + m.wakeCount;
+  if (at >= ring.length) at -= ring.length;
+  ring[at] = c;
   m.wakeCount++;
 }
 
@@ -75,7 +70,7 @@ export function wake(m: LineState, c: CarrierIndex): void {
 export function nextWoken(m: LineState): CarrierIndex {
   if (m.wakeCount === 0) return NONE;
   const c = m.wakeRing[m.wakeHead];
-  m.wakeHead = (m.wakeHead + 1) % m.wakeRing.length;
+  if (++m.wakeHead === m.wakeRing.length) m.wakeHead = 0;
   m.wakeCount--;
   m.cWoken[c] = 0;
   return c;

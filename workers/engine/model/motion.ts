@@ -33,6 +33,27 @@ function slower(a: MotionProfile, b: MotionProfile): MotionProfile {
   return out;
 }
 
+const CACHE_BITS = 9;
+
+/**
+ * Remembers recent move times by exact distance, per profile: a line repeats the same few distances
+ * (station to station, one pitch) thousands of times, and an S-curve move time costs square and cube
+ * roots. A direct-mapped table: a hit returns the very number the formula gave, so results do not change.
+ */
+function cachedMoveTime(profiles: MotionProfile[]): (d: number, p: number) => number {
+  const size = 1 << CACHE_BITS;
+  const keys = new Float64Array(size * profiles.length).fill(-1);
+  const values = new Float64Array(size * profiles.length);
+  return (d, p) => {
+    const at = p * size + (Math.imul((d * 64) | 0, 0x9e3779b1) >>> (32 - CACHE_BITS));
+    if (keys[at] === d) return values[at];
+    const t = moveTime(d, profiles[p]);
+    keys[at] = d;
+    values[at] = t;
+    return t;
+  };
+}
+
 export function createMotion(s: Scenario): Motion {
   if (s.conveyor.kind === 'belt') {
     const speed = s.conveyor.speedMmPerS;
@@ -47,7 +68,7 @@ export function createMotion(s: Scenario): Motion {
   const empty = s.carriers.empty ? toProfile(s.carriers.empty) : loaded;
   const profiles = [loaded, empty, slower(loaded, empty)];
   return {
-    moveSeconds: (d, p) => moveTime(d, profiles[p]),
+    moveSeconds: cachedMoveTime(profiles),
     travelledMm: (d, p, t) => positionAt(d, profiles[p], t),
     secondsToCover: (d, p, x) => timeToReach(d, profiles[p], x),
     cruiseMmPerS: loaded.vMax,

@@ -2,9 +2,10 @@
 // backwards, beginning with the lanes that feed the load station (nearest first) and ending with the
 // load station's own lane; if the lanes are full, transfers hold one each. The warm-up then brings the
 // line to its working state.
+import { scheduleActive } from '../kernel/clock';
 import { chooseStation } from './dispatch';
 import { attach, setPhase, wake } from './lanes';
-import { EV_CARRIED, PH_QUEUED, PH_TRANSFER, scheduleActive, TR_CARRYING, type LineState } from './state';
+import { EV_CARRIED, PH_QUEUED, PH_TRANSFER, TR_CARRYING, type LineState } from './state';
 import type { CarrierIndex, LaneIndex, StepIndex } from './indexes';
 
 function lanesTowardsLoad(m: LineState): LaneIndex[] {

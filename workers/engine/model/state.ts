@@ -2,6 +2,7 @@
 // and connection number so the hot path touches no objects. Modules of the line model (lanes,
 // stations, transfers) read and write it; the observer is told of every state change.
 import type { Sampler } from '../random/sampler';
+import type { Clock } from '../kernel/clock';
 import type { EventQueue } from '../kernel/event-queue';
 import { ST_STARVED, type Observer } from '../observe/observer';
 import type { CompiledLine } from './compile';
@@ -53,13 +54,10 @@ export type StationSamplers = {
   inspect: Sampler | null;
 };
 
-export type LineState = {
+/** The clock (now, queue, activePending) is the kernel's; activePending counts EV_ARRIVE … EV_LANE_WAKE. */
+export type LineState = Clock & {
   line: CompiledLine;
-  queue: EventQueue;
   observer: Observer;
-  now: number;
-  /** Pending events that can change the line (EV_ARRIVE … EV_LANE_WAKE), for gridlock detection. */
-  activePending: number;
   breakActive: boolean;
   /** End of the whole-line stop in progress (see line-stop.ts), or -Infinity when the line runs. */
   stoppedUntil: number;
@@ -206,15 +204,4 @@ export function createState(
     stepWaiting: Array.from({ length: line.stepCount }, () => []),
     wip: 0,
   };
-}
-
-/** Schedules an event that can change the line (counted for gridlock detection). */
-export function scheduleActive(m: LineState, delay: number, kind: number, a: number, b = 0): void {
-  scheduleActiveAt(m, m.now + delay, kind, a, b);
-}
-
-/** The same at an absolute time (not before now), for times computed from an earlier origin. */
-export function scheduleActiveAt(m: LineState, time: number, kind: number, a: number, b = 0): void {
-  m.activePending++;
-  m.queue.push(time, 1, kind, a, b);
 }

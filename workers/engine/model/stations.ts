@@ -4,6 +4,7 @@
 // A failure or a break pauses the work, which resumes where it stopped. Repairs run in elapsed time.
 // A segment that runs to its scheduled end takes off exactly its planned length, so the work or the
 // time to failure that ended it reaches zero exactly, however large the clock: no tolerance on times.
+import { scheduleActive } from '../kernel/clock';
 import { STEP_INSPECT, STEP_LOAD, STEP_UNLOAD } from './compile';
 import { chooseStation, unassign } from './dispatch';
 import { setPhase, wake } from './lanes';
@@ -12,7 +13,6 @@ import {
   EV_SEGMENT_END,
   PH_QUEUED,
   PH_STATION,
-  scheduleActive,
   ST_BLOCKED,
   ST_BREAK,
   ST_DOWN,

@@ -4,6 +4,7 @@
 // cycle, hands it over when the destination lane's start is clear (blocked until then) and, for
 // elevators and lateral transfers, travels back empty before it can take the next one. Requests
 // for a lane's start are served in the order they were made.
+import { scheduleActive } from '../kernel/clock';
 import { CONN_LINK } from './compile';
 import { attach, detachFront, entryClear, requestLaneCheck, scheduleEntryWake, setPhase, wake } from './lanes';
 import {
@@ -12,7 +13,6 @@ import {
   PH_EXIT,
   PH_QUEUED,
   PH_TRANSFER,
-  scheduleActive,
   TR_CARRYING,
   TR_HOLDING,
   TR_IDLE,

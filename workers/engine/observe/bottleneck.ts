@@ -20,7 +20,31 @@ const MAX_PENDING = 2_000;
 /** Completed periods collected before the timeline is resolved (larger batches sort less often; memory stays under MAX_PENDING). */
 const MIN_BATCH = 256;
 
-type Segment = { station: number; periodStart: number; periodEnd: number; from: number; to: number };
+/**
+ * Sorts order[0..n) by starts[order[i]], keeping equal starts in their present order (a bottom-up
+ * merge sort through scratch). Written out rather than a sort with a comparator callback, which
+ * costs a call into JavaScript per comparison: this runs for every batch of periods.
+ */
+function sortByStart(order: Int32Array, n: number, starts: Float64Array, scratch: Int32Array): void {
+  let from = order;
+  let to = scratch;
+  for (let width = 1; width < n; width *= 2) {
+    for (let lo = 0; lo < n; lo += 2 * width) {
+      const mid = lo + width < n ? lo + width : n;
+      const hi = lo + 2 * width < n ? lo + 2 * width : n;
+      let i = lo;
+      let j = mid;
+      let k = lo;
+      while (i < mid && j < hi) to[k++] = starts[from[j]] < starts[from[i]] ? from[j++] : from[i++];
+      while (i < mid) to[k++] = from[i++];
+      while (j < hi) to[k++] = from[j++];
+    }
+    const t = from;
+    from = to;
+    to = t;
+  }
+  if (from !== order) order.set(from.subarray(0, n));
+}
 
 export class BottleneckTracker {
   private readonly activeSince: Float64Array;
@@ -43,7 +67,13 @@ export class BottleneckTracker {
   private byStart = new Int32Array(32);
   private heap = new Int32Array(32);
   private heapSize = 0;
-  private held: Segment | null = null;
+  private scratch = new Int32Array(32);
+  /** The segment being extended (kept in fields, not an object: one is made per bottleneck change); station -1: none. */
+  private heldStation = -1;
+  private heldPeriodStart = 0;
+  private heldPeriodEnd = 0;
+  private heldFrom = 0;
+  private heldTo = 0;
   /** Start and end of the overlap between the held segment's period and its predecessor's. */
   private heldOverlapFrom = 0;
   private heldOverlapTo = 0;
@@ -190,8 +220,8 @@ export class BottleneckTracker {
   /** Closes every running period at the end of the run and attributes the last segment. */
   finish(t: number): void {
     this.resolve(t, true);
-    if (this.held) this.attribute(this.held, Infinity, -Infinity);
-    this.held = null;
+    if (this.heldStation >= 0) this.attribute(Infinity, -Infinity);
+    this.heldStation = -1;
   }
 
   /**
@@ -205,6 +235,7 @@ export class BottleneckTracker {
       this.cuts = new Float64Array(4 * n + 4);
       this.byStart = new Int32Array(2 * n + 2);
       this.heap = new Int32Array(2 * n + 2);
+      this.scratch = new Int32Array(2 * n + 2);
     }
     const cuts = this.cuts;
     const starts = this.pStart;
@@ -219,8 +250,7 @@ export class BottleneckTracker {
     const points = cuts.subarray(0, count).sort();
     const order = this.byStart.subarray(0, n);
     for (let i = 0; i < n; i++) order[i] = i;
-    // A comparator returning -1, 0 or 1 (small integers) keeps the sort free of allocations.
-    order.sort((x, y) => (starts[x] < starts[y] ? -1 : starts[x] > starts[y] ? 1 : 0));
+    sortByStart(order, n, starts, this.scratch);
     this.heapSize = 0;
     let next = 0;
     for (let k = 0; k + 1 < count; k++) {
@@ -270,37 +300,41 @@ export class BottleneckTracker {
   }
 
   private extend(station: number, periodStart: number, periodEnd: number, from: number, to: number): void {
-    const h = this.held;
-    if (h && h.station === station && h.periodStart === periodStart) {
-      h.to = to;
+    const held = this.heldStation;
+    if (held === station && this.heldPeriodStart === periodStart) {
+      this.heldTo = to;
       return;
     }
     let overlapFrom = Infinity;
     let overlapTo = -Infinity;
-    if (h) {
-      overlapFrom = Math.max(h.periodStart, periodStart, h.from);
-      overlapTo = Math.min(h.periodEnd, periodEnd);
+    if (held >= 0) {
+      overlapFrom = Math.max(this.heldPeriodStart, periodStart, this.heldFrom);
+      overlapTo = Math.min(this.heldPeriodEnd, periodEnd);
       if (overlapTo > overlapFrom) {
         const both = this.window.overlap(overlapFrom, overlapTo);
-        this.shifting[h.station] += both;
-        if (station !== h.station) this.shifting[station] += both;
+        this.shifting[held] += both;
+        if (station !== held) this.shifting[station] += both;
       }
-      this.attribute(h, overlapFrom, overlapTo);
+      this.attribute(overlapFrom, overlapTo);
     }
-    this.held = { station, periodStart, periodEnd, from, to };
+    this.heldStation = station;
+    this.heldPeriodStart = periodStart;
+    this.heldPeriodEnd = periodEnd;
+    this.heldFrom = from;
+    this.heldTo = to;
     this.heldOverlapFrom = overlapFrom;
     this.heldOverlapTo = overlapTo;
   }
 
-  /** Sole time of a finished segment: its time minus what lies in the overlaps on either side. */
-  private attribute(h: Segment, nextFrom: number, nextTo: number): void {
-    const before = this.inSegment(h, this.heldOverlapFrom, this.heldOverlapTo);
-    const after = this.inSegment(h, nextFrom, nextTo);
-    const both = this.inSegment(h, Math.max(this.heldOverlapFrom, nextFrom), Math.min(this.heldOverlapTo, nextTo));
-    this.sole[h.station] += Math.max(0, this.window.overlap(h.from, h.to) - before - after + both);
+  /** Sole time of the held segment, now finished: its time minus what lies in the overlaps on either side. */
+  private attribute(nextFrom: number, nextTo: number): void {
+    const before = this.inSegment(this.heldOverlapFrom, this.heldOverlapTo);
+    const after = this.inSegment(nextFrom, nextTo);
+    const both = this.inSegment(Math.max(this.heldOverlapFrom, nextFrom), Math.min(this.heldOverlapTo, nextTo));
+    this.sole[this.heldStation] += Math.max(0, this.window.overlap(this.heldFrom, this.heldTo) - before - after + both);
   }
 
-  private inSegment(h: Segment, a: number, b: number): number {
-    return this.window.overlap(Math.max(a, h.from), Math.min(b, h.to));
+  private inSegment(a: number, b: number): number {
+    return this.window.overlap(Math.max(a, this.heldFrom), Math.min(b, this.heldTo));
   }
 }

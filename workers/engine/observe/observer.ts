@@ -49,4 +49,6 @@ export type Observer = {
   /** A part was rejected at an inspection; inLineSeconds is the time since its load completed. */
   scrapped(t: number, inLineSeconds: number): void;
   reworked(t: number): void;
+  /** A snapshot sample: a carrier covers [tailMm, headMm] of a lane at t (for the space-time heatmap). */
+  laneOccupancy(lane: number, tailMm: number, headMm: number, t: number): void;
 };

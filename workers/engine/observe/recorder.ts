@@ -205,7 +205,7 @@ export class Recorder implements Observer {
   }
 
   /** One snapshot sample of a carrier covering [tailMm, headMm] of a lane, for the space-time heatmap. */
-  sampleCarrier(lane: number, tailMm: number, headMm: number, t: number): void {
+  laneOccupancy(lane: number, tailMm: number, headMm: number, t: number): void {
     const bins = this.positionBins;
     const binMm = this.line.laneLengthMm[lane] / bins;
     const row = this.window.binOf(t) * bins;

@@ -7,8 +7,7 @@ import { PLAYBACK_LIMITS, TRACE_LOADED, type PlaybackTrace } from '../../../shar
 import type { CompiledLine } from '../model/compile';
 import type { LineState } from '../model/state';
 import { leaderOf, offsetMm } from '../model/platoons';
-import { PH_MOVING, PH_TRANSFER } from '../model/state';
-import type { Observer } from './observer';
+import { PH_MOVING, PH_TRANSFER, type Observer } from './observer';
 import type { CarrierIndex } from '../model/indexes';
 
 export class TraceLimitError extends Error {

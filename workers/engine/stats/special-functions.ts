@@ -151,19 +151,24 @@ const SQRT_2PI = Math.sqrt(2 * Math.PI);
 
 /** Acklam's approximation for 0 < p ≤ 1/2 (relative error below 1.15e-9). */
 function acklamLowerHalf(p: number): number {
-  const [a0, a1, a2, a3, a4, a5] = ACKLAM_A;
-  const [b0, b1, b2, b3, b4] = ACKLAM_B;
-  const [c0, c1, c2, c3, c4, c5] = ACKLAM_C;
-  const [d0, d1, d2, d3] = ACKLAM_D;
+  // Indexed reads, not array destructuring: destructuring runs the iterator protocol and allocates on
+  // every call, and this runs for every normal and lognormal draw.
+  const A = ACKLAM_A;
+  const B = ACKLAM_B;
   if (p < ACKLAM_LOW) {
+    const C = ACKLAM_C;
+    const D = ACKLAM_D;
     const q = Math.sqrt(-2 * Math.log(p));
-    return (((((c0 * q + c1) * q + c2) * q + c3) * q + c4) * q + c5) / ((((d0 * q + d1) * q + d2) * q + d3) * q + 1);
+    return (
+      (((((C[0] * q + C[1]) * q + C[2]) * q + C[3]) * q + C[4]) * q + C[5]) /
+      ((((D[0] * q + D[1]) * q + D[2]) * q + D[3]) * q + 1)
+    );
   }
   const q = p - 0.5;
   const r = q * q;
   return (
-    ((((((a0 * r + a1) * r + a2) * r + a3) * r + a4) * r + a5) * q) /
-    (((((b0 * r + b1) * r + b2) * r + b3) * r + b4) * r + 1)
+    ((((((A[0] * r + A[1]) * r + A[2]) * r + A[3]) * r + A[4]) * r + A[5]) * q) /
+    (((((B[0] * r + B[1]) * r + B[2]) * r + B[3]) * r + B[4]) * r + 1)
   );
 }
 

@@ -6,6 +6,7 @@ import { staticChecks, type ValidationIssue } from './static-checks';
 
 export type { ValidationIssue } from './static-checks';
 export { checkCarrierCount, trackCapacity } from './static-checks';
+export { gridlockFreeCarriers, smallestLoopCapacity } from './gridlock-bound';
 
 export type ValidationOutcome = { ok: true; scenario: Scenario } | { ok: false; issues: ValidationIssue[] };
 

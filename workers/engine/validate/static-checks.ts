@@ -7,11 +7,16 @@ import { compileLine } from '../model/compile';
 
 export type ValidationIssue = { path: string; message: string };
 
+/** Carriers one lane holds end to end: its length over the carrier pitch. */
+export function laneSlots(s: Scenario, lane: Scenario['lanes'][number]): number {
+  const pitch = s.conveyor.kind === 'belt' ? s.conveyor.pitchMm : s.carriers.lengthMm + s.carriers.minGapMm;
+  return Math.floor(laneLengthMm(lane) / pitch);
+}
+
 /** Carriers the track holds when every lane is full (length over carrier pitch) plus one per transfer. */
 export function trackCapacity(s: Scenario): number {
-  const pitch = s.conveyor.kind === 'belt' ? s.conveyor.pitchMm : s.carriers.lengthMm + s.carriers.minGapMm;
   let total = s.transfers.length;
-  for (const lane of s.lanes) total += Math.floor(laneLengthMm(lane) / pitch);
+  for (const lane of s.lanes) total += laneSlots(s, lane);
   return total;
 }
 

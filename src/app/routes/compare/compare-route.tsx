@@ -11,7 +11,8 @@ import { useCanEdit } from '../../../lib/session/use-can-edit';
 import { CompareSetup } from '../../../features/compare/components/compare-setup';
 import { CompareView } from '../../../features/compare/components/compare-view';
 import { COMPARE_LIMITS } from '../../../features/compare/utils/comparison';
-import { useRuns } from '../../../features/runs/api/get-runs';
+import { useRunsPage } from '../../../features/runs/api/get-runs';
+import { RUNS_PAGE_MAX } from '../../../../shared/api/runs';
 import { useScenarios } from '../../../features/scenarios/api/get-scenarios';
 import { CostSection } from './cost-section';
 import { COMPARE_QUESTION } from './question';
@@ -26,7 +27,8 @@ export function CompareRoute() {
   const runIds = askedFor.slice(0, COMPARE_LIMITS.max);
   const data = useComparisonData(projectId, runIds);
   const scenarios = useScenarios(projectId);
-  const runs = useRuns({ projectId });
+  // The newest runs to pick from; a comparison of older runs is reached through the runs table.
+  const runs = useRunsPage({ projectId }, { limit: RUNS_PAGE_MAX });
   const organisationId = data.project.data?.organisationId;
   const mayEdit = useCanEdit(organisationId);
   const showRuns = useCallback(
@@ -55,15 +57,18 @@ export function CompareRoute() {
         }
         description="Throughput, takt, output, WIP and lead time of two to four layouts with 95 % intervals on their differences, what each costs and how much floor it takes."
         actions={
-          comparing && data.items ? (
-            <ButtonLink to={`/projects/${projectId}/compare/report?runs=${runIds.join(',')}`}>
-              Printable report
-            </ButtonLink>
-          ) : undefined
+          <>
+            <ButtonLink to={`/projects/${projectId}/compare/studies`}>Compare studies</ButtonLink>
+            {comparing && data.items && (
+              <ButtonLink to={`/projects/${projectId}/compare/report?runs=${runIds.join(',')}`}>
+                Printable report
+              </ButtonLink>
+            )}
+          </>
         }
       />
       <CompareSetup
-        runs={runs.data ?? []}
+        runs={runs.data?.items ?? []}
         scenarios={(scenarios.data ?? []).map((s) => ({
           id: s.id,
           name: s.name,

@@ -77,7 +77,8 @@ export function useComparisonData(projectId: string, runIds: readonly string[]) 
   const revisionData = revisions.map((r) => r.data);
   const loaded = runData.every(Boolean) ? (runData as RunDetail[]) : null;
   // Queries hand back new arrays on every render; the ids say when the data really changed.
-  const runKey = loaded?.map((r) => r.id).join() ?? '';
+  // Null while loading, so an empty comparison never stands in for one still on its way.
+  const runKey = loaded ? loaded.map((r) => r.id).join() : null;
   const revisionKey = revisionData.map((r) => r?.id ?? '').join();
   const items = useMemo<CompareItem[] | null>(() => {
     if (!loaded) return null;

@@ -4,7 +4,7 @@
 import { Table, Td, Th } from '../../../components/ui/table';
 import type { MeanDifference } from '../../../../workers/analysis/compare-means';
 import { isBetter, METRICS, type Comparison, type Metric } from '../utils/comparison';
-import { formatNumber, formatSigned } from '../utils/format';
+import { formatNumber, formatSigned } from '../../../lib/format-number';
 
 function DifferenceCell({ metric, d }: { metric: Metric; d: MeanDifference }) {
   if (d.unavailable)

@@ -2,7 +2,7 @@
 // difference is significant at 95 %, and what each costs when a price list is known.
 import type { MeanDifference } from '../../../../workers/analysis/compare-means';
 import type { Comparison, RunFigures } from './comparison';
-import { formatMoney, formatNumber, formatSigned } from './format';
+import { formatMoney, formatNumber, formatSigned } from '../../../lib/format-number';
 
 export interface RunCost {
   capitalCost: number;

@@ -1,11 +1,12 @@
-// The filter bar above the runs table.
-import type { RunListItem } from '../../../../shared/api/runs';
+// The filter bar above the runs table. The menus offer the values the whole list holds (the server
+// reports them beside each page), not only the page on screen.
+import { FORMER_MEMBER, type RunFilterChoices } from '../../../../shared/api/runs';
 import { Button } from '../../../components/ui/button';
-import { formatDay } from '../../../lib/format';
-import { filterChoices, NO_FILTERS, type RunFilterValues } from '../utils/run-filters';
+import { formatPerson } from '../../../lib/format';
+import { anyFilter, NO_FILTERS, type RunFilterValues } from '../utils/run-filters';
 
 interface RunsFiltersProps {
-  runs: readonly RunListItem[];
+  choices: RunFilterChoices;
   values: RunFilterValues;
   onChange: (values: RunFilterValues) => void;
 }
@@ -38,11 +39,10 @@ function NumberChoice({ label, values, value, onChange }: NumberChoiceProps) {
   );
 }
 
-export function RunsFilters({ runs, values, onChange }: RunsFiltersProps) {
-  const choices = filterChoices(runs);
+export function RunsFilters({ choices, values, onChange }: RunsFiltersProps) {
   const set = (key: keyof RunFilterValues) => (event: { target: { value: string } }) =>
     onChange({ ...values, [key]: event.target.value });
-  const active = Object.values(values).some((v) => v !== '');
+  const active = anyFilter(values);
   return (
     <div role="group" aria-label="Filter runs" className="flex flex-wrap items-end gap-3">
       <label className={LABEL}>
@@ -50,8 +50,8 @@ export function RunsFilters({ runs, values, onChange }: RunsFiltersProps) {
         <select className={CONTROL} value={values.author} onChange={set('author')}>
           <option value="">Anyone</option>
           {choices.authors.map((a) => (
-            <option key={a.id} value={a.id}>
-              {a.name}
+            <option key={a.id ?? FORMER_MEMBER} value={a.id ?? FORMER_MEMBER}>
+              {a.id ? a.name : formatPerson(null)}
             </option>
           ))}
         </select>
@@ -60,14 +60,7 @@ export function RunsFilters({ runs, values, onChange }: RunsFiltersProps) {
       <NumberChoice label="Carriers" values={choices.carriers} value={values.carriers} onChange={set('carriers')} />
       <label className={LABEL}>
         Run on or after
-        <select className={CONTROL} value={values.since} onChange={set('since')}>
-          <option value="">Any day</option>
-          {choices.days.map((d) => (
-            <option key={d} value={d}>
-              {formatDay(d)}
-            </option>
-          ))}
-        </select>
+        <input type="date" className={CONTROL} value={values.since} onChange={set('since')} />
       </label>
       <label className={LABEL}>
         Throughput at least (/h)

@@ -1,11 +1,11 @@
 // The columns of the runs table. Headline figures come from the run summary the server keeps
-// beside each result, written with the same decimals as the result page.
+// beside each result, written with the same decimals as the result page. Sorting happens on the
+// server, by the column of the same id (`runSortSchema`).
 import { createColumnHelper } from '@tanstack/react-table';
 import type { ReactNode } from 'react';
 import type { RunListItem } from '../../../../shared/api/runs';
 import { BeltBaselineTag } from '../../../components/ui/belt-baseline-tag';
 import { formatDateTime, formatPerson } from '../../../lib/format';
-import { atLeast, atMost, authorIs, equalsText, sinceDay } from '../utils/run-filters';
 import { formatInterval, formatPerHour, formatTakt } from '../../../lib/format-run';
 
 const column = createColumnHelper<RunListItem>();
@@ -23,16 +23,12 @@ export function runsColumns({ showScenario, showActions, name, actions }: Column
     column.accessor('name', {
       id: 'name',
       header: 'Run',
-      sortingFn: 'alphanumeric',
       cell: (c) => name(c.row.original),
     }),
-    ...(showScenario
-      ? [column.accessor('scenarioName', { id: 'scenario', header: 'Scenario', sortingFn: 'alphanumeric' })]
-      : []),
+    ...(showScenario ? [column.accessor('scenarioName', { id: 'scenario', header: 'Scenario' })] : []),
     column.accessor('revisionNumber', {
       id: 'revision',
       header: 'Revision',
-      filterFn: equalsText,
       cell: (c) => `#${c.getValue()}`,
     }),
     column.accessor('conveyorMode', {
@@ -44,20 +40,15 @@ export function runsColumns({ showScenario, showActions, name, actions }: Column
     column.accessor((run) => formatPerson(run.createdBy), {
       id: 'author',
       header: 'Author',
-      filterFn: authorIs,
-      sortingFn: 'alphanumeric',
     }),
     column.accessor('createdAt', {
       id: 'createdAt',
       header: 'Run at',
-      filterFn: sinceDay,
-      sortingFn: (a, b) => Date.parse(a.original.createdAt) - Date.parse(b.original.createdAt),
       cell: (c) => <time dateTime={c.getValue()}>{formatDateTime(c.getValue())}</time>,
     }),
     column.accessor((run) => run.summary.throughputPerHour.mean, {
       id: 'throughput',
       header: 'Throughput (/h)',
-      filterFn: atLeast,
       cell: (c) => (
         <Figure
           value={formatPerHour(c.getValue())}
@@ -68,7 +59,6 @@ export function runsColumns({ showScenario, showActions, name, actions }: Column
     column.accessor((run) => run.summary.taktSeconds.mean, {
       id: 'takt',
       header: 'Takt (s)',
-      filterFn: atMost,
       cell: (c) => (
         <Figure
           value={formatTakt(c.getValue())}
@@ -76,7 +66,7 @@ export function runsColumns({ showScenario, showActions, name, actions }: Column
         />
       ),
     }),
-    column.accessor((run) => run.summary.carriers, { id: 'carriers', header: 'Carriers', filterFn: equalsText }),
+    column.accessor((run) => run.summary.carriers, { id: 'carriers', header: 'Carriers' }),
     ...(showActions
       ? [column.display({ id: 'actions', header: 'Actions', cell: (c) => actions(c.row.original) })]
       : []),

@@ -1,19 +1,15 @@
-// Stored runs of a scenario or a project: sortable by every figure, filterable by author,
-// revision, carriers, date, throughput and takt; open, rename, delete and rerun in place.
-import {
-  flexRender,
-  getCoreRowModel,
-  getFilteredRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type SortingState,
-} from '@tanstack/react-table';
-import { useMemo, useState } from 'react';
-import type { RunListItem } from '../../../../shared/api/runs';
+// One page of the stored runs of a scenario or a project: sortable by every figure, filterable by
+// author, revision, carriers, date, throughput and takt, all on the server (the table is controlled: it
+// shows the page it is given and reports sort, filter and page changes); open, rename, delete and rerun
+// in place.
+import { flexRender, getCoreRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
+import { useMemo } from 'react';
+import type { RunListItem, RunsPage } from '../../../../shared/api/runs';
+import { Pager } from '../../../components/ui/pager';
 import { Table, Td, Th } from '../../../components/ui/table';
 import { useRerun } from '../hooks/use-rerun';
 import { useRunPermissions } from '../hooks/use-run-permissions';
-import { columnFiltersOf, NO_FILTERS, type RunFilterValues } from '../utils/run-filters';
+import { anyFilter, type RunFilterValues } from '../utils/run-filters';
 import { RerunStatus } from './rerun-status';
 import { RunNameCell } from './run-name-cell';
 import { RunRowActions } from './run-row-actions';
@@ -21,21 +17,37 @@ import { RunsFilters } from './runs-filters';
 import { runsColumns } from './runs-table-columns';
 
 export interface RunsTableProps {
-  runs: readonly RunListItem[];
+  page: RunsPage;
   organisationId: string | undefined;
   /** A project's table names each run's scenario; a scenario's does not need to. */
   showScenario?: boolean;
   caption: string;
+  sorting: SortingState;
+  onSortingChange: (sorting: SortingState) => void;
+  filters: RunFilterValues;
+  onFiltersChange: (filters: RunFilterValues) => void;
+  onOffsetChange: (offset: number) => void;
+  /** True while the next page, sort or filter loads (the current page stays on screen). */
+  loading?: boolean;
 }
 
 const ARIA_SORT = { asc: 'ascending', desc: 'descending' } as const;
 
-export function RunsTable({ runs, organisationId, showScenario = false, caption }: RunsTableProps) {
+export function RunsTable({
+  page,
+  organisationId,
+  showScenario = false,
+  caption,
+  sorting,
+  onSortingChange,
+  filters,
+  onFiltersChange,
+  onOffsetChange,
+  loading = false,
+}: RunsTableProps) {
   const permissions = useRunPermissions(organisationId);
   const rerun = useRerun();
-  const [sorting, setSorting] = useState<SortingState>([{ id: 'createdAt', desc: true }]);
-  const [filters, setFilters] = useState<RunFilterValues>(NO_FILTERS);
-  const columnFilters = useMemo(() => columnFiltersOf(filters), [filters]);
+  const runs = page.items;
   const { mayRun, mayChange } = permissions;
   const columns = useMemo(
     () =>
@@ -58,18 +70,19 @@ export function RunsTable({ runs, organisationId, showScenario = false, caption 
   const table = useReactTable({
     data: runs as RunListItem[],
     columns,
-    state: { sorting, columnFilters },
-    onSortingChange: setSorting,
+    state: { sorting },
+    onSortingChange: (update) => onSortingChange(typeof update === 'function' ? update(sorting) : update),
+    manualSorting: true,
+    enableMultiSort: false,
+    enableSortingRemoval: false,
     getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
     getRowId: (run) => run.id,
   });
   const rows = table.getRowModel().rows;
 
   return (
-    <div className="flex flex-col gap-4">
-      <RunsFilters runs={runs} values={filters} onChange={setFilters} />
+    <div className="flex flex-col gap-4" aria-busy={loading}>
+      <RunsFilters choices={page.choices} values={filters} onChange={onFiltersChange} />
       <RerunStatus rerun={rerun} />
       <Table caption={caption}>
         <thead>
@@ -111,8 +124,15 @@ export function RunsTable({ runs, organisationId, showScenario = false, caption 
         </tbody>
       </Table>
       {rows.length === 0 && (
-        <p className="text-sm text-ink-soft">{runs.length === 0 ? 'No runs yet.' : 'No run matches these filters.'}</p>
+        <p className="text-sm text-ink-soft">{anyFilter(filters) ? 'No run matches these filters.' : 'No runs yet.'}</p>
       )}
+      <Pager
+        label="Run pages"
+        offset={page.offset}
+        limit={page.limit}
+        total={page.total}
+        onOffsetChange={onOffsetChange}
+      />
     </div>
   );
 }

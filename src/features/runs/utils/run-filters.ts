@@ -1,13 +1,13 @@
-// The filters of the runs table: each is one column's test, so TanStack Table applies them and
-// the sort together.
-import type { FilterFn } from '@tanstack/react-table';
-import type { RunListItem } from '../../../../shared/api/runs';
-import { localDayOf } from '../../../lib/format';
+// The runs table's filters, sort and page as the server's list query: the table shows one page of a
+// list the server sorts and filters, so no run outside the page is needed in the browser.
+import type { SortingState } from '@tanstack/react-table';
+import { runSortSchema, type ListRunsQuery } from '../../../../shared/api/runs';
 
 export interface RunFilterValues {
   author: string;
   revision: string;
   carriers: string;
+  /** yyyy-mm-dd in the user's time zone, from a date field. */
   since: string;
   minThroughput: string;
   maxTakt: string;
@@ -22,47 +22,41 @@ export const NO_FILTERS: RunFilterValues = {
   maxTakt: '',
 };
 
-export const FILTER_COLUMN: Record<keyof RunFilterValues, string> = {
-  author: 'author',
-  revision: 'revision',
-  carriers: 'carriers',
-  since: 'createdAt',
-  minThroughput: 'throughput',
-  maxTakt: 'takt',
-};
+export const RUNS_PER_PAGE = 25;
+export const NEWEST_FIRST: SortingState = [{ id: 'createdAt', desc: true }];
 
-const number = (text: unknown) => (typeof text === 'string' && text.trim() !== '' ? Number(text) : NaN);
-
-export const equalsText: FilterFn<RunListItem> = (row, columnId, wanted) =>
-  String(row.getValue(columnId)) === String(wanted);
-export const atLeast: FilterFn<RunListItem> = (row, columnId, wanted) =>
-  !Number.isFinite(number(wanted)) || Number(row.getValue(columnId)) >= number(wanted);
-export const atMost: FilterFn<RunListItem> = (row, columnId, wanted) =>
-  !Number.isFinite(number(wanted)) || Number(row.getValue(columnId)) <= number(wanted);
-/** `wanted` is a yyyy-mm-dd day in the user's time zone; runs from the start of that day on pass. */
-export const sinceDay: FilterFn<RunListItem> = (row, columnId, wanted) => {
-  const from = typeof wanted === 'string' && wanted ? new Date(`${wanted}T00:00:00`).getTime() : NaN;
-  return Number.isNaN(from) || new Date(String(row.getValue(columnId))).getTime() >= from;
-};
-
-export function columnFiltersOf(values: RunFilterValues) {
-  return (Object.keys(values) as (keyof RunFilterValues)[])
-    .filter((key) => values[key].trim() !== '')
-    .map((key) => ({ id: FILTER_COLUMN[key], value: values[key] }));
+/** A typed number, or nothing while the field is empty or not (yet) a number. */
+function numberOf(text: string): number | undefined {
+  const value = text.trim() === '' ? NaN : Number(text);
+  return Number.isFinite(value) && value >= 0 ? value : undefined;
 }
 
-export function filterChoices(runs: readonly RunListItem[]) {
-  const authors = new Map<string, string>();
-  for (const run of runs) authors.set(run.createdBy?.id ?? '', run.createdBy?.name ?? 'a former member');
-  const distinct = (values: number[]) => [...new Set(values)].sort((a, b) => a - b);
-  return {
-    authors: [...authors].map(([id, name]) => ({ id, name })).sort((a, b) => a.name.localeCompare(b.name)),
-    revisions: distinct(runs.map((r) => r.revisionNumber)),
-    carriers: distinct(runs.map((r) => r.summary.carriers)),
-    /** Days with at least one run, newest first. */
-    days: [...new Set(runs.map((r) => localDayOf(r.createdAt)))].sort().reverse(),
+/** The start of a local day as an instant, so "on or after" means the user's day, not UTC's. */
+function startOfLocalDay(day: string): string | undefined {
+  const time = /^\d{4}-\d{2}-\d{2}$/.test(day) ? new Date(`${day}T00:00:00`).getTime() : NaN;
+  return Number.isNaN(time) ? undefined : new Date(time).toISOString();
+}
+
+export function runsRequestOf(
+  filters: RunFilterValues,
+  sorting: SortingState,
+  offset: number,
+  limit = RUNS_PER_PAGE,
+): Partial<ListRunsQuery> {
+  const sortBy = runSortSchema.safeParse(sorting[0]?.id);
+  const request: Partial<ListRunsQuery> = {
+    sort: sortBy.success ? sortBy.data : 'createdAt',
+    order: sortBy.success && !sorting[0].desc ? 'asc' : 'desc',
+    limit,
+    offset,
+    createdBy: filters.author || undefined,
+    revision: numberOf(filters.revision),
+    carriers: numberOf(filters.carriers),
+    since: startOfLocalDay(filters.since),
+    minThroughput: numberOf(filters.minThroughput),
+    maxTakt: numberOf(filters.maxTakt),
   };
+  return Object.fromEntries(Object.entries(request).filter((entry) => entry[1] !== undefined));
 }
 
-export const authorIs: FilterFn<RunListItem> = (row, _columnId, wanted) =>
-  (row.original.createdBy?.id ?? '') === wanted;
+export const anyFilter = (filters: RunFilterValues) => Object.values(filters).some((value) => value.trim() !== '');

@@ -2,11 +2,16 @@
 // target, and WIP and lead time below on the same carrier axis.
 import type { StudyDetail } from '../../../../shared/api/studies';
 import type { Scenario } from '../../../../shared/scenario/scenario';
-import { recommendCarriers, type SizingPoint } from '../../../../workers/studies/carrier-sizing';
+import {
+  recommendCarriers,
+  sizingPointsOf,
+  stationNamesOf,
+  targetPerHourOf,
+} from '../../../../workers/studies/carrier-sizing';
 import type { PointStatistics } from '../../../../workers/studies/point-statistics';
 import { CurveWithBand, type SweepPoint } from '../../../components/charts';
 import { Recommendation } from './recommendation';
-import { curveOf } from '../utils/curves';
+import { curveOf, stopsOf } from '../utils/curves';
 
 export function CarrierSizingResults({
   study,
@@ -17,15 +22,12 @@ export function CarrierSizingResults({
   stats: PointStatistics[];
   scenario: Scenario;
 }) {
-  const sized: SizingPoint[] = stats.map((s) => ({
-    carriers: study.points[s.index].changes.find((c) => c.path === 'carriers.count')?.value ?? Number.NaN,
-    stats: s,
-  }));
-  const target = scenario.targetTaktSeconds ? 3600 / scenario.targetTaktSeconds : null;
-  const stationNames = scenario.steps.flatMap((step) => step.stations.map((s) => s.name));
-  const advice = recommendCarriers(sized, target, stationNames);
+  const sized = sizingPointsOf(study, stats);
+  const target = targetPerHourOf(scenario);
+  const advice = recommendCarriers(sized, target, stationNamesOf(scenario));
   const xOf = (s: PointStatistics) => sized[s.index].carriers;
   const throughput: SweepPoint[] = curveOf(stats, xOf, (s) => s.throughput);
+  const stops = stopsOf(stats, xOf);
   const recommended =
     advice.kind === 'recommend' && throughput.some((p) => p.x === advice.carriers) ? advice.carriers : undefined;
   return (
@@ -55,6 +57,7 @@ export function CarrierSizingResults({
             ? { value: target, label: `target ${target.toFixed(1)} parts/h (takt ${scenario.targetTaktSeconds} s)` }
             : undefined
         }
+        stops={stops}
         title="Throughput against carriers"
         exportName="carrier-sizing-throughput"
       />

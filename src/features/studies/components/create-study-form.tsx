@@ -201,7 +201,7 @@ export function CreateStudyForm({
           />
           <TextField
             label="Most carriers"
-            hint="What the track holds"
+            hint="Below gridlock: one fewer than the smallest loop holds"
             inputMode="numeric"
             value={form.carriersTo}
             onChange={(e) => set({ carriersTo: e.target.value })}

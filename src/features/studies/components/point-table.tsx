@@ -1,15 +1,7 @@
 // Every point of a study with its figures, or the reason it has none.
-import type { PointStatistics } from '../../../../workers/studies/point-statistics';
+import { POINT_STATE_WORDS, type PointStatistics } from '../../../../workers/studies/point-statistics';
 import type { ConfidenceInterval } from '../../../../workers/engine/stats';
 import { Table, Td, Th } from '../../../components/ui/table';
-
-const STATE_WORDS = {
-  done: 'done',
-  partial: 'partly run',
-  pending: 'waiting',
-  invalid: 'not valid',
-  stopped: 'stopped',
-} as const;
 
 function show(ci: ConfidenceInterval | null, digits = 1): string {
   if (!ci) return '–';
@@ -33,7 +25,7 @@ export function PointTable({ stats }: { stats: PointStatistics[] }) {
           <tr key={s.index} data-point-state={s.state}>
             <Td>{s.label}</Td>
             <Td>
-              {STATE_WORDS[s.state]}
+              {POINT_STATE_WORDS[s.state]}
               {s.message && <span className="block max-w-md text-xs text-danger">{s.message}</span>}
             </Td>
             <Td className="text-right tabular-nums">{show(s.throughput)}</Td>

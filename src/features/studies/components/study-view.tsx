@@ -4,7 +4,7 @@
 import { useEffect, useMemo } from 'react';
 import { pendingJobs, type StudyDetail } from '../../../../shared/api/studies';
 import type { Scenario } from '../../../../shared/scenario/scenario';
-import { pointStatistics } from '../../../../workers/studies/point-statistics';
+import { hasFailed, pointStatistics } from '../../../../workers/studies/point-statistics';
 import { ErrorBanner } from '../../../components/ui/error-banner';
 import { sharedEnginePool } from '../../../lib/engine/engine-pool';
 import { useStudyRunner } from '../hooks/use-study-runner';
@@ -33,7 +33,7 @@ export function StudyView({ study, scenario, documents, mayRun }: StudyViewProps
     if (shouldRun) start();
   }, [shouldRun, start]);
 
-  const failed = stats.filter((s) => s.state === 'invalid' || s.state === 'stopped').length;
+  const failed = stats.filter((s) => hasFailed(s.state)).length;
   const s = study.settings;
   return (
     <div className="flex flex-col gap-6">

@@ -2,10 +2,11 @@
 // contour.
 import type { StudyDetail } from '../../../../shared/api/studies';
 import type { Scenario } from '../../../../shared/scenario/scenario';
+import { sweepableFields } from '../../../../shared/studies/sweepable-fields';
 import type { PointStatistics } from '../../../../workers/studies/point-statistics';
 import { CurveWithBand } from '../../../components/charts';
 import { ParameterHeatmap } from '../../../components/charts/ParameterHeatmap';
-import { curveOf } from '../utils/curves';
+import { curveOf, stopsOf } from '../utils/curves';
 
 export function SweepResults({
   study,
@@ -30,10 +31,11 @@ export function SweepResults({
           (s) => s.throughput,
         )}
         xQuantity={xAxis.label}
-        xUnit="value"
+        xUnit={sweepableFields(scenario).find((f) => f.path === xAxis.path)?.unit || 'value'}
         yQuantity="Throughput"
         yUnit="parts/h"
         reference={target ? { value: target, label: `target ${target.toFixed(1)} parts/h` } : undefined}
+        stops={stopsOf(stats, (s) => valueOf(s, xAxis.path))}
         title={`Throughput against ${xAxis.label}`}
         exportName="sweep-throughput"
       />

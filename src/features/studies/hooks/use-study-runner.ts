@@ -5,7 +5,13 @@
 import { useQueryClient } from '@tanstack/react-query';
 import * as Comlink from 'comlink';
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { pendingJobs, type SaveJobResultInput, type StudyDetail, type StudyJob } from '../../../../shared/api/studies';
+import {
+  gridlockGuard,
+  pendingJobs,
+  type SaveJobResultInput,
+  type StudyDetail,
+  type StudyJob,
+} from '../../../../shared/api/studies';
 import type { Progress } from '../../../../workers/engine';
 import type { StudyJobOutcome } from '../../../../workers/simulation.worker';
 import { isCancelled, sharedEnginePool, type PoolSession } from '../../../lib/engine/engine-pool';
@@ -39,7 +45,10 @@ async function saveWithRetry(studyId: string, body: SaveJobResultInput): Promise
   }
 }
 
-function resultBody(job: StudyJob, answer: Exclude<StudyJobOutcome, { outcome: 'cancelled' }>): SaveJobResultInput {
+/** A job's answer: the engine's, or `skipped` for a carrier count above one that gridlocked. */
+type JobAnswer = StudyJobOutcome | { outcome: 'skipped'; message: string };
+
+function resultBody(job: StudyJob, answer: Exclude<JobAnswer, { outcome: 'cancelled' }>): SaveJobResultInput {
   const key = { pointIndex: job.pointIndex, first: job.first, count: job.count };
   return answer.outcome === 'done'
     ? {
@@ -85,6 +94,11 @@ export function useStudyRunner(study: StudyDetail | undefined, documents: Record
     const inFlight = new Map<number, number>();
     let finished = 0;
     let done = study.results.length;
+    const guard = gridlockGuard(study);
+    const skip = (job: StudyJob): JobAnswer | null => {
+      const message = guard.skip(job);
+      return message === null ? null : { outcome: 'skipped', message };
+    };
     const update = (extra: Partial<RunnerState> = {}) => {
       const elapsed = performance.now() - started;
       const work = finished + [...inFlight.values()].reduce((a, b) => a + b, 0);
@@ -94,21 +108,24 @@ export function useStudyRunner(study: StudyDetail | undefined, documents: Record
     update({ problem: null, running: true });
     const runOne = async (job: StudyJob, k: number) => {
       const document = documents[job.revisionId];
-      const answer: StudyJobOutcome =
+      const answer: JobAnswer =
         document === undefined
           ? { outcome: 'invalid', message: 'the revision of this point could not be loaded' }
-          : ((await own.submit(async (api) =>
-              api.runStudyJob(
-                document,
-                { changes: job.changes, settings: job.settings, first: job.first, count: job.count },
-                Comlink.proxy((p: Progress) => {
-                  inFlight.set(k, p.fraction);
-                  update();
-                }),
-              ),
-            )) as StudyJobOutcome);
+          : ((await own.submit(
+              async (api) =>
+                skip(job) ??
+                api.runStudyJob(
+                  document,
+                  { changes: job.changes, settings: job.settings, first: job.first, count: job.count },
+                  Comlink.proxy((p: Progress) => {
+                    inFlight.set(k, p.fraction);
+                    update();
+                  }),
+                ),
+            )) as JobAnswer);
       inFlight.delete(k);
       if (answer.outcome === 'cancelled' || own.isCancelled) return;
+      guard.record(job, answer.outcome);
       await saveWithRetry(study.id, resultBody(job, answer));
       finished++;
       done++;

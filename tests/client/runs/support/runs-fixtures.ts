@@ -1,6 +1,6 @@
 // Stored-run list items shaped by the shared schema, for table and permission tests. Their figures
 // are list summaries, not engine results: these tests check ordering and who sees which control.
-import type { RunListItem } from '../../../../shared/api/runs';
+import type { RunListItem, RunsPage } from '../../../../shared/api/runs';
 import { runSettingsSchema } from '../../../../shared/scenario/run-settings';
 import { USER, uuid } from '../../support/fixtures';
 
@@ -43,3 +43,12 @@ export function runItem(
     createdAt: overrides.createdAt ?? `2026-11-${String(10 + n).padStart(2, '0')}T09:00:00.000Z`,
   };
 }
+
+/** The server's answer for a scope without runs. */
+export const EMPTY_RUNS_PAGE: RunsPage = {
+  items: [],
+  total: 0,
+  offset: 0,
+  limit: 25,
+  choices: { authors: [], revisions: [], carriers: [] },
+};

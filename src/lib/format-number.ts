@@ -1,4 +1,5 @@
-// Number and money formatting for comparison tables and sentences (British English separators).
+// Number and money formatting for the comparison tables and sentences of runs and of studies
+// (British English separators).
 export function formatNumber(value: number, decimals: number): string {
   if (!Number.isFinite(value)) return '—';
   return value.toLocaleString('en-GB', { minimumFractionDigits: decimals, maximumFractionDigits: decimals });

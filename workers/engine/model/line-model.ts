@@ -1,11 +1,13 @@
-// One replication of a line: sets up state, random draws and the recorder, then runs the event loop
-// in slices so the caller can yield to its host between them. After every event the carriers and
-// lanes it woke are settled (moves started, stations entered, lane starts handed out) before the
-// next event, so handlers never re-enter one another. Stops with a clear reason on gridlock,
-// on a stall of simulated time, or when the event budget is spent.
-import { EventQueue } from '../kernel/event-queue';
+// The line model as the event loop drives it: sets up the state and the random draws of one
+// replication, handles each event, and after every event settles the carriers and lanes it woke
+// (moves started, stations entered, lane starts handed out) before the next, so handlers never
+// re-enter one another. It reports to an Observer and knows no recorder; it stops with a clear
+// reason on gridlock or on a stall of simulated time.
+import type { EventModel } from '../kernel/event-loop';
+import type { EventQueue } from '../kernel/event-queue';
+import { PRIORITY } from '../kernel/priorities';
 import { SimulationStoppedError } from '../kernel/stop';
-import { Recorder } from '../observe/recorder';
+import type { Observer } from '../observe/observer';
 import { createSampler } from '../random/sampler';
 import type { StreamFactory } from '../random/streams';
 import { inBreak, nextBreakEdge } from './breaks';
@@ -15,7 +17,6 @@ import { gridlockReport, stallMessage } from './gridlock';
 import type { CarrierIndex, ConnIndex, LaneIndex, StationIndex } from './indexes';
 import { checkInvariants } from './invariants';
 import { advance, completeMove, nextWoken, positionAt, wake } from './lanes';
-import { PROFILE_EMPTY, PROFILE_LOADED } from './motion';
 import { positionClock, restartLine, stopLine } from './line-stop';
 import { placeCarriers } from './placement';
 import { leaderOf, leave } from './platoons';
@@ -26,7 +27,6 @@ import {
   EV_CARRIED,
   EV_END,
   EV_LANE_WAKE,
-  EV_LAST_ACTIVE,
   EV_REPAIR_END,
   EV_RETURNED,
   EV_SAMPLE,
@@ -38,24 +38,16 @@ import {
 import { arriveAtStation, onRepairEnd, onSegmentEnd, releaseStation, setBreak, startFailureClocks } from './stations';
 import { onCarried, onReturned, requestExit, serveLane } from './transfers';
 
-export type ReplicationConfig = {
-  warmupSeconds: number;
+export type LineModelConfig = {
+  /** Simulation time at which the replication starts; the clock of every other time here. */
+  originSeconds: number;
   endSeconds: number;
-  timeBins: number;
-  positionBins: number;
-  /** Events allowed in this replication before it stops. */
-  eventBudget: number;
+  /** When the first carrier-position sample is taken, and how often after it (see Observer.laneOccupancy). */
+  firstSampleSeconds: number;
+  sampleSeconds: number;
   /** Check overlap and conservation after every event (tests). */
-  checkInvariants?: boolean;
-  /**
-   * Simulation time at which the replication starts (default 0); warmupSeconds and endSeconds are on
-   * the same clock. Tests start late to show that results do not depend on the clock's magnitude.
-   */
-  originSeconds?: number;
+  checkInvariants: boolean;
 };
-
-/** Events in a row without simulated time passing before the run counts as stuck. */
-const STALL_LIMIT = 1_000_000;
 
 function makeSamplers(line: CompiledLine, streams: StreamFactory): StationSamplers[] {
   const s = line.scenario;
@@ -103,35 +95,21 @@ function settle(m: LineState): void {
   }
 }
 
-export class Replication {
+export class LineModel implements EventModel {
   readonly state: LineState;
-  readonly recorder: Recorder;
-  events = 0;
-  done = false;
-  private stalled = 0;
   private readonly breaksApply: boolean;
+  private ended = false;
 
   constructor(
     readonly line: CompiledLine,
     streams: StreamFactory,
-    private readonly config: ReplicationConfig,
+    queue: EventQueue,
+    observer: Observer,
+    private readonly config: LineModelConfig,
   ) {
-    // The bottleneck analysis bridges the in-feed gap of a queued carrier, with half again for margin.
-    const inFeed = Math.max(
-      line.motion.moveSeconds(line.pitchMm, PROFILE_LOADED),
-      line.motion.moveSeconds(line.pitchMm, PROFILE_EMPTY),
-    );
-    this.recorder = new Recorder(
-      line,
-      config.warmupSeconds,
-      config.endSeconds,
-      config.timeBins,
-      config.positionBins,
-      1.5 * inFeed,
-    );
-    const m = createState(line, new EventQueue(), this.recorder, makeSamplers(line, streams));
+    const m = createState(line, queue, observer, makeSamplers(line, streams));
     this.state = m;
-    const origin = config.originSeconds ?? 0;
+    const origin = config.originSeconds;
     m.now = origin;
     const calendar = line.scenario.calendar;
     this.breaksApply =
@@ -139,8 +117,8 @@ export class Replication {
     startFailureClocks(m);
     for (let s = 0; s < line.stationCount; s++) m.observer.stationState(s, m.sState[s], origin);
     placeCarriers(m);
-    m.queue.push(config.warmupSeconds + this.sampleInterval() / 2, 2, EV_SAMPLE, 0, 0);
-    m.queue.push(config.endSeconds, 3, EV_END, 0, 0);
+    m.queue.push(config.firstSampleSeconds, PRIORITY.sample, EV_SAMPLE, 0, 0);
+    m.queue.push(config.endSeconds, PRIORITY.end, EV_END, 0, 0);
     // The first moves are planned before a break in progress at the start can stop them.
     settle(m);
     if (this.breaksApply) {
@@ -159,14 +137,10 @@ export class Replication {
     setBreak(m, starting);
   }
 
-  private sampleInterval(): number {
-    return this.recorder.window.binSeconds / this.recorder.samplesPerBin;
-  }
-
   private scheduleBreak(after: number): void {
     const edge = nextBreakEdge(this.line.scenario.calendar, after);
     if (edge && edge.time < this.config.endSeconds)
-      this.state.queue.push(edge.time, 0, EV_BREAK, edge.starting ? 1 : 0, 0);
+      this.state.queue.push(edge.time, PRIORITY.calendar, EV_BREAK, edge.starting ? 1 : 0, 0);
   }
 
   private sample(t: number): void {
@@ -176,14 +150,14 @@ export class Replication {
       const lane = m.cLane[c];
       if (lane < 0) continue;
       const head = positionAt(m, c, positionClock(m, t));
-      this.recorder.sampleCarrier(lane, head - this.line.carrierLengthMm, head, t);
+      m.observer.laneOccupancy(lane, head - this.line.carrierLengthMm, head, t);
     }
-    const next = t + this.sampleInterval();
-    if (next < this.config.endSeconds) m.queue.push(next, 2, EV_SAMPLE, 0, 0);
+    const next = t + this.config.sampleSeconds;
+    if (next < this.config.endSeconds) m.queue.push(next, PRIORITY.sample, EV_SAMPLE, 0, 0);
   }
 
   /** Event payloads are plain numbers; each kind says what its first one indexes. */
-  private handle(kind: number, a: number, b: number): void {
+  handle(kind: number, a: number, b: number): void {
     const m = this.state;
     switch (kind) {
       case EV_ARRIVE:
@@ -216,53 +190,29 @@ export class Replication {
     }
   }
 
-  /** With nothing pending that can change the line and no break to end, nothing ever will. */
-  private checkGridlock(): void {
+  afterEvent(): void {
     const m = this.state;
-    if (this.done || m.activePending > 0 || m.breakActive) return;
+    settle(m);
+    if (this.config.checkInvariants) checkInvariants(m);
+    this.checkGridlock();
+  }
+
+  finish(): void {
+    this.ended = true;
+  }
+
+  stalled(events: number, t: number): SimulationStoppedError {
+    return new SimulationStoppedError('gridlock', stallMessage(this.line, events, t), gridlockReport(this.state));
+  }
+
+  /** With nothing pending that can change the line and no break to end, nothing ever will. */
+  checkGridlock(): void {
+    const m = this.state;
+    if (this.ended || m.activePending > 0 || m.breakActive) return;
     throw new SimulationStoppedError(
       'gridlock',
       `gridlock at t=${m.now.toFixed(1)} s: no carrier can move and no station is working`,
       gridlockReport(m),
     );
-  }
-
-  /**
-   * Runs events until the replication ends (returns true) or shouldYield, asked every 1024 events,
-   * says to hand control back (returns false; call again to continue).
-   */
-  run(shouldYield: () => boolean): boolean {
-    const m = this.state;
-    const q = m.queue;
-    this.checkGridlock();
-    while (!this.done && q.pop()) {
-      const t = q.popTime;
-      const kind = q.popKind;
-      if (t > m.now) {
-        m.now = t;
-        this.stalled = 0;
-      } else if (++this.stalled > STALL_LIMIT) {
-        throw new SimulationStoppedError('gridlock', stallMessage(this.line, STALL_LIMIT, t), gridlockReport(m));
-      }
-      if (kind <= EV_LAST_ACTIVE) m.activePending--;
-      this.events++;
-      if (kind === EV_END) {
-        this.recorder.finish();
-        this.done = true;
-        return true;
-      }
-      this.handle(kind, q.popA, q.popB);
-      settle(m);
-      if (this.config.checkInvariants) checkInvariants(m);
-      this.checkGridlock();
-      if (this.events > this.config.eventBudget) {
-        throw new SimulationStoppedError(
-          'eventBudget',
-          `stopped after ${this.config.eventBudget} events, the budget for one replication, at t=${m.now.toFixed(1)} s; shorten the run or raise the budget`,
-        );
-      }
-      if ((this.events & 1023) === 0 && shouldYield()) return false;
-    }
-    return this.done;
   }
 }

@@ -5,6 +5,7 @@
 import 'reflect-metadata';
 import autocannon from 'autocannon';
 import { randomUUID } from 'node:crypto';
+import { loadavg } from 'node:os';
 import { runSettingsSchema } from '../../shared/scenario/run-settings';
 import { runSummaryOf } from '../../shared/api/runs';
 import { runExperiment } from '../../workers/engine';
@@ -81,6 +82,8 @@ interface Round {
   p99: number;
   errors: number;
   requests: number;
+  /** What the errors were: answers by status (non-2xx), timeouts (no answer in 10 s), socket errors. */
+  breakdown: string;
 }
 
 async function round(url: string, paths: string[], cookies: string[]): Promise<Round> {
@@ -110,9 +113,11 @@ async function round(url: string, paths: string[], cookies: string[]): Promise<R
     },
     (error, result) => (error ? fail(error) : finish(result)),
   );
-  instance.on('response', (_client: unknown, _status: number, _bytes: number, responseTime: number) =>
-    latencies.push(responseTime),
-  );
+  const statuses = new Map<number, number>();
+  instance.on('response', (_client: unknown, status: number, _bytes: number, responseTime: number) => {
+    latencies.push(responseTime);
+    if (status >= 300) statuses.set(status, (statuses.get(status) ?? 0) + 1);
+  });
   const result = await done;
   latencies.sort((a, b) => a - b);
   return {
@@ -122,6 +127,11 @@ async function round(url: string, paths: string[], cookies: string[]): Promise<R
     p99: percentile(latencies, 99),
     errors: result.errors + result.timeouts + result.non2xx,
     requests: result.requests.total,
+    breakdown: [
+      ...[...statuses].map(([status, n]) => `${n} × ${status}`),
+      `${result.timeouts} timeouts`,
+      `${result.errors - result.timeouts} socket errors`,
+    ].join(', '),
   };
 }
 
@@ -158,19 +168,28 @@ async function main(): Promise<void> {
     console.log(
       `${RUNS} stored runs; answer sizes: ${paths.map((p, i) => `${p.split('?')[0].replace(/[0-9a-f-]{36}/g, ':id')} ${(sizes[i] / 1024).toFixed(1)} KB`).join(', ')}`,
     );
-    console.log(`${USERS} users, ${ROUNDS} round(s) of ${SECONDS} s on loopback\n`);
+    console.log(
+      `${USERS} users, ${ROUNDS} round(s) of ${SECONDS} s on loopback; load average ${loadavg()
+        .map((n) => n.toFixed(2))
+        .join(' ')}\n`,
+    );
     console.log('round  requests/s   p50 ms   p95 ms   p99 ms   errors');
     const rounds: Round[] = [];
     for (let r = 0; r < ROUNDS; r += 1) {
       const result = await round(server.url, paths, cookies);
       rounds.push(result);
       console.log(
-        `${String(r + 1).padStart(5)}  ${result.requestsPerSecond.toFixed(0).padStart(10)}  ${result.p50.toFixed(0).padStart(7)}  ${result.p95.toFixed(0).padStart(7)}  ${result.p99.toFixed(0).padStart(7)}  ${String(result.errors).padStart(7)}`,
+        `${String(r + 1).padStart(5)}  ${result.requestsPerSecond.toFixed(0).padStart(10)}  ${result.p50.toFixed(0).padStart(7)}  ${result.p95.toFixed(0).padStart(7)}  ${result.p99.toFixed(0).padStart(7)}  ${String(result.errors).padStart(7)}${result.errors > 0 ? `  (${result.breakdown})` : ''}`,
       );
     }
     const errors = rounds.reduce((sum, r) => sum + r.errors, 0);
     console.log(
       `\nmedian: ${median(rounds.map((r) => r.requestsPerSecond)).toFixed(0)} requests/s, p95 ${median(rounds.map((r) => r.p95)).toFixed(0)} ms; errors in all rounds: ${errors}`,
+    );
+    console.log(
+      `load average at the end: ${loadavg()
+        .map((n) => n.toFixed(2))
+        .join(' ')}`,
     );
     if (errors > 0) process.exitCode = 1;
   } finally {

@@ -1,10 +1,11 @@
 // What each kind of share link points at: how to find the organisation that owns the subject (for the
 // role check) and what an anonymous holder of the link receives. A further kind is one more entry here,
-// one more value in ShareKind and the table's check constraint.
+// one more value in ShareKind and the table's check constraint (a migration).
 import type { DataSource } from 'typeorm';
 import type { ShareKind, SharedView } from '../../shared/api/shares';
-import { RunEntity } from '../db/entities';
+import { RunEntity, ScenarioRevisionEntity, StudyEntity } from '../db/entities';
 import { runDetail } from '../routes/run-queries';
+import { studyDetail } from '../studies/study-queries';
 
 interface ShareSubject {
   what: string;
@@ -26,6 +27,20 @@ export const shareSubjects: Record<ShareKind, ShareSubject> = {
       const run = await runDetail(ds, subjectId);
       // The holder of the link sees the result, not who in the organisation made it.
       return { kind: 'run', ...base, run: { ...run, createdBy: null } };
+    },
+  },
+  study: {
+    what: 'The study',
+    async organisationOf(ds, subjectId) {
+      const study = await ds
+        .getRepository(StudyEntity)
+        .findOne({ where: { id: subjectId }, relations: { project: true } });
+      return study?.project?.organisationId ?? null;
+    },
+    async view(ds, subjectId, base) {
+      const study = await studyDetail(ds, subjectId);
+      const revision = await ds.getRepository(ScenarioRevisionEntity).findOneByOrFail({ id: study.revisionId });
+      return { kind: 'study', ...base, study: { ...study, createdBy: null }, document: revision.document };
     },
   },
 };

@@ -1,9 +1,11 @@
-// Read-only share links. The entity is generic by kind so further kinds can join; `run` is shared today.
+// Read-only share links. The entity is generic by kind: a run or a study is shared today.
 import { z } from 'zod';
 import { isoDateSchema, userRefSchema, uuidSchema } from './common';
+import { scenarioSchema } from '../scenario/scenario';
 import { runDetailSchema } from './runs';
+import { studyDetailSchema } from './studies';
 
-export const shareKindSchema = z.enum(['run']);
+export const shareKindSchema = z.enum(['run', 'study'], { message: 'must be run or study' });
 export type ShareKind = z.infer<typeof shareKindSchema>;
 
 export const SHARE_MAX_DAYS = 90;
@@ -41,6 +43,14 @@ export const createdShareSchema = shareSchema.extend({ url: z.string() });
 /** What an anonymous visitor with the link receives: the shared thing and nothing around it. */
 export const sharedViewSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('run'), expiresAt: isoDateSchema, organisationName: z.string(), run: runDetailSchema }),
+  z.object({
+    kind: z.literal('study'),
+    expiresAt: isoDateSchema,
+    organisationName: z.string(),
+    study: studyDetailSchema,
+    /** The scenario revision the study varies, which its charts draw on. */
+    document: scenarioSchema,
+  }),
 ]);
 
 export type CreateShareInput = z.input<typeof createShareSchema>;

@@ -5,44 +5,30 @@
 // folder of this test's own, stopped and started with the project's own `postgres-cli.ts`.
 import { randomUUID } from 'node:crypto';
 import { execFile } from 'node:child_process';
-import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { promisify } from 'node:util';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { createDataSource } from '../../server/db/data-source';
 import { runMigrations } from '../../server/db/migrate';
-import { chooseClusterPaths } from '../../server/setup/postgres-folder';
 import { projectRoot } from '../../server/setup/paths';
 import { apiRoutes } from '../../shared/api/routes';
 import { stackedLoop } from './fixtures/documents';
 import { appFor } from './fixtures/app';
 import { closeTestMail } from './fixtures/mail';
 import { createPeople, freshContent, runBody, type Content, type People } from './fixtures/world';
+import { makeClusterRoot, removeClusterRoot } from '../support/cluster-root';
+import { freePort } from '../support/free-port';
 
 const run = promisify(execFile);
 const tsx = join(projectRoot, 'node_modules', '.bin', 'tsx');
 const cli = join(projectRoot, 'server', 'setup', 'postgres-cli.ts');
-const root = mkdtempSync(join(tmpdir(), 'lanewright-outage-'));
-chmodSync(root, 0o755);
+const root = makeClusterRoot('outage');
 let port = 0;
 
 async function postgresCli(...args: string[]): Promise<string> {
   const { stdout } = await run(tsx, [cli, ...args, `--root=${root}`, `--port=${port}`], { cwd: projectRoot });
   return stdout;
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const { port: free } = probe.address() as { port: number };
-      probe.close(() => resolve(free));
-    });
-  });
 }
 
 let ds: DataSource;
@@ -64,8 +50,7 @@ afterAll(async () => {
   await ds?.destroy().catch(() => undefined);
   await postgresCli('stop').catch(() => undefined);
   await closeTestMail();
-  rmSync(chooseClusterPaths(root).base, { recursive: true, force: true });
-  rmSync(root, { recursive: true, force: true });
+  removeClusterRoot(root);
 }, 120_000);
 
 interface Answer {

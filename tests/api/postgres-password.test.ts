@@ -2,47 +2,30 @@
 // its password are made on first start and kept in a mode-600 file, and a cluster an older checkout left
 // trusting loopback is upgraded in place on the next start without losing its data. Each test runs a
 // private cluster in a folder of its own, on a free port, so the test run's cluster is never touched.
-import { chmodSync, mkdtempSync, readFileSync, rmSync, statSync, writeFileSync, appendFileSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { tmpdir } from 'node:os';
+import { appendFileSync, chmodSync, readFileSync, statSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import pg from 'pg';
 import { afterAll, describe, expect, it } from 'vitest';
-import { ensureLocalPostgres, stopLocalPostgres, type LocalPostgres } from '../../server/setup/local-postgres';
+import { ensureLocalPostgres, type LocalPostgres } from '../../server/setup/local-postgres';
 import { requirePgBinaries } from '../../server/setup/postgres-binaries';
 import { APP_ROLE, clusterUrl, credentialsPath, SUPERUSER } from '../../server/setup/postgres-credentials';
 import { chooseClusterPaths, prepareClusterFolders } from '../../server/setup/postgres-folder';
 import { runCommand } from '../../server/setup/run-command';
+import { makeClusterRoot, removeClusterRoot } from '../support/cluster-root';
+import { freePort } from '../support/free-port';
 
 const roots: string[] = [];
 const servers: LocalPostgres[] = [];
 
 afterAll(async () => {
   for (const server of servers) await server.stop();
-  for (const root of roots) {
-    stopLocalPostgres(root);
-    rmSync(chooseClusterPaths(root).base, { recursive: true, force: true });
-    rmSync(root, { recursive: true, force: true });
-  }
+  for (const root of roots) removeClusterRoot(root);
 });
 
 function freshRoot(): string {
-  const root = mkdtempSync(join(tmpdir(), 'lanewright-pg-'));
-  // The server runs as `postgres`, which must be able to enter the folder.
-  chmodSync(root, 0o755);
+  const root = makeClusterRoot('pg');
   roots.push(root);
   return root;
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const { port } = probe.address() as { port: number };
-      probe.close(() => resolve(port));
-    });
-  });
 }
 
 /** The server's answer to a login: 'ok', or the SQLSTATE (28P01: password authentication failed). */

@@ -2,11 +2,9 @@
 // told it is a shared view, with no control that changes anything; once withdrawn the link shows nothing.
 import type { Page } from 'playwright-core';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD } from '../../server/db/seed/demo';
-import request from 'supertest';
-import { ScenarioEntity } from '../../server/db/entities';
 import { runBody } from '../api/fixtures/world';
 import { screenshot, useAppInBrowser, type TestApp } from '../support/browser';
+import { demoEngineerAgent, firstDemoScenario } from './support/demo-engineer';
 
 let runId: string;
 let shareUrl: string;
@@ -14,14 +12,8 @@ let shareUrl: string;
 const session = useAppInBrowser({
   prepare: async (app) => {
     // A stored run of the demo's first scenario, saved through the API as the engineer.
-    const engineer = request.agent(app.url);
-    await engineer
-      .post('/api/auth/sign-in')
-      .send({ email: 'engineer@demo.lanewright.test', password: DEMO_PASSWORD })
-      .expect(200);
-    const scenario = await app.dataSource
-      .getRepository(ScenarioEntity)
-      .findOneOrFail({ where: {}, order: { createdAt: 'ASC' } });
+    const engineer = await demoEngineerAgent(app);
+    const scenario = await firstDemoScenario(app);
     const saved = await engineer.post(`/api/scenarios/${scenario.id}/runs`).send(runBody(scenario.latestRevisionId!));
     expect(saved.status, JSON.stringify(saved.body)).toBe(201);
     runId = saved.body.id;

@@ -4,7 +4,6 @@
 import 'reflect-metadata';
 import { existsSync } from 'node:fs';
 import { mkdir, mkdtemp, rm } from 'node:fs/promises';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
@@ -19,6 +18,7 @@ import type { CaughtMailbox } from '../../server/mail/mailbox';
 import { clientOutDir, projectRoot } from '../../server/setup/paths';
 import { CHROMIUM_PATH } from './chromium-path';
 import { browserDatabaseUrl } from './test-database';
+import { freePort } from './free-port';
 
 const HOST = '127.0.0.1';
 const SCREENSHOT_DIR = join(projectRoot, 'test-artifacts', 'screenshots');
@@ -49,19 +49,6 @@ export interface TestBrowser {
   /** What pages logged as console errors (failed requests among them), for tests to assert there were none. */
   consoleErrors: string[];
   close(): Promise<void>;
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, HOST, () => {
-      const address = probe.address();
-      probe.close(() =>
-        typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port')),
-      );
-    });
-  });
 }
 
 export async function startTestApp(databaseUrl: string = browserDatabaseUrl()): Promise<TestApp> {
@@ -155,7 +142,10 @@ export interface BrowserTestOptions {
  * The usual set-up of a browser test file: the app and Chromium before the first test, both closed
  * after the last, and a sign-in through the real form.
  */
-export function useAppInBrowser({ prepare, viewport = { width: 1280, height: 800 } }: BrowserTestOptions = {}) {
+export function useAppInBrowser(options: BrowserTestOptions | BrowserTestOptions['prepare'] = {}) {
+  // A bare function is the `prepare` step alone.
+  const { prepare, viewport = { width: 1280, height: 800 } } =
+    typeof options === 'function' ? { prepare: options } : options;
   let app: TestApp | undefined;
   let browser: TestBrowser | undefined;
   beforeAll(async () => {

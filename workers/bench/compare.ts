@@ -6,9 +6,9 @@
 // (process.cpuUsage, which load on a shared machine disturbs far less than wall time), the median over
 // the alternating rounds of each engine's least time, the ratio new : base, and whether both engines
 // gave the same throughput.
-// Each engine runs in a fresh process of its own: two engines in one process do not get the same
-// treatment from the JIT and the collector (a copy of one engine measured against itself came out
-// 10–15 % apart in one process), while fresh processes alternating in time see the same load.
+// Each engine runs in a fresh process of its own, started in its own tree, alternating in time so
+// both see the same load. (Loading both into one process, or running a tree from outside its own
+// directory, measured one engine against a copy of itself 10–15 % apart.)
 import { readFileSync } from 'node:fs';
 import { loadavg } from 'node:os';
 import { spawnSync } from 'node:child_process';
@@ -85,11 +85,16 @@ async function child(dir: string, workload: number): Promise<void> {
 }
 
 function inChild(dir: string, workload: number): Timing {
+  // Run from the engine's own tree, so tsx compiles it with that tree's tsconfig.json (class fields as
+  // assignments, useDefineForClassFields false). A tree outside the working directory is compiled
+  // with esbuild's defaults instead (native class fields), which alone made the same engine about
+  // 12 % slower here.
   const out = spawnSync(
     process.execPath,
     [...process.execArgv, import.meta.filename, '--child', dir, String(workload)],
     {
       encoding: 'utf8',
+      cwd: dir,
     },
   );
   if (out.status !== 0) throw new Error(`the run of ${dir} failed: ${out.stderr}`);

@@ -6,7 +6,7 @@ import { OrganisationEntity } from './organisation.entity';
 import { UserEntity } from './user.entity';
 
 @Entity({ name: 'share_links' })
-@Check('CHK_share_links_kind', `kind IN ('run')`)
+@Check('CHK_share_links_kind', `kind IN ('run', 'study')`)
 @Index('IDX_share_links_subject', ['kind', 'subjectId'])
 @Index('IDX_share_links_organisation', ['organisationId'])
 export class ShareLinkEntity {

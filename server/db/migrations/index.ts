@@ -7,6 +7,7 @@ import { Studies1796216413737 } from './1796216413737-Studies';
 import { PriceLists1796205600000 } from './1796205600000-PriceLists';
 import { SignInAttempts1796210000000 } from './1796210000000-SignInAttempts';
 import { StoredChecks1796210000001 } from './1796210000001-StoredChecks';
+import { ShareStudies1796220000000 } from './1796220000000-ShareStudies';
 import { ConveyorMode1796230000000 } from './1796230000000-ConveyorMode';
 
 export const migrations = [
@@ -18,5 +19,6 @@ export const migrations = [
   StoredChecks1796210000001,
   TeamAndSharing1796216390870,
   Studies1796216413737,
+  ShareStudies1796220000000,
   ConveyorMode1796230000000,
 ];

@@ -1,5 +1,5 @@
 // /studies/:studyId : one study. It composes the studies feature with the scenario revision its jobs
-// run and the project that says whether the reader may run them.
+// run, the project that says whether the reader may run them, and its read-only share links.
 import { Link, useParams } from 'react-router-dom';
 import type { StudyDetail } from '../../../shared/api/studies';
 import { LoadError } from '../../components/load-error';
@@ -9,6 +9,7 @@ import { PageSpinner } from '../../components/ui/spinner';
 import { isApiRequestError } from '../../lib/api-client';
 import { useCanEdit } from '../../lib/session/use-can-edit';
 import { useProject } from '../../features/projects/api/get-project';
+import { SharePanel } from '../../features/sharing/components/share-panel';
 import { useScenarioRevision } from '../../features/scenarios/api/get-revision';
 import { useStudy } from '../../features/studies/api/get-study';
 import { StudyView } from '../../features/studies/components/study-view';
@@ -38,6 +39,7 @@ export function StudyRoute() {
         }
       />
       <StudyWithScenario study={study.data} mayRun={mayRun} />
+      <SharePanel kind="study" subjectId={study.data.id} mayShare={mayRun} />
     </div>
   );
 }

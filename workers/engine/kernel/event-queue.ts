@@ -64,7 +64,7 @@ export class EventQueue {
     this.kind[slot] = kind;
     this.a[slot] = a;
     this.b[slot] = b;
-    this.siftUp(this.size++, time, priority * SEQ_SPAN + this.nextSeq++, slot);
+    this.siftUp(this.size++, time, priority * SEQ_SPAN + this.nextSeq++, slot, 0);
   }
 
   /** Removes the earliest event and exposes it through popTime, popKind, popA, popB. */
@@ -79,23 +79,23 @@ export class EventQueue {
     this.free[this.freeTop++] = slot;
     const last = n - 1;
     this.size = last;
-    if (last > 0) this.refill(this.hTime[last], this.hKey[last], this.hSlot[last]);
+    if (last > 0) this.fill(0, this.hTime[last], this.hKey[last], this.hSlot[last]);
     return true;
   }
 
   /**
-   * Fills the hole left at the root by the pop with the entry that was last (Floyd's bottom-up
-   * variant): the hole first sinks to a leaf along the earliest children, then the entry rises from
-   * there. The last entry is late as a rule, so it rarely rises far, and the way down saves the
-   * comparison with it at every level. Entries are unique (sequence), so the pop order is the same
-   * as that of any other heap.
+   * Puts the entry (time, key, slot) into the subheap whose root is the hole at top (Floyd's
+   * bottom-up variant): the hole first sinks to a leaf along the earliest children, then the entry
+   * rises from there, no higher than top. After a pop the entry is the one that was last, late as a
+   * rule, so it rarely rises far, and the way down saves the comparison with it at every level.
+   * Entries are unique (sequence), so the pop order is the same as that of any other heap.
    */
-  private refill(time: number, key: number, slot: number): void {
+  private fill(top: number, time: number, key: number, slot: number): void {
     const ht = this.hTime;
     const hk = this.hKey;
     const hs = this.hSlot;
     const n = this.size;
-    let i = 0;
+    let i = top;
     for (;;) {
       const first = 4 * i + 1;
       if (first >= n) break;
@@ -116,7 +116,7 @@ export class EventQueue {
       hs[i] = hs[best];
       i = best;
     }
-    this.siftUp(i, time, key, slot);
+    this.siftUp(i, time, key, slot, top);
   }
 
   /**
@@ -125,15 +125,15 @@ export class EventQueue {
    */
   postpone(delta: number, maxKind: number): void {
     for (let i = 0; i < this.size; i++) if (this.kind[this.hSlot[i]] <= maxKind) this.hTime[i] += delta;
-    for (let i = (this.size - 2) >> 2; i >= 0; i--) this.siftDown(i, this.hTime[i], this.hKey[i], this.hSlot[i]);
+    for (let i = (this.size - 2) >> 2; i >= 0; i--) this.fill(i, this.hTime[i], this.hKey[i], this.hSlot[i]);
   }
 
-  /** Places the entry (time, key, slot) at hole i or above it. */
-  private siftUp(i: number, time: number, key: number, slot: number): void {
+  /** Places the entry (time, key, slot) at hole i or above it, no higher than top. */
+  private siftUp(i: number, time: number, key: number, slot: number, top: number): void {
     const ht = this.hTime;
     const hk = this.hKey;
     const hs = this.hSlot;
-    while (i > 0) {
+    while (i > top) {
       const parent = (i - 1) >> 2;
       const pt = ht[parent];
       if (pt < time || (pt === time && hk[parent] < key)) break;
@@ -141,38 +141,6 @@ export class EventQueue {
       hk[i] = hk[parent];
       hs[i] = hs[parent];
       i = parent;
-    }
-    ht[i] = time;
-    hk[i] = key;
-    hs[i] = slot;
-  }
-
-  /** Places the entry (time, key, slot) at hole i or below it. */
-  private siftDown(i: number, time: number, key: number, slot: number): void {
-    const ht = this.hTime;
-    const hk = this.hKey;
-    const hs = this.hSlot;
-    const n = this.size;
-    for (;;) {
-      const first = 4 * i + 1;
-      if (first >= n) break;
-      let best = first;
-      let bt = ht[first];
-      let bk = hk[first];
-      const end = first + 4 < n ? first + 4 : n;
-      for (let c = first + 1; c < end; c++) {
-        const ct = ht[c];
-        if (ct < bt || (ct === bt && hk[c] < bk)) {
-          best = c;
-          bt = ct;
-          bk = hk[c];
-        }
-      }
-      if (time < bt || (time === bt && key < bk)) break;
-      ht[i] = bt;
-      hk[i] = bk;
-      hs[i] = hs[best];
-      i = best;
     }
     ht[i] = time;
     hk[i] = key;

@@ -3,7 +3,7 @@ import type { RunDetail, RunListItem } from '../../shared/api/runs';
 import type { RunEntity } from '../db/entities';
 import { iso, toUserRef } from './common';
 
-/** Expects `scenario` (id, name) and `revision` (id, number) joined, and `createdBy` loaded. */
+/** Expects `scenario` (id, name) and `revision` (id, number, conveyorMode) joined, and `createdBy` loaded. */
 export function toRunListItem(run: RunEntity): RunListItem {
   return {
     id: run.id,
@@ -11,6 +11,7 @@ export function toRunListItem(run: RunEntity): RunListItem {
     scenarioName: run.scenario?.name ?? '',
     revisionId: run.revisionId,
     revisionNumber: run.revision?.number ?? 0,
+    conveyorMode: run.revision?.conveyorMode ?? 'carriers',
     name: run.name,
     seed: run.seed,
     engineVersion: run.engineVersion,

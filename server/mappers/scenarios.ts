@@ -9,6 +9,7 @@ export function toRevisionSummary(revision: ScenarioRevisionEntity): RevisionSum
     scenarioId: revision.scenarioId,
     number: revision.number,
     message: revision.message,
+    conveyorMode: revision.conveyorMode,
     createdBy: toUserRef(revision.createdBy),
     createdAt: iso(revision.createdAt),
   };

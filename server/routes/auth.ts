@@ -150,5 +150,9 @@ export function authRouter(ctx: AppContext) {
     res.json(toMe(user, await membershipsOf(ds, user.id)));
   });
 
+  router.get('/auth/session', async (req, res) => {
+    res.json({ me: req.user ? toMe(req.user, await membershipsOf(ds, req.user.id)) : null });
+  });
+
   return router;
 }

@@ -13,7 +13,7 @@ import { validate } from '../http/validate';
 import { toRevision, toRevisionSummary } from '../mappers/scenarios';
 import { assertRunnable } from '../scenarios/check-document';
 import { touchProject } from '../projects/touch-project';
-import { latestRevisionIdOf } from './scenario-queries';
+import { latestRevisionIdOf, revisionSummaryColumns } from './scenario-queries';
 
 export function revisionsRouter(ctx: AppContext) {
   const { ds } = ctx;
@@ -23,7 +23,7 @@ export function revisionsRouter(ctx: AppContext) {
   router.get('/scenarios/:id/revisions', loadScenario(ctx), async (req, res) => {
     const list = await revisions().find({
       where: { scenarioId: loaded(req, 'scenario').id },
-      select: { id: true, scenarioId: true, number: true, message: true, createdAt: true, createdById: true },
+      select: revisionSummaryColumns,
       relations: { createdBy: true },
       order: { number: 'DESC' },
     });

@@ -36,7 +36,7 @@ function runsQuery(ds: DataSource | EntityManager): SelectQueryBuilder<RunEntity
     .innerJoin('run.scenario', 'scenario')
     .addSelect(['scenario.id', 'scenario.name', 'scenario.projectId'])
     .innerJoin('run.revision', 'revision')
-    .addSelect(['revision.id', 'revision.number'])
+    .addSelect(['revision.id', 'revision.number', 'revision.conveyorMode'])
     .leftJoinAndSelect('run.createdBy', 'author');
 }
 

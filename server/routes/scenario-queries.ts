@@ -5,11 +5,13 @@ import type { ScenarioDetail, ScenarioSummary } from '../../shared/api/scenarios
 import { RunEntity, ScenarioEntity, ScenarioRevisionEntity } from '../db/entities';
 import { toScenarioDetail, toScenarioSummary } from '../mappers/scenarios';
 
-const summaryColumns = {
+/** The columns a revision summary needs: never the document. */
+export const revisionSummaryColumns = {
   id: true,
   scenarioId: true,
   number: true,
   message: true,
+  conveyorMode: true,
   createdAt: true,
   createdById: true,
 } as const;
@@ -32,7 +34,7 @@ export async function scenarioSummaries(ds: DataSource, scenarios: ScenarioEntit
   const revisions = revisionIds.length
     ? await ds
         .getRepository(ScenarioRevisionEntity)
-        .find({ where: { id: In(revisionIds) }, select: summaryColumns, relations: { createdBy: true } })
+        .find({ where: { id: In(revisionIds) }, select: revisionSummaryColumns, relations: { createdBy: true } })
     : [];
   const byId = new Map(revisions.map((r) => [r.id, r]));
   const counts = await runCounts(

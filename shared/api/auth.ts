@@ -41,7 +41,14 @@ export const meSchema = z.object({
   memberships: z.array(membershipSchema),
 });
 
+/**
+ * The session check every page makes on load: who is signed in, or `me: null` for a visitor. Nobody
+ * signed in is an ordinary answer (200), not an error, so a visitor's browser logs no failed request.
+ */
+export const sessionSchema = z.object({ me: meSchema.nullable() });
+
 export type SignUpInput = z.infer<typeof signUpSchema>;
 export type SignInInput = z.infer<typeof signInSchema>;
 export type Membership = z.infer<typeof membershipSchema>;
 export type Me = z.infer<typeof meSchema>;
+export type Session = z.infer<typeof sessionSchema>;

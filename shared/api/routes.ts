@@ -10,6 +10,7 @@ export const apiRoutes = {
   signIn: '/api/auth/sign-in',
   signOut: '/api/auth/sign-out',
   me: '/api/me',
+  session: '/api/auth/session',
   projects: '/api/projects',
   project: (id: string) => `/api/projects/${id}`,
   projectScenarios: (projectId: string) => `/api/projects/${projectId}/scenarios`,

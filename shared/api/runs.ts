@@ -4,6 +4,7 @@ import { z } from 'zod';
 import { runResultSchema, type RunResult } from '../results/run-result';
 import { runSettingsSchema } from '../scenario/run-settings';
 import { isoDateSchema, nameSchema, queryIntSchema, queryNumberSchema, userRefSchema, uuidSchema } from './common';
+import { conveyorModeSchema } from './scenarios';
 
 const intervalSchema = z.object({ mean: z.number(), ciLow: z.number(), ciHigh: z.number() });
 
@@ -33,6 +34,8 @@ export const runListItemSchema = z.object({
   scenarioName: z.string(),
   revisionId: uuidSchema,
   revisionNumber: z.number().int().positive(),
+  /** The run's revision's conveyor mode, so run lists can mark belt baseline runs. */
+  conveyorMode: conveyorModeSchema,
   name: z.string(),
   seed: z.string(),
   engineVersion: z.string(),

@@ -4,11 +4,15 @@ import { z } from 'zod';
 import { scenarioSchema } from '../scenario/scenario';
 import { descriptionSchema, isoDateSchema, nameSchema, userRefSchema, uuidSchema } from './common';
 
+/** Whether a revision models independent carriers or the belt conveyor baseline (`conveyor.kind`). */
+export const conveyorModeSchema = z.enum(['carriers', 'belt']);
+
 export const revisionSummarySchema = z.object({
   id: uuidSchema,
   scenarioId: uuidSchema,
   number: z.number().int().positive(),
   message: z.string(),
+  conveyorMode: conveyorModeSchema,
   createdBy: userRefSchema.nullable(),
   createdAt: isoDateSchema,
 });
@@ -70,6 +74,7 @@ export const revisionParamsSchema = z.object({
   number: z.coerce.number({ message: 'must be a revision number' }).pipe(revisionNumberSchema),
 });
 
+export type ConveyorMode = z.infer<typeof conveyorModeSchema>;
 export type RevisionSummary = z.infer<typeof revisionSummarySchema>;
 export type Revision = z.infer<typeof revisionSchema>;
 export type ScenarioSummary = z.infer<typeof scenarioSummarySchema>;

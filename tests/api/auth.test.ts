@@ -2,6 +2,8 @@
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import type { Express } from 'express';
+import { sessionSchema } from '../../shared/api/auth';
+import { apiRoutes } from '../../shared/api/routes';
 import { hashLinkToken } from '../../server/auth/link-tokens';
 import { OneTimeTokenEntity, SessionEntity, UserEntity } from '../../server/db/entities';
 import { useCleanDatabase } from './fixtures/database';
@@ -203,6 +205,17 @@ describe('sessions', () => {
     expect(sessionCookie(me)).toContain(cookie);
     const session = await db().getRepository(SessionEntity).findOneByOrFail({ userId: res.body.user.id });
     expect(session.expiresAt.getTime()).toBeGreaterThan(soon.getTime() + 20 * 24 * 3600 * 1000);
+  });
+
+  it('the session check answers a visitor 200 with nobody, and a signed-in user with who they are', async () => {
+    const app = appFor(db());
+    const visitor = await request(app).get(apiRoutes.session);
+    expect(visitor.status).toBe(200);
+    expect(visitor.body).toEqual({ me: null });
+    const res = await finishedSignUp(app, uniqueEmail('session'));
+    const signedIn = await request(app).get(apiRoutes.session).set('Cookie', sessionCookie(res).split(';')[0]);
+    expect(signedIn.status).toBe(200);
+    expect(sessionSchema.parse(signedIn.body).me?.user.id).toBe(res.body.user.id);
   });
 
   it('GET /api/me answers 401 without a session', async () => {

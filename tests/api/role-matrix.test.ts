@@ -19,6 +19,7 @@ const edit: Statuses = { anonymous: 401, outsider: 404, viewer: 403, engineer: 2
 const create: Statuses = { anonymous: 401, outsider: 404, viewer: 403, engineer: 201, owner: 201 };
 const manage: Statuses = { anonymous: 401, outsider: 404, viewer: 403, engineer: 403, owner: 200 };
 const signedIn: Statuses = { anonymous: 401, outsider: 200, viewer: 200, engineer: 200, owner: 200 };
+const anyone: Statuses = { anonymous: 200, outsider: 200, viewer: 200, engineer: 200, owner: 200 };
 
 interface RouteCase {
   route: string;
@@ -32,6 +33,7 @@ interface RouteCase {
 
 const cases: RouteCase[] = [
   { route: 'me', method: 'get', path: () => apiRoutes.me, expected: signedIn },
+  { route: 'session', method: 'get', path: () => apiRoutes.session, expected: anyone },
   { route: 'projects', method: 'get', path: () => apiRoutes.projects, expected: signedIn },
   {
     route: 'projects',

@@ -5,39 +5,28 @@
 import { writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { projectRoot } from '../../server/setup/paths';
-import { launchBrowser, screenshot, startTestApp, type TestApp, type TestBrowser } from '../support/browser';
+import { screenshot, useAppInBrowser, type TestBrowser } from '../support/browser';
 import { pdfText } from '../support/pdf-text';
 
 const DEMO_PROJECT = 'Cartridge line layout study';
 const RUN_TIMEOUT = 120_000;
 
-let app: TestApp;
+const session = useAppInBrowser({ viewport: { width: 1280, height: 900 } });
 let browser: TestBrowser;
 let page: Page;
 let reportPath = '';
 
-beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-  page = browser.page;
-  await page.setViewportSize({ width: 1280, height: 900 });
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
+beforeAll(() => {
+  ({ browser, page } = session);
 });
 
 describe('comparing the stacked and side-by-side demo layouts', () => {
   it(
     'runs both layouts with one seed and answers which makes more, with its interval and costs',
     async () => {
-      await page.goto(`${app.url}/sign-in`);
-      await page.getByLabel('E-mail').fill('engineer@demo.lanewright.test');
-      await page.getByLabel('Password').fill('demo-password');
-      await page.getByRole('button', { name: 'Sign in' }).click();
+      await session.signIn('engineer@demo.lanewright.test');
       await page.getByRole('link', { name: new RegExp(DEMO_PROJECT) }).click();
       await page.getByRole('link', { name: 'Compare layouts' }).click();
       await page.getByRole('heading', { level: 1, name: 'Compare layouts' }).waitFor();

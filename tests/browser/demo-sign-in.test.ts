@@ -1,26 +1,19 @@
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, screenshot, startTestApp, type TestApp, type TestBrowser } from '../support/browser';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { screenshot, useAppInBrowser, type TestApp, type TestBrowser } from '../support/browser';
 
 const ENGINEER = 'engineer@demo.lanewright.test';
 const PASSWORD = 'demo-password';
 const DEMO_PROJECT = 'Cartridge line layout study';
 const DEMO_SCENARIOS = ['Stacked loop', 'Side-by-side loop'];
 
+const session = useAppInBrowser();
 let app: TestApp;
 let browser: TestBrowser;
 let page: Page;
 
-beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-  page = browser.page;
-  await page.setViewportSize({ width: 1280, height: 800 });
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
+beforeAll(() => {
+  ({ app, browser, page } = session);
 });
 
 const path = () => new URL(page.url()).pathname + new URL(page.url()).search;
@@ -36,6 +29,9 @@ describe('demo engineer in the browser', () => {
     await page.goto(`${app.url}/`);
     await page.getByRole('heading', { level: 1, name: 'Sign in to Lanewright' }).waitFor();
     expect(path()).toBe('/sign-in');
+    // A visitor's session check is an ordinary answer: nothing logged as an error, no failed request.
+    await page.waitForLoadState('networkidle');
+    expect(browser.consoleErrors).toEqual([]);
     await screenshot(page, '01-sign-in');
 
     await page.keyboard.press('Tab');

@@ -15,14 +15,16 @@ const person = {
   fresh: 'a brand new passphrase',
 };
 
-const session = useAppInBrowser(async ({ dataSource }) => {
-  const user = await dataSource
-    .getRepository(UserEntity)
-    .save({ email: person.email, name: person.name, passwordHash: await hashPassword(person.old) });
-  const organisation = await dataSource.getRepository(OrganisationEntity).save({ name: 'Forgetful fixtures' });
-  await dataSource
-    .getRepository(MembershipEntity)
-    .insert({ organisationId: organisation.id, userId: user.id, role: 'owner' });
+const session = useAppInBrowser({
+  prepare: async ({ dataSource }) => {
+    const user = await dataSource
+      .getRepository(UserEntity)
+      .save({ email: person.email, name: person.name, passwordHash: await hashPassword(person.old) });
+    const organisation = await dataSource.getRepository(OrganisationEntity).save({ name: 'Forgetful fixtures' });
+    await dataSource
+      .getRepository(MembershipEntity)
+      .insert({ organisationId: organisation.id, userId: user.id, role: 'owner' });
+  },
 });
 let page: Page;
 let app: TestApp;

@@ -1,42 +1,48 @@
 // The demo engineer runs a short experiment, opens its playback from the result page, records a
-// window, plays it, pauses and scrubs: carriers move on the decks and in the side elevation, the
-// clock follows. Screenshots go to test-artifacts/screenshots/playback-*.png.
+// window, plays it, pauses and scrubs: carriers are painted on the decks and in the side elevation
+// and move, the clock and the moment in words follow. Screenshots go to test-artifacts/screenshots/playback-*.png.
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, screenshot, startTestApp, type TestApp, type TestBrowser } from '../support/browser';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { screenshot, useAppInBrowser, type TestApp, type TestBrowser } from '../support/browser';
 
 const RUN_TIMEOUT = 90_000;
 
+const session = useAppInBrowser({ viewport: { width: 1280, height: 900 } });
 let app: TestApp;
 let browser: TestBrowser;
 let page: Page;
 
-beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-  page = browser.page;
-  await page.setViewportSize({ width: 1280, height: 900 });
+beforeAll(() => {
+  ({ app, browser, page } = session);
 });
 
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
-});
-
-/** Where every carrier shown on a deck's plan is drawn, keyed by deck and carrier. */
+/** Where every carrier is, from the table of the shown moment, keyed by carrier number. */
 async function placements(): Promise<Map<string, string>> {
-  const marks = await page
-    .locator('[data-pb-carrier][visibility="visible"]:not([data-pb-view="@elevation"])')
+  const rows = await page
+    .locator('[data-playback-carrier]')
     .evaluateAll((els) =>
-      els.map(
-        (el) =>
-          [
-            `${el.getAttribute('data-pb-view')}/${el.getAttribute('data-pb-carrier')}`,
-            el.getAttribute('transform') ?? '',
-          ] as const,
-      ),
+      els.map((el) => [el.getAttribute('data-playback-carrier') ?? '', el.textContent ?? ''] as const),
     );
-  return new Map(marks);
+  return new Map(rows);
+}
+
+/** Per overlay canvas (deck plans, then the side elevation): how many pixels are painted, and the picture. */
+async function pictures(): Promise<{ view: string; painted: number; picture: string }[]> {
+  return page.locator('canvas[data-region]').evaluateAll((els) =>
+    (els as HTMLCanvasElement[]).map((canvas) => {
+      const pixels = canvas.getContext('2d')?.getImageData(0, 0, canvas.width, canvas.height).data ?? [];
+      let painted = 0;
+      for (let i = 3; i < pixels.length; i += 4) if (pixels[i] > 0) painted++;
+      return { view: canvas.dataset.overlayDeck ?? 'side', painted, picture: canvas.toDataURL() };
+    }),
+  );
+}
+
+/** Waits until the tables describe the moment the clock shows (they follow a scrub after a short rest). */
+async function settled(): Promise<string> {
+  const shown = (await clock()) ?? '';
+  await page.getByText(`Every carrier and station at ${shown}`).waitFor();
+  return shown;
 }
 
 const clock = () => page.locator('[data-playback-clock]').textContent();
@@ -44,10 +50,7 @@ const seconds = (hms: string | null) => (hms ?? '').split(':').reduce((sum, part
 
 describe('playback of a stored run', () => {
   it('records a window of the run from the result page', async () => {
-    await page.goto(`${app.url}/sign-in`);
-    await page.getByLabel('E-mail').fill('engineer@demo.lanewright.test');
-    await page.getByLabel('Password').fill('demo-password');
-    await page.getByRole('button', { name: 'Sign in' }).click();
+    await session.signIn('engineer@demo.lanewright.test');
     await page.getByRole('link', { name: /Cartridge line layout study/ }).click();
     await page
       .getByRole('link', { name: /Stacked loop/ })
@@ -72,31 +75,42 @@ describe('playback of a stored run', () => {
     await page.getByRole('button', { name: 'Record window' }).click();
     await page.locator('[data-playback]').waitFor({ timeout: RUN_TIMEOUT });
     expect(await clock()).toBe('0:12:30');
+    expect(await settled()).toBe('0:12:30');
     const shown = await placements();
     expect(shown.size).toBeGreaterThan(0);
-    // Carriers are drawn on more than one deck of the stacked loop.
-    expect(new Set([...shown.keys()].map((k) => k.split('/')[0])).size).toBeGreaterThan(1);
-    // Every carrier of the scenario appears once in the side elevation.
-    expect(await page.locator('[data-pb-carriers="@elevation"] [visibility="visible"]').count()).toBe(
-      await page.locator('[data-pb-carriers="@elevation"] [data-pb-carrier]').count(),
+    // The moment in words: every carrier counted, and the stations' states.
+    expect(await page.locator('[data-playback-summary]').textContent()).toMatch(
+      new RegExp(
+        `^${shown.size} carriers on the track: \\d+ moving, \\d+ standing, \\d+ with a part\\. Stations: .*(processing|starved|blocked)`,
+      ),
     );
-    expect(await page.locator('[data-pb-station][stroke^="#"]').count()).toBeGreaterThan(0);
+    expect([...shown.values()].every((row) => /lane|transfer|elevator|link|curve/.test(row))).toBe(true);
+    expect(
+      await page.locator('[data-playback-station]').filter({ hasNotText: 'not known yet' }).count(),
+    ).toBeGreaterThan(0);
+    // Carriers and station rings are painted on more than one deck of the stacked loop, and in the side elevation.
+    const painted = await pictures();
+    expect(painted.filter((p) => p.view !== 'side' && p.painted > 0).length).toBeGreaterThan(1);
+    expect(painted.find((p) => p.view === 'side')?.painted ?? 0).toBeGreaterThan(0);
     await screenshot(page, 'playback-00-recorded');
   });
 
   it('plays: the clock runs and carriers move, then pauses', async () => {
     const before = await placements();
+    const beforePictures = await pictures();
     const started = seconds(await clock());
     await page.locator('[data-playback-speed]').selectOption('100');
     await page.getByRole('button', { name: 'Play' }).click();
     await page.waitForTimeout(1500);
     await screenshot(page, 'playback-01-playing');
     await page.getByRole('button', { name: 'Pause' }).click();
-    const paused = seconds(await clock());
+    const paused = seconds(await settled());
     expect(paused - started).toBeGreaterThan(60);
     const after = await placements();
     const moved = [...after].filter(([c, place]) => before.has(c) && before.get(c) !== place);
     expect(moved.length).toBeGreaterThan(0);
+    const redrawn = (await pictures()).filter((p, i) => p.picture !== beforePictures[i]?.picture);
+    expect(redrawn.length).toBeGreaterThan(0);
     await page.waitForTimeout(400);
     expect(seconds(await clock())).toBe(paused);
   });
@@ -108,7 +122,8 @@ describe('playback of a stored run', () => {
     expect(end - start).toBe(20 * 60);
     const atStart = async () => {
       await scrubber.fill(String(start));
-      return placements();
+      await settled();
+      return { rows: await placements(), pictures: (await pictures()).map((p) => p.picture) };
     };
     const first = await atStart();
     await scrubber.fill(String(end - 60));

@@ -2,36 +2,25 @@
 // follows the progress, reads the stored result and finds the run again after a reload; the demo
 // viewer reads the same run without any control that changes it. Screenshots go to test-artifacts/screenshots/run-*.png.
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, screenshot, startTestApp, type TestApp, type TestBrowser } from '../support/browser';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { screenshot, useAppInBrowser, type TestApp, type TestBrowser } from '../support/browser';
 
-const PASSWORD = 'demo-password';
 const DEMO_PROJECT = 'Cartridge line layout study';
 const DEMO_SCENARIO = 'Stacked loop';
 const RUN_TIMEOUT = 90_000;
 
+const session = useAppInBrowser({ viewport: { width: 1280, height: 900 } });
 let app: TestApp;
 let browser: TestBrowser;
 let page: Page;
 let runPath = '';
 
-beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-  page = browser.page;
-  await page.setViewportSize({ width: 1280, height: 900 });
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
+beforeAll(() => {
+  ({ app, browser, page } = session);
 });
 
 async function signIn(email: string) {
-  await page.goto(`${app.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
+  await session.signIn(email);
   await page.getByRole('link', { name: new RegExp(DEMO_PROJECT) }).waitFor();
 }
 

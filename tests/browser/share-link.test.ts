@@ -2,7 +2,6 @@
 // told it is a shared view, with no control that changes anything; once withdrawn the link shows nothing.
 import type { Page } from 'playwright-core';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD } from '../../server/db/seed/demo';
 import { runBody } from '../api/fixtures/world';
 import { screenshot, useAppInBrowser, type TestApp } from '../support/browser';
 import { demoEngineerAgent, firstDemoScenario } from './support/demo-engineer';
@@ -10,13 +9,15 @@ import { demoEngineerAgent, firstDemoScenario } from './support/demo-engineer';
 let runId: string;
 let shareUrl: string;
 
-const session = useAppInBrowser(async (app) => {
-  // A stored run of the demo's first scenario, saved through the API as the engineer.
-  const engineer = await demoEngineerAgent(app);
-  const scenario = await firstDemoScenario(app);
-  const saved = await engineer.post(`/api/scenarios/${scenario.id}/runs`).send(runBody(scenario.latestRevisionId!));
-  expect(saved.status, JSON.stringify(saved.body)).toBe(201);
-  runId = saved.body.id;
+const session = useAppInBrowser({
+  prepare: async (app) => {
+    // A stored run of the demo's first scenario, saved through the API as the engineer.
+    const engineer = await demoEngineerAgent(app);
+    const scenario = await firstDemoScenario(app);
+    const saved = await engineer.post(`/api/scenarios/${scenario.id}/runs`).send(runBody(scenario.latestRevisionId!));
+    expect(saved.status, JSON.stringify(saved.body)).toBe(201);
+    runId = saved.body.id;
+  },
 });
 let page: Page;
 let app: TestApp;
@@ -27,10 +28,7 @@ beforeAll(() => {
 
 describe('sharing a run read-only', () => {
   it('the engineer makes a link on the run page', async () => {
-    await page.goto(`${app.url}/sign-in?returnTo=${encodeURIComponent(`/runs/${runId}`)}`);
-    await page.getByLabel('E-mail').fill('engineer@demo.lanewright.test');
-    await page.getByLabel('Password').fill(DEMO_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
+    await session.signIn('engineer@demo.lanewright.test', { returnTo: `/runs/${runId}` });
     const panel = page.getByRole('region', { name: 'Share read-only' });
     await panel.waitFor();
     await panel.getByRole('button', { name: 'Make a link' }).click();

@@ -2,36 +2,23 @@
 // its progress, cancels and resumes it, and reads the recommendation beside the charts. A viewer reads
 // the finished study without controls that run it. Screenshots go to test-artifacts/screenshots/study-*.png.
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, screenshot, startTestApp, type TestApp, type TestBrowser } from '../support/browser';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { screenshot, useAppInBrowser, type TestBrowser } from '../support/browser';
 
-const PASSWORD = 'demo-password';
 const DEMO_PROJECT = 'Cartridge line layout study';
 const STUDY_TIMEOUT = 150_000;
 
-let app: TestApp;
+const session = useAppInBrowser({ viewport: { width: 1280, height: 900 } });
 let browser: TestBrowser;
 let page: Page;
 let studyUrl = '';
 
-beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-  page = browser.page;
-  await page.setViewportSize({ width: 1280, height: 900 });
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
+beforeAll(() => {
+  ({ browser, page } = session);
 });
 
 async function signIn(email: string) {
-  await page.context().clearCookies();
-  await page.goto(`${app.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
+  await session.signIn(email);
   await page.getByRole('link', { name: new RegExp(DEMO_PROJECT) }).waitFor();
 }
 

@@ -25,10 +25,7 @@ beforeAll(() => {
 });
 
 async function signIn(email: string, password: string) {
-  await page.goto(`${app.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
+  await session.signIn(email, { password });
   await page.getByRole('link', { name: new RegExp(DEMO_PROJECT) }).waitFor();
 }
 

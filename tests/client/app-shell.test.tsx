@@ -1,14 +1,14 @@
 import { screen, waitFor } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { apiRoutes } from '../../shared/api/routes';
-import { apiError, mockApi } from './support/fetch-mock';
-import { me, project, uuid } from './support/fixtures';
+import { mockApi } from './support/fetch-mock';
+import { me, project, uuid, session } from './support/fixtures';
 import { renderApp } from './support/render-app';
 
 describe('app shell', () => {
   it('shows organisation, user and role, and the safety note', async () => {
     mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 200, body: me('owner') },
+      [`GET ${apiRoutes.session}`]: session(me('owner')),
       [`GET ${apiRoutes.projects}`]: { status: 200, body: [] },
     });
     renderApp('/');
@@ -24,10 +24,7 @@ describe('app shell', () => {
   it('signs out with a POST, forgets cached data and lands on sign-in without a return address', async () => {
     let signedIn = true;
     const api = mockApi({
-      [`GET ${apiRoutes.me}`]: () =>
-        signedIn
-          ? { status: 200, body: me() }
-          : { status: 401, body: apiError('unauthenticated', 'Sign in to continue.') },
+      [`GET ${apiRoutes.session}`]: () => session(signedIn ? me() : null),
       [`GET ${apiRoutes.projects}`]: { status: 200, body: [project()] },
       [`POST ${apiRoutes.signOut}`]: () => {
         signedIn = false;
@@ -47,7 +44,7 @@ describe('app shell', () => {
   });
 
   it('answers an unknown address with a not-found page', async () => {
-    mockApi({ [`GET ${apiRoutes.me}`]: { status: 200, body: me() } });
+    mockApi({ [`GET ${apiRoutes.session}`]: session(me()) });
     renderApp('/no/such/page');
 
     expect(await screen.findByRole('heading', { name: 'This page was not found' })).toBeTruthy();
@@ -65,7 +62,7 @@ describe('organisation switch', () => {
       ],
     };
     const api = mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 200, body: twoOrgs },
+      [`GET ${apiRoutes.session}`]: session(twoOrgs),
       [`GET ${apiRoutes.projects}`]: { status: 200, body: [] },
     });
     const { user } = renderApp('/');

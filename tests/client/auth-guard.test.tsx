@@ -7,7 +7,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { apiRoutes } from '../../shared/api/routes';
 import { authKeys } from '../../src/lib/query-keys/auth';
 import { mockApi } from './support/fetch-mock';
-import { me, project } from './support/fixtures';
+import { me, project, session } from './support/fixtures';
 import { renderApp } from './support/render-app';
 
 vi.setConfig({ testTimeout: 20_000 });
@@ -31,7 +31,7 @@ afterEach(() => notifyManager.setScheduler((callback) => setTimeout(callback, 0)
 describe('a signed-in page opened directly', () => {
   it('waits for the session and then shows the page, never the error view', async () => {
     mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 200, body: me('engineer') },
+      [`GET ${apiRoutes.session}`]: session(me('engineer')),
       [`GET ${apiRoutes.project(project().id)}`]: { status: 200, body: project() },
       [`GET ${apiRoutes.projectScenarios(project().id)}`]: { status: 200, body: [] },
     });

@@ -3,13 +3,13 @@ import { describe, expect, it } from 'vitest';
 import { apiRoutes } from '../../shared/api/routes';
 import { descriptionOf } from './support/field-error';
 import { apiError, mockApi } from './support/fetch-mock';
-import { me, ORG_ID, project } from './support/fixtures';
+import { me, ORG_ID, project, session } from './support/fixtures';
 import { renderApp } from './support/render-app';
 
 describe('project list', () => {
   it('tells an engineer with no projects to create one, and offers the button', async () => {
     const api = mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 200, body: me('engineer') },
+      [`GET ${apiRoutes.session}`]: session(me('engineer')),
       [`GET ${apiRoutes.projects}`]: { status: 200, body: [] },
     });
     renderApp('/');
@@ -22,7 +22,7 @@ describe('project list', () => {
 
   it('shows a viewer no create control, only who can create', async () => {
     mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 200, body: me('viewer') },
+      [`GET ${apiRoutes.session}`]: session(me('viewer')),
       [`GET ${apiRoutes.projects}`]: { status: 200, body: [] },
     });
     renderApp('/');
@@ -35,7 +35,7 @@ describe('project list', () => {
 
   it('lists projects with their scenario counts', async () => {
     mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 200, body: me('viewer') },
+      [`GET ${apiRoutes.session}`]: session(me('viewer')),
       [`GET ${apiRoutes.projects}`]: { status: 200, body: [project({ scenarioCount: 2 })] },
     });
     renderApp('/');
@@ -47,7 +47,7 @@ describe('project list', () => {
 
   it('shows the server field error beside the project name and keeps the description', async () => {
     mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 200, body: me('owner') },
+      [`GET ${apiRoutes.session}`]: session(me('owner')),
       [`GET ${apiRoutes.projects}`]: { status: 200, body: [] },
       [`POST ${apiRoutes.projects}`]: {
         status: 409,
@@ -74,7 +74,7 @@ describe('project list', () => {
   it('opens the new project after creating it', async () => {
     const created = project({ name: 'Sensor module line' });
     const api = mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 200, body: me('engineer') },
+      [`GET ${apiRoutes.session}`]: session(me('engineer')),
       [`GET ${apiRoutes.projects}`]: { status: 200, body: [] },
       [`POST ${apiRoutes.projects}`]: { status: 201, body: created },
       [`GET ${apiRoutes.projectScenarios(created.id)}`]: { status: 200, body: [] },

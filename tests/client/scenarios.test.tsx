@@ -5,7 +5,7 @@ import { apiRoutes } from '../../shared/api/routes';
 import type { CreateScenarioInput } from '../../shared/api/scenarios';
 import stackedLoop from '../../shared/examples/stacked-loop.json';
 import { apiError, mockApi } from './support/fetch-mock';
-import { me, project, revision, scenarioDetail, scenarioSummary } from './support/fixtures';
+import { me, project, revision, scenarioDetail, scenarioSummary, session } from './support/fixtures';
 import { renderApp } from './support/render-app';
 import { EMPTY_RUNS_PAGE } from './runs/support/runs-fixtures';
 
@@ -18,7 +18,7 @@ beforeAll(async () => {
 }, 60_000);
 
 const projectRoutes = (role: 'engineer' | 'viewer', scenarios = [scenarioSummary()]) => ({
-  [`GET ${apiRoutes.me}`]: { status: 200, body: me(role) },
+  [`GET ${apiRoutes.session}`]: session(me(role)),
   [`GET ${apiRoutes.project(project().id)}`]: { status: 200, body: project({ scenarioCount: scenarios.length }) },
   [`GET ${apiRoutes.projectScenarios(project().id)}`]: { status: 200, body: scenarios },
 });
@@ -99,7 +99,7 @@ describe('project page', () => {
 describe('scenario page', () => {
   it('says plainly when the scenario does not exist', async () => {
     mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 200, body: me() },
+      [`GET ${apiRoutes.session}`]: session(me()),
       [`GET ${apiRoutes.scenarioRevisions(scenarioSummary().id)}`]: {
         status: 404,
         body: apiError('not_found', 'No such scenario.'),
@@ -112,7 +112,7 @@ describe('scenario page', () => {
 
   it('shows a viewer the latest revision read-only: drawing, balance and history, but no edit, save, restore, import or run controls', async () => {
     mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 200, body: me('viewer') },
+      [`GET ${apiRoutes.session}`]: session(me('viewer')),
       [`GET ${apiRoutes.scenario(scenarioSummary().id)}`]: { status: 200, body: scenarioDetail() },
       [`GET ${apiRoutes.project(project().id)}`]: { status: 200, body: project() },
       [`GET ${apiRoutes.scenarioRevisions(scenarioSummary().id)}`]: { status: 200, body: [revision(1), revision(2)] },

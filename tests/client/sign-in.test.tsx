@@ -3,14 +3,14 @@ import { describe, expect, it } from 'vitest';
 import { apiRoutes } from '../../shared/api/routes';
 import { descriptionOf } from './support/field-error';
 import { apiError, mockApi } from './support/fetch-mock';
-import { me, project } from './support/fixtures';
+import { me, project, session } from './support/fixtures';
 import { renderApp } from './support/render-app';
 
-const signedOut = { status: 401, body: apiError('unauthenticated', 'Sign in to continue.') };
+const signedOut = session(null);
 
 describe('sign-in form', () => {
   it('shows the schema field errors beside each field and does not call the server', async () => {
-    const api = mockApi({ [`GET ${apiRoutes.me}`]: signedOut });
+    const api = mockApi({ [`GET ${apiRoutes.session}`]: signedOut });
     const { user } = renderApp('/sign-in');
 
     await user.type(await screen.findByLabelText('E-mail'), 'ada.example.test');
@@ -27,7 +27,7 @@ describe('sign-in form', () => {
 
   it('keeps what was typed and shows the server message when the password is wrong', async () => {
     mockApi({
-      [`GET ${apiRoutes.me}`]: signedOut,
+      [`GET ${apiRoutes.session}`]: signedOut,
       [`POST ${apiRoutes.signIn}`]: {
         status: 401,
         body: apiError('unauthenticated', 'That e-mail and password do not match an account.'),
@@ -51,7 +51,7 @@ describe('sign-in form', () => {
   it('sends the schema-normalised values and returns the user to the page they first asked for', async () => {
     let signedIn = false;
     const api = mockApi({
-      [`GET ${apiRoutes.me}`]: () => (signedIn ? { status: 200, body: me() } : signedOut),
+      [`GET ${apiRoutes.session}`]: () => session(signedIn ? me() : null),
       [`POST ${apiRoutes.signIn}`]: () => {
         signedIn = true;
         return { status: 200, body: me() };
@@ -77,7 +77,7 @@ describe('sign-in form', () => {
 
   it('sends the user to sign-in when any query answers 401, remembering where they were', async () => {
     mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 200, body: me() },
+      [`GET ${apiRoutes.session}`]: session(me()),
       [`GET ${apiRoutes.project(project().id)}`]: {
         status: 401,
         body: apiError('unauthenticated', 'Your session has ended.'),

@@ -3,12 +3,13 @@ import { describe, expect, it } from 'vitest';
 import { apiRoutes } from '../../shared/api/routes';
 import { descriptionOf } from './support/field-error';
 import { apiError, mockApi } from './support/fetch-mock';
+import { session } from './support/fixtures';
 import { renderApp } from './support/render-app';
 
 describe('sign-up form', () => {
   it('puts a server field error beside the field it names and keeps every typed value', async () => {
     mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 401, body: apiError('unauthenticated', 'Sign in to continue.') },
+      [`GET ${apiRoutes.session}`]: session(null),
       [`POST ${apiRoutes.signUp}`]: {
         status: 400,
         body: apiError('bad_request', 'Invalid input in the request body: email is not accepted here', [
@@ -37,7 +38,7 @@ describe('sign-up form', () => {
   it('says a link is on its way, whatever the address, and signs nobody in', async () => {
     const message = 'Check your mailbox: we sent a link to finish creating your account.';
     const api = mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 401, body: apiError('unauthenticated', 'Sign in to continue.') },
+      [`GET ${apiRoutes.session}`]: session(null),
       [`POST ${apiRoutes.signUp}`]: { status: 202, body: { message } },
     });
     const { user } = renderApp('/sign-up');
@@ -47,12 +48,12 @@ describe('sign-up form', () => {
     await user.type(screen.getByLabelText('Password'), 'long-enough-secret');
     await user.click(screen.getByRole('button', { name: 'Create account' }));
     expect((await screen.findByRole('status')).textContent).toContain(message);
-    expect(api.callsTo('GET', apiRoutes.me)).toHaveLength(1);
+    expect(api.callsTo('GET', apiRoutes.session)).toHaveLength(1);
   });
 
   it('quotes the shared password rule before anything is sent', async () => {
     const api = mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 401, body: apiError('unauthenticated', 'Sign in to continue.') },
+      [`GET ${apiRoutes.session}`]: session(null),
     });
     const { user } = renderApp('/sign-up');
 

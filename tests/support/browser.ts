@@ -11,7 +11,7 @@ import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll } from 'vitest';
 import { createDataSource } from '../../server/db/data-source';
 import { runMigrations } from '../../server/db/migrate';
-import { seedDemo } from '../../server/db/seed/demo';
+import { DEMO_PASSWORD, seedDemo } from '../../server/db/seed/demo';
 import { seedDemoPrices } from '../../server/db/seed/demo-prices';
 import { startServer } from '../../server/index';
 import type { CaughtMailbox } from '../../server/mail/mailbox';
@@ -46,6 +46,8 @@ export interface TestBrowser {
   page: Page;
   /** Uncaught errors thrown by pages' scripts, for tests to assert there were none. */
   pageErrors: Error[];
+  /** What pages logged as console errors (failed requests among them), for tests to assert there were none. */
+  consoleErrors: string[];
   close(): Promise<void>;
 }
 
@@ -98,13 +100,21 @@ export async function launchBrowser(): Promise<TestBrowser> {
     args: CHROMIUM_ARGS,
   });
   const pageErrors: Error[] = [];
-  context.on('page', (page) => page.on('pageerror', (error) => pageErrors.push(error)));
+  const consoleErrors: string[] = [];
+  const watch = (page: Page) => {
+    page.on('pageerror', (error) => pageErrors.push(error));
+    page.on('console', (message) => {
+      if (message.type() === 'error') consoleErrors.push(`${message.text()} (${message.location().url})`);
+    });
+  };
+  context.on('page', watch);
   const page = context.pages()[0] ?? (await context.newPage());
-  page.on('pageerror', (error) => pageErrors.push(error));
+  watch(page);
   return {
     context,
     page,
     pageErrors,
+    consoleErrors,
     close: async () => {
       await context.close();
       await rm(profileDir, { recursive: true, force: true });
@@ -121,18 +131,28 @@ export async function screenshot(page: Page, name: string): Promise<string> {
   return path;
 }
 
+export interface BrowserTestOptions {
+  /** Runs against the app before the browser starts (fixtures through the data source or the API). */
+  prepare?: (app: TestApp) => Promise<void>;
+  /** The tab's size; a desktop 1280 × 800 unless given. */
+  viewport?: { width: number; height: number };
+}
+
 /**
- * The usual set-up of a browser test file: the app and Chromium before the first test (a desktop-sized
- * tab), both closed after the last. `prepare` runs against the app before the browser starts.
+ * The usual set-up of a browser test file: the app and Chromium before the first test, both closed
+ * after the last, and a sign-in through the real form.
  */
-export function useAppInBrowser(prepare?: (app: TestApp) => Promise<void>) {
+export function useAppInBrowser(options: BrowserTestOptions | BrowserTestOptions['prepare'] = {}) {
+  // A bare function is the `prepare` step alone.
+  const { prepare, viewport = { width: 1280, height: 800 } } =
+    typeof options === 'function' ? { prepare: options } : options;
   let app: TestApp | undefined;
   let browser: TestBrowser | undefined;
   beforeAll(async () => {
     app = await startTestApp();
     await prepare?.(app);
     browser = await launchBrowser();
-    await browser.page.setViewportSize({ width: 1280, height: 800 });
+    await browser.page.setViewportSize(viewport);
   });
   afterAll(async () => {
     await browser?.close();
@@ -151,6 +171,19 @@ export function useAppInBrowser(prepare?: (app: TestApp) => Promise<void>) {
     },
     get page(): Page {
       return need(browser).page;
+    },
+    /**
+     * Signs in through the sign-in form as a fresh visitor (cookies cleared) and waits until the app
+     * has left the sign-in page, for `returnTo` when given.
+     */
+    async signIn(email: string, { password = DEMO_PASSWORD, returnTo }: { password?: string; returnTo?: string } = {}) {
+      const page = need(browser).page;
+      await page.context().clearCookies();
+      await page.goto(`${need(app).url}/sign-in${returnTo ? `?returnTo=${encodeURIComponent(returnTo)}` : ''}`);
+      await page.getByLabel('E-mail').fill(email);
+      await page.getByLabel('Password').fill(password);
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      await page.waitForURL((url) => url.pathname !== '/sign-in');
     },
   };
 }

@@ -2,6 +2,7 @@
 // numbers count up from 1 per scenario.
 import { Column, Entity, JoinColumn, ManyToOne, Unique } from 'typeorm';
 import { AuthoredRecord } from './authored';
+import type { ConveyorMode } from '../../../shared/api/scenarios';
 import type { Scenario } from '../../../shared/scenario/scenario';
 
 @Entity({ name: 'scenario_revisions' })
@@ -22,4 +23,8 @@ export class ScenarioRevisionEntity extends AuthoredRecord {
 
   @Column({ type: 'text', default: '' })
   message!: string;
+
+  /** Set by a database trigger from the document, for lists that must not read documents. */
+  @Column({ type: 'text', name: 'conveyor_mode', default: 'carriers', insert: false, update: false })
+  conveyorMode!: ConveyorMode;
 }

@@ -9,6 +9,7 @@ import { PriceLists1796205600000 } from './1796205600000-PriceLists';
 import { SignInAttempts1796210000000 } from './1796210000000-SignInAttempts';
 import { StoredChecks1796210000001 } from './1796210000001-StoredChecks';
 import { ShareStudies1796220000000 } from './1796220000000-ShareStudies';
+import { ConveyorMode1796230000000 } from './1796230000000-ConveyorMode';
 
 export const migrations = [
   InitialSchema1796189683213,
@@ -21,4 +22,5 @@ export const migrations = [
   Studies1796216413737,
   ShareStudies1796220000000,
   StudyQueue1796227373997,
+  ConveyorMode1796230000000,
 ];

@@ -1,10 +1,9 @@
 // Side elevation: each deck at its height, its lanes projected onto the layout's long axis, and the
 // elevators as vertical connectors between the decks they join. Heights are to their own scale.
-import type { ReactNode } from 'react';
 import { formatLengthMm } from '../../lib/format';
 import { anchorFor, DRAWING } from './drawing-frame';
 import type { LayoutModel, PlanDeck } from './layout-model';
-import { OverlayLayer } from './overlay-layer';
+import { OverlayCanvas, overlayRegion, type OverlaySpec } from './overlay-canvas';
 
 const HEIGHT_PX = 200;
 const LEFT_PX = 150;
@@ -37,13 +36,8 @@ export function elevationFrame(model: LayoutModel): ElevationFrame | null {
   };
 }
 
-export function ElevationView({
-  model,
-  overlay,
-}: {
-  model: LayoutModel;
-  overlay?: (frame: ElevationFrame) => ReactNode;
-}) {
+/** With `overlay`, a canvas over the decks of the elevation for the playback's carriers. */
+export function ElevationView({ model, overlay }: { model: LayoutModel; overlay?: OverlaySpec }) {
   const { colour } = DRAWING;
   const frame = elevationFrame(model);
   if (!frame) return null;
@@ -139,9 +133,21 @@ export function ElevationView({
               })}
           </svg>
           {overlay && (
-            <OverlayLayer widthPx={DRAWING.widthPx} heightPx={HEIGHT_PX}>
-              {overlay(frame)}
-            </OverlayLayer>
+            <OverlayCanvas
+              widthPx={DRAWING.widthPx}
+              heightPx={HEIGHT_PX}
+              region={overlayRegion(
+                {
+                  minX: LEFT_PX,
+                  maxX: DRAWING.widthPx - 40,
+                  minY: Math.min(...decks.map((deck) => height(deck.elevationMm ?? 0))),
+                  maxY: Math.max(...decks.map((deck) => height(deck.elevationMm ?? 0))),
+                },
+                overlay.marginPx,
+                DRAWING.widthPx,
+                HEIGHT_PX,
+              )}
+            />
           )}
         </div>
       </div>

@@ -1,11 +1,12 @@
 // The live drawing of a (draft) layout: key figures, a plan per deck on one shared scale, and a side
 // elevation. Clicking a lane or a station reports it, so the editor can open it.
-import { useMemo, type ReactNode } from 'react';
+import { useMemo } from 'react';
 import { BeltBaselineTag } from '../ui/belt-baseline-tag';
 import { formatCount, formatLengthMm } from '../../lib/format';
-import { planFrame, type PlanFrame } from './drawing-frame';
-import { ElevationView, type ElevationFrame } from './elevation-view';
-import { layoutModel, type LayoutDraft, type PlanDeck } from './layout-model';
+import { planFrame } from './drawing-frame';
+import { ElevationView } from './elevation-view';
+import { layoutModel, type LayoutDraft } from './layout-model';
+import type { OverlaySpec } from './overlay-canvas';
 import { PlanView } from './plan-view';
 import type { LayoutSelection } from './selection';
 
@@ -13,13 +14,8 @@ export interface LayoutDrawingProps {
   document: LayoutDraft;
   selection?: LayoutSelection;
   onSelect?: (selection: LayoutSelection) => void;
-  /** Drawn over every deck's plan and the side elevation, for a playback. */
-  overlay?: DrawingOverlay;
-}
-
-export interface DrawingOverlay {
-  plan: (deck: PlanDeck, frame: PlanFrame) => ReactNode;
-  elevation: (frame: ElevationFrame) => ReactNode;
+  /** A canvas over the track of every deck's plan and of the side elevation, for a playback to draw on. */
+  overlay?: OverlaySpec;
 }
 
 const metres = (mm: number) =>
@@ -77,7 +73,7 @@ export function LayoutDrawing({ document, selection = null, onSelect, overlay }:
             frame={frame}
             selection={selection}
             onSelect={onSelect}
-            overlay={overlay?.plan}
+            overlay={overlay}
           />
         ))
       ) : (
@@ -85,7 +81,7 @@ export function LayoutDrawing({ document, selection = null, onSelect, overlay }:
           Nothing to draw yet: add a lane with modules, a start point and a heading.
         </p>
       )}
-      <ElevationView model={model} overlay={overlay?.elevation} />
+      <ElevationView model={model} overlay={overlay} />
       <p className="text-xs text-ink-soft">
         Filled circles are automatic stations, hollow ones manual. Joint ticks mark module ends; chevrons show the
         direction of travel; squares mark elevator ends and lateral transfers.

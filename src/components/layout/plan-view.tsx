@@ -1,11 +1,10 @@
 // The plan of one deck: its lanes to scale, joins, elevator ends, stations labelled with their step,
 // and a scale bar. Every deck uses the same frame, so the plans stack into one comparable picture.
-import type { ReactNode } from 'react';
 import { DRAWING, type PlanFrame } from './drawing-frame';
 import type { LayoutModel, PlanDeck, PlanStation } from './layout-model';
 import { PlanLaneShape, selectable } from './plan-lane';
 import { ElevatorEnd, PlanJoinShape } from './plan-join';
-import { OverlayLayer } from './overlay-layer';
+import { OverlayCanvas, overlayRegion, type OverlaySpec } from './overlay-canvas';
 import { ScaleBar } from './scale-bar';
 import { isLaneSelected, isStationSelected, type LayoutSelection } from './selection';
 
@@ -15,8 +14,8 @@ interface PlanViewProps {
   frame: PlanFrame;
   selection: LayoutSelection;
   onSelect?: (selection: LayoutSelection) => void;
-  /** Drawn over the plan (the playback's carriers and station states). */
-  overlay?: (deck: PlanDeck, frame: PlanFrame) => ReactNode;
+  /** A canvas over the plan's track for the playback's carriers and station states. */
+  overlay?: OverlaySpec;
 }
 
 function StationMarker({
@@ -143,10 +142,23 @@ export function PlanView({ model, deck, frame, selection, onSelect, overlay }: P
               N ↑
             </text>
           </svg>
-          {overlay && (
-            <OverlayLayer widthPx={DRAWING.widthPx} heightPx={frame.heightPx}>
-              {overlay(deck, frame)}
-            </OverlayLayer>
+          {overlay && model.footprint && (
+            <OverlayCanvas
+              widthPx={DRAWING.widthPx}
+              heightPx={frame.heightPx}
+              deckId={deck.id}
+              region={overlayRegion(
+                {
+                  minX: frame.x(model.footprint.box.minX),
+                  maxX: frame.x(model.footprint.box.maxX),
+                  minY: frame.y(model.footprint.box.maxY),
+                  maxY: frame.y(model.footprint.box.minY),
+                },
+                overlay.marginPx,
+                DRAWING.widthPx,
+                frame.heightPx,
+              )}
+            />
           )}
         </div>
       </div>

@@ -3,7 +3,7 @@ import { screen } from '@testing-library/react';
 import { apiRoutes } from '../../../shared/api/routes';
 import type { Role } from '../../../shared/api/roles';
 import { mockApi, type MockAnswer, type RecordedCall } from '../support/fetch-mock';
-import { me, project, revision, scenarioDetail, scenarioSummary } from '../support/fixtures';
+import { me, project, revision, scenarioDetail, scenarioSummary, session } from '../support/fixtures';
 import { renderApp } from '../support/render-app';
 import { EMPTY_RUNS_PAGE } from '../runs/support/runs-fixtures';
 
@@ -13,7 +13,7 @@ type Route = MockAnswer | ((call: RecordedCall) => MockAnswer | Promise<MockAnsw
 
 export async function openScenarioPage(role: Role, extra: Record<string, Route> = {}) {
   const api = mockApi({
-    [`GET ${apiRoutes.me}`]: { status: 200, body: me(role) },
+    [`GET ${apiRoutes.session}`]: session(me(role)),
     [`GET ${apiRoutes.scenario(SCENARIO_ID)}`]: { status: 200, body: scenarioDetail() },
     [`GET ${apiRoutes.project(project().id)}`]: { status: 200, body: project() },
     [`GET ${apiRoutes.scenarioRevisions(SCENARIO_ID)}`]: { status: 200, body: [revision(1), revision(2)] },

@@ -6,7 +6,7 @@ import type { Revision } from '../../../shared/api/scenarios';
 import type { RunResult } from '../../../shared/results/run-result';
 import { formatTable } from '../../../workers/cli/table';
 import { mockApi } from '../support/fetch-mock';
-import { me, project, revision, scenarioDetail, scenarioSummary } from '../support/fixtures';
+import { me, project, revision, scenarioDetail, scenarioSummary, session } from '../support/fixtures';
 import { renderApp } from '../support/render-app';
 import { withinWholeBins } from '../../../src/features/results/utils/chart-data';
 import { engineResult, storedRun } from './support/engine-result';
@@ -22,7 +22,7 @@ function mockRunPage(role: Role) {
   const detail = scenarioDetail();
   const rev: Revision = { ...revision(2), document: detail.document };
   mockApi({
-    [`GET ${apiRoutes.me}`]: { status: 200, body: me(role) },
+    [`GET ${apiRoutes.session}`]: session(me(role)),
     [`GET ${apiRoutes.run(run.id)}`]: { status: 200, body: run },
     [`GET ${apiRoutes.scenario(scenarioSummary().id)}`]: { status: 200, body: detail },
     [`GET ${apiRoutes.project(project().id)}`]: { status: 200, body: project() },

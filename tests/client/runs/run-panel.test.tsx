@@ -8,7 +8,7 @@ import { scenarioSchema } from '../../../shared/scenario/scenario';
 import { RunPanel } from '../../../src/features/runs/components/run-panel';
 import { apiError, mockApi } from '../support/fetch-mock';
 import { descriptionOf } from '../support/field-error';
-import { me, ORG_ID, revision, scenarioSummary } from '../support/fixtures';
+import { me, ORG_ID, revision, scenarioSummary, session } from '../support/fixtures';
 import { inProcessPorts } from './support/in-process-port';
 import { renderWithSession } from './support/render-with-session';
 import { runItem } from './support/runs-fixtures';
@@ -37,7 +37,7 @@ async function setField(user: ReturnType<typeof renderWithSession>['user'], labe
 
 describe('run panel', () => {
   it('says what is wrong with each setting, beside the field, and starts nothing', async () => {
-    mockApi({ [`GET ${apiRoutes.me}`]: { status: 200, body: me('engineer') } });
+    mockApi({ [`GET ${apiRoutes.session}`]: session(me('engineer')) });
     const ports = inProcessPorts();
     const { user } = renderWithSession(panel(), ports.open);
 
@@ -60,7 +60,7 @@ describe('run panel', () => {
   });
 
   it('places the engine’s objection to the carrier count beside the carrier field', async () => {
-    mockApi({ [`GET ${apiRoutes.me}`]: { status: 200, body: me('engineer') } });
+    mockApi({ [`GET ${apiRoutes.session}`]: session(me('engineer')) });
     const ports = inProcessPorts();
     const { user } = renderWithSession(panel(), ports.open);
 
@@ -80,7 +80,7 @@ describe('run panel', () => {
     const saved = runItem(1);
     let attempts = 0;
     const api = mockApi({
-      [`GET ${apiRoutes.me}`]: { status: 200, body: me('engineer') },
+      [`GET ${apiRoutes.session}`]: session(me('engineer')),
       [`POST ${apiRoutes.scenarioRuns(scenarioSummary().id)}`]: () =>
         ++attempts === 1
           ? { status: 503, body: apiError('internal', 'The database is restarting.') }
@@ -118,7 +118,7 @@ describe('run panel', () => {
   }, 30_000);
 
   it('shows a viewer no run controls at all', async () => {
-    mockApi({ [`GET ${apiRoutes.me}`]: { status: 200, body: me('viewer') } });
+    mockApi({ [`GET ${apiRoutes.session}`]: session(me('viewer')) });
     renderWithSession(panel(), inProcessPorts().open);
 
     await screen.findByText('Scenario page');
@@ -128,7 +128,7 @@ describe('run panel', () => {
   });
 
   it('asks before leaving the page while a run is in progress, and stays when the answer is no', async () => {
-    mockApi({ [`GET ${apiRoutes.me}`]: { status: 200, body: me('engineer') } });
+    mockApi({ [`GET ${apiRoutes.session}`]: session(me('engineer')) });
     // A run that never finishes, so the page stays in the running state.
     const hanging: OpenSimulationPort = () => ({ run: () => new Promise(() => undefined), terminate: () => undefined });
     const { user, router, path } = renderWithSession(panel(), hanging);

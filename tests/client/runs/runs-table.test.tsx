@@ -7,7 +7,7 @@ import type { Role } from '../../../shared/api/roles';
 import type { RunListItem, RunsPage } from '../../../shared/api/runs';
 import { RunListSection } from '../../../src/features/runs/components/run-list-section';
 import { mockApi, type RecordedCall } from '../support/fetch-mock';
-import { me, ORG_ID, USER, uuid } from '../support/fixtures';
+import { me, ORG_ID, session, USER, uuid } from '../support/fixtures';
 import { inProcessPorts } from './support/in-process-port';
 import { renderWithSession } from './support/render-with-session';
 import { OTHER_USER, runItem } from './support/runs-fixtures';
@@ -43,7 +43,7 @@ function pageFor(call: RecordedCall, items: readonly RunListItem[] = runs): Runs
 
 function renderTable(role: Role, extra: Parameters<typeof mockApi>[0] = {}) {
   const api = mockApi({
-    [`GET ${apiRoutes.me}`]: { status: 200, body: me(role) },
+    [`GET ${apiRoutes.session}`]: session(me(role)),
     [`GET ${apiRoutes.scenarioRuns(SCENARIO_ID)}`]: (call) => ({ status: 200, body: pageFor(call) }),
     ...extra,
   });

@@ -17,6 +17,11 @@ export function me(role: Role = 'engineer'): Me {
   return { user: USER, memberships: [{ organisationId: ORG_ID, organisationName: 'Northgate Fixtures', role }] };
 }
 
+/** The session check's answer: who is signed in, or nobody (`null`, still a 200). */
+export function session(who: Me | null) {
+  return { status: 200, body: { me: who } };
+}
+
 export function project(overrides: Partial<Project> = {}): Project {
   return {
     id: uuid(10),
@@ -37,6 +42,7 @@ export function revision(number: number, overrides: Partial<RevisionSummary> = {
     scenarioId: uuid(20),
     number,
     message: number === 1 ? 'Started from the stacked example' : `Change ${number}`,
+    conveyorMode: 'carriers',
     createdBy: USER,
     createdAt: WHEN,
     ...overrides,

@@ -19,6 +19,8 @@ export interface CarrierPlace {
   conn: number;
   fraction: number;
   loaded: boolean;
+  /** True while a recorded move or transfer is under way at that moment. */
+  moving: boolean;
 }
 
 function rowsBy(keys: Int32Array, count: number, groups: number): Int32Array[] {
@@ -62,6 +64,7 @@ export function carrierAt(index: TraceIndex, c: number, t: number, out: CarrierP
   const progress = span > 0 ? Math.min(Math.max((t - k.t[i]) / span, 0), 1) : 1;
   const where = k.where[i];
   out.loaded = (k.flags[i] & TRACE_LOADED) !== 0;
+  out.moving = span > 0 && t < k.endT[i];
   if (where >= 0) {
     out.lane = where;
     out.conn = -1;

@@ -1,18 +1,13 @@
-// Who is signed in. A 401 is the ordinary answer for a visitor, so it becomes
-// `null` rather than an error: route guards read "nobody" and redirect.
+// Who is signed in, from the session check: a visitor gets `null` (an ordinary 200 answer, so the
+// browser logs no failed request), and route guards read "nobody" and redirect.
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { meSchema, type Me } from '../../../../shared/api/auth';
+import { sessionSchema, type Me } from '../../../../shared/api/auth';
 import { apiRoutes } from '../../../../shared/api/routes';
-import { api, isApiRequestError } from '../../../lib/api-client';
+import { api } from '../../../lib/api-client';
 import { authKeys } from '../../../lib/query-keys/auth';
 
 export async function getMe(signal?: AbortSignal): Promise<Me | null> {
-  try {
-    return await api.get(apiRoutes.me, meSchema, { signal });
-  } catch (error) {
-    if (isApiRequestError(error) && error.status === 401) return null;
-    throw error;
-  }
+  return (await api.get(apiRoutes.session, sessionSchema, { signal })).me;
 }
 
 export const meQueryOptions = () =>

@@ -4,6 +4,7 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import type { ReactNode } from 'react';
 import type { RunListItem } from '../../../../shared/api/runs';
+import { BeltBaselineTag } from '../../../components/ui/belt-baseline-tag';
 import { formatDateTime, formatPerson } from '../../../lib/format';
 import { formatInterval, formatPerHour, formatTakt } from '../../../lib/format-run';
 
@@ -29,6 +30,12 @@ export function runsColumns({ showScenario, showActions, name, actions }: Column
       id: 'revision',
       header: 'Revision',
       cell: (c) => `#${c.getValue()}`,
+    }),
+    column.accessor('conveyorMode', {
+      id: 'conveyor',
+      header: 'Conveyor',
+      enableColumnFilter: false,
+      cell: (c) => (c.getValue() === 'belt' ? <BeltBaselineTag short /> : 'Carriers'),
     }),
     column.accessor((run) => formatPerson(run.createdBy), {
       id: 'author',

@@ -1,6 +1,7 @@
 // The scenarios of a project, each with its latest revision.
 import { Link } from 'react-router-dom';
 import type { ScenarioSummary } from '../../../../shared/api/scenarios';
+import { BeltBaselineTag } from '../../../components/ui/belt-baseline-tag';
 import { formatCount, formatDateTime, formatPerson } from '../../../lib/format';
 
 export function ScenarioList({ scenarios }: { scenarios: ScenarioSummary[] }) {
@@ -16,7 +17,10 @@ export function ScenarioList({ scenarios }: { scenarios: ScenarioSummary[] }) {
             className="flex flex-col gap-1 p-4 hover:bg-paper focus-visible:outline-3 focus-visible:-outline-offset-3 focus-visible:outline-accent sm:flex-row sm:items-baseline sm:justify-between sm:gap-6 sm:px-5"
           >
             <span className="flex min-w-0 flex-col gap-1">
-              <span className="font-semibold text-accent-strong">{scenario.name}</span>
+              <span className="flex flex-wrap items-center gap-2">
+                <span className="font-semibold text-accent-strong">{scenario.name}</span>
+                {scenario.latestRevision.conveyorMode === 'belt' && <BeltBaselineTag short />}
+              </span>
               {scenario.description && (
                 <span className="line-clamp-2 text-sm text-ink-soft">{scenario.description}</span>
               )}

@@ -21,6 +21,7 @@ export function storedRun(results: RunResult, overrides: Partial<RunDetail> = {}
     scenarioName: scenarioSummary().name,
     revisionId: latest.id,
     revisionNumber: latest.number,
+    conveyorMode: latest.conveyorMode,
     name: 'Stacked, revision 2',
     seed: results.seed,
     engineVersion: results.engineVersion,

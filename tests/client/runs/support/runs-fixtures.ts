@@ -26,6 +26,7 @@ export function runItem(
     scenarioName: 'Stacked, 20 carriers',
     revisionId: uuid(100 + (overrides.revision ?? 2)),
     revisionNumber: overrides.revision ?? 2,
+    conveyorMode: 'carriers',
     name: `Run ${n}`,
     seed: String(n),
     engineVersion: '1.1.0',

@@ -5,30 +5,19 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { RunDetail } from '../../shared/api/runs';
 import { RUN_LIMITS } from '../../shared/scenario/run-settings';
 import { runExperiment } from '../../workers/engine';
 import { EXAMPLES_DIR, exampleFiles } from '../engine/helpers';
-import { launchBrowser, screenshot, startTestApp, type TestApp, type TestBrowser } from '../support/browser';
+import { screenshot, useAppInBrowser } from '../support/browser';
 
-const PASSWORD = 'demo-password';
 const DEMO_PROJECT = 'Cartridge line layout study';
 const YEAR_TIMEOUT = 900_000;
 const WARMUP_MINUTES = '30';
+const VIEWPORT = { width: 1280, height: 900 };
 
-let app: TestApp;
-let browser: TestBrowser;
-
-beforeAll(async () => {
-  app = await startTestApp();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
-});
+const session = useAppInBrowser({ viewport: VIEWPORT });
 
 interface Example {
   file: string;
@@ -41,14 +30,6 @@ function examples(): Example[] {
     const document = JSON.parse(readFileSync(join(EXAMPLES_DIR, file), 'utf8')) as { name: string };
     return { file, name: document.name, document };
   });
-}
-
-async function signIn(page: Page) {
-  await page.goto(`${app.url}/sign-in`);
-  await page.getByLabel('E-mail').fill('engineer@demo.lanewright.test');
-  await page.getByLabel('Password').fill(PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('link', { name: new RegExp(DEMO_PROJECT) }).waitFor();
 }
 
 /** A project of its own, so the demo project's scenario list stays as other tests expect it. */
@@ -81,7 +62,7 @@ async function runAYear(page: Page, projectUrl: string, example: Example, index:
   await open.waitFor({ timeout: YEAR_TIMEOUT });
   const runId = ((await open.getAttribute('href')) ?? '').split('/').pop();
   if (index === 0) await screenshot(page, 'year-run-saved');
-  const response = await page.request.get(`${app.url}/api/runs/${runId}`);
+  const response = await page.request.get(`${session.app.url}/api/runs/${runId}`);
   expect(response.status(), example.file).toBe(200);
   return (await response.json()) as RunDetail;
 }
@@ -91,11 +72,12 @@ describe('a year of simulated time in the browser', () => {
     'every example runs 8,760 h × 1 replication from the scenario page, is saved, and agrees with its 8-h rate',
     async () => {
       const list = examples();
-      const pages = [browser.page, await browser.context.newPage()];
-      for (const page of pages) {
-        await page.setViewportSize({ width: 1280, height: 900 });
-      }
-      await signIn(pages[0]);
+      const { browser } = session;
+      const second = await browser.context.newPage();
+      await second.setViewportSize(VIEWPORT);
+      const pages = [browser.page, second];
+      await session.signIn('engineer@demo.lanewright.test');
+      await browser.page.getByRole('link', { name: new RegExp(DEMO_PROJECT) }).waitFor();
       const projectUrl = await createProject(pages[0]);
 
       const runs = new Array<RunDetail>(list.length);
@@ -121,6 +103,7 @@ describe('a year of simulated time in the browser', () => {
         expect(year.throughputPerHour.mean, example.file).toBeLessThanOrEqual(shift.throughputPerHour.ciHigh);
       }
       expect(browser.pageErrors).toEqual([]);
+      expect(browser.consoleErrors).toEqual([]);
     },
     YEAR_TIMEOUT * 2,
   );

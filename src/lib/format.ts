@@ -9,6 +9,13 @@ export function formatDateTime(iso: string): string {
   return Number.isNaN(date.getTime()) ? iso : dateTime.format(date);
 }
 
+const day = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium' });
+
+/** A day as the app writes it everywhere ("2 Dec 2026"), never the browser's mm/dd/yyyy. */
+export function formatDay(date: Date): string {
+  return day.format(date);
+}
+
 /** Lengths are stored in millimetres; people read long track in metres. */
 export function formatLengthMm(mm: number): string {
   if (Math.abs(mm) >= 1000) return `${(mm / 1000).toLocaleString('en-GB', { maximumFractionDigits: 2 })} m`;

@@ -6,6 +6,7 @@ import { apiRoutes } from '../../../shared/api/routes';
 import type { Role } from '../../../shared/api/roles';
 import type { RunListItem, RunsPage } from '../../../shared/api/runs';
 import { RunListSection } from '../../../src/features/runs/components/run-list-section';
+import { formatDay } from '../../../src/lib/format';
 import { mockApi, type RecordedCall } from '../support/fetch-mock';
 import { me, ORG_ID, session, USER, uuid } from '../support/fixtures';
 import { inProcessPorts } from './support/in-process-port';
@@ -134,8 +135,15 @@ describe('runs table', () => {
   it('sends "run on or after" as the start of that day in the user’s time zone', async () => {
     const { user, lastQuery } = renderTable('viewer');
     await screen.findByRole('table', { name: 'Runs of this scenario' });
-    await user.type(screen.getByLabelText('Run on or after'), '2026-11-13');
-    await vi.waitFor(() => expect(lastQuery().since).toBe(new Date(2026, 10, 13).toISOString()));
+    const menu = screen.getByLabelText('Run on or after');
+    const today = new Date();
+    const weekAgo = new Date(today.getFullYear(), today.getMonth(), today.getDate() - 6);
+    const label = `Last 7 days (from ${formatDay(weekAgo)})`;
+    expect(within(menu).getByRole('option', { name: label })).toBeTruthy();
+    // The browser's own date field would read mm/dd/yyyy; the menu writes days as the app does.
+    expect(label).toMatch(/\(from \d{1,2} [A-Z][a-z]{2} \d{4}\)$/);
+    await user.selectOptions(menu, label);
+    await vi.waitFor(() => expect(lastQuery().since).toBe(weekAgo.toISOString()));
   });
 
   it('says so when no run matches the filters, and keeps the filters to change', async () => {

@@ -2,8 +2,8 @@
 // reports them beside each page), not only the page on screen.
 import { FORMER_MEMBER, type RunFilterChoices } from '../../../../shared/api/runs';
 import { Button } from '../../../components/ui/button';
-import { formatPerson } from '../../../lib/format';
-import { anyFilter, NO_FILTERS, type RunFilterValues } from '../utils/run-filters';
+import { formatDay, formatPerson } from '../../../lib/format';
+import { anyFilter, NO_FILTERS, sinceChoices, type RunFilterValues } from '../utils/run-filters';
 
 interface RunsFiltersProps {
   choices: RunFilterChoices;
@@ -60,7 +60,14 @@ export function RunsFilters({ choices, values, onChange }: RunsFiltersProps) {
       <NumberChoice label="Carriers" values={choices.carriers} value={values.carriers} onChange={set('carriers')} />
       <label className={LABEL}>
         Run on or after
-        <input type="date" className={CONTROL} value={values.since} onChange={set('since')} />
+        <select className={CONTROL} value={values.since} onChange={set('since')}>
+          <option value="">Any day</option>
+          {sinceChoices(new Date(), formatDay).map((choice) => (
+            <option key={choice.value} value={choice.value}>
+              {choice.label}
+            </option>
+          ))}
+        </select>
       </label>
       <label className={LABEL}>
         Throughput at least (/h)

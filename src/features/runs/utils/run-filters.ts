@@ -7,7 +7,7 @@ export interface RunFilterValues {
   author: string;
   revision: string;
   carriers: string;
-  /** yyyy-mm-dd in the user's time zone, from a date field. */
+  /** yyyy-mm-dd in the user's time zone, one of `sinceChoices`. */
   since: string;
   minThroughput: string;
   maxTakt: string;
@@ -29,6 +29,28 @@ export const NEWEST_FIRST: SortingState = [{ id: 'createdAt', desc: true }];
 function numberOf(text: string): number | undefined {
   const value = text.trim() === '' ? NaN : Number(text);
   return Number.isFinite(value) && value >= 0 ? value : undefined;
+}
+
+const SINCE_SPANS = [
+  { days: 0, label: 'Today' },
+  { days: 6, label: 'Last 7 days' },
+  { days: 29, label: 'Last 30 days' },
+  { days: 89, label: 'Last 90 days' },
+  { days: 364, label: 'Last 365 days' },
+] as const;
+
+const isoDay = (date: Date) =>
+  `${date.getFullYear()}-${String(date.getMonth() + 1).padStart(2, '0')}-${String(date.getDate()).padStart(2, '0')}`;
+
+/**
+ * The "run on or after" menu: spans ending today in the user's time zone, each naming its first day the
+ * way the app writes dates, so no browser date field shows mm/dd/yyyy beside "2 Dec 2026".
+ */
+export function sinceChoices(today: Date, formatDay: (date: Date) => string): { value: string; label: string }[] {
+  return SINCE_SPANS.map(({ days, label }) => {
+    const first = new Date(today.getFullYear(), today.getMonth(), today.getDate() - days);
+    return { value: isoDay(first), label: `${label} (from ${formatDay(first)})` };
+  });
 }
 
 /** The start of a local day as an instant, so "on or after" means the user's day, not UTC's. */

@@ -12,6 +12,7 @@ import { ScenarioEntity } from './scenario.entity';
 import { SessionEntity } from './session.entity';
 import { SignInAttemptEntity } from './sign-in-attempt.entity';
 import { ShareLinkEntity } from './share-link.entity';
+import { ComparisonEntity } from './comparison.entity';
 import { StudyJobResultEntity } from './study-job-result.entity';
 import { StudyPointEntity } from './study-point.entity';
 import { StudyEntity } from './study.entity';
@@ -32,6 +33,7 @@ export {
   SessionEntity,
   SignInAttemptEntity,
   ShareLinkEntity,
+  ComparisonEntity,
   StudyEntity,
   StudyJobResultEntity,
   StudyPointEntity,
@@ -58,4 +60,5 @@ export const entities = [
   InvitationEntity,
   OneTimeTokenEntity,
   ShareLinkEntity,
+  ComparisonEntity,
 ];

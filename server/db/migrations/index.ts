@@ -8,6 +8,7 @@ import { PriceLists1796205600000 } from './1796205600000-PriceLists';
 import { SignInAttempts1796210000000 } from './1796210000000-SignInAttempts';
 import { StoredChecks1796210000001 } from './1796210000001-StoredChecks';
 import { ShareStudies1796220000000 } from './1796220000000-ShareStudies';
+import { ShareComparisons1796230000000 } from './1796230000000-ShareComparisons';
 
 export const migrations = [
   InitialSchema1796189683213,
@@ -19,4 +20,5 @@ export const migrations = [
   TeamAndSharing1796216390870,
   Studies1796216413737,
   ShareStudies1796220000000,
+  ShareComparisons1796230000000,
 ];

@@ -9,6 +9,7 @@ import { apiRoutes } from '../../shared/api/routes';
 import { sharedViewSchema } from '../../shared/api/shares';
 import { appFor } from './fixtures/app';
 import { useCleanDatabase } from './fixtures/database';
+import { expectMadeThenWithdrawn } from './fixtures/share-audit';
 import { runBody, useOrganisation } from './fixtures/world';
 import { stackedLoop } from './fixtures/documents';
 
@@ -136,14 +137,6 @@ describe('sharing a comparison of runs', () => {
     expect(gone.status).toBe(404);
     expect(gone.body).toEqual(withdrawn.body);
 
-    const audit = await org.people.owner.agent
-      .get(apiRoutes.audit(org.people.organisationId))
-      .query({ entity: 'share' });
-    const rows = audit.body.entries.filter((e: { entityId: string }) => e.entityId === first.body.id);
-    expect(rows.map((e: { action: string; actor: { id: string } }) => [e.action, e.actor.id])).toEqual([
-      ['share-revoke', org.people.owner.id],
-      ['share', org.people.engineer.id],
-    ]);
-    expect(rows[0].detail).toMatchObject({ kind: 'comparison', subjectId: comparisonId });
+    await expectMadeThenWithdrawn(org.people, first.body.id, { kind: 'comparison', subjectId: comparisonId });
   });
 });

@@ -4,6 +4,7 @@ import type { Auth } from './auth/lucia';
 import type { SignInLimiter } from './auth/rate-limit';
 import type { CaughtMailbox } from './mail/mailbox';
 import type { Mailer } from './mail/mailer';
+import type { StudyQueueHandle } from './studies/server-studies';
 
 export interface AppContext {
   ds: DataSource;
@@ -13,4 +14,6 @@ export interface AppContext {
   mailer: Mailer;
   /** Only while mail goes to the loopback fake: what it caught, for the development mailbox page. */
   mailbox?: CaughtMailbox;
+  /** The job queue for server studies; without it, studies can run in the browser only. */
+  queue?: StudyQueueHandle;
 }

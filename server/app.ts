@@ -20,6 +20,7 @@ import { noteSuspectText, refuseUnstorableText } from './http/text-check';
 import { clientRouter } from './http/static-client';
 import type { CaughtMailbox } from './mail/mailbox';
 import type { Mailer } from './mail/mailer';
+import type { StudyQueueHandle } from './studies/server-studies';
 import { accountRouter } from './routes/account';
 import { auditRouter } from './routes/audit';
 import { invitationsRouter } from './routes/invitations';
@@ -52,6 +53,8 @@ export interface CreateAppOptions {
   mailer?: Mailer;
   /** The fake SMTP server's catch; mounts the development mailbox routes when given. */
   mailbox?: CaughtMailbox;
+  /** The started job queue: server studies are refused without it. */
+  queue?: StudyQueueHandle;
 }
 
 const noMailer: Mailer = {
@@ -67,6 +70,7 @@ export function createApp(opts: CreateAppOptions): express.Express {
     signInLimiter: createSignInLimiter(opts.dataSource),
     mailer: opts.mailer ?? noMailer,
     mailbox: opts.mailbox,
+    queue: opts.queue,
   };
   void prepareDecoy();
   const app = express();

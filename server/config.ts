@@ -68,6 +68,35 @@ export const configSchema = z.object({
     .min(0, { message: 'must be between 0 and 65535' })
     .max(65535, { message: 'must be between 0 and 65535' })
     .default(2525),
+  /** `npm start` runs one study worker beside the web server unless this is "off". */
+  LANEWRIGHT_WORKER: z.enum(['on', 'off'], { message: 'must be "on" or "off"' }).default('on'),
+  /** Engine threads per worker process; one per core when unset. */
+  LANEWRIGHT_WORKER_THREADS: z.coerce
+    .number({ message: 'must be a number' })
+    .int({ message: 'must be a whole number' })
+    .min(1, { message: 'must be between 1 and 64' })
+    .max(64, { message: 'must be between 1 and 64' })
+    .optional(),
+  /** How long one server job may run before it counts as failed and is retried. */
+  LANEWRIGHT_JOB_TIME_LIMIT_SECONDS: z.coerce
+    .number({ message: 'must be a number' })
+    .int({ message: 'must be a whole number' })
+    .min(5, { message: 'must be between 5 and 86000 seconds' })
+    .max(86_000, { message: 'must be between 5 and 86000 seconds' })
+    .default(900),
+  /** How often the queue looks for jobs past their time limit (a worker that died holds its jobs until then). */
+  LANEWRIGHT_QUEUE_CHECK_SECONDS: z.coerce
+    .number({ message: 'must be a number' })
+    .int({ message: 'must be a whole number' })
+    .min(1, { message: 'must be between 1 and 3600 seconds' })
+    .max(3600, { message: 'must be between 1 and 3600 seconds' })
+    .default(30),
+  /** Server studies that took at least this long mail their author when they finish. */
+  LANEWRIGHT_STUDY_MAIL_AFTER_MINUTES: z.coerce
+    .number({ message: 'must be a number' })
+    .min(0, { message: 'must be 0 or more minutes' })
+    .max(10_000, { message: 'must be at most 10000 minutes' })
+    .default(10),
 });
 
 /** Express's `trust proxy` setting: off, a hop count, or trusted addresses. */

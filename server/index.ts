@@ -1,4 +1,5 @@
-// Starts the HTTP server for an already migrated data source. Importing this file starts nothing.
+// Starts the HTTP server for an already migrated data source, with the job queue it submits server
+// studies to and the mailer of their finish notices. Importing this file starts nothing.
 import { once } from 'node:events';
 import type { AddressInfo } from 'node:net';
 import type { DataSource } from 'typeorm';
@@ -7,6 +8,9 @@ import { sweepExpiredSessions } from './auth/session-sweeper';
 import { loadConfig } from './config';
 import type { CaughtMailbox } from './mail/mailbox';
 import { setUpMail } from './mail/mail-setup';
+import { databaseUrlOf } from './db/data-source';
+import { startQueue, stopQueue } from './queue/queue-client';
+import { startFinishNotices } from './studies/finish-notices';
 
 export interface StartServerOptions {
   dataSource: DataSource;
@@ -35,6 +39,9 @@ export async function startServer(opts: StartServerOptions): Promise<RunningServ
     ...config,
     LANEWRIGHT_FAKE_SMTP_PORT: opts.fakeSmtpPort ?? config.LANEWRIGHT_FAKE_SMTP_PORT,
   });
+  const boss = await startQueue(databaseUrlOf(opts.dataSource), {
+    checkSeconds: config.LANEWRIGHT_QUEUE_CHECK_SECONDS,
+  });
   const app = createApp({
     dataSource: opts.dataSource,
     clientDir: opts.clientDir,
@@ -44,19 +51,29 @@ export async function startServer(opts: StartServerOptions): Promise<RunningServ
     allowedHosts: config.ALLOWED_HOSTS,
     mailer: mail.mailer,
     mailbox: mail.mailbox,
+    queue: { boss, timeLimitSeconds: config.LANEWRIGHT_JOB_TIME_LIMIT_SECONDS },
   });
   const server = app.listen(opts.port, opts.host);
   try {
     await once(server, 'listening');
   } catch (error) {
+    await stopQueue(boss);
     await mail.close();
     throw error;
   }
   const stopSweeping = sweepExpiredSessions(opts.dataSource);
   const { port } = server.address() as AddressInfo;
   const host = opts.host.includes(':') ? `[${opts.host}]` : opts.host;
+  const url = `http://${host}:${port}`;
+  const notices = startFinishNotices({
+    ds: opts.dataSource,
+    boss,
+    mailer: mail.mailer,
+    origin: opts.publicOrigin ?? config.PUBLIC_ORIGIN ?? url,
+    mailAfterMinutes: config.LANEWRIGHT_STUDY_MAIL_AFTER_MINUTES,
+  });
   return {
-    url: `http://${host}:${port}`,
+    url,
     mailbox: mail.mailbox,
     mailNote: mail.describe,
     close: async () => {
@@ -65,6 +82,8 @@ export async function startServer(opts: StartServerOptions): Promise<RunningServ
         server.close((error) => (error ? reject(error) : resolve()));
         server.closeAllConnections();
       });
+      await notices.stop();
+      await stopQueue(boss);
       await mail.close();
     },
   };

@@ -3,6 +3,7 @@
 // round listing projects, listing the project's runs and reading a run. Prints requests per second, p50/p95/
 // p99 latency and errors per round and their median; exits non-zero on any error. Bounded in time.
 import 'reflect-metadata';
+import { median, numberOption } from './bench-options';
 import autocannon from 'autocannon';
 import { randomUUID } from 'node:crypto';
 import { loadavg } from 'node:os';
@@ -18,22 +19,14 @@ import { createDatabase, dropDatabase, ensureLocalPostgres } from '../setup/loca
 
 const USERS = 50;
 // Options as `--seconds=30 --rounds=3 --runs=342` (command-line flags, so nothing reads the environment here).
-function option(name: string, fallback: number): number {
-  const flag = process.argv.find((arg) => arg.startsWith(`--${name}=`));
-  const value = flag ? Number(flag.slice(name.length + 3)) : fallback;
-  if (!Number.isFinite(value) || value <= 0) throw new Error(`--${name} must be a positive number (got ${flag})`);
-  return value;
-}
-const SECONDS = option('seconds', 30);
-const ROUNDS = option('rounds', 3);
-const RUNS = option('runs', 342);
+const SECONDS = numberOption('seconds', 30);
+const ROUNDS = numberOption('rounds', 3);
+const RUNS = numberOption('runs', 342);
 
 function percentile(sorted: number[], p: number): number {
   if (sorted.length === 0) return NaN;
   return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
 }
-
-const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
 
 async function seedHistory(ds: ReturnType<typeof createDataSource>): Promise<{ projectId: string; runId: string }> {
   const project = await ds.getRepository(ProjectEntity).findOneOrFail({ where: {} });

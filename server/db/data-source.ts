@@ -18,3 +18,10 @@ export function createDataSource(url: string): DataSource {
     extra: { max: 10 },
   });
 }
+
+/** The URL a data source made here connects to, for other clients of the same database (the job queue). */
+export function databaseUrlOf(ds: DataSource): string {
+  const url = (ds.options as { url?: string }).url;
+  if (!url) throw new Error('this data source was not made from a URL');
+  return url;
+}

@@ -51,3 +51,28 @@ export function alreadyRegisteredMail(to: string, signInLink: string, resetLink:
       `Sign in here:\n${signInLink}\n\nForgot the password? Ask for a new one here:\n${resetLink}${signature}`,
   };
 }
+
+export function studyFinishedMail(
+  to: string,
+  args: {
+    studyName: string;
+    outcome: string;
+    jobsDone: number;
+    jobCount: number;
+    failedJobs: number;
+    took: string;
+    link: string;
+  },
+): OutgoingMail {
+  const failed =
+    args.failedJobs > 0 ? ` ${args.failedJobs} job(s) failed on every attempt; the study page says why.` : '';
+  return {
+    to,
+    subject: `Study finished: ${args.studyName}`,
+    text:
+      `Your study "${args.studyName}" has finished on the server after ${args.took}: ${args.outcome}.\n` +
+      `${args.jobsDone} of ${args.jobCount} jobs have a result.${failed}\n\n` +
+      `See the results:\n${args.link}\n\n` +
+      `Results plan throughput only; guarding, risk assessment and electrical work follow the local codes, the machine's safety standards and licensed practice.${signature}`,
+  };
+}

@@ -10,22 +10,23 @@ import {
   updateStudySchema,
   type SaveJobResultInput,
 } from '../../shared/api/studies';
-import { figuresOf } from '../../shared/studies/replication-summary-json';
 import type { FieldIssue } from '../../shared/api/errors';
 import { loadProject, loadStudy } from '../access/loaders';
 import { requireRole } from '../access/require-role';
 import type { AppContext } from '../app-context';
 import { audited } from '../audit/record-audit';
-import {
-  ScenarioRevisionEntity,
-  StudyEntity,
-  StudyJobResultEntity,
-  StudyPointEntity,
-  type ProjectEntity,
-} from '../db/entities';
-import { badRequest, conflict, forbidden } from '../http/http-error';
+import { ScenarioRevisionEntity, StudyEntity, StudyPointEntity, type ProjectEntity } from '../db/entities';
+import { badRequest, conflict, forbidden, HttpError } from '../http/http-error';
 import { currentUser, loaded } from '../http/request-context';
 import { validate } from '../http/validate';
+import { saveJobResult } from '../studies/save-job-result';
+import {
+  assertServerStudyAllowed,
+  queueStudyRound,
+  unqueueStudy,
+  type StudyQueueHandle,
+} from '../studies/server-studies';
+import { studyProgress } from '../studies/study-progress';
 import { listStudies, pointBlocks, settleStatus, studyDetail, studyListItem } from '../studies/study-queries';
 import type { DataSource } from 'typeorm';
 
@@ -35,6 +36,18 @@ const requireStudyAuthorOrOwner: RequestHandler = (req, _res, next) => {
   if (role === 'owner' || (canEdit(role) && study.createdById === currentUser(req).id)) return next();
   next(forbidden('Only the study’s author or an organisation owner may delete this study.'));
 };
+
+/** Server studies need the job queue, which the web server starts; an app built without it refuses them. */
+function requireQueue(ctx: AppContext): StudyQueueHandle {
+  if (!ctx.queue)
+    throw new HttpError(
+      503,
+      'unavailable',
+      'The server’s job queue is not running, so this study cannot run on the server.',
+      [{ path: 'runOn', message: 'the server’s job queue is not running; run the study in the browser' }],
+    );
+  return ctx.queue;
+}
 
 const pointParamsSchema = z.object({
   id: z.uuid({ message: 'must be a valid id (UUID)' }),
@@ -116,9 +129,11 @@ export function studiesRouter(ctx: AppContext) {
           issues,
         );
       const blockSize = Math.min(body.blockSize ?? body.settings.replications, body.settings.replications);
+      const queue = body.runOn === 'server' ? requireQueue(ctx) : undefined;
       const study = await audited(
         ds,
         async (manager) => {
+          if (queue) await assertServerStudyAllowed(manager, project.organisationId);
           const saved = await manager.getRepository(StudyEntity).save({
             projectId: project.id,
             revisionId: body.revisionId,
@@ -132,6 +147,7 @@ export function studiesRouter(ctx: AppContext) {
             status: 'running',
             pointCount: body.points.length,
             jobCount: body.points.length * Math.ceil(body.settings.replications / blockSize),
+            runOn: body.runOn,
             createdById: user.id,
           });
           await manager.getRepository(StudyPointEntity).insert(
@@ -143,6 +159,7 @@ export function studiesRouter(ctx: AppContext) {
               changes: p.changes,
             })),
           );
+          if (queue) await queueStudyRound(manager, queue, saved);
           return saved;
         },
         (saved) => ({
@@ -151,7 +168,7 @@ export function studiesRouter(ctx: AppContext) {
           action: 'create',
           entity: 'study',
           entityId: saved.id,
-          detail: { kind: body.kind, points: body.points.length },
+          detail: { kind: body.kind, points: body.points.length, runOn: body.runOn },
         }),
       );
       res.status(201).json(await studyDetail(ds, study.id));
@@ -160,6 +177,10 @@ export function studiesRouter(ctx: AppContext) {
 
   router.get('/studies/:id', loadStudy(ctx), async (req, res) => {
     res.json(await studyDetail(ds, loaded(req, 'study').id));
+  });
+
+  router.get('/studies/:id/progress', loadStudy(ctx), async (req, res) => {
+    res.json(await studyProgress(ds, loaded(req, 'study')));
   });
 
   router.get(
@@ -190,20 +211,34 @@ export function studiesRouter(ctx: AppContext) {
         ...(body.name !== undefined && { name: body.name }),
         ...(body.status !== undefined && !finished && { status: body.status }),
       };
-      await audited(ds, (manager) => manager.getRepository(StudyEntity).update({ id: study.id }, changes), {
-        organisationId: study.project?.organisationId ?? null,
-        actorId: currentUser(req).id,
-        action: 'update',
-        entity: 'study',
-        entityId: study.id,
-        detail: changes,
-      });
+      const onServer = study.runOn === 'server' && changes.status !== undefined && changes.status !== study.status;
+      const queue = onServer ? requireQueue(ctx) : undefined;
+      await audited(
+        ds,
+        async (manager) => {
+          if (queue && changes.status === 'running')
+            await assertServerStudyAllowed(manager, study.project?.organisationId ?? '');
+          await manager.getRepository(StudyEntity).update({ id: study.id }, changes);
+          if (queue && changes.status === 'running') await queueStudyRound(manager, queue, study);
+          if (queue && changes.status === 'cancelled') await unqueueStudy(manager, queue, study);
+        },
+        {
+          organisationId: study.project?.organisationId ?? null,
+          actorId: currentUser(req).id,
+          action: 'update',
+          entity: 'study',
+          entityId: study.id,
+          detail: changes,
+        },
+      );
       res.json(await studyListItem(ds, study.id));
     }),
   );
 
   router.delete('/studies/:id', loadStudy(ctx), requireStudyAuthorOrOwner, async (req, res) => {
     const study = loaded(req, 'study');
+    if (study.runOn === 'server' && study.status === 'running' && ctx.queue)
+      await unqueueStudy(ds.manager, ctx.queue, study);
     await audited(ds, (manager) => manager.getRepository(StudyEntity).delete({ id: study.id }), {
       organisationId: study.project?.organisationId ?? null,
       actorId: currentUser(req).id,
@@ -227,29 +262,9 @@ export function studiesRouter(ctx: AppContext) {
           `Invalid input in the request body: ${issues.map((i) => `${i.path} ${i.message}`).join('; ')}`,
           issues,
         );
-      const done = body.outcome === 'done';
-      const inserted = await ds
-        .getRepository(StudyJobResultEntity)
-        .createQueryBuilder()
-        .insert()
-        .values({
-          studyId: study.id,
-          pointIndex: body.pointIndex,
-          first: body.first,
-          count: body.count,
-          outcome: body.outcome,
-          message: done ? null : body.message,
-          engineVersion: done ? body.engineVersion : null,
-          figures: done ? body.summaries.map(figuresOf) : [],
-          summaries: done ? body.summaries : null,
-          events: done ? body.events : null,
-          createdById: currentUser(req).id,
-        })
-        .orIgnore()
-        .execute();
-      const saved = (inserted.raw as unknown[]).length > 0;
-      const settled = await settleStatus(ds, study);
-      res.status(saved ? 201 : 200).json({ saved, ...settled });
+      const saved = await saveJobResult(ds, study.id, body, currentUser(req).id);
+      const { status, jobsDone } = await settleStatus(ds, study);
+      res.status(saved ? 201 : 200).json({ saved, status, jobsDone });
     }),
   );
 

@@ -5,6 +5,7 @@ import type { DataSource } from 'typeorm';
 import { loadConfig } from '../config';
 import { createDataSource } from '../db/data-source';
 import { runMigrations } from '../db/migrate';
+import { prepareQueueSchema } from '../queue/queue-client';
 import { seedDemo } from '../db/seed/demo';
 import { seedDemoPrices } from '../db/seed/demo-prices';
 import { createDatabase, ensureLocalPostgres } from './local-postgres';
@@ -25,8 +26,12 @@ function connectionHelp(url: string, error: unknown): SetupError {
   return new SetupError(`could not connect to ${redactUrl(url)}: ${reason}.${hint}`);
 }
 
-/** Prepares the application database; the returned data source is initialised and registered for clean-up. */
-export async function prepareDatabase(options: { seed: boolean }): Promise<DataSource> {
+/**
+ * Prepares the application database; the returned data source is initialised and registered for clean-up.
+ * `migrations: 'check'` (study workers) refuses a database whose schema is behind instead of migrating it,
+ * so workers starting together on several machines never race to apply the same migration.
+ */
+export async function prepareDatabase(options: { seed: boolean; migrations?: 'apply' | 'check' }): Promise<DataSource> {
   const server = await ensureLocalPostgres();
   onCleanup(() => server.stop());
   const url = server.external ? loadConfig().DATABASE_URL! : server.url(APP_DATABASE);
@@ -42,7 +47,16 @@ export async function prepareDatabase(options: { seed: boolean }): Promise<DataS
     if (dataSource.isInitialized) await dataSource.destroy();
   });
 
+  if (options.migrations === 'check') {
+    if (await dataSource.showMigrations())
+      throw new SetupError(
+        `the database at ${redactUrl(url)} needs migrations first: run \`npm run migrate\` (or \`npm start\`) once with the same DATABASE_URL`,
+      );
+    return dataSource;
+  }
   const applied = await runMigrations(dataSource);
+  // The job queue keeps its own schema, which pg-boss creates and migrates itself.
+  await prepareQueueSchema(url);
   say(
     applied.length > 0
       ? `applied ${applied.length} migration(s): ${applied.join(', ')}`

@@ -3,7 +3,7 @@
 import type { DataSource } from 'typeorm';
 import type { PointBlocks, StudyDetail, StudyListItem, StudyStatus } from '../../shared/api/studies';
 import type { ReplicationSummaryJson } from '../../shared/studies/replication-summary-json';
-import { StudyEntity, StudyJobResultEntity, StudyPointEntity } from '../db/entities';
+import { StudyEntity, StudyJobFailureEntity, StudyJobResultEntity, StudyPointEntity } from '../db/entities';
 import { iso, toUserRef } from '../mappers/common';
 
 type Loaded = StudyEntity & {
@@ -49,6 +49,7 @@ function toListItem(study: Loaded, done: number): StudyListItem {
     blockSize: study.blockSize,
     reduction: study.reduction,
     status: study.status,
+    runOn: study.runOn,
     pointCount: study.pointCount,
     jobCount: study.jobCount,
     jobsDone: done,
@@ -119,19 +120,30 @@ export async function pointBlocks(ds: DataSource, studyId: string, pointIndex: n
   };
 }
 
-/** Once every job has a result the study is done, or done with failed points when any job failed. */
+/**
+ * Once every job has a result (or, on the server, failed on every attempt) the study is done, or done with
+ * failed points. The status changes in one conditional update, so of several workers finishing the last
+ * jobs at once exactly one learns that it finished the study (`finishedNow`), and sends the notice.
+ */
 export async function settleStatus(
   ds: DataSource,
-  study: StudyEntity,
-): Promise<{ status: StudyStatus; jobsDone: number }> {
+  study: Pick<StudyEntity, 'id' | 'jobCount' | 'status'>,
+): Promise<{ status: StudyStatus; jobsDone: number; finishedNow: boolean }> {
   const results = ds.getRepository(StudyJobResultEntity);
   const done = await results.countBy({ studyId: study.id });
-  if (done < study.jobCount) return { status: study.status, jobsDone: done };
+  const failedJobs = await ds.getRepository(StudyJobFailureEntity).countBy({ studyId: study.id });
+  if (done + failedJobs < study.jobCount) return { status: study.status, jobsDone: done, finishedNow: false };
   const failed = await results
     .createQueryBuilder('r')
     .where('r.studyId = :id AND r.outcome <> :done', { id: study.id, done: 'done' })
     .getCount();
-  const status: StudyStatus = failed > 0 ? 'failedPoints' : 'done';
-  if (status !== study.status) await ds.getRepository(StudyEntity).update({ id: study.id }, { status });
-  return { status, jobsDone: done };
+  const status: StudyStatus = failed + failedJobs > 0 ? 'failedPoints' : 'done';
+  const updated = await ds
+    .createQueryBuilder()
+    .update(StudyEntity)
+    .set({ status, finishedAt: () => 'now()' })
+    .where('id = :id AND status <> :status', { id: study.id, status })
+    .returning(['id'])
+    .execute();
+  return { status, jobsDone: done, finishedNow: (updated.raw as unknown[]).length > 0 };
 }

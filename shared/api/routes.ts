@@ -22,6 +22,7 @@ export const apiRoutes = {
   projectStudies: (projectId: string) => `/api/projects/${projectId}/studies`,
   study: (id: string) => `/api/studies/${id}`,
   studyResults: (id: string) => `/api/studies/${id}/results`,
+  studyProgress: (id: string) => `/api/studies/${id}/progress`,
   studyPointBlocks: (id: string, pointIndex: number) => `/api/studies/${id}/points/${pointIndex}/blocks`,
   scenarioTimeStudies: (id: string) => `/api/scenarios/${id}/time-studies`,
   timeStudy: (id: string) => `/api/time-studies/${id}`,

@@ -17,6 +17,8 @@ export const STUDY_STATUSES = ['running', 'done', 'cancelled', 'failedPoints'] a
  */
 export const JOB_OUTCOMES = ['done', 'invalid', 'stopped', 'gridlock', 'skipped'] as const;
 export const FAILED_OUTCOMES = ['invalid', 'stopped', 'gridlock', 'skipped'] as const;
+/** Where a study's jobs run: the author's browser tab, or the server's worker processes. */
+export const STUDY_RUN_PLACES = ['browser', 'server'] as const;
 
 export const STUDY_LIMITS = {
   pointsMax: 400,
@@ -28,8 +30,31 @@ export const STUDY_LIMITS = {
   messageMaxLength: 2_000,
 } as const;
 
+/**
+ * Server studies may be far larger than a tab should carry; the job and hour limits replace the browser's
+ * ones. Every organisation may run `concurrentPerOrganisation` server studies at once.
+ */
+export const SERVER_STUDY_LIMITS = {
+  jobsMax: 10_000,
+  /** About 40 counts × 4 layouts × 30 replications of a 168 h week, with room to spare. */
+  simulatedHoursMax: 1_000_000,
+  concurrentPerOrganisation: 3,
+} as const;
+
+/** Above this many simulated hours the form suggests the server: roughly ten minutes of a two-core laptop. */
+export const SERVER_SUGGESTED_ABOVE_HOURS = 5_000;
+
+/** Simulated hours of a study: points × replications × (hours + warm-up). */
+export function studySimulatedHours(s: {
+  points: readonly unknown[];
+  settings: { replications: number; hours: number; warmupMinutes: number };
+}): number {
+  return s.points.length * s.settings.replications * (s.settings.hours + s.settings.warmupMinutes / 60);
+}
+
 export const studyKindSchema = z.enum(STUDY_KINDS, { error: `must be one of ${STUDY_KINDS.join(', ')}` });
 export const studyStatusSchema = z.enum(STUDY_STATUSES);
+export const studyRunPlaceSchema = z.enum(STUDY_RUN_PLACES, { error: 'must be browser or server' });
 
 export const studyPointSchema = z.object({
   label: z
@@ -63,6 +88,8 @@ export const createStudySchema = z
     blockSize: z.int({ error: 'must be a whole number' }).min(1, 'must be at least 1').optional(),
     /** What-if: the share by which each station's cycle time is shortened (0.1 = 10 %). */
     reduction: z.number().gt(0, 'must be above 0').lt(1, 'must be below 1').optional(),
+    /** The browser runs the jobs in the author's tab; the server queues them for its worker processes. */
+    runOn: studyRunPlaceSchema.default('browser'),
     axes: studyAxesSchema,
     points: z
       .array(studyPointSchema, { error: 'must be a list' })
@@ -70,6 +97,8 @@ export const createStudySchema = z
       .max(STUDY_LIMITS.pointsMax, `a study may have at most ${STUDY_LIMITS.pointsMax} points; use a coarser grid`),
   })
   .superRefine((s, ctx) => {
+    const limits = s.runOn === 'server' ? SERVER_STUDY_LIMITS : STUDY_LIMITS;
+    const where = s.runOn === 'server' ? 'on the server' : 'in the browser (run larger studies on the server)';
     const block = s.blockSize ?? s.settings.replications;
     if (block > s.settings.replications)
       ctx.addIssue({
@@ -78,18 +107,18 @@ export const createStudySchema = z
         message: `must not exceed the replications (${s.settings.replications})`,
       });
     const jobs = s.points.length * Math.ceil(s.settings.replications / Math.min(block, s.settings.replications));
-    if (jobs > STUDY_LIMITS.jobsMax)
+    if (jobs > limits.jobsMax)
       ctx.addIssue({
         code: 'custom',
         path: ['blockSize'],
-        message: `the study would have ${jobs} jobs; at most ${STUDY_LIMITS.jobsMax} are allowed, so use larger blocks or fewer points`,
+        message: `the study would have ${jobs} jobs; at most ${limits.jobsMax} are allowed ${where}, so use larger blocks or fewer points`,
       });
-    const hours = s.points.length * s.settings.replications * (s.settings.hours + s.settings.warmupMinutes / 60);
-    if (hours > STUDY_LIMITS.simulatedHoursMax) {
+    const hours = studySimulatedHours(s);
+    if (hours > limits.simulatedHoursMax) {
       ctx.addIssue({
         code: 'custom',
         path: ['settings', 'hours'],
-        message: `the study would simulate ${Math.round(hours)} hours (points × replications × (hours + warm-up)); at most ${STUDY_LIMITS.simulatedHoursMax} are allowed`,
+        message: `the study would simulate ${Math.round(hours)} hours (points × replications × (hours + warm-up)); at most ${limits.simulatedHoursMax} are allowed ${where}`,
       });
     }
   });
@@ -143,6 +172,7 @@ export const studyListItemSchema = z.object({
   blockSize: z.number().int().positive(),
   reduction: z.number().nullable(),
   status: studyStatusSchema,
+  runOn: studyRunPlaceSchema,
   pointCount: z.number().int().nonnegative(),
   jobCount: z.number().int().nonnegative(),
   jobsDone: z.number().int().nonnegative(),
@@ -183,6 +213,26 @@ export const pointBlocksSchema = z.object({
   pointIndex: z.number().int(),
   engineVersion: z.string().nullable(),
   blocks: z.array(jobBlockSchema),
+});
+
+/** A server job that kept failing (worker crashes, time limit, errors) after its retries. */
+export const failedJobSchema = z.object({
+  pointIndex: z.number().int(),
+  first: z.number().int(),
+  count: z.number().int(),
+  reason: z.string(),
+  failedAt: isoDateSchema,
+});
+
+/** A server study's progress, polled by the study page while it runs. */
+export const studyProgressSchema = z.object({
+  status: studyStatusSchema,
+  jobCount: z.number().int(),
+  jobsDone: z.number().int(),
+  failedJobs: z.array(failedJobSchema),
+  /** From the pace of the last finished jobs; null until there is a pace to go by. */
+  remainingMs: z.number().nonnegative().nullable(),
+  finishedAt: isoDateSchema.nullable(),
 });
 
 export const saveJobResultAnswerSchema = z.object({
@@ -278,6 +328,9 @@ export function gridlockGuard(study: Pick<StudyDetail, 'kind' | 'points' | 'resu
 
 export type StudyKind = z.infer<typeof studyKindSchema>;
 export type StudyStatus = z.infer<typeof studyStatusSchema>;
+export type StudyRunPlace = z.infer<typeof studyRunPlaceSchema>;
+export type FailedJob = z.infer<typeof failedJobSchema>;
+export type StudyProgress = z.infer<typeof studyProgressSchema>;
 export type StudyPointInput = z.input<typeof studyPointSchema>;
 export type CreateStudyInput = z.input<typeof createStudySchema>;
 export type UpdateStudyInput = z.infer<typeof updateStudySchema>;

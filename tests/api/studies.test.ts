@@ -205,7 +205,7 @@ describe('making a study', () => {
     expect(jobs.status).toBe(400);
     expect(jobs.body.error.fields[0]).toEqual({
       path: 'blockSize',
-      message: `the study would have 4100 jobs; at most ${STUDY_LIMITS.jobsMax} are allowed, so use larger blocks or fewer points`,
+      message: `the study would have 4100 jobs; at most ${STUDY_LIMITS.jobsMax} are allowed in the browser (run larger studies on the server), so use larger blocks or fewer points`,
     });
     const atLimit = await org.people.engineer.agent.post(apiRoutes.projectStudies(org.content.projectId)).send(
       studyBody(org.content.revisionId, {

@@ -2,7 +2,7 @@
 // block of replications. Anything a point can get wrong (a changed field outside its schema, more
 // carriers than the track holds, a gridlock) comes back as an outcome with its reason, so a study
 // goes on with its other points. Plain data in and out: a Web Worker, Node or a server process runs it.
-import type { StudyJob } from '../../shared/api/studies';
+import type { SaveJobResultInput, StudyJob } from '../../shared/api/studies';
 import { applyPointChanges } from '../../shared/studies/point-changes';
 import { ENGINE_VERSION, InvalidInputError, isSimulationStopped, runReplicationRange, type RunHooks } from '../engine';
 import { blockToJson, type ReplicationBlockJson } from '../engine/observe/summary-json';
@@ -39,4 +39,24 @@ export async function runStudyJob(
         : { outcome: e.reason === 'gridlock' ? 'gridlock' : 'stopped', message: e.message };
     throw e;
   }
+}
+
+/** A job's answer: the engine's, or `skipped` for a carrier count above one that gridlocked. */
+export type JobAnswer = StudyJobOutcome | { outcome: 'skipped'; message: string };
+
+/** The body that stores a finished job's outcome, as the browser posts it and the server's workers save it. */
+export function jobResultBody(
+  key: Pick<StudyJob, 'pointIndex' | 'first' | 'count'>,
+  answer: Exclude<JobAnswer, { outcome: 'cancelled' }>,
+): SaveJobResultInput {
+  const base = { pointIndex: key.pointIndex, first: key.first, count: key.count };
+  return answer.outcome === 'done'
+    ? {
+        ...base,
+        outcome: 'done',
+        engineVersion: answer.engineVersion,
+        summaries: answer.block.summaries,
+        events: answer.block.events,
+      }
+    : { ...base, outcome: answer.outcome, message: answer.message.slice(0, 2_000) };
 }

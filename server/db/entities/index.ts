@@ -13,6 +13,7 @@ import { SessionEntity } from './session.entity';
 import { SignInAttemptEntity } from './sign-in-attempt.entity';
 import { ShareLinkEntity } from './share-link.entity';
 import { ComparisonEntity } from './comparison.entity';
+import { StudyJobFailureEntity } from './study-job-failure.entity';
 import { StudyJobResultEntity } from './study-job-result.entity';
 import { StudyPointEntity } from './study-point.entity';
 import { StudyEntity } from './study.entity';
@@ -35,6 +36,7 @@ export {
   ShareLinkEntity,
   ComparisonEntity,
   StudyEntity,
+  StudyJobFailureEntity,
   StudyJobResultEntity,
   StudyPointEntity,
   TimeStudyEntity,
@@ -55,6 +57,7 @@ export const entities = [
   StudyEntity,
   StudyPointEntity,
   StudyJobResultEntity,
+  StudyJobFailureEntity,
   AuditEntryEntity,
   SignInAttemptEntity,
   InvitationEntity,

@@ -3,7 +3,7 @@
 // retried save cannot inflate it.
 import { Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
 import { EditableRecord } from './authored';
-import type { StudyKind, StudyStatus } from '../../../shared/api/studies';
+import type { StudyKind, StudyRunPlace, StudyStatus } from '../../../shared/api/studies';
 import type { RunSettings } from '../../../shared/scenario/run-settings';
 import { ProjectEntity } from './project.entity';
 import { ScenarioRevisionEntity } from './scenario-revision.entity';
@@ -57,4 +57,21 @@ export class StudyEntity extends EditableRecord {
 
   @Column({ type: 'integer', name: 'job_count' })
   jobCount!: number;
+
+  @Column({ type: 'text', name: 'run_on', default: 'browser' })
+  runOn!: StudyRunPlace;
+
+  /**
+   * Server studies: which enqueueing of the jobs is current. Resuming enqueues the pending jobs again under
+   * new queue ids, so jobs of an earlier round that are still about are recognised and dropped.
+   */
+  @Column({ type: 'integer', name: 'queue_round', default: 0 })
+  queueRound!: number;
+
+  /** Server studies: when the current round was queued, for the time taken and the finish mail. */
+  @Column({ type: 'timestamptz', name: 'queued_at', nullable: true })
+  queuedAt!: Date | null;
+
+  @Column({ type: 'timestamptz', name: 'finished_at', nullable: true })
+  finishedAt!: Date | null;
 }

@@ -4,6 +4,7 @@ import { RevisionImmutability1796189683214 } from './1796189683214-RevisionImmut
 import { TeamAndSharing1796216390870 } from './1796216390870-TeamAndSharing';
 import { TimeStudies1796193256066 } from './1796193256066-TimeStudies';
 import { Studies1796216413737 } from './1796216413737-Studies';
+import { StudyQueue1796227373997 } from './1796227373997-StudyQueue';
 import { PriceLists1796205600000 } from './1796205600000-PriceLists';
 import { SignInAttempts1796210000000 } from './1796210000000-SignInAttempts';
 import { StoredChecks1796210000001 } from './1796210000001-StoredChecks';
@@ -20,5 +21,6 @@ export const migrations = [
   TeamAndSharing1796216390870,
   Studies1796216413737,
   ShareStudies1796220000000,
+  StudyQueue1796227373997,
   ShareComparisons1796230000000,
 ];

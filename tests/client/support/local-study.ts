@@ -37,6 +37,7 @@ export async function localSizingStudy(
     projectId: uuid(0),
     name: definition.name,
     kind: 'carrierSizing',
+    runOn: 'browser',
     revisionId: uuid(n),
     scenarioId: uuid(n),
     scenarioName,

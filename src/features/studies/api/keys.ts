@@ -6,4 +6,5 @@ export const studyKeys = {
   list: (projectId: string) => [...studyKeys.lists(), projectId] as const,
   details: () => [...studyKeys.all, 'detail'] as const,
   detail: (id: string) => [...studyKeys.details(), id] as const,
+  progress: (id: string) => [...studyKeys.detail(id), 'progress'] as const,
 };

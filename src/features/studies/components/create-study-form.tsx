@@ -9,7 +9,16 @@ import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
 import { isApiRequestError } from '../../../lib/api-client';
 import { useCreateStudy } from '../api/create-study';
-import { defaultForm, emptyAxis, studyInput, type AxisForm, type StudyForm } from '../utils/study-form';
+import {
+  defaultForm,
+  emptyAxis,
+  formHours,
+  runPlaceOf,
+  studyInput,
+  type AxisForm,
+  type StudyForm,
+} from '../utils/study-form';
+import { RunPlaceField } from './run-place-field';
 import { KIND_HINTS, KIND_LABELS } from '../utils/labels';
 
 export type ScenarioChoice = { id: string; name: string; revisionId: string; revisionNumber: number };
@@ -131,6 +140,7 @@ export function CreateStudyForm({
     setForm((f) => ({ ...defaultForm(f.kind, scenario), name: f.name, hours: f.hours, replications: f.replications }));
   }
   const set = (patch: Partial<StudyForm>) => setForm((f) => ({ ...f, ...patch }));
+  const hours = scenario ? formHours(form, scenario) : null;
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
@@ -249,6 +259,12 @@ export function CreateStudyForm({
         />
         Same random numbers at every point (differences between points are then paired and sharper)
       </label>
+      <RunPlaceField
+        value={runPlaceOf(form, hours)}
+        chosen={form.runOn !== 'auto'}
+        hours={hours}
+        onChange={(runOn) => set({ runOn })}
+      />
       {error && (
         <ErrorBanner title="The study was not made">
           {isApiRequestError(error) && error.fields.length > 0 ? (

@@ -1,5 +1,4 @@
-// One bar for the whole study: jobs done of all jobs, the time left at this session's pace, and
-// Cancel or Resume.
+// One bar for the whole study: jobs done of all jobs, where they run, the time left, and Cancel or Resume.
 import { Button } from '../../../components/ui/button';
 import { formatDuration } from '../../../lib/format';
 
@@ -8,12 +7,13 @@ interface StudyProgressProps {
   total: number;
   running: boolean;
   remainingMs: number | null;
-  workers: number;
+  /** Where the jobs run, for the progress line: "on 4 cores", "on the server’s workers". */
+  place: string;
   onCancel?: () => void;
   onResume?: () => void;
 }
 
-export function StudyProgress({ done, total, running, remainingMs, workers, onCancel, onResume }: StudyProgressProps) {
+export function StudyProgress({ done, total, running, remainingMs, place, onCancel, onResume }: StudyProgressProps) {
   const percent = total > 0 ? Math.round((done / total) * 100) : 0;
   return (
     <div
@@ -22,7 +22,7 @@ export function StudyProgress({ done, total, running, remainingMs, workers, onCa
     >
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <p className="font-semibold text-ink" aria-live="polite">
-          {done} of {total} jobs done{running ? ` · running on ${workers} ${workers === 1 ? 'core' : 'cores'}` : ''}
+          {done} of {total} jobs done{running ? ` · running ${place}` : ''}
         </p>
         {running && onCancel && (
           <Button variant="secondary" onClick={onCancel}>

@@ -7,10 +7,12 @@ import type { Scenario } from '../../../../shared/scenario/scenario';
 import { hasFailed, pointStatistics } from '../../../../workers/studies/point-statistics';
 import { ErrorBanner } from '../../../components/ui/error-banner';
 import { sharedEnginePool } from '../../../lib/engine/engine-pool';
+import { formatCount } from '../../../lib/format';
 import { useStudyRunner } from '../hooks/use-study-runner';
 import { KIND_LABELS, STATUS_LABELS } from '../utils/labels';
 import { CarrierSizingResults } from './carrier-sizing-results';
 import { PointTable } from './point-table';
+import { ServerStudyProgress } from './server-study-progress';
 import { StudyProgress } from './study-progress';
 import { SweepResults } from './sweep-results';
 import { WhatIfResults } from './what-if-results';
@@ -28,7 +30,9 @@ export function StudyView({ study, scenario, documents, mayRun }: StudyViewProps
   const stats = useMemo(() => pointStatistics(study), [study]);
   const pending = pendingJobs(study).length;
   const { start, running } = runner;
-  const shouldRun = mayRun && study.status === 'running' && pending > 0 && !running && !runner.held && !runner.problem;
+  const inBrowser = study.runOn === 'browser';
+  const shouldRun =
+    inBrowser && mayRun && study.status === 'running' && pending > 0 && !running && !runner.held && !runner.problem;
   useEffect(() => {
     if (shouldRun) start();
   }, [shouldRun, start]);
@@ -41,15 +45,16 @@ export function StudyView({ study, scenario, documents, mayRun }: StudyViewProps
         {KIND_LABELS[study.kind]} of {study.scenarioName}, revision {study.revisionNumber}: {study.pointCount} points ×{' '}
         {s.replications} replications of {s.hours} h after {s.warmupMinutes} min warm-up, seed {String(s.seed)}
         {study.commonRandomNumbers ? ', the same random numbers at every point' : ', separate random numbers per point'}
-        . Status: {STATUS_LABELS[study.status]}.
+        . Runs {inBrowser ? 'in the browser' : 'on the server'}. Status: {STATUS_LABELS[study.status]}.
       </p>
-      {(pending > 0 || running) && (
+      {!inBrowser && <ServerStudyProgress study={study} mayRun={mayRun} />}
+      {inBrowser && (pending > 0 || running) && (
         <StudyProgress
           done={runner.running ? runner.done : study.jobsDone}
           total={study.jobCount}
           running={runner.running}
           remainingMs={runner.remainingMs}
-          workers={sharedEnginePool().size}
+          place={`in this browser on ${formatCount(sharedEnginePool().size, 'core')}`}
           onCancel={mayRun ? () => void runner.cancel() : undefined}
           onResume={mayRun && (study.status === 'cancelled' || runner.held) ? () => void runner.resume() : undefined}
         />

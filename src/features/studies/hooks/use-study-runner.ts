@@ -13,7 +13,7 @@ import {
   type StudyJob,
 } from '../../../../shared/api/studies';
 import type { Progress } from '../../../../workers/engine';
-import type { StudyJobOutcome } from '../../../../workers/simulation.worker';
+import { jobResultBody, type JobAnswer } from '../../../../workers/studies/run-study-job';
 import { isCancelled, sharedEnginePool, type PoolSession } from '../../../lib/engine/engine-pool';
 import { saveJobResult } from '../api/save-job-result';
 import { studyKeys } from '../api/keys';
@@ -43,22 +43,6 @@ async function saveWithRetry(studyId: string, body: SaveJobResultInput): Promise
       await new Promise((resolve) => setTimeout(resolve, 500 * attempt));
     }
   }
-}
-
-/** A job's answer: the engine's, or `skipped` for a carrier count above one that gridlocked. */
-type JobAnswer = StudyJobOutcome | { outcome: 'skipped'; message: string };
-
-function resultBody(job: StudyJob, answer: Exclude<JobAnswer, { outcome: 'cancelled' }>): SaveJobResultInput {
-  const key = { pointIndex: job.pointIndex, first: job.first, count: job.count };
-  return answer.outcome === 'done'
-    ? {
-        ...key,
-        outcome: 'done',
-        engineVersion: answer.engineVersion,
-        summaries: answer.block.summaries,
-        events: answer.block.events,
-      }
-    : { ...key, outcome: answer.outcome, message: answer.message.slice(0, 2_000) };
 }
 
 export function useStudyRunner(study: StudyDetail | undefined, documents: Record<string, unknown> | undefined) {
@@ -126,7 +110,7 @@ export function useStudyRunner(study: StudyDetail | undefined, documents: Record
       inFlight.delete(k);
       if (answer.outcome === 'cancelled' || own.isCancelled) return;
       guard.record(job, answer.outcome);
-      await saveWithRetry(study.id, resultBody(job, answer));
+      await saveWithRetry(study.id, jobResultBody(job, answer));
       finished++;
       done++;
       update();

@@ -1,6 +1,12 @@
 // The create-study form's values and how they become the API's study definition. Kept apart from
 // the component so the building rules (defaults, grids, the what-if points) are plain functions.
-import type { CreateStudyInput, StudyKind } from '../../../../shared/api/studies';
+import {
+  SERVER_SUGGESTED_ABOVE_HOURS,
+  studySimulatedHours,
+  type CreateStudyInput,
+  type StudyKind,
+  type StudyRunPlace,
+} from '../../../../shared/api/studies';
 import type { Scenario } from '../../../../shared/scenario/scenario';
 import { sweepableFields } from '../../../../shared/studies/sweepable-fields';
 import {
@@ -27,6 +33,8 @@ export type StudyForm = {
   carrierPoints: string;
   axes: AxisForm[];
   reductionPercent: string;
+  /** `auto` until the user chooses: then the study's size decides. */
+  runOn: StudyRunPlace | 'auto';
 };
 
 export function emptyAxis(): AxisForm {
@@ -48,6 +56,7 @@ export function defaultForm(kind: StudyKind, scenario: Scenario | undefined): St
     carrierPoints: String(SIZING_DEFAULTS.gridPoints),
     axes: [emptyAxis()],
     reductionPercent: '10',
+    runOn: 'auto',
   };
 }
 
@@ -72,17 +81,54 @@ const KIND_NAMES: Record<StudyKind, string> = {
   whatIf: 'Speed-up ranking',
 };
 
-/** About eight jobs at least, so every worker has work even when a study has few points. */
+/** A server job simulates about this many hours at most, so one job stays well inside its time limit. */
+export const SERVER_JOB_HOURS = 200;
+
+/**
+ * About eight jobs at least, so every worker has work even when a study has few points; on the server,
+ * also short jobs, so many workers share a long study and a lost job costs little.
+ */
 function withBlockSize(input: CreateStudyInput): CreateStudyInput {
-  const replications = input.settings.replications;
+  const { replications, hours, warmupMinutes } = input.settings;
   if (typeof replications !== 'number' || !Number.isInteger(replications) || replications < 1) return input;
   const jobsPerPoint = Math.max(1, Math.ceil(8 / Math.max(1, input.points.length)));
-  return { ...input, blockSize: Math.ceil(replications / Math.min(jobsPerPoint, replications)) };
+  let blockSize = Math.ceil(replications / Math.min(jobsPerPoint, replications));
+  const perReplication = (hours ?? 0) + (warmupMinutes ?? 0) / 60;
+  if (input.runOn === 'server' && perReplication > 0)
+    blockSize = Math.max(1, Math.min(blockSize, Math.floor(SERVER_JOB_HOURS / perReplication)));
+  return { ...input, blockSize };
+}
+
+/** Simulated hours of the form's study, or null while a number in it is unreadable. */
+export function formHours(form: StudyForm, scenario: Scenario): number | null {
+  let built: CreateStudyInput;
+  try {
+    built = definition(form, scenario, '');
+  } catch {
+    return null;
+  }
+  const { points, settings } = built;
+  const hours = studySimulatedHours({
+    points,
+    settings: {
+      replications: settings.replications ?? 0,
+      hours: settings.hours ?? 0,
+      warmupMinutes: settings.warmupMinutes ?? 0,
+    },
+  });
+  return Number.isFinite(hours) && hours >= 0 ? hours : null;
+}
+
+/** Where the study runs: the user's choice, or else the server once the study is large. */
+export function runPlaceOf(form: StudyForm, hours: number | null): StudyRunPlace {
+  if (form.runOn !== 'auto') return form.runOn;
+  return hours !== null && hours > SERVER_SUGGESTED_ABOVE_HOURS ? 'server' : 'browser';
 }
 
 /** The request for the form's values; numbers the user left unreadable go to the server as they are, to be named there. */
 export function studyInput(form: StudyForm, scenario: Scenario, revisionId: string): CreateStudyInput {
-  return withBlockSize(definition(form, scenario, revisionId));
+  const input = definition(form, scenario, revisionId);
+  return withBlockSize({ ...input, runOn: runPlaceOf(form, formHours(form, scenario)) });
 }
 
 function definition(form: StudyForm, scenario: Scenario, revisionId: string): CreateStudyInput {

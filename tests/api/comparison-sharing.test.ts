@@ -65,10 +65,12 @@ describe('sharing a comparison of runs', () => {
     expect(listed.body.map((s: { id: string }) => s.id)).toEqual([made.body.id]);
   });
 
-  it('a viewer may store a comparison but not share it; an outsider gets 404 for runs and comparison', async () => {
+  it('any member may store a comparison, a viewer may not share it; an outsider gets 404 for both', async () => {
     const runIds = [org.content.runId, ...(await moreRuns(1))];
     const asViewer = await org.people.viewer.agent.post(apiRoutes.comparisons).send({ runIds });
     expect(asViewer.status).toBe(200);
+    const asOwner = await org.people.owner.agent.post(apiRoutes.comparisons).send({ runIds });
+    expect(asOwner.body.id).toBe(asViewer.body.id);
     const body = { kind: 'comparison', subjectId: asViewer.body.id, expiresInDays: 7 };
     expect((await org.people.viewer.agent.post(apiRoutes.shares).send(body)).status).toBe(403);
     expect((await org.people.outsider.agent.post(apiRoutes.shares).send(body)).status).toBe(404);

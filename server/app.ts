@@ -34,6 +34,7 @@ import { runsRouter } from './routes/runs';
 import { scenariosRouter } from './routes/scenarios';
 import { studiesRouter } from './routes/studies';
 import { sharesRouter } from './routes/shares';
+import { comparisonsRouter } from './routes/comparisons';
 import { timeStudiesRouter } from './routes/time-studies';
 import { exceptTimeStudyUploads } from './time-studies/upload-route';
 
@@ -110,6 +111,7 @@ export function createApp(opts: CreateAppOptions): express.Express {
     invitationsRouter,
     accountRouter,
     sharesRouter,
+    comparisonsRouter,
     priceListsRouter,
     auditRouter,
     timeStudiesRouter,

@@ -3,7 +3,8 @@
 // one more value in ShareKind and the table's check constraint (a migration).
 import type { DataSource } from 'typeorm';
 import type { ShareKind, SharedView } from '../../shared/api/shares';
-import { RunEntity, ScenarioRevisionEntity, StudyEntity } from '../db/entities';
+import { organisationsOfRuns } from '../comparisons/comparison-runs';
+import { ComparisonEntity, RunEntity, ScenarioRevisionEntity, StudyEntity } from '../db/entities';
 import { runDetail } from '../routes/run-queries';
 import { studyDetail } from '../studies/study-queries';
 
@@ -41,6 +42,26 @@ export const shareSubjects: Record<ShareKind, ShareSubject> = {
       const study = await studyDetail(ds, subjectId);
       const revision = await ds.getRepository(ScenarioRevisionEntity).findOneByOrFail({ id: study.revisionId });
       return { kind: 'study', ...base, study: { ...study, createdBy: null }, document: revision.document };
+    },
+  },
+  comparison: {
+    what: 'The comparison',
+    async organisationOf(ds, subjectId) {
+      const comparison = await ds.getRepository(ComparisonEntity).findOneBy({ id: subjectId });
+      if (!comparison) return null;
+      // A run deleted (or moved away) since makes the whole comparison unavailable.
+      const owners = await organisationsOfRuns(ds, comparison.runIds);
+      return owners.every((owner) => owner === comparison.organisationId) ? comparison.organisationId : null;
+    },
+    async view(ds, subjectId, base) {
+      const comparison = await ds.getRepository(ComparisonEntity).findOneByOrFail({ id: subjectId });
+      const runs = [];
+      for (const runId of comparison.runIds) {
+        const run = await runDetail(ds, runId);
+        const revision = await ds.getRepository(ScenarioRevisionEntity).findOneByOrFail({ id: run.revisionId });
+        runs.push({ run: { ...run, createdBy: null }, document: revision.document });
+      }
+      return { kind: 'comparison', ...base, runs };
     },
   },
 };

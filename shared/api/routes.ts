@@ -39,6 +39,7 @@ export const apiRoutes = {
   invitationAccept: '/api/invitations/accept',
   audit: (organisationId: string) => `/api/organisations/${organisationId}/audit`,
   auditCsv: (organisationId: string) => `/api/organisations/${organisationId}/audit.csv`,
+  comparisons: '/api/comparisons',
   shares: '/api/shares',
   share: (id: string) => `/api/shares/${id}`,
   sharedView: '/api/shared/view',

@@ -1,11 +1,11 @@
-// Read-only share links. The entity is generic by kind: a run or a study is shared today.
+// Read-only share links. The entity is generic by kind: a run, a study or a stored comparison of runs.
 import { z } from 'zod';
 import { isoDateSchema, userRefSchema, uuidSchema } from './common';
 import { scenarioSchema } from '../scenario/scenario';
 import { runDetailSchema } from './runs';
 import { studyDetailSchema } from './studies';
 
-export const shareKindSchema = z.enum(['run', 'study'], { message: 'must be run or study' });
+export const shareKindSchema = z.enum(['run', 'study', 'comparison'], { message: 'must be run, study or comparison' });
 export type ShareKind = z.infer<typeof shareKindSchema>;
 
 export const SHARE_MAX_DAYS = 90;
@@ -50,6 +50,13 @@ export const sharedViewSchema = z.discriminatedUnion('kind', [
     study: studyDetailSchema,
     /** The scenario revision the study varies, which its charts draw on. */
     document: scenarioSchema,
+  }),
+  z.object({
+    kind: z.literal('comparison'),
+    expiresAt: isoDateSchema,
+    organisationName: z.string(),
+    /** The compared runs in the order shown, each with the scenario revision it was computed from. */
+    runs: z.array(z.object({ run: runDetailSchema, document: scenarioSchema })),
   }),
 ]);
 

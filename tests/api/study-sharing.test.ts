@@ -7,6 +7,7 @@ import { apiRoutes } from '../../shared/api/routes';
 import { sharedViewSchema } from '../../shared/api/shares';
 import { appFor, signUp } from './fixtures/app';
 import { useCleanDatabase } from './fixtures/database';
+import { expectMadeThenWithdrawn } from './fixtures/share-audit';
 import { useOrganisation } from './fixtures/world';
 
 const db = useCleanDatabase({ truncate: false });
@@ -77,14 +78,6 @@ describe('sharing a study', () => {
     expect(gone.status).toBe(404);
     expect(gone.body).toEqual(withdrawn.body);
 
-    const audit = await org.people.owner.agent
-      .get(apiRoutes.audit(org.people.organisationId))
-      .query({ entity: 'share' });
-    const rows = audit.body.entries.filter((e: { entityId: string }) => e.entityId === first.body.id);
-    expect(rows.map((e: { action: string; actor: { id: string } }) => [e.action, e.actor.id])).toEqual([
-      ['share-revoke', org.people.owner.id],
-      ['share', org.people.engineer.id],
-    ]);
-    expect(rows[1].detail).toMatchObject({ kind: 'study', subjectId: studyId });
+    await expectMadeThenWithdrawn(org.people, first.body.id, { kind: 'study', subjectId: studyId });
   });
 });

@@ -12,6 +12,7 @@ import { ScenarioEntity } from './scenario.entity';
 import { SessionEntity } from './session.entity';
 import { SignInAttemptEntity } from './sign-in-attempt.entity';
 import { ShareLinkEntity } from './share-link.entity';
+import { ComparisonEntity } from './comparison.entity';
 import { StudyJobFailureEntity } from './study-job-failure.entity';
 import { StudyJobResultEntity } from './study-job-result.entity';
 import { StudyPointEntity } from './study-point.entity';
@@ -33,6 +34,7 @@ export {
   SessionEntity,
   SignInAttemptEntity,
   ShareLinkEntity,
+  ComparisonEntity,
   StudyEntity,
   StudyJobFailureEntity,
   StudyJobResultEntity,
@@ -61,4 +63,5 @@ export const entities = [
   InvitationEntity,
   OneTimeTokenEntity,
   ShareLinkEntity,
+  ComparisonEntity,
 ];

@@ -1,4 +1,4 @@
-// A read-only link to one thing (a run today) for someone without an account. Only the token's SHA-256
+// A read-only link to one thing (a run, a study or a comparison of runs) for someone without an account. Only the token's SHA-256
 // is stored, so the table alone opens nothing.
 import { Check, Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { ShareKind } from '../../../shared/api/shares';
@@ -6,7 +6,7 @@ import { OrganisationEntity } from './organisation.entity';
 import { UserEntity } from './user.entity';
 
 @Entity({ name: 'share_links' })
-@Check('CHK_share_links_kind', `kind IN ('run', 'study')`)
+@Check('CHK_share_links_kind', `kind IN ('run', 'study', 'comparison')`)
 @Index('IDX_share_links_subject', ['kind', 'subjectId'])
 @Index('IDX_share_links_organisation', ['organisationId'])
 export class ShareLinkEntity {

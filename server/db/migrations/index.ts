@@ -10,6 +10,7 @@ import { SignInAttempts1796210000000 } from './1796210000000-SignInAttempts';
 import { StoredChecks1796210000001 } from './1796210000001-StoredChecks';
 import { ShareStudies1796220000000 } from './1796220000000-ShareStudies';
 import { ConveyorMode1796230000000 } from './1796230000000-ConveyorMode';
+import { ShareComparisons1796231000000 } from './1796231000000-ShareComparisons';
 
 export const migrations = [
   InitialSchema1796189683213,
@@ -23,4 +24,5 @@ export const migrations = [
   ShareStudies1796220000000,
   StudyQueue1796227373997,
   ConveyorMode1796230000000,
+  ShareComparisons1796231000000,
 ];

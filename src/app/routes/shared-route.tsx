@@ -1,7 +1,10 @@
-// /shared#<token>: what a share link opens, without signing in. It shows the shared run's results or the
-// shared study's answer and nothing around them: no navigation into the organisation, no control that
+// /shared#<token>: what a share link opens, without signing in. It shows the shared run's results, the
+// shared study's answer or the shared comparison of runs, and nothing around them: no navigation into the organisation, no control that
 // changes anything.
 import { useMemo } from 'react';
+import { CompareView } from '../../features/compare/components/compare-view';
+import { compareItemsOf, stepNamesOf } from './compare/use-comparison-data';
+import { COMPARE_QUESTION } from './compare/question';
 import type { SharedView } from '../../../shared/api/shares';
 import { ErrorBanner } from '../../components/ui/error-banner';
 import { PageHeader } from '../../components/ui/page-header';
@@ -38,6 +41,28 @@ function SharedStudy({ view }: { view: Extract<SharedView, { kind: 'study' }> })
   );
 }
 
+function SharedComparison({ runs }: { runs: Extract<SharedView, { kind: 'comparison' }>['runs'] }) {
+  const items = useMemo(
+    () =>
+      compareItemsOf(
+        runs.map((r) => r.run),
+        runs.map((r) => r.document),
+      ),
+    [runs],
+  );
+  const stepNames = useMemo(() => stepNamesOf(runs.map((r) => r.document)), [runs]);
+  // Prices are the organisation's own and stay with it: the visitor sees results, footprints and drawings.
+  return (
+    <>
+      <PageHeader
+        title="Compared layouts"
+        description={`${runs.length} stored runs side by side, with 95 % intervals on their differences.`}
+      />
+      <CompareView items={items} stepNames={stepNames} question={COMPARE_QUESTION} costSection={null} />
+    </>
+  );
+}
+
 export function SharedRoute() {
   const token = useLinkToken();
   const view = useSharedView(token);
@@ -56,7 +81,9 @@ export function SharedRoute() {
   return (
     <div className="flex flex-col gap-8 overflow-x-clip">
       <SharedViewBanner organisationName={view.data.organisationName} expiresAt={view.data.expiresAt} />
-      {view.data.kind === 'run' ? <SharedRun run={view.data.run} /> : <SharedStudy view={view.data} />}
+      {view.data.kind === 'run' && <SharedRun run={view.data.run} />}
+      {view.data.kind === 'study' && <SharedStudy view={view.data} />}
+      {view.data.kind === 'comparison' && <SharedComparison runs={view.data.runs} />}
     </div>
   );
 }

@@ -11,6 +11,8 @@ import { useCanEdit } from '../../../lib/session/use-can-edit';
 import { CompareSetup } from '../../../features/compare/components/compare-setup';
 import { CompareView } from '../../../features/compare/components/compare-view';
 import { COMPARE_LIMITS } from '../../../features/compare/utils/comparison';
+import { useStoredComparison } from '../../../features/compare/api/store-comparison';
+import { SharePanel } from '../../../features/sharing/components/share-panel';
 import { useRunsPage } from '../../../features/runs/api/get-runs';
 import { RUNS_PAGE_MAX } from '../../../../shared/api/runs';
 import { useScenarios } from '../../../features/scenarios/api/get-scenarios';
@@ -36,11 +38,13 @@ export function CompareRoute() {
     [navigate, projectId],
   );
   const scenarioRuns = useScenarioRuns(showRuns);
+  const comparing = runIds.length >= COMPARE_LIMITS.min;
+  // Stored only once every run has loaded, so a run that failed to load is not asked for twice.
+  const stored = useStoredComparison(runIds, comparing && Boolean(data.items));
 
   if (data.project.isPending) return <PageSpinner label="Loading the project…" />;
   if (data.project.isError)
     return <LoadError what="the project" error={data.project.error} onRetry={() => void data.project.refetch()} />;
-  const comparing = runIds.length >= COMPARE_LIMITS.min;
 
   return (
     <div className="flex flex-col gap-8 overflow-x-clip">
@@ -112,6 +116,10 @@ export function CompareRoute() {
             />
           }
         />
+      )}
+      {comparing && stored.isError && <LoadError what="the comparison's share links" error={stored.error} />}
+      {comparing && data.items && stored.data && (
+        <SharePanel kind="comparison" subjectId={stored.data.id} mayShare={mayEdit} />
       )}
     </div>
   );

@@ -6,6 +6,7 @@ import { useMemo } from 'react';
 import type { PriceList } from '../../../../shared/api/price-lists';
 import type { RunDetail } from '../../../../shared/api/runs';
 import type { Revision } from '../../../../shared/api/scenarios';
+import type { Scenario } from '../../../../shared/scenario/scenario';
 import { billOf, costPerHourlyPart, quantitiesOf } from '../../../../shared/costs/bill-of-materials';
 import type { CompareItem } from '../../../features/compare/components/compare-view';
 import type { RunCost } from '../../../features/compare/utils/answer';
@@ -38,6 +39,30 @@ function detailOf(run: RunDetail): string {
   const carriers = run.results.carriers.count;
   return `revision ${run.revisionNumber}, ${carriers} carriers, seed ${run.seed}, ${s.replications} × ${s.hours} h after ${s.warmupMinutes} min warm-up`;
 }
+
+/** The comparison's columns: one per run, with its scenario revision's drawing once that has loaded. */
+export function compareItemsOf(runs: readonly RunDetail[], documents: readonly (Scenario | null)[]): CompareItem[] {
+  const labels = labelsOf(runs);
+  return runs.map((run, i) => {
+    const document = documents[i] ?? null;
+    return {
+      id: run.id,
+      label: labels[i],
+      detail: detailOf(run),
+      result: run.results,
+      document,
+      balance: document ? balanceSteps(document.steps) : null,
+      drawing: document ? (
+        <LayoutDrawing document={document} />
+      ) : (
+        <p className="text-sm text-ink-soft">Loading the drawing…</p>
+      ),
+    };
+  });
+}
+
+export const stepNamesOf = (documents: readonly (Scenario | null)[]) =>
+  new Map(documents.flatMap((d) => d?.steps.map((s) => [s.id, s.name] as const) ?? []));
 
 function priced(items: readonly CompareItem[], priceList: PriceList | null) {
   if (!priceList) return { scenarios: [] as PricedScenario[], costs: undefined };
@@ -80,31 +105,17 @@ export function useComparisonData(projectId: string, runIds: readonly string[]) 
   // Null while loading, so an empty comparison never stands in for one still on its way.
   const runKey = loaded ? loaded.map((r) => r.id).join() : null;
   const revisionKey = revisionData.map((r) => r?.id ?? '').join();
-  const items = useMemo<CompareItem[] | null>(() => {
-    if (!loaded) return null;
-    const labels = labelsOf(loaded);
-    return loaded.map((run, i) => {
-      const revision: Revision | undefined = revisionData[i];
-      return {
-        id: run.id,
-        label: labels[i],
-        detail: detailOf(run),
-        result: run.results,
-        document: revision?.document ?? null,
-        balance: revision ? balanceSteps(revision.document.steps) : null,
-        drawing: revision ? (
-          <LayoutDrawing document={revision.document} />
-        ) : (
-          <p className="text-sm text-ink-soft">Loading the drawing…</p>
-        ),
-      };
-    });
-  }, [runKey, revisionKey]);
-
-  const stepNames = useMemo(
-    () => new Map(revisionData.flatMap((r) => r?.document.steps.map((s) => [s.id, s.name] as const) ?? [])),
-    [revisionKey],
+  const items = useMemo(
+    () =>
+      loaded
+        ? compareItemsOf(
+            loaded,
+            revisionData.map((r: Revision | undefined) => r?.document ?? null),
+          )
+        : null,
+    [runKey, revisionKey],
   );
+  const stepNames = useMemo(() => stepNamesOf(revisionData.map((r) => r?.document ?? null)), [revisionKey]);
   const list = priceList.data?.priceList ?? null;
   const pricing = useMemo(() => (items ? priced(items, list) : { scenarios: [], costs: undefined }), [items, list]);
 

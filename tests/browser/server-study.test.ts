@@ -3,23 +3,19 @@
 // runs the jobs, and reads the recommendation once the workers finish. The tab plays no part in the work.
 import { afterAll, describe, expect, it } from 'vitest';
 import { databaseUrlOf } from '../../server/db/data-source';
-import { startStudyWorker, type StudyWorker } from '../../server/worker/study-worker';
+import { startWorkerProcess, type WorkerProcess } from '../../server/worker/worker-process';
 import { screenshot, useAppInBrowser } from '../support/browser';
 
 const DEMO_PROJECT = 'Cartridge line layout study';
 const STUDY_TIMEOUT = 240_000;
 
-let worker: StudyWorker | undefined;
+// A worker process of its own, as `npm run worker` starts it: its engine threads load TypeScript
+// through tsx, which the test runner's own threads cannot.
+let worker: WorkerProcess | undefined;
 const session = useAppInBrowser({
   viewport: { width: 1280, height: 900 },
   prepare: async (app) => {
-    worker = await startStudyWorker({
-      ds: app.dataSource,
-      url: databaseUrlOf(app.dataSource),
-      threads: 2,
-      checkSeconds: 5,
-      log: () => undefined,
-    });
+    worker = await startWorkerProcess(databaseUrlOf(app.dataSource), { LANEWRIGHT_WORKER_THREADS: '2' });
   },
 });
 

@@ -26,7 +26,8 @@ import { startWorkerProcess, type WorkerProcess } from '../../server/worker/work
 
 /** Short, so a killed worker's job comes back soon; long enough for any one job here. */
 const TIME_LIMIT_SECONDS = 8;
-const SETTINGS = { hours: 0.25, warmupMinutes: 1, replications: 8, seed: 5 };
+// Jobs long enough (a few tenths of a second each) that the killed worker is always in the middle of one.
+const SETTINGS = { hours: 12, warmupMinutes: 1, replications: 8, seed: 5 };
 
 const study = (revisionId: string, replications: number): CreateStudyInput => ({
   name: 'Carriers under faults',
@@ -63,6 +64,10 @@ async function jobsDone(ds: DataSource, studyId: string): Promise<number> {
     .getRepository(StudyJobResultEntity)
     .countBy({ studyId })
     .catch(() => -1);
+}
+
+async function activeJobs(ds: DataSource): Promise<{ id: string }[]> {
+  return ds.query(`SELECT id FROM ${QUEUE_SCHEMA}.job WHERE name = 'study-job' AND state = 'active'`);
 }
 
 async function waitUntil(what: string, check: () => Promise<boolean>, workers: WorkerProcess[], seconds = 150) {
@@ -110,21 +115,20 @@ describe('a worker killed mid-study', () => {
     const { agent, study: submitted } = await submitStudy(app, SETTINGS.replications);
     const first = await startWorkerProcess(requireDatabaseUrl());
     workers.push(first);
-    let held: string | undefined;
     await waitUntil(
       'three results and a job in hand',
       async () => {
         if ((await jobsDone(db(), submitted.id)) < 3) return false;
-        const active: { id: string }[] = await db().query(
-          `SELECT id FROM ${QUEUE_SCHEMA}.job WHERE name = 'study-job' AND state = 'active'`,
-        );
-        held = active[0]?.id;
-        return held !== undefined;
+        return (await activeJobs(db())).length > 0;
       },
       workers,
     );
     await first.kill();
     expect(first.child.signalCode).toBe('SIGKILL');
+    // Read after the kill: what is still active now is what the dead worker held.
+    const stranded = await activeJobs(db());
+    expect(stranded.length, 'a job left in the killed worker’s hands').toBeGreaterThan(0);
+    const held = stranded[0].id;
     const doneAtKill = await jobsDone(db(), submitted.id);
     expect(doneAtKill).toBeLessThan(submitted.jobCount);
 
@@ -136,7 +140,7 @@ describe('a worker killed mid-study', () => {
     );
     await expectCompleteOnce(db(), agent, submitted);
     // The job the killed worker held failed by its time limit and ran again: a retry, not a second result.
-    const retried = await boss.getJobById(QUEUES.studyJob, held!, { includeArchive: true });
+    const retried = await boss.getJobById(QUEUES.studyJob, held, { includeArchive: true });
     expect(retried?.retryCount).toBeGreaterThanOrEqual(1);
   }, 240_000);
 });

@@ -19,7 +19,7 @@ export const JSON_BODY_LIMIT_BYTES = Math.max(...Object.values(BODY_LIMITS));
 const UUID = '[0-9a-fA-F-]{36}';
 const ROUTE_LIMITS: { pattern: RegExp; kind: keyof typeof BODY_LIMITS }[] = [
   { pattern: new RegExp(`^/scenarios/${UUID}/runs/?$`), kind: 'run' },
-  // A study job's result carries the engine's full summaries of its block of replications, like a run.
+  // A study job's result carries its block's summaries and mean series (and, stored before, a series per summary).
   { pattern: new RegExp(`^/studies/${UUID}/results/?$`), kind: 'run' },
   { pattern: new RegExp(`^/(projects/${UUID}/scenarios|scenarios/${UUID}/revisions)/?$`), kind: 'scenario' },
 ];

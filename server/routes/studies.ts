@@ -11,6 +11,7 @@ import {
   type SaveJobResultInput,
 } from '../../shared/api/studies';
 import type { FieldIssue } from '../../shared/api/errors';
+import { summariesCarrySeries } from '../../shared/studies/replication-summary-json';
 import { loadProject, loadStudy } from '../access/loaders';
 import { requireRole } from '../access/require-role';
 import type { AppContext } from '../app-context';
@@ -90,6 +91,11 @@ function checkJobKey(study: StudyEntity, body: SaveJobResultInput): FieldIssue[]
       issues.push({
         path: 'summaries',
         message: `must hold ${body.count} replication summaries, one per replication of the job`,
+      });
+    if (!body.series && !summariesCarrySeries(body.summaries))
+      issues.push({
+        path: 'series',
+        message: "is required: the block's mean heatmap series, unless every summary carries its own",
       });
     if (body.events.length !== body.count)
       issues.push({ path: 'events', message: `must hold ${body.count} event counts, one per replication of the job` });

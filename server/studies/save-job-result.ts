@@ -27,6 +27,7 @@ export async function saveJobResult(
       engineVersion: done ? body.engineVersion : null,
       figures: done ? body.summaries.map(figuresOf) : [],
       summaries: done ? body.summaries : null,
+      series: done ? (body.series ?? null) : null,
       events: done ? body.events : null,
       createdById: authorId,
     })

@@ -101,7 +101,7 @@ export async function pointBlocks(ds: DataSource, studyId: string, pointIndex: n
   const rows = await ds
     .getRepository(StudyJobResultEntity)
     .createQueryBuilder('r')
-    .addSelect(['r.summaries', 'r.events'])
+    .addSelect(['r.summaries', 'r.events', 'r.series'])
     .where('r.studyId = :studyId AND r.pointIndex = :pointIndex AND r.outcome = :done', {
       studyId,
       pointIndex,
@@ -116,6 +116,7 @@ export async function pointBlocks(ds: DataSource, studyId: string, pointIndex: n
       first: r.first,
       summaries: r.summaries as ReplicationSummaryJson[],
       events: r.events ?? [],
+      ...(r.series ? { series: r.series } : {}),
     })),
   };
 }

@@ -6,7 +6,11 @@ import { z } from 'zod';
 import { runSettingsSchema, type RunSettings } from '../scenario/run-settings';
 import { pointChangeSchema } from '../studies/point-changes';
 import { CARRIER_COUNT_PATH } from '../studies/sweepable-fields';
-import { replicationFiguresSchema, replicationSummaryJsonSchema } from '../studies/replication-summary-json';
+import {
+  blockSeriesJsonSchema,
+  replicationFiguresSchema,
+  replicationSummaryJsonSchema,
+} from '../studies/replication-summary-json';
 import { isoDateSchema, nameSchema, userRefSchema, uuidSchema } from './common';
 
 export const STUDY_KINDS = ['carrierSizing', 'sweep', 'whatIf'] as const;
@@ -147,6 +151,8 @@ export const saveJobResultSchema = z.discriminatedUnion(
       outcome: z.literal('done'),
       engineVersion: z.string().max(40),
       summaries: z.array(replicationSummaryJsonSchema).min(1),
+      /** The block's mean heatmap series; may be left out only when every summary carries its own. */
+      series: blockSeriesJsonSchema.optional(),
       events: z.array(z.number().nonnegative()).min(1),
     }),
     z.object({
@@ -208,6 +214,7 @@ export const jobBlockSchema = z.object({
   first: z.number().int(),
   summaries: z.array(replicationSummaryJsonSchema),
   events: z.array(z.number()),
+  series: blockSeriesJsonSchema.optional(),
 });
 export const pointBlocksSchema = z.object({
   pointIndex: z.number().int(),

@@ -1,6 +1,12 @@
 // The engine's summary of one finished replication as it crosses the network and sits in the database:
-// typed arrays become plain number lists, and nothing else changes, so blocks read back from storage
-// merge with the engine's combineBlocks into the same run result as a run in one piece.
+// typed arrays become plain number lists, so blocks read back from storage merge with the engine's
+// combineBlocks into the run result of the whole experiment.
+//
+// The time series behind the heatmaps (WIP over time, lane occupancy, station states over time) are
+// nearly the whole of a summary, and a result only ever shows their mean over the replications. So a
+// block of replications carries them once, as the block's mean (BlockSeriesJson), and its replication
+// summaries leave them out: a study job's result is about a ninth of the size it would be otherwise.
+// Summaries stored before carry their own series, and still merge.
 import { z } from 'zod';
 
 /** Bounds that hold for any scenario the schema allows (stations, transfers, lanes, result bins). */
@@ -17,7 +23,15 @@ export const SUMMARY_LIMITS = {
 const finite = z.number({ error: 'must be a finite number' });
 const list = (max: number) =>
   z.array(finite, { error: 'must be a list of numbers' }).max(max, `must hold at most ${max} numbers`);
+
 const triple = z.tuple([finite, finite, finite], { error: 'must be three numbers (mean, median, 95th percentile)' });
+
+/** The mean over a block's replications of the series its summaries leave out. */
+export const blockSeriesJsonSchema = z.object({
+  wipSeries: list(SUMMARY_LIMITS.seriesMax),
+  laneHeat: z.array(list(SUMMARY_LIMITS.heatMax)).max(SUMMARY_LIMITS.perLane),
+  stationTimeline: list(SUMMARY_LIMITS.timelineMax),
+});
 
 export const replicationSummaryJsonSchema = z.object({
   output: finite,
@@ -47,12 +61,18 @@ export const replicationSummaryJsonSchema = z.object({
   timeInLine: triple,
   leadHistogram: z.object({ binWidth: finite, counts: list(SUMMARY_LIMITS.histogramBins) }),
   wipMean: finite,
-  wipSeries: list(SUMMARY_LIMITS.seriesMax),
-  laneHeat: z.array(list(SUMMARY_LIMITS.heatMax)).max(SUMMARY_LIMITS.perLane),
-  stationTimeline: list(SUMMARY_LIMITS.timelineMax),
+  ...blockSeriesJsonSchema.partial().shape,
 });
 
 export type ReplicationSummaryJson = z.infer<typeof replicationSummaryJsonSchema>;
+
+export type BlockSeriesJson = z.infer<typeof blockSeriesJsonSchema>;
+
+export const SERIES_KEYS = ['wipSeries', 'laneHeat', 'stationTimeline'] as const;
+
+/** Whether every summary of a block carries its own series (the form stored before blocks carried them once). */
+export const summariesCarrySeries = (summaries: readonly ReplicationSummaryJson[]) =>
+  summaries.every((s) => SERIES_KEYS.every((key) => s[key] !== undefined));
 
 /** The few figures of one replication that study charts and decisions read; derived from the summary. */
 export const replicationFiguresSchema = z.object({

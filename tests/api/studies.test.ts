@@ -61,6 +61,7 @@ const doneBody = (pointIndex: number, block: ReplicationBlockJson) => ({
   outcome: 'done',
   engineVersion: 'test',
   summaries: block.summaries,
+  series: block.series,
   events: block.events,
 });
 
@@ -257,6 +258,28 @@ describe('job results', () => {
       summaries: [{ ...blocks[0].summaries[0], lead: [1, 2] }, blocks[0].summaries[1]],
     });
     expect(broken.body.error.fields[0].path).toBe('summaries[0].lead');
+    const seriesless = await org.people.engineer.agent
+      .post(apiRoutes.studyResults(study.id))
+      .send({ ...doneBody(0, blocks[0]), series: undefined });
+    expect(seriesless.status).toBe(400);
+    expect(seriesless.body.error.fields).toEqual([
+      { path: 'series', message: "is required: the block's mean heatmap series, unless every summary carries its own" },
+    ]);
+  });
+
+  it('takes a result in the older form, each summary with its own series, and hands it back as stored', async () => {
+    const study = await createStudy();
+    const block = blocks[0];
+    const older = {
+      ...doneBody(0, block),
+      series: undefined,
+      summaries: block.summaries.map((s) => ({ ...s, ...block.series })),
+    };
+    const res = await org.people.engineer.agent.post(apiRoutes.studyResults(study.id)).send(older);
+    expect(res.status, JSON.stringify(res.body).slice(0, 300)).toBe(201);
+    const stored = await org.people.viewer.agent.get(apiRoutes.studyPointBlocks(study.id, 0));
+    expect(stored.body.blocks[0].series).toBeUndefined();
+    expect(stored.body.blocks[0].summaries[0].laneHeat).toEqual(block.series?.laneHeat);
   });
 
   it('finishes as done, or as failed points when a job stopped, and blocks merge into one run result', async () => {

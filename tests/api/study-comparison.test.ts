@@ -54,6 +54,7 @@ async function runAndSave(study: StudyDetail, document: Record<string, unknown>)
             outcome: 'done',
             engineVersion: answer.engineVersion,
             summaries: answer.block.summaries,
+            series: answer.block.series,
             events: answer.block.events,
           }
         : { ...key, outcome: answer.outcome, message: answer.message };

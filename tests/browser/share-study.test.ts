@@ -43,6 +43,7 @@ const session = useAppInBrowser(async (app) => {
       outcome: 'done',
       engineVersion: 'test',
       summaries: block.summaries,
+      series: block.series,
       events: block.events,
     });
     expect(saved.status, JSON.stringify(saved.body).slice(0, 300)).toBe(201);

@@ -56,6 +56,7 @@ export function jobResultBody(
         outcome: 'done',
         engineVersion: answer.engineVersion,
         summaries: answer.block.summaries,
+        series: answer.block.series,
         events: answer.block.events,
       }
     : { ...base, outcome: answer.outcome, message: answer.message.slice(0, 2_000) };

@@ -3,7 +3,11 @@
 // summaries are bulky and only read to merge blocks, so ordinary queries leave them out.
 import { Column, Entity, JoinColumn, ManyToOne, Unique } from 'typeorm';
 import type { JobResult } from '../../../shared/api/studies';
-import type { ReplicationFigures, ReplicationSummaryJson } from '../../../shared/studies/replication-summary-json';
+import type {
+  ReplicationFigures,
+  ReplicationSummaryJson,
+  BlockSeriesJson,
+} from '../../../shared/studies/replication-summary-json';
 import { AuthoredRecord } from './authored';
 import { StudyEntity } from './study.entity';
 
@@ -43,4 +47,8 @@ export class StudyJobResultEntity extends AuthoredRecord {
 
   @Column({ type: 'jsonb', select: false, nullable: true })
   events!: number[] | null;
+
+  /** The block's mean heatmap series; null for failed jobs and for results stored inside their summaries. */
+  @Column({ type: 'jsonb', select: false, nullable: true })
+  series!: BlockSeriesJson | null;
 }

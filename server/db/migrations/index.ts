@@ -11,6 +11,7 @@ import { StoredChecks1796210000001 } from './1796210000001-StoredChecks';
 import { ShareStudies1796220000000 } from './1796220000000-ShareStudies';
 import { ConveyorMode1796230000000 } from './1796230000000-ConveyorMode';
 import { ShareComparisons1796231000000 } from './1796231000000-ShareComparisons';
+import { StudyJobSeries1796232000000 } from './1796232000000-StudyJobSeries';
 
 export const migrations = [
   InitialSchema1796189683213,
@@ -25,4 +26,5 @@ export const migrations = [
   StudyQueue1796227373997,
   ConveyorMode1796230000000,
   ShareComparisons1796231000000,
+  StudyJobSeries1796232000000,
 ];

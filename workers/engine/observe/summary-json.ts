@@ -1,7 +1,10 @@
-// A replication summary as plain JSON (typed arrays become number lists) and back, for storing the
-// blocks of a study and merging them later with combineBlocks. Numbers keep six significant digits:
-// far finer than any interval a study reports, and it makes stored summaries about a third as long.
-import type { ReplicationSummaryJson } from '../../../shared/studies/replication-summary-json';
+// A block of replication summaries as plain JSON (typed arrays become number lists) and back, for
+// storing the blocks of a study and merging them later with combineBlocks. Numbers keep six
+// significant digits: far finer than any interval a study reports, and it makes stored summaries
+// about a third as long. The heatmap series travel once per block, as the block's mean (see
+// shared/studies/replication-summary-json.ts); reading a block back gives every replication that
+// mean, so the mean over all replications is what it would have been.
+import type { BlockSeriesJson, ReplicationSummaryJson } from '../../../shared/studies/replication-summary-json';
 import type { ReplicationBlock } from '../experiment';
 import type { ReplicationSummary } from './replication-summary';
 
@@ -16,6 +19,7 @@ const list = (a: ArrayLike<number>) => Array.from(a, compact);
 const triple = (t: [number, number, number]): [number, number, number] => [compact(t[0]), compact(t[1]), compact(t[2])];
 const f64 = (a: number[]) => Float64Array.from(a);
 
+/** A replication's summary without its series (they travel once per block). */
 export function toSummaryJson(s: ReplicationSummary): ReplicationSummaryJson {
   return {
     output: s.output,
@@ -44,13 +48,28 @@ export function toSummaryJson(s: ReplicationSummary): ReplicationSummaryJson {
     timeInLine: triple(s.timeInLine),
     leadHistogram: { binWidth: s.leadHistogram.binWidth, counts: Array.from(s.leadHistogram.counts) },
     wipMean: s.wipMean,
-    wipSeries: list(s.wipSeries),
-    laneHeat: s.laneHeat.map(list),
-    stationTimeline: list(s.stationTimeline),
   };
 }
 
-export function fromSummaryJson(j: ReplicationSummaryJson): ReplicationSummary {
+/** Element-wise mean of equally long series. */
+function meanOf(series: ArrayLike<number>[]): number[] {
+  const out = new Array<number>(series[0].length).fill(0);
+  for (const a of series) for (let i = 0; i < out.length; i++) out[i] += a[i];
+  return out.map((x) => compact(x / series.length));
+}
+
+function blockSeries(summaries: ReplicationSummary[]): BlockSeriesJson {
+  return {
+    wipSeries: meanOf(summaries.map((s) => s.wipSeries)),
+    laneHeat: summaries[0].laneHeat.map((_, lane) => meanOf(summaries.map((s) => s.laneHeat[lane]))),
+    stationTimeline: meanOf(summaries.map((s) => s.stationTimeline)),
+  };
+}
+
+/** A summary read back; its series are its own when stored with it (the older form), else its block's. */
+export function fromSummaryJson(j: ReplicationSummaryJson, block?: BlockSeriesJson): ReplicationSummary {
+  const series = j.wipSeries && j.laneHeat && j.stationTimeline ? (j as BlockSeriesJson) : block;
+  if (!series) throw new Error('a replication summary without series needs its block series');
   return {
     ...j,
     stationShares: f64(j.stationShares),
@@ -68,21 +87,29 @@ export function fromSummaryJson(j: ReplicationSummaryJson): ReplicationSummary {
     laneMean: f64(j.laneMean),
     carrierShares: f64(j.carrierShares),
     leadHistogram: { binWidth: j.leadHistogram.binWidth, counts: f64(j.leadHistogram.counts) },
-    wipSeries: f64(j.wipSeries),
-    laneHeat: j.laneHeat.map(f64),
-    stationTimeline: f64(j.stationTimeline),
+    wipSeries: f64(series.wipSeries),
+    laneHeat: series.laneHeat.map(f64),
+    stationTimeline: f64(series.stationTimeline),
   };
 }
 
-export type ReplicationBlockJson = { first: number; summaries: ReplicationSummaryJson[]; events: number[] };
+/** `series` is absent only in blocks stored before blocks carried their series once. */
+export type ReplicationBlockJson = {
+  first: number;
+  summaries: ReplicationSummaryJson[];
+  events: number[];
+  series?: BlockSeriesJson;
+};
 
 export const blockToJson = (b: ReplicationBlock): ReplicationBlockJson => ({
   first: b.first,
   summaries: b.summaries.map(toSummaryJson),
   events: b.events,
+  series: blockSeries(b.summaries),
 });
+
 export const blockFromJson = (b: ReplicationBlockJson): ReplicationBlock => ({
   first: b.first,
-  summaries: b.summaries.map(fromSummaryJson),
+  summaries: b.summaries.map((s) => fromSummaryJson(s, b.series)),
   events: b.events,
 });

@@ -51,11 +51,28 @@ export function traceBuffers(trace: PlaybackTrace): ArrayBuffer[] {
   return columns.flatMap((c) => (ArrayBuffer.isView(c) ? [c.buffer as ArrayBuffer] : []));
 }
 
+/**
+ * Progress crosses to the page as a message, and the page wakes for each: the engine reports every
+ * slice (about 50 ms), which is more often than a progress bar needs and costs the page's thread time
+ * the other workers could use. So at most one report per interval passes, and the last one always.
+ */
+export const PROGRESS_INTERVAL_MS = 200;
+
+function throttled(onProgress: (p: Progress) => unknown, now: () => number): (p: Progress) => void {
+  let last = -Infinity;
+  return (p) => {
+    const t = now();
+    if (t - last < PROGRESS_INTERVAL_MS && p.fraction < 1) return;
+    last = t;
+    void onProgress(p);
+  };
+}
+
 export function createWorkerApi(now: () => number) {
   let cancelled = false;
   const hooks = (onProgress?: (p: Progress) => unknown): RunHooks => {
     cancelled = false;
-    return { onProgress: onProgress ? (p) => void onProgress(p) : undefined, isCancelled: () => cancelled, now };
+    return { onProgress: onProgress ? throttled(onProgress, now) : undefined, isCancelled: () => cancelled, now };
   };
   return {
     engineVersion: () => ENGINE_VERSION,

@@ -63,6 +63,8 @@ describe('sharing a comparison read-only', () => {
     const text = (await main.textContent()) ?? '';
     expect(text).toContain('Shared view, read only');
     expect(text).not.toContain('Demo Engineer');
+    // The team's prices stay behind: the answer says so rather than that no price list exists.
+    expect(await page.getByTestId('answer').textContent()).toContain("leaves the team's prices out");
     // Table sorting and the exports change nothing; no control to edit prices or share may be there.
     const buttons = (await main.getByRole('button').allTextContents()).map((t) => t.trim());
     expect(buttons.filter((t) => !/↕|↑|↓|^(CSV|PNG|SVG)/.test(t))).toEqual([]);

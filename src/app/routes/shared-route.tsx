@@ -58,7 +58,13 @@ function SharedComparison({ runs }: { runs: Extract<SharedView, { kind: 'compari
         title="Compared layouts"
         description={`${runs.length} stored runs side by side, with 95 % intervals on their differences.`}
       />
-      <CompareView items={items} stepNames={stepNames} question={COMPARE_QUESTION} costSection={null} />
+      <CompareView
+        items={items}
+        stepNames={stepNames}
+        question={COMPARE_QUESTION}
+        costSection={null}
+        withoutCosts="A shared link leaves the team's prices out, so costs are not compared."
+      />
     </>
   );
 }

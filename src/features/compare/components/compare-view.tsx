@@ -34,14 +34,16 @@ export interface CompareViewProps {
   /** Price list and bills of materials, composed by the page. */
   costSection: ReactNode;
   question: string;
+  /** Said in the answer when there are no costs to compare; by default, that no price list is set. */
+  withoutCosts?: string;
 }
 
-export function CompareView({ items, stepNames, costs, costSection, question }: CompareViewProps) {
+export function CompareView({ items, stepNames, costs, costSection, question, withoutCosts }: CompareViewProps) {
   const comparison = compareRuns(items.map((item) => ({ id: item.id, label: item.label, result: item.result })));
   const areas = new Map(
     items.flatMap((item) => (item.document ? [[item.id, footprintOf(item.document).areaM2] as const] : [])),
   );
-  const answer = answerOf(comparison, costs, areas);
+  const answer = answerOf(comparison, costs, areas, withoutCosts);
   const groups = heatmapGroups(items);
   return (
     <div className="flex flex-col gap-6" data-testid="comparison">

@@ -27,8 +27,15 @@ function differenceBetween(winner: RunFigures, other: RunFigures): MeanDifferenc
   return { ...d, difference: -d.difference, ciLow: -d.ciHigh, ciHigh: -d.ciLow };
 }
 
-function costClause(figures: readonly RunFigures[], costs: ReadonlyMap<string, RunCost> | undefined): string {
-  if (!costs || figures.some((f) => !costs.has(f.run.id))) return ' No price list is set, so costs are not compared.';
+/** Why costs are missing from the answer, unless the page knows better (a shared link leaves prices out). */
+export const NO_PRICE_LIST = 'No price list is set, so costs are not compared.';
+
+function costClause(
+  figures: readonly RunFigures[],
+  costs: ReadonlyMap<string, RunCost> | undefined,
+  withoutCosts: string,
+): string {
+  if (!costs || figures.some((f) => !costs.has(f.run.id))) return ` ${withoutCosts}`;
   const parts = figures.map((f) => {
     const cost = costs.get(f.run.id)!;
     const per =
@@ -43,7 +50,12 @@ function areaClause(figures: readonly RunFigures[], areas: FloorAreas | undefine
   return ` Floor area: ${figures.map((f) => `${f.run.label} ${formatNumber(areas.get(f.run.id)!, 1)} m²`).join(' against ')}.`;
 }
 
-export function answerOf(comparison: Comparison, costs?: ReadonlyMap<string, RunCost>, areas?: FloorAreas): Answer {
+export function answerOf(
+  comparison: Comparison,
+  costs?: ReadonlyMap<string, RunCost>,
+  areas?: FloorAreas,
+  withoutCosts = NO_PRICE_LIST,
+): Answer {
   const byThroughput = [...comparison.figures].sort(
     (a, b) => b.values.throughputPerHour.mean - a.values.throughputPerHour.mean,
   );
@@ -56,7 +68,7 @@ export function answerOf(comparison: Comparison, costs?: ReadonlyMap<string, Run
   const interval = d.unavailable
     ? `no interval: ${d.unavailable}`
     : `95 % ${method} interval ${formatSigned(d.ciLow, 1)} to ${formatSigned(d.ciHigh, 1)}`;
-  const costs2 = costClause([winner, other], costs) + areaClause([winner, other], areas);
+  const costs2 = costClause([winner, other], costs, withoutCosts) + areaClause([winner, other], areas);
   if (d.significant && d.difference > 0) {
     return {
       sentence: `${winner.run.label} makes more: ${rate(winner)} against ${rate(other)} for ${other.run.label}, ${formatNumber(d.difference, 1)} parts/h more (${interval}), a significant difference.${costs2}`,

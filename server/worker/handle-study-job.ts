@@ -1,6 +1,7 @@
 // What a worker does with one queued job: drop it when its study is gone, cancelled or on a later queue
 // round; skip the engine when the job already has a result (a retry after a crash between saving and
-// completing); otherwise run it on an engine thread within its time limit and store the result once.
+// completing); skip a carrier count above one that gridlocked; otherwise run it on an engine thread
+// within its time limit and store the result once.
 // The study that this result completes sends its finish notice from here.
 import type PgBoss from 'pg-boss';
 import type { DataSource } from 'typeorm';
@@ -11,8 +12,12 @@ import { QUEUES, type StudyFinishedMessage, type StudyJobMessage } from '../queu
 import { saveJobResult } from '../studies/save-job-result';
 import { settleStatus } from '../studies/study-queries';
 import type { EngineThreads } from './engine-threads';
+import { gridlockSkip } from './gridlock-skip';
 
-export type JobHandled = { handled: 'dropped' | 'known' | 'ran'; outcome?: StudyJobOutcome['outcome'] };
+export type JobHandled = {
+  handled: 'dropped' | 'known' | 'skipped' | 'ran';
+  outcome?: StudyJobOutcome['outcome'];
+};
 
 /** Revisions never change, so their documents are kept; a bounded map is enough for a study's few revisions. */
 const DOCUMENTS_KEPT = 32;
@@ -47,6 +52,17 @@ export function studyJobHandler(ctx: StudyJobContext) {
       .getRepository(StudyPointEntity)
       .findOneBy({ studyId: study.id, index: message.pointIndex });
     if (!point) throw new Error(`point ${message.pointIndex} of the study does not exist`);
+    const skipped = await gridlockSkip(ctx.ds, study, point);
+    if (skipped !== null) {
+      await saveJobResult(
+        ctx.ds,
+        study.id,
+        jobResultBody(message, { outcome: 'skipped', message: skipped }),
+        study.createdById,
+      );
+      await settle(ctx, study);
+      return { handled: 'skipped' };
+    }
     const settings = { ...study.settings, seed: pointSeed(study.settings, study.commonRandomNumbers, point.index) };
     const limit = AbortSignal.timeout(Math.max(1, job.expireInSeconds - 1) * 1_000);
     const outcome = await ctx.engine

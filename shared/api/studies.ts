@@ -302,30 +302,33 @@ export function pendingJobs(study: JobSource & Pick<StudyDetail, 'results'>): St
 export const carriersOf = (job: Pick<StudyJob, 'changes'>): number | null =>
   job.changes.find((c) => c.path === CARRIER_COUNT_PATH && c.op === 'set')?.value ?? null;
 
-/** In carrier sizing, the fewest carriers that gridlocked, or null. */
-function gridlockCeiling(study: Pick<StudyDetail, 'kind' | 'points' | 'results'>): number | null {
-  if (study.kind !== 'carrierSizing') return null;
-  const locked = study.results
-    .filter((r) => r.outcome === 'gridlock')
-    .map((r) => carriersOf(study.points[r.pointIndex]))
-    .filter((n): n is number => n !== null);
-  return locked.length > 0 ? Math.min(...locked) : null;
+/** The fewest carriers among points that gridlocked, or null. */
+export function gridlockCeiling(locked: readonly Pick<StudyJob, 'changes'>[]): number | null {
+  const counts = locked.map(carriersOf).filter((n): n is number => n !== null);
+  return counts.length > 0 ? Math.min(...counts) : null;
+}
+
+/** Why a carrier-sizing job is not run (its count is above one that gridlocked), or null. */
+export function gridlockSkipReason(ceiling: number | null, job: Pick<StudyJob, 'changes'>): string | null {
+  const n = carriersOf(job);
+  return ceiling !== null && n !== null && n > ceiling
+    ? `not run: ${ceiling} carriers already gridlock this track, and more carriers only lock it sooner`
+    : null;
 }
 
 /**
  * Carrier sizing stops adding counts above the first that gridlocks: more carriers on the same track
  * only lock it sooner. Ask `skip` as each job starts (the reason it is not run, or null) and tell
- * `record` each outcome, so jobs already queued behind a gridlock are skipped too.
+ * `record` each outcome, so jobs already queued behind a gridlock are skipped too. The server's
+ * workers apply the same rule from the stored results (server/worker/gridlock-skip.ts).
  */
 export function gridlockGuard(study: Pick<StudyDetail, 'kind' | 'points' | 'results'>) {
-  let ceiling = gridlockCeiling(study);
+  let ceiling =
+    study.kind === 'carrierSizing'
+      ? gridlockCeiling(study.results.filter((r) => r.outcome === 'gridlock').map((r) => study.points[r.pointIndex]))
+      : null;
   return {
-    skip(job: Pick<StudyJob, 'changes'>): string | null {
-      const n = carriersOf(job);
-      return ceiling !== null && n !== null && n > ceiling
-        ? `not run: ${ceiling} carriers already gridlock this track, and more carriers only lock it sooner`
-        : null;
-    },
+    skip: (job: Pick<StudyJob, 'changes'>): string | null => gridlockSkipReason(ceiling, job),
     record(job: Pick<StudyJob, 'changes'>, outcome: string): void {
       const n = carriersOf(job);
       if (study.kind === 'carrierSizing' && outcome === 'gridlock' && n !== null) ceiling = Math.min(ceiling ?? n, n);

@@ -14,6 +14,7 @@ import {
 } from '../../shared/api/studies';
 import { runStudyLocally } from '../../workers/studies/run-study-locally';
 import { StudyJobResultEntity } from '../../server/db/entities';
+import { saveJobResult } from '../../server/studies/save-job-result';
 import { QUEUES } from '../../server/queue/queue-client';
 import { queueJobId } from '../../server/queue/study-jobs';
 import { requireDatabaseUrl } from '../support/test-database';
@@ -121,6 +122,26 @@ describe('a study on the server', () => {
     expect(progress.jobsDone).toBe(1);
     expect(progress.status).toBe('failedPoints');
     expect(await db().getRepository(StudyJobResultEntity).countBy({ studyId: study.id })).toBe(1);
+  }, 120_000);
+
+  it('skips carrier counts above one already found to gridlock, as the browser does', async () => {
+    const study = await create();
+    // As if a worker had found 12 carriers to gridlock: the 16-carrier point is not worth running.
+    await saveJobResult(
+      db(),
+      study.id,
+      { pointIndex: 0, first: 0, count: 2, outcome: 'gridlock', message: 'gridlock at t=300.0 s' },
+      null,
+    );
+    workers.push(await startWorkerProcess(requireDatabaseUrl()));
+    const end = await waitForEnd(study.id, workers[0]);
+    expect(end).toMatchObject({ status: 'failedPoints', jobsDone: 4 });
+    const rows = await db().getRepository(StudyJobResultEntity).findBy({ studyId: study.id });
+    const outcomes = Object.fromEntries(rows.map((r) => [`${r.pointIndex}:${r.first}`, r.outcome]));
+    expect(outcomes).toEqual({ '0:0': 'gridlock', '0:2': 'done', '1:0': 'skipped', '1:2': 'skipped' });
+    expect(rows.find((r) => r.pointIndex === 1)?.message).toBe(
+      'not run: 12 carriers already gridlock this track, and more carriers only lock it sooner',
+    );
   }, 120_000);
 
   it('shows its progress to members only', async () => {

@@ -5,9 +5,21 @@ import { MoreThanOrEqual, type DataSource } from 'typeorm';
 import type { StudyProgress } from '../../shared/api/studies';
 import { StudyJobFailureEntity, StudyJobResultEntity, type StudyEntity } from '../db/entities';
 import { iso } from '../mappers/common';
+import { QUEUE_SCHEMA, QUEUES } from '../queue/queue-client';
 
 /** Results the pace is taken from: enough to smooth over jobs of unequal length, few enough to follow changes. */
 const PACE_WINDOW = 24;
+/** Quiet longer than this, with no job held by a worker, is reported as idle. */
+export const IDLE_AFTER_SECONDS = 60;
+
+/** Jobs of the study a worker holds right now (pg-boss marks a fetched job active until it completes). */
+async function heldJobs(ds: DataSource, studyId: string): Promise<number> {
+  const rows: { n: number }[] = await ds.query(
+    `SELECT count(*)::int AS n FROM "${QUEUE_SCHEMA}".job WHERE name = $1 AND state = 'active' AND data->>'studyId' = $2`,
+    [QUEUES.studyJob, studyId],
+  );
+  return rows[0]?.n ?? 0;
+}
 
 export async function studyProgress(ds: DataSource, study: StudyEntity): Promise<StudyProgress> {
   const results = ds.getRepository(StudyJobResultEntity);
@@ -17,6 +29,7 @@ export async function studyProgress(ds: DataSource, study: StudyEntity): Promise
     .find({ where: { studyId: study.id }, order: { pointIndex: 'ASC', first: 'ASC' } });
   const remaining = study.jobCount - jobsDone - failures.length;
   let remainingMs: number | null = null;
+  let idleSeconds: number | null = null;
   if (study.status === 'running' && remaining > 0) {
     const latest = await results.find({
       select: { id: true, createdAt: true },
@@ -30,6 +43,10 @@ export async function studyProgress(ds: DataSource, study: StudyEntity): Promise
     const finished = full ? latest.length - 1 : latest.length;
     const span = Date.now() - since.getTime();
     if (finished > 0 && span > 0) remainingMs = Math.round((remaining * span) / finished);
+    const quiet = Math.floor(
+      (Date.now() - (latest[0]?.createdAt ?? study.queuedAt ?? study.createdAt).getTime()) / 1000,
+    );
+    if (quiet > IDLE_AFTER_SECONDS && (await heldJobs(ds, study.id)) === 0) idleSeconds = quiet;
   }
   return {
     status: study.status,
@@ -43,6 +60,7 @@ export async function studyProgress(ds: DataSource, study: StudyEntity): Promise
       failedAt: iso(f.failedAt),
     })),
     remainingMs,
+    idleSeconds,
     finishedAt: study.finishedAt ? iso(study.finishedAt) : null,
   };
 }

@@ -239,6 +239,11 @@ export const studyProgressSchema = z.object({
   failedJobs: z.array(failedJobSchema),
   /** From the pace of the last finished jobs; null until there is a pace to go by. */
   remainingMs: z.number().nonnegative().nullable(),
+  /**
+   * Seconds since the study was queued or last stored a result, when that is over a minute and no
+   * worker holds one of its jobs: most likely no study worker is running. Null otherwise.
+   */
+  idleSeconds: z.number().int().nonnegative().nullable(),
   finishedAt: isoDateSchema.nullable(),
 });
 

@@ -144,6 +144,18 @@ describe('a study on the server', () => {
     );
   }, 120_000);
 
+  it('says when no worker has held one of its jobs for over a minute', async () => {
+    const study = await create();
+    expect((await progressOf(study.id)).idleSeconds).toBeNull();
+    // Queued two minutes ago, and no worker running.
+    await db().query("UPDATE studies SET queued_at = now() - interval '2 minutes' WHERE id = $1", [study.id]);
+    expect((await progressOf(study.id)).idleSeconds).toBeGreaterThanOrEqual(120);
+    // A worker takes a job (pg-boss marks it active): the study is no longer idle, however long that job takes.
+    const [held] = await queue().boss.fetch(QUEUES.studyJob);
+    expect(held).toBeDefined();
+    expect((await progressOf(study.id)).idleSeconds).toBeNull();
+  });
+
   it('shows its progress to members only', async () => {
     const study = await create();
     const expected: Record<Actor, number> = { anonymous: 401, outsider: 404, viewer: 200, engineer: 200, owner: 200 };

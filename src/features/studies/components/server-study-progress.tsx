@@ -5,6 +5,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useEffect } from 'react';
 import type { StudyDetail } from '../../../../shared/api/studies';
 import { ErrorBanner } from '../../../components/ui/error-banner';
+import { formatDuration } from '../../../lib/format';
 import { useStudyProgress } from '../api/get-study-progress';
 import { studyKeys } from '../api/keys';
 import { useUpdateStudy } from '../api/update-study';
@@ -37,6 +38,14 @@ export function ServerStudyProgress({ study, mayRun }: { study: StudyDetail; may
           onCancel={mayRun && !update.isPending ? () => update.mutate({ status: 'cancelled' }) : undefined}
           onResume={mayRun && status === 'cancelled' ? () => update.mutate({ status: 'running' }) : undefined}
         />
+      )}
+      {running && data?.idleSeconds != null && (
+        <p role="status" className="rounded-md border border-caution/40 p-3 text-sm" data-testid="workers-idle">
+          No study worker has worked on this study for {formatDuration(data.idleSeconds)}: its jobs wait on the server’s
+          queue. Whoever runs Lanewright for your team starts workers with <code>npm run worker</code> (
+          <code>npm start</code> runs one too, unless it was started with LANEWRIGHT_WORKER=off). The study carries on
+          by itself once a worker runs.
+        </p>
       )}
       {update.error && <ErrorBanner title="The study was not changed">{update.error.message}</ErrorBanner>}
       {failed.length > 0 && (

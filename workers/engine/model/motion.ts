@@ -89,9 +89,10 @@ export function createMotion(s: Scenario): Motion {
   const loaded = toProfile(s.carriers.loaded);
   const empty = s.carriers.empty ? toProfile(s.carriers.empty) : loaded;
   const profiles = [loaded, empty, slower(loaded, empty)];
+  const moveSeconds = cachedMoveTime(profiles);
   return {
-    moveSeconds: cachedMoveTime(profiles),
-    travelledMm: (d, p, t) => positionAt(d, profiles[p], t),
+    moveSeconds,
+    travelledMm: (d, p, t) => positionAt(d, profiles[p], t, moveSeconds(d, p)),
     secondsToCover: cachedTimeToReach(profiles),
     cruiseMmPerS: loaded.vMax,
   };

@@ -54,6 +54,28 @@ function cachedMoveTime(profiles: MotionProfile[]): (d: number, p: number) => nu
   };
 }
 
+/**
+ * The same for the time a move takes to cover a point (timeToReach): asked whenever a lane's rear
+ * carrier moves off the lane start, with the few distances and points of a queue moving up, and its
+ * S-curve branch bisects a cubic. Keyed by the exact distance and point; a hit returns the formula's number.
+ */
+function cachedTimeToReach(profiles: MotionProfile[]): (d: number, p: number, x: number) => number {
+  const size = 1 << CACHE_BITS;
+  const keyD = new Float64Array(size * profiles.length).fill(-1);
+  const keyX = new Float64Array(size * profiles.length);
+  const values = new Float64Array(size * profiles.length);
+  return (d, p, x) => {
+    const at =
+      p * size + (Math.imul(((d * 64) | 0) ^ Math.imul((x * 64) | 0, 0x85ebca6b), 0x9e3779b1) >>> (32 - CACHE_BITS));
+    if (keyD[at] === d && keyX[at] === x) return values[at];
+    const t = timeToReach(d, profiles[p], x);
+    keyD[at] = d;
+    keyX[at] = x;
+    values[at] = t;
+    return t;
+  };
+}
+
 export function createMotion(s: Scenario): Motion {
   if (s.conveyor.kind === 'belt') {
     const speed = s.conveyor.speedMmPerS;
@@ -67,10 +89,11 @@ export function createMotion(s: Scenario): Motion {
   const loaded = toProfile(s.carriers.loaded);
   const empty = s.carriers.empty ? toProfile(s.carriers.empty) : loaded;
   const profiles = [loaded, empty, slower(loaded, empty)];
+  const moveSeconds = cachedMoveTime(profiles);
   return {
-    moveSeconds: cachedMoveTime(profiles),
-    travelledMm: (d, p, t) => positionAt(d, profiles[p], t),
-    secondsToCover: (d, p, x) => timeToReach(d, profiles[p], x),
+    moveSeconds,
+    travelledMm: (d, p, t) => positionAt(d, profiles[p], t, moveSeconds(d, p)),
+    secondsToCover: cachedTimeToReach(profiles),
     cruiseMmPerS: loaded.vMax,
   };
 }

@@ -66,9 +66,9 @@ function rampDistance(elapsed: number, peak: number, ramp: number, p: MotionProf
   return (peak * ramp) / 2 - peak * remaining + (jMax * remaining ** 3) / 6;
 }
 
-export function positionAt(distanceMm: number, p: MotionProfile, t: number): number {
+/** total: the move's time when the caller already has it (remembered, as model/motion.ts does). */
+export function positionAt(distanceMm: number, p: MotionProfile, t: number, total = moveTime(distanceMm, p)): number {
   if (!(distanceMm > 0) || t <= 0) return 0;
-  const total = moveTime(distanceMm, p);
   if (t >= total) return distanceMm;
   const peak = peakSpeed(distanceMm, p);
   const ramp = accelerationTime(peak, p);

@@ -21,11 +21,11 @@ const MAX_PENDING = 2_000;
 const MIN_BATCH = 256;
 
 /**
- * Sorts order[0..n) by starts[order[i]], keeping equal starts in their present order (a bottom-up
- * merge sort through scratch). Written out rather than a sort with a comparator callback, which
- * costs a call into JavaScript per comparison: this runs for every batch of periods.
+ * Sorts order[0..n) by keys[order[i]], keeping equal keys in their present order (a bottom-up merge
+ * sort through scratch). Written out rather than a sort with a comparator callback, which costs a
+ * call into JavaScript per comparison. Needed only after a forced resolve; see sweep.
  */
-function sortByStart(order: Int32Array, n: number, starts: Float64Array, scratch: Int32Array): void {
+function sortByKey(order: Int32Array, n: number, keys: Float64Array, scratch: Int32Array): void {
   let from = order;
   let to = scratch;
   for (let width = 1; width < n; width *= 2) {
@@ -35,7 +35,7 @@ function sortByStart(order: Int32Array, n: number, starts: Float64Array, scratch
       let i = lo;
       let j = mid;
       let k = lo;
-      while (i < mid && j < hi) to[k++] = starts[from[j]] < starts[from[i]] ? from[j++] : from[i++];
+      while (i < mid && j < hi) to[k++] = keys[from[j]] < keys[from[i]] ? from[j++] : from[i++];
       while (i < mid) to[k++] = from[i++];
       while (j < hi) to[k++] = from[j++];
     }
@@ -56,18 +56,21 @@ export class BottleneckTracker {
   private pEnd = new Float64Array(256);
   private pCount = 0;
   private settled: number;
-  private cuts = new Float64Array(64);
   private resolveAt = MIN_BATCH;
   /** Stations in the order they went inactive, with the time they did; entries of stations active again are skipped. */
   private idleStation = new Int32Array(64);
   private idleTime = new Float64Array(64);
   private idleHead = 0;
   private idleCount = 0;
-  /** Pending periods in order of their start, and a max-heap of those covering the sweep's instant. */
-  private byStart = new Int32Array(32);
+  /** Pending periods in order of their end, and a max-heap of those that may cover the sweep's instant. */
+  private byEnd = new Int32Array(32);
   private heap = new Int32Array(32);
   private heapSize = 0;
   private scratch = new Int32Array(32);
+  /** The sweep's runs, found from the boundary backwards: period, and the span it is the bottleneck. */
+  private runPeriod = new Int32Array(64);
+  private runFrom = new Float64Array(64);
+  private runTo = new Float64Array(64);
   /** The segment being extended (kept in fields, not an object: one is made per bottleneck change); station -1: none. */
   private heldStation = -1;
   private heldPeriodStart = 0;
@@ -158,7 +161,8 @@ export class BottleneckTracker {
       this.idleTime = times;
       this.idleHead = 0;
     }
-    const at = (this.idleHead + this.idleCount++) % this.idleStation.length;
+    let at = this.idleHead + this.idleCount++;
+    if (at >= this.idleStation.length) at -= this.idleStation.length;
     this.idleStation[at] = station;
     this.idleTime[at] = t;
   }
@@ -170,7 +174,7 @@ export class BottleneckTracker {
       const since = this.idleTime[this.idleHead];
       if (!(t - since > this.bridgeSeconds)) break;
       const station = this.idleStation[this.idleHead];
-      this.idleHead = (this.idleHead + 1) % this.idleStation.length;
+      if (++this.idleHead === this.idleStation.length) this.idleHead = 0;
       this.idleCount--;
       if (this.idleSince[station] !== since) continue;
       this.close(station);
@@ -225,43 +229,62 @@ export class BottleneckTracker {
   }
 
   /**
-   * Walks the cut points (period starts and ends) between the settled time and the boundary. At each
-   * instant the momentary bottleneck is the longest period covering it (ties to the lower station
-   * index); periods join the heap as the sweep passes their start and leave it once over.
+   * Finds the momentary bottleneck between the settled time and the boundary: at each instant the
+   * longest period covering it (ties to the lower station index). It only changes where a period
+   * that outranks the current one begins to cover (going backwards: at its end) or where the current
+   * one stops covering (its start), so the sweep walks backwards from the boundary: periods join the
+   * heap in order of their end and leave it, once on top, when they start at or after the instant.
+   * Periods are added in the order stations went inactive, so their ends are already in order and
+   * nothing is sorted (except after a forced resolve, which adds running periods out of order).
+   * The runs found are then attributed forwards, in time order.
    */
   private sweep(boundary: number): void {
     const n = this.pCount;
-    if (this.cuts.length < 2 * n + 2) {
-      this.cuts = new Float64Array(4 * n + 4);
-      this.byStart = new Int32Array(2 * n + 2);
-      this.heap = new Int32Array(2 * n + 2);
-      this.scratch = new Int32Array(2 * n + 2);
+    if (this.byEnd.length < n || this.runPeriod.length < 2 * n + 1) {
+      this.byEnd = new Int32Array(2 * n);
+      this.heap = new Int32Array(2 * n);
+      this.scratch = new Int32Array(2 * n);
+      this.runPeriod = new Int32Array(4 * n + 2);
+      this.runFrom = new Float64Array(4 * n + 2);
+      this.runTo = new Float64Array(4 * n + 2);
     }
-    const cuts = this.cuts;
     const starts = this.pStart;
     const ends = this.pEnd;
-    let count = 0;
-    cuts[count++] = this.settled;
-    cuts[count++] = boundary;
-    for (let i = 0; i < n; i++) {
-      if (starts[i] > this.settled && starts[i] < boundary) cuts[count++] = starts[i];
-      if (ends[i] > this.settled && ends[i] < boundary) cuts[count++] = ends[i];
+    const order = this.byEnd;
+    let inOrder = true;
+    order[0] = 0;
+    for (let i = 1; i < n; i++) {
+      order[i] = i;
+      if (ends[i] < ends[i - 1]) inOrder = false;
     }
-    const points = cuts.subarray(0, count).sort();
-    const order = this.byStart.subarray(0, n);
-    for (let i = 0; i < n; i++) order[i] = i;
-    sortByStart(order, n, starts, this.scratch);
+    if (!inOrder) sortByKey(order, n, ends, this.scratch);
+    const settled = this.settled;
+    const heap = this.heap;
+    const runPeriod = this.runPeriod;
+    const runFrom = this.runFrom;
     this.heapSize = 0;
-    let next = 0;
-    for (let k = 0; k + 1 < count; k++) {
-      const a = points[k];
-      const b = points[k + 1];
-      if (b <= a) continue;
-      while (next < n && starts[order[next]] <= a) this.heapPush(order[next++]);
-      while (this.heapSize > 0 && ends[this.heap[0]] <= a) this.heapPop();
-      if (this.heapSize === 0) continue;
-      const best = this.heap[0];
-      this.extend(this.pStation[best], starts[best], ends[best], a, b);
+    let next = n - 1;
+    let runs = 0;
+    // Each step covers [a, x): nothing ends inside it, and the best period covers all of it.
+    for (let x = boundary; x > settled;) {
+      while (next >= 0 && ends[order[next]] >= x) this.heapPush(order[next--]);
+      while (this.heapSize > 0 && starts[heap[0]] >= x) this.heapPop();
+      let a = next >= 0 && ends[order[next]] > settled ? ends[order[next]] : settled;
+      if (this.heapSize > 0) {
+        const best = heap[0];
+        if (starts[best] > a) a = starts[best];
+        if (runs > 0 && runPeriod[runs - 1] === best) runFrom[runs - 1] = a;
+        else {
+          runPeriod[runs] = best;
+          runFrom[runs] = a;
+          this.runTo[runs++] = x;
+        }
+      }
+      x = a;
+    }
+    for (let r = runs - 1; r >= 0; r--) {
+      const p = runPeriod[r];
+      this.extend(this.pStation[p], starts[p], ends[p], runFrom[r], this.runTo[r]);
     }
   }
 
